@@ -1,0 +1,96 @@
+package org.lpzplanner.engine.envelope;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.stream.IntStream;
+
+/**
+ * The lowest sphere-centre height D over every cell of a grid: exact at each node (cell centre),
+ * and a lower bound over each whole cell. Both include the ground floor D ≥ R.
+ *
+ * <p>Cost O(Σ supports · cells in reach); rows are split across cores.
+ */
+public final class CentreSurface {
+
+    private final Grid grid;
+    private final double radius;
+    private final double[] nodeHeight;
+    private final double[] cellLower;
+
+    private CentreSurface(Grid grid, double radius, double[] nodeHeight, double[] cellLower) {
+        this.grid = grid;
+        this.radius = radius;
+        this.nodeHeight = nodeHeight;
+        this.cellLower = cellLower;
+    }
+
+    public static CentreSurface compute(Grid grid, List<Support> supports, double radius) {
+        int nx = grid.nx(), ny = grid.ny();
+        double[] node = new double[nx * ny];
+        double[] low = new double[nx * ny];
+        Arrays.fill(node, radius);
+        Arrays.fill(low, radius);
+        double half = grid.h() / 2;
+        int bands = Math.max(1, Math.min(ny, 4 * Runtime.getRuntime().availableProcessors()));
+        IntStream.range(0, bands).parallel().forEach(b -> {
+            int jFrom = (int) ((long) ny * b / bands), jTo = (int) ((long) ny * (b + 1) / bands);
+            for (Support s : supports) {
+                double[] r = s.reach();
+                int i0 = Math.max(0, (int) Math.floor((r[0] - grid.x0()) / grid.h()) - 1);
+                int i1 = Math.min(nx - 1, (int) Math.floor((r[2] - grid.x0()) / grid.h()) + 1);
+                int j0 = Math.max(jFrom, (int) Math.floor((r[1] - grid.y0()) / grid.h()) - 1);
+                int j1 = Math.min(jTo - 1, (int) Math.floor((r[3] - grid.y0()) / grid.h()) + 1);
+                for (int j = j0; j <= j1; j++) {
+                    double y = grid.nodeY(j);
+                    int row = j * nx;
+                    for (int i = i0; i <= i1; i++) {
+                        double x = grid.nodeX(i);
+                        double d = s.centreHeight(x, y);
+                        if (d > node[row + i]) {
+                            node[row + i] = d;
+                        }
+                        double l = s.lowerBound(x, y, half);
+                        if (l > low[row + i]) {
+                            low[row + i] = l;
+                        }
+                    }
+                }
+            }
+        });
+        return new CentreSurface(grid, radius, node, low);
+    }
+
+    public Grid grid() { return grid; }
+
+    public double radius() { return radius; }
+
+    /** D at the node of cell (i, j). */
+    public double nodeHeight(int i, int j) { return nodeHeight[j * grid.nx() + i]; }
+
+    /** A value ≤ D everywhere in cell (i, j). */
+    public double cellLower(int i, int j) { return cellLower[j * grid.nx() + i]; }
+
+    double[] nodeHeights() { return nodeHeight; }
+
+    double[] cellLowers() { return cellLower; }
+
+    /** Per vertex, the least lower bound of the (up to four) cells around it; outside cells are open ground. */
+    double[] vertexLowers() {
+        int nx = grid.nx(), ny = grid.ny();
+        double[] v = new double[(nx + 1) * (ny + 1)];
+        for (int j = 0; j <= ny; j++) {
+            for (int i = 0; i <= nx; i++) {
+                double m = Double.POSITIVE_INFINITY;
+                for (int dj = -1; dj <= 0; dj++) {
+                    for (int di = -1; di <= 0; di++) {
+                        int ci = i + di, cj = j + dj;
+                        double c = ci < 0 || cj < 0 || ci >= nx || cj >= ny ? radius : cellLower[cj * nx + ci];
+                        m = Math.min(m, c);
+                    }
+                }
+                v[j * (nx + 1) + i] = m;
+            }
+        }
+        return v;
+    }
+}

@@ -1,0 +1,252 @@
+package org.lpzplanner.engine.envelope;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.PriorityQueue;
+
+/**
+ * Branch and bound for the least envelope height over a target square (half-side 0: a point):
+ * min over x in the target and centre columns c with |c − x| ≤ R of [D(c) − √(R² − |c − x|²)].
+ *
+ * <p>Regions of centre columns are bounded below by a lower bound of D over the region minus the
+ * sphere term at the region's nearest distance to the target; they start as blocks of a min-pyramid
+ * over the grid's cell bounds and are subdivided below cell size using the supports themselves.
+ * Exact values of D at region centres give the upper bound. Stops when the gap is within the
+ * tolerance, or as soon as a threshold question is settled. Columns outside the grid are open
+ * ground (D = R), which is exact there.
+ *
+ * <p>Thread-safe: each call keeps its own state.
+ */
+public final class EnvelopeRefiner {
+
+    /** Sub-cell splitting stops here, relative to the cell size; the region's bound then stands. */
+    private static final int MAX_SPLIT_DEPTH = 16;
+
+    /**
+     * Work cap per query: near a continuum of equally good centres (a wall of a structure taller
+     * than R, queried exactly on its line) the bounds tighten only slowly; the query then returns
+     * its current lower bound, which is still safe.
+     */
+    private static final int MAX_REGIONS = 60_000;
+
+    private final CentreSurface surface;
+    private final SupportIndex index;
+    private final Grid grid;
+    private final double radius;
+    private final double r2;
+    private final double[][] pyramid;
+    private final int[] pnx;
+    private final int[] pny;
+    private final int topLevel;
+
+    public EnvelopeRefiner(CentreSurface surface, SupportIndex index) {
+        this.surface = surface;
+        this.index = index;
+        this.grid = surface.grid();
+        this.radius = surface.radius();
+        this.r2 = radius * radius;
+        List<double[]> levels = new ArrayList<>();
+        List<int[]> dims = new ArrayList<>();
+        levels.add(surface.cellLowers());
+        dims.add(new int[] {grid.nx(), grid.ny()});
+        double blockTarget = Math.max(grid.h(), radius / 3);
+        while (grid.h() * (1 << (levels.size() - 1)) < blockTarget) {
+            double[] prev = levels.get(levels.size() - 1);
+            int px = dims.get(dims.size() - 1)[0], py = dims.get(dims.size() - 1)[1];
+            int qx = (px + 1) / 2, qy = (py + 1) / 2;
+            double[] next = new double[qx * qy];
+            for (int j = 0; j < qy; j++) {
+                for (int i = 0; i < qx; i++) {
+                    double m = Double.POSITIVE_INFINITY;
+                    for (int dj = 0; dj < 2; dj++) {
+                        for (int di = 0; di < 2; di++) {
+                            int ci = 2 * i + di, cj = 2 * j + dj;
+                            if (ci < px && cj < py) {
+                                m = Math.min(m, prev[cj * px + ci]);
+                            }
+                        }
+                    }
+                    next[j * qx + i] = m;
+                }
+            }
+            levels.add(next);
+            dims.add(new int[] {qx, qy});
+        }
+        this.pyramid = levels.toArray(new double[0][]);
+        this.pnx = dims.stream().mapToInt(d -> d[0]).toArray();
+        this.pny = dims.stream().mapToInt(d -> d[1]).toArray();
+        this.topLevel = pyramid.length - 1;
+    }
+
+    /** A region of centre columns with a lower bound of D over it. */
+    private static final class Region implements Comparable<Region> {
+        final int level;        // ≥ 0: pyramid block (i, j); −1: sub-cell square
+        final int i;
+        final int j;
+        final double cx;
+        final double cy;
+        final double half;
+        final double lowD;
+        final int depth;
+        final List<Support> supports;
+        double bound;
+
+        Region(int level, int i, int j, double cx, double cy, double half, double lowD, int depth, List<Support> supports) {
+            this.level = level;
+            this.i = i;
+            this.j = j;
+            this.cx = cx;
+            this.cy = cy;
+            this.half = half;
+            this.lowD = lowD;
+            this.depth = depth;
+            this.supports = supports;
+        }
+
+        @Override
+        public int compareTo(Region o) {
+            return Double.compare(bound, o.bound);
+        }
+    }
+
+    /** Least envelope height at a point, to within {@code tolerance}. */
+    public EnvelopeBound atPoint(double x, double y, double tolerance) {
+        return lowest(Target.point(x, y), tolerance, Double.NaN);
+    }
+
+    /**
+     * Bounds on the least envelope height over the target square. With a threshold θ (not NaN) it
+     * may stop early once "least height ≤ θ" is proven (upper ≤ θ) or refuted (lower &gt; θ).
+     */
+    public EnvelopeBound overSquare(double tx, double ty, double th, double tolerance, double threshold) {
+        return lowest(Target.square(tx, ty, th), tolerance, threshold);
+    }
+
+    /** As {@link #overSquare}, for any target. */
+    public EnvelopeBound lowest(Target target, double tolerance, double threshold) {
+        boolean decide = !Double.isNaN(threshold);
+        double upper = Double.POSITIVE_INFINITY;
+        // open ground beyond the grid: D = R exactly
+        double dOut = target.distanceToOutside(grid.x0(), grid.y0(), grid.x1(), grid.y1());
+        if (dOut <= radius) {
+            upper = radius - Math.sqrt(r2 - dOut * dOut);
+        }
+        PriorityQueue<Region> queue = new PriorityQueue<>();
+        double blockSize = grid.h() * (1 << topLevel);
+        double[] b = target.bounds();
+        int i0 = (int) Math.floor((b[0] - radius - grid.x0()) / blockSize);
+        int i1 = (int) Math.floor((b[2] + radius - grid.x0()) / blockSize);
+        int j0 = (int) Math.floor((b[1] - radius - grid.y0()) / blockSize);
+        int j1 = (int) Math.floor((b[3] + radius - grid.y0()) / blockSize);
+        for (int j = Math.max(0, j0); j <= Math.min(pny[topLevel] - 1, j1); j++) {
+            for (int i = Math.max(0, i0); i <= Math.min(pnx[topLevel] - 1, i1); i++) {
+                upper = Math.min(upper, offer(queue, block(topLevel, i, j), target));
+            }
+        }
+        int popped = 0;
+        while (!queue.isEmpty()) {
+            Region r = queue.poll();
+            if (++popped > MAX_REGIONS) {
+                return new EnvelopeBound(Math.min(r.bound, upper), upper);
+            }
+            if (decide && (upper <= threshold || r.bound > threshold)) {
+                return new EnvelopeBound(Math.min(r.bound, upper), upper);
+            }
+            if (r.bound >= upper - tolerance) {
+                return new EnvelopeBound(Math.min(r.bound, upper), upper);
+            }
+            if (r.level > 0) {
+                for (int dj = 0; dj < 2; dj++) {
+                    for (int di = 0; di < 2; di++) {
+                        int ci = 2 * r.i + di, cj = 2 * r.j + dj;
+                        if (ci < pnx[r.level - 1] && cj < pny[r.level - 1]) {
+                            upper = Math.min(upper, offer(queue, block(r.level - 1, ci, cj), target));
+                        }
+                    }
+                }
+            } else if (r.depth >= MAX_SPLIT_DEPTH) {
+                return new EnvelopeBound(Math.min(r.bound, upper), upper);
+            } else {
+                List<Support> candidates = r.level == 0 ? index.near(r.cx, r.cy, r.half) : r.supports;
+                List<Support> relevant = new ArrayList<>();
+                for (Support s : candidates) {
+                    if (s.upperBound(r.cx, r.cy, r.half) >= r.lowD) {
+                        relevant.add(s);
+                    }
+                }
+                double q = r.half / 2;
+                for (int dj = -1; dj <= 1; dj += 2) {
+                    for (int di = -1; di <= 1; di += 2) {
+                        double sx = r.cx + di * q, sy = r.cy + dj * q;
+                        double low = r.lowD;
+                        double exact = radius;
+                        for (Support s : relevant) {
+                            low = Math.max(low, s.lowerBound(sx, sy, q));
+                            exact = Math.max(exact, s.centreHeight(sx, sy));
+                        }
+                        Region sub = new Region(-1, 0, 0, sx, sy, q, low, r.depth + 1, relevant);
+                        upper = Math.min(upper, evaluate(sx, sy, exact, target));
+                        if (bound(sub, target)) {
+                            queue.add(sub);
+                        }
+                    }
+                }
+            }
+        }
+        return new EnvelopeBound(upper, upper);
+    }
+
+    /** D at column (x, y), exact. */
+    public double centreHeight(double x, double y) {
+        double d = radius;
+        for (Support s : index.near(x, y, 0)) {
+            d = Math.max(d, s.centreHeight(x, y));
+        }
+        return d;
+    }
+
+    /** A value ≤ D over the square of half-side {@code half} around (x, y). */
+    public double centreLowerBound(double x, double y, double half) {
+        double d = radius;
+        for (Support s : index.near(x, y, half)) {
+            d = Math.max(d, s.lowerBound(x, y, half));
+        }
+        return d;
+    }
+
+    private Region block(int level, int i, int j) {
+        double size = grid.h() * (1 << level);
+        double cx = grid.x0() + (i + 0.5) * size, cy = grid.y0() + (j + 0.5) * size;
+        return new Region(level, i, j, cx, cy, size / 2, pyramid[level][j * pnx[level] + i], 0, null);
+    }
+
+    /** Queues the region if it can reach the target; returns the upper bound from its best node. */
+    private double offer(PriorityQueue<Region> queue, Region r, Target target) {
+        if (!bound(r, target)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        queue.add(r);
+        // the block's cell nearest the target gives an attained value
+        int span = 1 << r.level;
+        double tx = target.anchor()[0], ty = target.anchor()[1];
+        int ci = Math.max(r.i * span, Math.min(Math.min(grid.nx(), (r.i + 1) * span) - 1, (int) Math.floor((tx - grid.x0()) / grid.h())));
+        int cj = Math.max(r.j * span, Math.min(Math.min(grid.ny(), (r.j + 1) * span) - 1, (int) Math.floor((ty - grid.y0()) / grid.h())));
+        return evaluate(grid.nodeX(ci), grid.nodeY(cj), surface.nodeHeight(ci, cj), target);
+    }
+
+    private boolean bound(Region r, Target target) {
+        double d = target.lowerDistance(r.cx, r.cy, r.half);
+        double d2 = d * d;
+        if (d2 > r2) {
+            return false;
+        }
+        r.bound = r.lowD - Math.sqrt(r2 - d2);
+        return true;
+    }
+
+    private double evaluate(double cx, double cy, double d, Target target) {
+        double dist = target.distance(cx, cy);
+        double d2 = dist * dist;
+        return d2 > r2 ? Double.POSITIVE_INFINITY : d - Math.sqrt(r2 - d2);
+    }
+}

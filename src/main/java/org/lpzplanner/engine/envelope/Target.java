@@ -1,0 +1,103 @@
+package org.lpzplanner.engine.envelope;
+
+/**
+ * Where an envelope minimum is wanted: a point, an axis-aligned square, or a plan segment.
+ * Supplies exact and lower-bound plan distances for the branch and bound.
+ */
+public sealed interface Target {
+
+    /** Exact plan distance from (x, y) to the target. */
+    double distance(double x, double y);
+
+    /** A value ≤ the plan distance from any point of the square (half-side {@code half}) around (x, y) to the target. */
+    double lowerDistance(double x, double y, double half);
+
+    /** Least distance from the target to the outside of the rectangle [x0, x1] × [y0, y1] (0 if it reaches out). */
+    double distanceToOutside(double x0, double y0, double x1, double y1);
+
+    /** Plan bounding box [minX, minY, maxX, maxY]. */
+    double[] bounds();
+
+    /** A representative point (x, y). */
+    double[] anchor();
+
+    static Target point(double x, double y) {
+        return new Square(x, y, 0);
+    }
+
+    static Target square(double x, double y, double half) {
+        return new Square(x, y, half);
+    }
+
+    static Target segment(double x0, double y0, double x1, double y1) {
+        return new Segment(x0, y0, x1, y1);
+    }
+
+    /** Axis-aligned square (half 0: a point). */
+    record Square(double x, double y, double half) implements Target {
+        @Override
+        public double distance(double cx, double cy) {
+            double dx = Math.max(0, Math.abs(cx - x) - half), dy = Math.max(0, Math.abs(cy - y) - half);
+            return Math.sqrt(dx * dx + dy * dy);
+        }
+
+        @Override
+        public double lowerDistance(double cx, double cy, double h) {
+            double dx = Math.max(0, Math.abs(cx - x) - half - h), dy = Math.max(0, Math.abs(cy - y) - half - h);
+            return Math.sqrt(dx * dx + dy * dy);
+        }
+
+        @Override
+        public double distanceToOutside(double x0, double y0, double x1, double y1) {
+            return Math.max(0, Math.min(Math.min(x - x0, x1 - x), Math.min(y - y0, y1 - y)) - half);
+        }
+
+        @Override
+        public double[] bounds() {
+            return new double[] {x - half, y - half, x + half, y + half};
+        }
+
+        @Override
+        public double[] anchor() {
+            return new double[] {x, y};
+        }
+    }
+
+    /** Plan segment from (x0, y0) to (x1, y1). */
+    record Segment(double x0, double y0, double x1, double y1) implements Target {
+        @Override
+        public double distance(double cx, double cy) {
+            double vx = x1 - x0, vy = y1 - y0;
+            double len2 = vx * vx + vy * vy;
+            double t = len2 == 0 ? 0 : ((cx - x0) * vx + (cy - y0) * vy) / len2;
+            t = t < 0 ? 0 : (t > 1 ? 1 : t);
+            return Math.hypot(cx - (x0 + t * vx), cy - (y0 + t * vy));
+        }
+
+        @Override
+        public double lowerDistance(double cx, double cy, double h) {
+            // distance is 1-Lipschitz: no point of the square is nearer than centre distance − half-diagonal
+            return Math.max(0, distance(cx, cy) - h * Math.sqrt(2));
+        }
+
+        @Override
+        public double distanceToOutside(double ax, double ay, double bx, double by) {
+            // the distance to the rectangle's outside is concave inside it: least at an end point
+            return Math.min(end(x0, y0, ax, ay, bx, by), end(x1, y1, ax, ay, bx, by));
+        }
+
+        private static double end(double x, double y, double ax, double ay, double bx, double by) {
+            return Math.max(0, Math.min(Math.min(x - ax, bx - x), Math.min(y - ay, by - y)));
+        }
+
+        @Override
+        public double[] bounds() {
+            return new double[] {Math.min(x0, x1), Math.min(y0, y1), Math.max(x0, x1), Math.max(y0, y1)};
+        }
+
+        @Override
+        public double[] anchor() {
+            return new double[] {(x0 + x1) / 2, (y0 + y1) / 2};
+        }
+    }
+}

@@ -1,0 +1,71 @@
+package org.lpzplanner.engine.exposure;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.envelope.Target;
+import org.lpzplanner.engine.geom.RoofEdge;
+import org.lpzplanner.engine.geom.SiteSurface;
+
+/**
+ * Exposed stretches of roof edges, parapets, ridges, hips and object edges, and exposed corners.
+ * Each edge is cut into pieces no longer than the grid spacing; a piece is exposed when the
+ * envelope's least value along it is at or below the piece's highest point. Consecutive exposed
+ * pieces merge into one stretch.
+ */
+final class EdgeExposureOp {
+
+    private EdgeExposureOp() {
+    }
+
+    static List<EdgeExposure> edges(ExposureContext ctx) {
+        return ctx.surface.edges().parallelStream().flatMap(e -> edge(ctx, e).stream()).toList();
+    }
+
+    private static List<EdgeExposure> edge(ExposureContext ctx, RoofEdge e) {
+        Coordinate a = e.p0(), b = e.p1();
+        int n = Math.max(1, (int) Math.ceil(e.planLength() / ctx.grid.h()));
+        List<EdgeExposure> out = new ArrayList<>();
+        int runStart = -1;
+        for (int k = 0; k <= n; k++) {
+            boolean exposed = k < n && piece(ctx, a, b, (double) k / n, (double) (k + 1) / n);
+            if (exposed && runStart < 0) {
+                runStart = k;
+            } else if (!exposed && runStart >= 0) {
+                Coordinate p = lerp(a, b, (double) runStart / n), q = lerp(a, b, (double) k / n);
+                out.add(new EdgeExposure(e.ownerId(), e.ownerName(), e.kind(),
+                        ctx.gf.createLineString(new Coordinate[] {p, q}), p.distance3D(q)));
+                runStart = -1;
+            }
+        }
+        return out;
+    }
+
+    private static boolean piece(ExposureContext ctx, Coordinate a, Coordinate b, double t0, double t1) {
+        Coordinate p = lerp(a, b, t0), q = lerp(a, b, t1);
+        double top = Math.max(p.getZ(), q.getZ());
+        double mx = (p.x + q.x) / 2, my = (p.y + q.y) / 2;
+        if (ctx.surface.topHeight(mx, my) > top + 1e-6) {
+            return false; // inside a higher solid: not a surface
+        }
+        return ctx.isExposed(Target.segment(p.x, p.y, q.x, q.y), top);
+    }
+
+    static List<CornerExposure> corners(ExposureContext ctx) {
+        Map<String, SiteSurface.Corner> unique = new LinkedHashMap<>();
+        for (SiteSurface.Corner c : ctx.surface.corners()) {
+            unique.putIfAbsent(String.format("%.4f|%.4f|%.4f", c.point().x, c.point().y, c.point().getZ()), c);
+        }
+        return unique.values().parallelStream()
+                .filter(c -> ctx.surface.topHeight(c.point().x, c.point().y) <= c.point().getZ() + 1e-6)
+                .filter(c -> ctx.isExposed(Target.point(c.point().x, c.point().y), c.point().getZ()))
+                .map(c -> new CornerExposure(c.ownerId(), c.ownerName(), c.point()))
+                .toList();
+    }
+
+    static Coordinate lerp(Coordinate a, Coordinate b, double t) {
+        return new Coordinate(a.x + t * (b.x - a.x), a.y + t * (b.y - a.y), a.getZ() + t * (b.getZ() - a.getZ()));
+    }
+}

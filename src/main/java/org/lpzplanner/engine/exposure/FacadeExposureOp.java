@@ -1,0 +1,108 @@
+package org.lpzplanner.engine.exposure;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.envelope.EnvelopeRefiner;
+import org.lpzplanner.engine.geom.Wall;
+
+/**
+ * Exposed facade bands.
+ *
+ * <p>A sphere that touches a vertical wall at a point w (away from the wall's ends) without entering
+ * the wall has its centre on the outward normal at distance R: c = w + R·n, at the height of the
+ * touch. So the wall point at height z is exposed iff z ≥ D(w + R·n), and the band over a piece of
+ * wall runs from the least D along the offset piece (a rigorous lower bound, refined by halving the
+ * piece until within {@link #BAND_TOLERANCE}) up to the wall top. Bands lower than
+ * {@link #MIN_BAND} are left out: there the wall top is at or above the envelope and is reported
+ * as an exposed edge. The vertical corner lines at wall ends are taken as the limit of their walls.
+ */
+final class FacadeExposureOp {
+
+    /** Bands shorter than this (m) are carried by the exposed top edge. */
+    static final double MIN_BAND = 0.1;
+
+    /** Band bottoms are computed to this tolerance (m), toward the lower side. */
+    static final double BAND_TOLERANCE = 0.01;
+
+    private static final int MAX_HALVINGS = 12;
+
+    private FacadeExposureOp() {
+    }
+
+    static List<FacadeBand> run(ExposureContext ctx) {
+        return ctx.surface.walls().parallelStream().flatMap(w -> wall(ctx, w).stream()).toList();
+    }
+
+    private static List<FacadeBand> wall(ExposureContext ctx, Wall w) {
+        double len = w.length();
+        List<FacadeBand> out = new ArrayList<>();
+        if (len < 1e-6) {
+            return out;
+        }
+        int n = Math.max(1, (int) Math.ceil(len / ctx.grid.h()));
+        double ox = (w.p1().y - w.p0().y) / len, oy = -(w.p1().x - w.p0().x) / len; // outward: right of p0→p1
+        int runStart = -1;
+        double runBottom = Double.POSITIVE_INFINITY, runTop = 0;
+        for (int k = 0; k <= n; k++) {
+            double[] band = k < n ? piece(ctx, w, (double) k / n, (double) (k + 1) / n, ox, oy) : null;
+            if (band != null) {
+                if (runStart < 0) {
+                    runStart = k;
+                    runBottom = band[0];
+                    runTop = band[1];
+                } else {
+                    runBottom = Math.min(runBottom, band[0]);
+                    runTop = Math.max(runTop, band[1]);
+                }
+            } else if (runStart >= 0) {
+                Coordinate p = plan(EdgeExposureOp.lerp(w.p0(), w.p1(), (double) runStart / n));
+                Coordinate q = plan(EdgeExposureOp.lerp(w.p0(), w.p1(), (double) k / n));
+                out.add(new FacadeBand(w.ownerId(), w.ownerName(), w.index(),
+                        ctx.gf.createLineString(new Coordinate[] {p, q}), p.distance(q), runBottom, runTop));
+                runStart = -1;
+            }
+        }
+        return out;
+    }
+
+    /** [bottom, top] of the exposed band over the piece, or null when there is none. */
+    private static double[] piece(ExposureContext ctx, Wall w, double t0, double t1, double ox, double oy) {
+        Coordinate p = EdgeExposureOp.lerp(w.p0(), w.p1(), t0), q = EdgeExposureOp.lerp(w.p0(), w.p1(), t1);
+        double top = Math.max(p.getZ(), q.getZ());
+        double mx = (p.x + q.x) / 2, my = (p.y + q.y) / 2;
+        // what stands against the wall outside (an adjacent solid, or the roof under a rooftop object)
+        double outside = Math.max(w.base(), ctx.surface.topHeight(mx + ox * 0.01, my + oy * 0.01));
+        if (outside >= top - MIN_BAND) {
+            return null;
+        }
+        double r = ctx.field.radius();
+        double bottom = Math.max(outside, leastCentreHeight(ctx.field.refiner(),
+                p.x + ox * r, p.y + oy * r, q.x + ox * r, q.y + oy * r, top - MIN_BAND, 0));
+        return top - bottom > MIN_BAND ? new double[] {bottom, top} : null;
+    }
+
+    /**
+     * A lower bound of D along the segment a→b, within the band tolerance where it matters (below
+     * {@code cutoff}; above it only "not below the cutoff" is needed).
+     */
+    private static double leastCentreHeight(EnvelopeRefiner refiner, double ax, double ay, double bx, double by,
+            double cutoff, int depth) {
+        double mx = (ax + bx) / 2, my = (ay + by) / 2;
+        double half = Math.max(Math.abs(bx - ax), Math.abs(by - ay)) / 2;
+        double lower = refiner.centreLowerBound(mx, my, half);
+        if (lower >= cutoff || depth >= MAX_HALVINGS) {
+            return lower;
+        }
+        double exact = refiner.centreHeight(mx, my);
+        if (exact - lower <= BAND_TOLERANCE) {
+            return lower;
+        }
+        return Math.min(leastCentreHeight(refiner, ax, ay, mx, my, cutoff, depth + 1),
+                leastCentreHeight(refiner, mx, my, bx, by, cutoff, depth + 1));
+    }
+
+    private static Coordinate plan(Coordinate c) {
+        return new Coordinate(c.x, c.y);
+    }
+}
