@@ -99,6 +99,7 @@ public final class BallErosion {
 
     /** One lattice row in units of the spacing: erodes it by circles of any radius. Not thread-safe. */
     static final class RowEroder {
+        private static final double NEAR = 1e-6;
         private final int n;
         private final double[] w;
         private final int[] runOf;
@@ -168,13 +169,15 @@ public final class BallErosion {
                     k++;
                 }
                 double best = bowl(stack[k], x, r2);
-                if (k > 0) {
+                // near a crossing, rounding may pick the wrong side: look at both neighbours there
+                if (k > 0 && x - from[k] < NEAR) {
                     best = Math.min(best, bowl(stack[k - 1], x, r2));
                 }
-                if (k < top) {
+                if (k < top && from[k + 1] - x < NEAR) {
                     best = Math.min(best, bowl(stack[k + 1], x, r2));
                 }
-                out[x] = Math.min(best, w[x] - r);
+                double self = w[x] - r;
+                out[x] = self < best ? self : best;
             }
         }
 

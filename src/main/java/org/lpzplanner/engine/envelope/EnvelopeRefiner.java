@@ -196,6 +196,11 @@ public final class EnvelopeRefiner {
         return new EnvelopeBound(upper, upper);
     }
 
+    /** Supports that may constrain centres in the square of half-side {@code half} around (x, y). */
+    public List<Support> supportsNear(double x, double y, double half) {
+        return index.near(x, y, half);
+    }
+
     /** D at column (x, y), exact. */
     public double centreHeight(double x, double y) {
         double d = radius;

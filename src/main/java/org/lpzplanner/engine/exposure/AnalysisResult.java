@@ -13,11 +13,19 @@ import org.lpzplanner.engine.model.SphereSpec;
  * @param resolution grid spacing used
  * @param tolerance  exact envelope queries are at most this far below the true envelope, never above
  * @param refinedQueries how many decisions needed the exact (branch and bound) evaluation
+ * @param stageMillis    time per stage (envelope, roofs, edges, corners, facades, parts, ground)
+ * @param warnings       where the model's assumptions may not hold (e.g. a wire higher than R above
+ *                       the surface below), in plain words
  */
 public record AnalysisResult(SphereSpec sphere, double resolution, double tolerance, List<RoofExposure> roofs,
         List<EdgeExposure> edges, List<CornerExposure> corners, List<FacadeBand> facades,
         List<PartInterception> parts, ProtectedGround protectedGround, EnvelopeField envelope, long envelopeMillis,
-        long totalMillis, long refinedQueries) {
+        long totalMillis, long refinedQueries, Map<String, Long> stageMillis, List<String> warnings) {
+
+    public AnalysisResult {
+        stageMillis = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(stageMillis));
+        warnings = List.copyOf(warnings);
+    }
 
     /** Exposed roof plan area per owner (structure or rooftop object) name, in input order. */
     public Map<String, Double> exposedRoofAreaByOwner() {

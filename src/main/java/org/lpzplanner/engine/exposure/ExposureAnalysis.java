@@ -1,6 +1,9 @@
 package org.lpzplanner.engine.exposure;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.function.Supplier;
 import org.lpzplanner.engine.envelope.EnvelopeField;
 import org.lpzplanner.engine.envelope.EnvelopeOp;
 import org.lpzplanner.engine.geom.SiteSurface;
@@ -31,14 +34,24 @@ public final class ExposureAnalysis {
         EnvelopeField field = EnvelopeOp.compute(surface, radius, h);
         long envelopeDone = System.nanoTime();
         ExposureContext ctx = new ExposureContext(surface, field, options.tolerance());
-        List<RoofExposure> roofs = RoofExposureOp.run(ctx);
-        List<EdgeExposure> edges = EdgeExposureOp.edges(ctx);
-        List<CornerExposure> corners = EdgeExposureOp.corners(ctx);
-        List<FacadeBand> facades = FacadeExposureOp.run(ctx);
-        List<PartInterception> parts = PartInterceptionOp.run(ctx);
-        ProtectedGround ground = ProtectedGroundOp.run(ctx);
+        Map<String, Long> stages = new LinkedHashMap<>();
+        stages.put("envelope", (envelopeDone - start) / 1_000_000);
+        List<RoofExposure> roofs = timed(stages, "roofs", () -> RoofExposureOp.run(ctx));
+        List<EdgeExposure> edges = timed(stages, "edges", () -> EdgeExposureOp.edges(ctx));
+        List<CornerExposure> corners = timed(stages, "corners", () -> EdgeExposureOp.corners(ctx));
+        List<FacadeBand> facades = timed(stages, "facades", () -> FacadeExposureOp.run(ctx));
+        List<PartInterception> parts = timed(stages, "parts", () -> PartInterceptionOp.run(ctx));
+        ProtectedGround ground = timed(stages, "ground", () -> ProtectedGroundOp.run(ctx));
         long end = System.nanoTime();
         return new AnalysisResult(options.sphere(), h, options.tolerance(), roofs, edges, corners, facades, parts,
-                ground, field, (envelopeDone - start) / 1_000_000, (end - start) / 1_000_000, ctx.refinedQueries());
+                ground, field, (envelopeDone - start) / 1_000_000, (end - start) / 1_000_000, ctx.refinedQueries(),
+                stages, AssumptionCheck.warnings(surface, radius));
+    }
+
+    private static <T> T timed(Map<String, Long> stages, String name, Supplier<T> work) {
+        long t = System.nanoTime();
+        T out = work.get();
+        stages.put(name, (System.nanoTime() - t) / 1_000_000);
+        return out;
     }
 }

@@ -3,7 +3,7 @@ package org.lpzplanner.engine.exposure;
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
-import org.lpzplanner.engine.envelope.EnvelopeRefiner;
+import org.lpzplanner.engine.envelope.Support;
 import org.lpzplanner.engine.geom.Wall;
 
 /**
@@ -23,7 +23,7 @@ final class FacadeExposureOp {
     static final double MIN_BAND = 0.1;
 
     /** Band bottoms are computed to this tolerance (m), toward the lower side. */
-    static final double BAND_TOLERANCE = 0.01;
+    static final double BAND_TOLERANCE = 0.05;
 
     private static final int MAX_HALVINGS = 12;
 
@@ -76,9 +76,12 @@ final class FacadeExposureOp {
         if (outside >= top - MIN_BAND) {
             return null;
         }
-        double r = ctx.field.radius();
-        double bottom = Math.max(outside, leastCentreHeight(ctx.field.refiner(),
-                p.x + ox * r, p.y + oy * r, q.x + ox * r, q.y + oy * r, top - MIN_BAND, 0));
+        // a hair beyond R, so the wall's own columns (exactly R away) only touch the sphere
+        double r = ctx.field.radius() + 1e-6;
+        double ax = p.x + ox * r, ay = p.y + oy * r, bx = q.x + ox * r, by = q.y + oy * r;
+        List<Support> near = ctx.field.refiner().supportsNear((ax + bx) / 2, (ay + by) / 2,
+                Math.max(Math.abs(bx - ax), Math.abs(by - ay)) / 2);
+        double bottom = Math.max(outside, leastCentreHeight(near, ctx.field.radius(), ax, ay, bx, by, top - MIN_BAND, 0));
         return top - bottom > MIN_BAND ? new double[] {bottom, top} : null;
     }
 
@@ -86,20 +89,20 @@ final class FacadeExposureOp {
      * A lower bound of D along the segment a→b, within the band tolerance where it matters (below
      * {@code cutoff}; above it only "not below the cutoff" is needed).
      */
-    private static double leastCentreHeight(EnvelopeRefiner refiner, double ax, double ay, double bx, double by,
-            double cutoff, int depth) {
+    private static double leastCentreHeight(List<Support> near, double radius, double ax, double ay, double bx,
+            double by, double cutoff, int depth) {
         double mx = (ax + bx) / 2, my = (ay + by) / 2;
         double half = Math.max(Math.abs(bx - ax), Math.abs(by - ay)) / 2;
-        double lower = refiner.centreLowerBound(mx, my, half);
-        if (lower >= cutoff || depth >= MAX_HALVINGS) {
+        double lower = radius, exact = radius;
+        for (Support s : near) {
+            lower = Math.max(lower, s.lowerBound(mx, my, half));
+            exact = Math.max(exact, s.centreHeight(mx, my));
+        }
+        if (lower >= cutoff || depth >= MAX_HALVINGS || exact - lower <= BAND_TOLERANCE) {
             return lower;
         }
-        double exact = refiner.centreHeight(mx, my);
-        if (exact - lower <= BAND_TOLERANCE) {
-            return lower;
-        }
-        return Math.min(leastCentreHeight(refiner, ax, ay, mx, my, cutoff, depth + 1),
-                leastCentreHeight(refiner, mx, my, bx, by, cutoff, depth + 1));
+        return Math.min(leastCentreHeight(near, radius, ax, ay, mx, my, cutoff, depth + 1),
+                leastCentreHeight(near, radius, mx, my, bx, by, cutoff, depth + 1));
     }
 
     private static Coordinate plan(Coordinate c) {

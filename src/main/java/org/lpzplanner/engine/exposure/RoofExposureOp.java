@@ -24,6 +24,34 @@ final class RoofExposureOp {
                 .mapToObj(k -> face(ctx, k)).toList();
     }
 
+    /**
+     * E at node (i, j) from above, using the sphere that rests on the face's plane with its contact
+     * at the node: its centre sits R·(a, b)/s up-slope of the node, and E ≤ D(c) − R/s, which
+     * equals the roof height wherever nothing else holds that sphere up.
+     */
+    private static double restingUpper(ExposureContext ctx, Plane plane, int i, int j) {
+        if (plane.isHorizontal()) {
+            return ctx.field.nodeUpper(i, j);
+        }
+        double s = plane.slopeFactor(), r = ctx.field.radius();
+        double cx = ctx.grid.nodeX(i) - r * plane.a() / s, cy = ctx.grid.nodeY(j) - r * plane.b() / s;
+        return ctx.field.refiner().centreHeight(cx, cy) - r / s;
+    }
+
+    /** True when another owner's face shares some of this face's bounding box (overlapping solids). */
+    private static boolean isOverlapped(ExposureContext ctx, int k, PlanPolygon poly) {
+        RoofFace face = ctx.surface.faces().get(k);
+        for (int m = 0; m < ctx.surface.faces().size(); m++) {
+            PlanPolygon other = ctx.surface.facePolygon(m);
+            if (m != k && !ctx.surface.faces().get(m).ownerId().equals(face.ownerId())
+                    && other.minX() <= poly.maxX() && other.maxX() >= poly.minX()
+                    && other.minY() <= poly.maxY() && other.maxY() >= poly.minY()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private static RoofExposure face(ExposureContext ctx, int k) {
         RoofFace face = ctx.surface.faces().get(k);
         PlanPolygon poly = ctx.surface.facePolygon(k);
@@ -32,6 +60,7 @@ final class RoofExposureOp {
         double half = g.h() / 2;
         double rise = (Math.abs(plane.a()) + Math.abs(plane.b())) * half;
         int i0 = g.column(poly.minX()), i1 = g.column(poly.maxX()), j0 = g.row(poly.minY()), j1 = g.row(poly.maxY());
+        boolean overlapped = isOverlapped(ctx, k, poly);
         boolean[] exposed = new boolean[g.nx() * g.ny()];
         int candidates = 0, exposedCount = 0, hidden = 0;
         double minClearance = Double.NaN;
@@ -42,7 +71,7 @@ final class RoofExposureOp {
                 if (!centreInside && poly.distanceToBoundary(x, y) > half * Math.sqrt(2)) {
                     continue;
                 }
-                if (centreInside && ctx.surface.topHeight(x, y) > plane.z(x, y) + 1e-6) {
+                if (overlapped && centreInside && ctx.surface.topHeight(x, y) > plane.z(x, y) + 1e-6) {
                     hidden++;
                     continue; // inside a higher solid
                 }
@@ -52,7 +81,7 @@ final class RoofExposureOp {
                 boolean isExposed;
                 if (roofMax + ExposureContext.MARGIN < lower) {
                     isExposed = false;
-                } else if (centreInside && plane.z(x, y) + ExposureContext.MARGIN >= ctx.field.nodeUpper(i, j)) {
+                } else if (centreInside && plane.z(x, y) + ExposureContext.MARGIN >= restingUpper(ctx, plane, i, j)) {
                     isExposed = true;
                 } else {
                     isExposed = ctx.isExposed(Target.square(x, y, half), roofMax);
