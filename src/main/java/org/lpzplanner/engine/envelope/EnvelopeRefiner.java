@@ -27,7 +27,7 @@ public final class EnvelopeRefiner {
      * than R, queried exactly on its line) the bounds tighten only slowly; the query then returns
      * its current lower bound, which is still safe.
      */
-    private static final int MAX_REGIONS = 60_000;
+    private static final int MAX_REGIONS = 200_000;
 
     private final CentreSurface surface;
     private final SupportIndex index;
@@ -125,6 +125,7 @@ public final class EnvelopeRefiner {
     /** As {@link #overSquare}, for any target. */
     public EnvelopeBound lowest(Target target, double tolerance, double threshold) {
         boolean decide = !Double.isNaN(threshold);
+        double[] line = jointLine(target);
         double upper = Double.POSITIVE_INFINITY;
         // open ground beyond the grid: D = R exactly
         double dOut = target.distanceToOutside(grid.x0(), grid.y0(), grid.x1(), grid.y1());
@@ -187,6 +188,11 @@ public final class EnvelopeRefiner {
                         Region sub = new Region(-1, 0, 0, sx, sy, q, low, r.depth + 1, relevant);
                         upper = Math.min(upper, evaluate(sx, sy, exact, target));
                         if (bound(sub, target)) {
+                            if (line != null) {
+                                for (Support s : relevant) {
+                                    sub.bound = Math.max(sub.bound, s.jointLowerBound(sx, sy, q, line[0], line[1], line[2], line[3]));
+                                }
+                            }
                             queue.add(sub);
                         }
                     }
@@ -217,6 +223,22 @@ public final class EnvelopeRefiner {
             d = Math.max(d, s.lowerBound(x, y, half));
         }
         return d;
+    }
+
+    /**
+     * For a point target (p, zero tangent) or a segment target (its start and unit tangent), the
+     * reference for joint bounds; null for targets with area.
+     */
+    private static double[] jointLine(Target target) {
+        if (target instanceof Target.Square sq && sq.half() == 0) {
+            return new double[] {sq.x(), sq.y(), 0, 0};
+        }
+        if (target instanceof Target.Segment seg) {
+            double len = Math.hypot(seg.x1() - seg.x0(), seg.y1() - seg.y0());
+            return len == 0 ? new double[] {seg.x0(), seg.y0(), 0, 0}
+                    : new double[] {seg.x0(), seg.y0(), (seg.x1() - seg.x0()) / len, (seg.y1() - seg.y0()) / len};
+        }
+        return null;
     }
 
     private Region block(int level, int i, int j) {

@@ -68,6 +68,12 @@ public final class SegmentSupport implements Support {
     }
 
     @Override
+    public double jointLowerBound(double cx, double cy, double half, double px, double py, double tx, double ty) {
+        double s = bestContact(cx, cy);
+        return PointSupport.joint(x0 + ux * s, y0 + uy * s, z0 + m * s, r2, cx, cy, half, px, py, tx, ty);
+    }
+
+    @Override
     public double upperBound(double cx, double cy, double half) {
         double d = Math.sqrt(distanceSq(cx, cy)) - half * Math.sqrt(2);
         d = Math.max(0, d);

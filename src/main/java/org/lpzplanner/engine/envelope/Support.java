@@ -20,6 +20,18 @@ public interface Support {
     /** A value ≥ D<sub>k</sub>(c) for every c in the square. */
     double upperBound(double x, double y, double half);
 
+    /**
+     * A value ≤ D<sub>k</sub>(c) − √(R² − b(c)²) for every c in the square whose target distance is
+     * at most R, where b(c) is the plan distance from c to the point p = (px, py) when the tangent
+     * (tx, ty) is zero, or to the line through p along the unit tangent otherwise (a lower bound of
+     * the distance to a segment on that line). −∞ when this piece gives no joint bound. Bounding
+     * the difference as one function keeps the bound tight where it is nearly constant (right at a
+     * rod tip, or across an edge under a conductor), which separate bounds of the terms cannot do.
+     */
+    default double jointLowerBound(double x, double y, double half, double px, double py, double tx, double ty) {
+        return Double.NEGATIVE_INFINITY;
+    }
+
     /** Plan bounding box of where this piece constrains centres: [minX, minY, maxX, maxY]. */
     double[] reach();
 }

@@ -6,6 +6,62 @@ package org.lpzplanner.engine.envelope;
  */
 public sealed interface Target {
 
+    /** Several squares taken together (e.g. the parts of a grid cell lying inside a face). */
+    static Target union(java.util.List<Square> squares) {
+        return new Union(java.util.List.copyOf(squares));
+    }
+
+    /** Union of squares: distances are the least over its members. */
+    record Union(java.util.List<Square> squares) implements Target {
+        public Union {
+            if (squares.isEmpty()) {
+                throw new IllegalArgumentException("a union target needs at least one square");
+            }
+        }
+
+        @Override
+        public double distance(double x, double y) {
+            double d = Double.POSITIVE_INFINITY;
+            for (Square s : squares) {
+                d = Math.min(d, s.distance(x, y));
+            }
+            return d;
+        }
+
+        @Override
+        public double lowerDistance(double x, double y, double half) {
+            double d = Double.POSITIVE_INFINITY;
+            for (Square s : squares) {
+                d = Math.min(d, s.lowerDistance(x, y, half));
+            }
+            return d;
+        }
+
+        @Override
+        public double distanceToOutside(double x0, double y0, double x1, double y1) {
+            double d = Double.POSITIVE_INFINITY;
+            for (Square s : squares) {
+                d = Math.min(d, s.distanceToOutside(x0, y0, x1, y1));
+            }
+            return d;
+        }
+
+        @Override
+        public double[] bounds() {
+            double[] b = squares.get(0).bounds();
+            for (Square s : squares) {
+                double[] o = s.bounds();
+                b = new double[] {Math.min(b[0], o[0]), Math.min(b[1], o[1]), Math.max(b[2], o[2]), Math.max(b[3], o[3])};
+            }
+            return b;
+        }
+
+        @Override
+        public double[] anchor() {
+            return squares.get(0).anchor();
+        }
+    }
+
     /** Exact plan distance from (x, y) to the target. */
     double distance(double x, double y);
 
@@ -76,8 +132,47 @@ public sealed interface Target {
 
         @Override
         public double lowerDistance(double cx, double cy, double h) {
-            // distance is 1-Lipschitz: no point of the square is nearer than centre distance − half-diagonal
-            return Math.max(0, distance(cx, cy) - h * Math.sqrt(2));
+            // two convex shapes: zero if they meet, else the least of vertex-to-shape distances
+            if (crossesSquare(cx - h, cy - h, cx + h, cy + h)) {
+                return 0;
+            }
+            double d = Math.min(squareDistance(x0, y0, cx, cy, h), squareDistance(x1, y1, cx, cy, h));
+            for (int sy = -1; sy <= 1; sy += 2) {
+                for (int sx = -1; sx <= 1; sx += 2) {
+                    d = Math.min(d, distance(cx + sx * h, cy + sy * h));
+                }
+            }
+            return d;
+        }
+
+        private static double squareDistance(double px, double py, double cx, double cy, double h) {
+            double dx = Math.max(0, Math.abs(px - cx) - h), dy = Math.max(0, Math.abs(py - cy) - h);
+            return Math.sqrt(dx * dx + dy * dy);
+        }
+
+        /** Liang–Barsky: does the segment meet the box [ax, bx] × [ay, by]? */
+        private boolean crossesSquare(double ax, double ay, double bx, double by) {
+            double t0 = 0, t1 = 1, dx = x1 - x0, dy = y1 - y0;
+            double[] p = {-dx, dx, -dy, dy};
+            double[] q = {x0 - ax, bx - x0, y0 - ay, by - y0};
+            for (int i = 0; i < 4; i++) {
+                if (p[i] == 0) {
+                    if (q[i] < 0) {
+                        return false;
+                    }
+                } else {
+                    double t = q[i] / p[i];
+                    if (p[i] < 0) {
+                        t0 = Math.max(t0, t);
+                    } else {
+                        t1 = Math.min(t1, t);
+                    }
+                    if (t0 > t1) {
+                        return false;
+                    }
+                }
+            }
+            return true;
         }
 
         @Override

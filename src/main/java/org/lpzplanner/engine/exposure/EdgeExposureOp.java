@@ -1,6 +1,9 @@
 package org.lpzplanner.engine.exposure;
 
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.Set;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -51,6 +54,27 @@ final class EdgeExposureOp {
             return false; // inside a higher solid: not a surface
         }
         return ctx.isExposed(Target.segment(p.x, p.y, q.x, q.y), top);
+    }
+
+    /** Grid cells each owner's exposed edge stretches pass through, keyed by owner id. */
+    static Map<String, Set<Integer>> cellsByOwner(ExposureContext ctx, List<EdgeExposure> exposed) {
+        Map<String, Set<Integer>> out = new HashMap<>();
+        var g = ctx.grid;
+        for (EdgeExposure e : exposed) {
+            Coordinate a = e.line().getCoordinateN(0), b = e.line().getCoordinateN(1);
+            int n = Math.max(1, (int) Math.ceil(a.distance(b) / (g.h() / 4)));
+            Set<Integer> cells = out.computeIfAbsent(e.ownerId(), k -> new HashSet<>());
+            for (int k = 0; k <= n; k++) {
+                Coordinate p = lerp(a, b, (double) k / n);
+                // a line on a cell border belongs to the cells on both sides
+                for (double d : new double[] {-1e-6, 1e-6}) {
+                    for (double e2 : new double[] {-1e-6, 1e-6}) {
+                        cells.add(g.row(p.y + e2) * g.nx() + g.column(p.x + d));
+                    }
+                }
+            }
+        }
+        return out;
     }
 
     static List<CornerExposure> corners(ExposureContext ctx) {

@@ -36,8 +36,8 @@ public final class ExposureAnalysis {
         ExposureContext ctx = new ExposureContext(surface, field, options.tolerance());
         Map<String, Long> stages = new LinkedHashMap<>();
         stages.put("envelope", (envelopeDone - start) / 1_000_000);
-        List<RoofExposure> roofs = timed(stages, "roofs", () -> RoofExposureOp.run(ctx));
         List<EdgeExposure> edges = timed(stages, "edges", () -> EdgeExposureOp.edges(ctx));
+        List<RoofExposure> roofs = timed(stages, "roofs", () -> RoofExposureOp.run(ctx, EdgeExposureOp.cellsByOwner(ctx, edges)));
         List<CornerExposure> corners = timed(stages, "corners", () -> EdgeExposureOp.corners(ctx));
         List<FacadeBand> facades = timed(stages, "facades", () -> FacadeExposureOp.run(ctx));
         List<PartInterception> parts = timed(stages, "parts", () -> PartInterceptionOp.run(ctx));

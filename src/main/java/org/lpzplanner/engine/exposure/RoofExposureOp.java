@@ -1,66 +1,54 @@
 package org.lpzplanner.engine.exposure;
 
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import java.util.stream.IntStream;
 import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.operation.union.UnaryUnionOp;
 import org.lpzplanner.engine.envelope.Target;
 import org.lpzplanner.engine.geom.PlanPolygon;
 import org.lpzplanner.engine.geom.Plane;
 import org.lpzplanner.engine.geom.RoofFace;
 
 /**
- * Exposed part of every roof face. A grid cell of a face is exposed when the envelope's least value
- * over the cell is at or below the face's highest point in the cell (plus the margin); the exposed
- * part is the union of those cells clipped to the face. Parts of a face inside a higher solid
- * (overlapping structures) are not surfaces and are skipped.
+ * Exposed part of every roof face.
+ *
+ * <p>A grid cell lying wholly in a face is exposed when the envelope's least value over the cell is
+ * at or below the face's highest point in the cell (plus the margin). A cell on the face's
+ * boundary is split into squares lying wholly in the face (down to an eighth of the cell) and
+ * decided the same way; the sliver along the boundary that no such square covers is judged with
+ * the edge it borders, so the cell is also exposed when an exposed edge of the same owner passes
+ * through it. Keeping boundary lines out of the squares matters: on a wall of a structure taller
+ * than R the envelope drops to the facade's exposure, which says nothing about the roof beside it.
+ * The exposed part is the union of exposed cells clipped to the face's visible part (the face less
+ * what higher solids of other owners cover).
  */
 final class RoofExposureOp {
+
+    /** Boundary cells are split down to cell size / 2^this. */
+    private static final int BOUNDARY_SPLITS = 3;
 
     private RoofExposureOp() {
     }
 
-    static List<RoofExposure> run(ExposureContext ctx) {
+    static List<RoofExposure> run(ExposureContext ctx, Map<String, Set<Integer>> exposedEdgeCells) {
         return IntStream.range(0, ctx.surface.faces().size()).parallel()
-                .mapToObj(k -> face(ctx, k)).toList();
+                .mapToObj(k -> face(ctx, k, exposedEdgeCells.getOrDefault(ctx.surface.faces().get(k).ownerId(), Set.of())))
+                .toList();
     }
 
-    /**
-     * E at node (i, j) from above, using the sphere that rests on the face's plane with its contact
-     * at the node: its centre sits R·(a, b)/s up-slope of the node, and E ≤ D(c) − R/s, which
-     * equals the roof height wherever nothing else holds that sphere up.
-     */
-    private static double restingUpper(ExposureContext ctx, Plane plane, int i, int j) {
-        if (plane.isHorizontal()) {
-            return ctx.field.nodeUpper(i, j);
-        }
-        double s = plane.slopeFactor(), r = ctx.field.radius();
-        double cx = ctx.grid.nodeX(i) - r * plane.a() / s, cy = ctx.grid.nodeY(j) - r * plane.b() / s;
-        return ctx.field.refiner().centreHeight(cx, cy) - r / s;
-    }
-
-    /** True when another owner's face shares some of this face's bounding box (overlapping solids). */
-    private static boolean isOverlapped(ExposureContext ctx, int k, PlanPolygon poly) {
-        RoofFace face = ctx.surface.faces().get(k);
-        for (int m = 0; m < ctx.surface.faces().size(); m++) {
-            PlanPolygon other = ctx.surface.facePolygon(m);
-            if (m != k && !ctx.surface.faces().get(m).ownerId().equals(face.ownerId())
-                    && other.minX() <= poly.maxX() && other.maxX() >= poly.minX()
-                    && other.minY() <= poly.maxY() && other.maxY() >= poly.minY()) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    private static RoofExposure face(ExposureContext ctx, int k) {
+    private static RoofExposure face(ExposureContext ctx, int k, Set<Integer> edgeCells) {
         RoofFace face = ctx.surface.faces().get(k);
         PlanPolygon poly = ctx.surface.facePolygon(k);
         Plane plane = face.plane();
         var g = ctx.grid;
         double half = g.h() / 2;
-        double rise = (Math.abs(plane.a()) + Math.abs(plane.b())) * half;
         int i0 = g.column(poly.minX()), i1 = g.column(poly.maxX()), j0 = g.row(poly.minY()), j1 = g.row(poly.maxY());
-        boolean overlapped = isOverlapped(ctx, k, poly);
+        List<Polygon> covers = coveringFaces(ctx, k);
+        Geometry visible = covers.isEmpty() ? face.polygon() : face.polygon().difference(UnaryUnionOp.union(covers));
         boolean[] exposed = new boolean[g.nx() * g.ny()];
         int candidates = 0, exposedCount = 0, hidden = 0;
         double minClearance = Double.NaN;
@@ -71,26 +59,25 @@ final class RoofExposureOp {
                 if (!centreInside && poly.distanceToBoundary(x, y) > half * Math.sqrt(2)) {
                     continue;
                 }
-                if (overlapped && centreInside && ctx.surface.topHeight(x, y) > plane.z(x, y) + 1e-6) {
+                if (!covers.isEmpty() && centreInside && ctx.surface.topHeight(x, y) > plane.z(x, y) + 1e-6) {
                     hidden++;
                     continue; // inside a higher solid
                 }
                 candidates++;
-                double roofMax = plane.z(x, y) + rise;
-                double lower = ctx.field.cellLower(i, j);
+                boolean whole = poly.containsSquare(x, y, half);
                 boolean isExposed;
-                if (roofMax + ExposureContext.MARGIN < lower) {
-                    isExposed = false;
-                } else if (centreInside && plane.z(x, y) + ExposureContext.MARGIN >= restingUpper(ctx, plane, i, j)) {
-                    isExposed = true;
+                if (whole) {
+                    isExposed = squareExposed(ctx, plane, x, y, half, i, j);
+                } else if (roofMax(plane, x, y, half) + ExposureContext.MARGIN < ctx.field.cellLower(i, j)) {
+                    isExposed = false; // the whole cell, boundary line included, is below the envelope
                 } else {
-                    isExposed = ctx.isExposed(Target.square(x, y, half), roofMax);
+                    isExposed = edgeCells.contains(j * g.nx() + i) || boundaryExposed(ctx, poly, plane, x, y, half);
                 }
                 if (isExposed) {
                     exposed[j * g.nx() + i] = true;
                     exposedCount++;
-                } else if (centreInside) {
-                    double clearance = lower - roofMax;
+                } else if (whole) {
+                    double clearance = ctx.field.cellLower(i, j) - roofMax(plane, x, y, half);
                     minClearance = Double.isNaN(minClearance) ? clearance : Math.min(minClearance, clearance);
                 }
             }
@@ -99,14 +86,100 @@ final class RoofExposureOp {
         if (exposedCount == 0) {
             exposedArea = ctx.gf.createPolygon();
         } else if (exposedCount == candidates && hidden == 0) {
-            exposedArea = face.polygon();
+            exposedArea = visible;
         } else {
-            exposedArea = new CellRegions(g, ctx.gf).union(exposed, i0, j0, i1, j1).intersection(face.polygon());
+            exposedArea = new CellRegions(g, ctx.gf).union(exposed, i0, j0, i1, j1).intersection(visible);
         }
         if (!Double.isNaN(minClearance)) {
             minClearance = Math.max(0, minClearance);
         }
         return new RoofExposure(face.ownerId(), face.ownerName(), face.kind(), face.index(), face.polygon(),
-                plane.slopeFactor(), exposedArea, face.polygon().getArea(), exposedArea.getArea(), minClearance);
+                plane.slopeFactor(), exposedArea, visible.getArea(), exposedArea.getArea(), minClearance);
+    }
+
+    private static double roofMax(Plane plane, double x, double y, double half) {
+        return plane.z(x, y) + (Math.abs(plane.a()) + Math.abs(plane.b())) * half;
+    }
+
+    /** Decision for a whole grid cell inside the face: grid bounds first, then the resting sphere, then exact. */
+    private static boolean squareExposed(ExposureContext ctx, Plane plane, double x, double y, double half, int i, int j) {
+        double top = roofMax(plane, x, y, half);
+        if (top + ExposureContext.MARGIN < ctx.field.cellLower(i, j)) {
+            return false;
+        }
+        if (plane.z(x, y) + ExposureContext.MARGIN >= restingUpper(ctx, plane, x, y)) {
+            return true;
+        }
+        return ctx.isExposed(Target.square(x, y, half), top);
+    }
+
+    /** True when some square lying wholly in the face within this boundary cell is exposed. */
+    private static boolean boundaryExposed(ExposureContext ctx, PlanPolygon poly, Plane plane, double x, double y,
+            double half) {
+        List<Target.Square> inside = new ArrayList<>();
+        insideSquares(poly, x, y, half, 0, inside);
+        if (inside.isEmpty()) {
+            return false;
+        }
+        double top = Double.NEGATIVE_INFINITY;
+        for (Target.Square sq : inside) {
+            if (plane.z(sq.x(), sq.y()) + ExposureContext.MARGIN >= restingUpper(ctx, plane, sq.x(), sq.y())) {
+                return true;
+            }
+            top = Math.max(top, roofMax(plane, sq.x(), sq.y(), sq.half()));
+        }
+        return ctx.isExposed(Target.union(inside), top);
+    }
+
+    /** Quadtree cover of the cell's part inside the face by squares lying wholly in it. */
+    private static void insideSquares(PlanPolygon poly, double x, double y, double half, int depth,
+            List<Target.Square> out) {
+        if (poly.containsSquare(x, y, half)) {
+            out.add(new Target.Square(x, y, half));
+            return;
+        }
+        if (depth == BOUNDARY_SPLITS || (!poly.contains(x, y) && poly.distanceToBoundary(x, y) > half * Math.sqrt(2))) {
+            return;
+        }
+        double q = half / 2;
+        for (int dj = -1; dj <= 1; dj += 2) {
+            for (int di = -1; di <= 1; di += 2) {
+                insideSquares(poly, x + di * q, y + dj * q, q, depth + 1, out);
+            }
+        }
+    }
+
+    /**
+     * E at (x, y) from above, using the sphere that rests on the face's plane with its contact at
+     * that point: its centre sits R·(a, b)/s up-slope, and E ≤ D(c) − R/s, which equals the roof
+     * height wherever nothing else holds that sphere up.
+     */
+    private static double restingUpper(ExposureContext ctx, Plane plane, double x, double y) {
+        double s = plane.slopeFactor(), r = ctx.field.radius();
+        double cx = x - r * plane.a() / s, cy = y - r * plane.b() / s;
+        return ctx.field.refiner().centreHeight(cx, cy) - r / s;
+    }
+
+    /** Faces of other owners that overlap this face and stand higher there. */
+    private static List<Polygon> coveringFaces(ExposureContext ctx, int k) {
+        RoofFace face = ctx.surface.faces().get(k);
+        PlanPolygon poly = ctx.surface.facePolygon(k);
+        List<Polygon> out = new ArrayList<>();
+        for (int m = 0; m < ctx.surface.faces().size(); m++) {
+            RoofFace other = ctx.surface.faces().get(m);
+            PlanPolygon op = ctx.surface.facePolygon(m);
+            if (m == k || other.ownerId().equals(face.ownerId()) || op.minX() > poly.maxX() || op.maxX() < poly.minX()
+                    || op.minY() > poly.maxY() || op.maxY() < poly.minY()) {
+                continue;
+            }
+            Geometry overlap = face.polygon().intersection(other.polygon());
+            if (overlap.getArea() > 1e-6) {
+                var c = overlap.getInteriorPoint().getCoordinate();
+                if (other.plane().z(c.x, c.y) > face.plane().z(c.x, c.y) + 1e-6) {
+                    out.add(other.polygon());
+                }
+            }
+        }
+        return out;
     }
 }

@@ -72,6 +72,28 @@ public final class SiteSurface {
         return top;
     }
 
+    /** How far from a parapet's line a rod or conductor still stands on the parapet, metres. */
+    public static final double PARAPET_REACH = 0.3;
+
+    /**
+     * Elevation of what a rod or conductor placed at (x, y) stands on: the top surface, or the top
+     * of a parapet when the point lies within {@link #PARAPET_REACH} of it.
+     */
+    public double standHeight(double x, double y) {
+        double top = topHeight(x, y);
+        for (RoofEdge e : edges) {
+            if (e.kind() == EdgeKind.PARAPET) {
+                Coordinate a = e.p0(), b = e.p1();
+                double vx = b.x - a.x, vy = b.y - a.y, len2 = vx * vx + vy * vy;
+                double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((x - a.x) * vx + (y - a.y) * vy) / len2));
+                if (Math.hypot(x - (a.x + t * vx), y - (a.y + t * vy)) <= PARAPET_REACH) {
+                    top = Math.max(top, a.getZ() + t * (b.getZ() - a.getZ()));
+                }
+            }
+        }
+        return top;
+    }
+
     /** Highest elevation of any face, edge or part: the site's top. */
     public double maxElevation() {
         double top = 0;

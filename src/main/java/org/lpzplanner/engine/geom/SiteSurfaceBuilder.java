@@ -54,14 +54,14 @@ public final class SiteSurfaceBuilder {
         SiteSurface withoutParts = new SiteSurface(faces, edges, walls, corners, List.of(), List.of());
         List<SiteSurface.PlacedRod> rods = new ArrayList<>();
         for (Rod r : site.rods()) {
-            double base = withoutParts.topHeight(r.x(), r.y());
+            double base = withoutParts.standHeight(r.x(), r.y());
             rods.add(new SiteSurface.PlacedRod(r, base, new Coordinate(r.x(), r.y(), base + r.height())));
         }
         List<SiteSurface.PlacedConductor> conductors = new ArrayList<>();
         for (Conductor c : site.conductors()) {
             List<Coordinate> path = new ArrayList<>();
             for (Coordinate p : c.path()) {
-                double z = c.followsSurface() ? withoutParts.topHeight(p.x, p.y) + c.heightAboveRoof() : p.getZ();
+                double z = c.followsSurface() ? withoutParts.standHeight(p.x, p.y) + c.heightAboveRoof() : p.getZ();
                 path.add(new Coordinate(p.x, p.y, z));
             }
             conductors.add(new SiteSurface.PlacedConductor(c, path));

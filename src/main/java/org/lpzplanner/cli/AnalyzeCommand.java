@@ -1,0 +1,60 @@
+package org.lpzplanner.cli;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashSet;
+import java.util.Set;
+import org.lpzplanner.engine.exposure.AnalysisResult;
+import org.lpzplanner.engine.exposure.ExposureAnalysis;
+import org.lpzplanner.engine.io.SiteDocument;
+import tools.jackson.databind.ObjectMapper;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * {@code analyze}: runs the rolling sphere analysis of a site, prints the summary and, with
+ * {@code --out}, writes the results as GeoJSON (see {@link ResultGeoJson}).
+ */
+final class AnalyzeCommand implements Command {
+
+    static final String OUT = "--out";
+
+    private static final ObjectMapper JSON = JsonMapper.builder().build();
+
+    @Override
+    public String name() {
+        return "analyze";
+    }
+
+    @Override
+    public Set<String> optionNames() {
+        Set<String> names = new HashSet<>(AssessmentSettings.OPTION_NAMES);
+        names.add(OUT);
+        return names;
+    }
+
+    @Override
+    public void run(CliOptions options, PrintStream out) {
+        AssessmentSettings settings = AssessmentSettings.from(options);
+        Path outFile = options.outputFile(OUT);
+        SiteDocument document = settings.readSite();
+        AnalysisResult result = ExposureAnalysis.analyze(document.site(), settings.analysisOptions());
+        new SummaryPrinter(out).print(document, result);
+        if (outFile != null) {
+            write(outFile, JSON.writerWithDefaultPrettyPrinter()
+                    .writeValueAsString(ResultGeoJson.of(document, result)));
+            out.println();
+            out.println("Results written to " + outFile);
+        }
+    }
+
+    private static void write(Path file, String text) {
+        try {
+            Files.writeString(file, text + System.lineSeparator(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new CliException(OUT + ": cannot write " + file + ": " + e.getMessage(), e);
+        }
+    }
+}

@@ -1,0 +1,90 @@
+package org.lpzplanner.cli;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.lpzplanner.engine.exposure.AnalysisResult;
+import org.lpzplanner.engine.exposure.EdgeExposure;
+import org.lpzplanner.engine.exposure.FacadeBand;
+import org.lpzplanner.engine.exposure.PartInterception;
+import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.geom.EdgeKind;
+import org.lpzplanner.engine.geom.SurfaceKind;
+
+/**
+ * The totals of one analysis, computed once so that the printed summary and the written GeoJSON
+ * always agree. Areas are plan areas in m², lengths in metres.
+ *
+ * @param roofs          roof totals per owner (structure or rooftop object), in the engine's order
+ * @param edgeLengths    exposed edge length per kind, only kinds with some exposure, in enum order
+ * @param corners        exposed corners
+ * @param facadeBands    facade bands
+ * @param facadeLength   total length along the walls of all facade bands
+ * @param parts          air-termination parts in the site
+ * @param interceptingParts parts a sphere can touch
+ * @param protectedGround protected open ground
+ */
+record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLengths, int corners, int facadeBands,
+        double facadeLength, int parts, int interceptingParts, double protectedGround) {
+
+    ResultTotals {
+        roofs = List.copyOf(roofs);
+        Map<EdgeKind, Double> ordered = new EnumMap<>(EdgeKind.class); // enum order whatever map is given
+        ordered.putAll(edgeLengths);
+        edgeLengths = Collections.unmodifiableMap(ordered);
+    }
+
+    /**
+     * Roof of one owner: all its faces together.
+     *
+     * @param roofArea    plan area of all its faces
+     * @param exposedArea plan area of their exposed parts
+     */
+    record OwnerRoof(String ownerId, String ownerName, SurfaceKind kind, double roofArea, double exposedArea) {
+
+        /** Exposed share in percent, 0 for an owner without roof area. */
+        double exposedPercent() {
+            return roofArea > 0 ? 100 * exposedArea / roofArea : 0;
+        }
+    }
+
+    static ResultTotals of(AnalysisResult result) {
+        Map<String, OwnerRoof> owners = new LinkedHashMap<>();
+        for (RoofExposure r : result.roofs()) {
+            // Keyed by kind and id: a structure and a rooftop object may share an id.
+            owners.merge(r.kind() + "|" + r.ownerId(),
+                    new OwnerRoof(r.ownerId(), r.ownerName(), r.kind(), r.planArea(), r.exposedPlanArea()),
+                    (a, b) -> new OwnerRoof(a.ownerId(), a.ownerName(), a.kind(), a.roofArea() + b.roofArea(),
+                            a.exposedArea() + b.exposedArea()));
+        }
+        Map<EdgeKind, Double> edges = new EnumMap<>(EdgeKind.class);
+        for (EdgeExposure e : result.edges()) {
+            edges.merge(e.kind(), e.length(), Double::sum);
+        }
+        double facadeLength = result.facades().stream().mapToDouble(FacadeBand::length).sum();
+        int intercepting = (int) result.parts().stream().filter(PartInterception::intercepts).count();
+        return new ResultTotals(new ArrayList<>(owners.values()), edges, result.corners().size(),
+                result.facades().size(), facadeLength, result.parts().size(), intercepting,
+                result.protectedGround().planArea());
+    }
+
+    double roofArea() {
+        return roofs.stream().mapToDouble(OwnerRoof::roofArea).sum();
+    }
+
+    double exposedRoofArea() {
+        return roofs.stream().mapToDouble(OwnerRoof::exposedArea).sum();
+    }
+
+    double edgeLength() {
+        return edgeLengths.values().stream().mapToDouble(Double::doubleValue).sum();
+    }
+
+    /** A kind's name as written in files, e.g. "roof-edge" or "rooftop-object-edge". */
+    static String edgeKindName(EdgeKind kind) {
+        return kind.label().replace(' ', '-');
+    }
+}
