@@ -62,7 +62,7 @@ public final class PointSupport implements Support {
             // with a ≤ R.
             double r = Math.sqrt(r2);
             double bx = Math.max(0, Math.abs(cx - px) - half), by = Math.max(0, Math.abs(cy - py) - half);
-            double b = Math.max(Math.sqrt(bx * bx + by * by), r - Math.hypot(px - qx, py - qy));
+            double b = Math.max(Math.sqrt(bx * bx + by * by), r - Math.sqrt((px - qx) * (px - qx) + (py - qy) * (py - qy)));
             outside = b >= r ? r : r - Math.sqrt(r2 - b * b);
             aFar2 = r2;
         }

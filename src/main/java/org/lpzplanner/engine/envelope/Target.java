@@ -127,7 +127,8 @@ public sealed interface Target {
             double len2 = vx * vx + vy * vy;
             double t = len2 == 0 ? 0 : ((cx - x0) * vx + (cy - y0) * vy) / len2;
             t = t < 0 ? 0 : (t > 1 ? 1 : t);
-            return Math.hypot(cx - (x0 + t * vx), cy - (y0 + t * vy));
+            double dx = cx - (x0 + t * vx), dy = cy - (y0 + t * vy);
+            return Math.sqrt(dx * dx + dy * dy); // Math.hypot's overflow care is slow in this hot path
         }
 
         @Override
