@@ -22,7 +22,8 @@ import org.lpzplanner.engine.model.SphereSpec;
 
 /**
  * Speed of the engine on the campus sample and a generated 200-building district, levels I and IV,
- * at 0.5 m. Prints a Markdown report. Run with {@code scripts/benchmark}; not a test.
+ * at 0.5 m. Prints a Markdown report. Run with {@code scripts/benchmark} (argument {@code campus}: the
+ * campus only); not a test.
  */
 public final class EngineBenchmark {
 
@@ -35,6 +36,7 @@ public final class EngineBenchmark {
     public static void main(String[] args) {
         Site campus = SiteReader.read(Path.of("sample-sites/brookfield-campus.geojson")).site();
         Site district = DistrictGenerator.district(200, 600, 7);
+        boolean campusOnly = args.length > 0 && args[0].equals("campus");
         StringBuilder out = new StringBuilder();
         out.append(String.format(Locale.ROOT, "Machine: %d cores, max heap %d MiB, Java %s%n%n",
                 Runtime.getRuntime().availableProcessors(), Runtime.getRuntime().maxMemory() >> 20,
@@ -42,7 +44,9 @@ public final class EngineBenchmark {
         out.append("| site | level | grid cells | envelope ms | total ms (median of 3) | refined decisions | peak heap MiB |\n");
         out.append("|---|---|---|---|---|---|---|\n");
         List<AnalysisResult> campusResults = new ArrayList<>();
-        for (Object[] c : new Object[][] {{"campus sample", campus}, {"district, 200 buildings", district}}) {
+        Object[][] cases = campusOnly ? new Object[][] {{"campus sample", campus}}
+                : new Object[][] {{"campus sample", campus}, {"district, 200 buildings", district}};
+        for (Object[] c : cases) {
             for (ProtectionLevel level : new ProtectionLevel[] {ProtectionLevel.I, ProtectionLevel.IV}) {
                 AnalysisResult r = measure(out, (String) c[0], (Site) c[1], level);
                 if (c[1] == campus) {

@@ -38,7 +38,10 @@ public final class EnvelopeRefiner {
     private final int[] pnx;
     private final int[] pny;
     private final int topLevel;
+    /** Per top-level block, the supports that can be the highest somewhere in it. */
+    private final List<Support>[] topSupports;
 
+    @SuppressWarnings("unchecked")
     public EnvelopeRefiner(CentreSurface surface, SupportIndex index) {
         this.surface = surface;
         this.index = index;
@@ -76,6 +79,13 @@ public final class EnvelopeRefiner {
         this.pnx = dims.stream().mapToInt(d -> d[0]).toArray();
         this.pny = dims.stream().mapToInt(d -> d[1]).toArray();
         this.topLevel = pyramid.length - 1;
+        this.topSupports = new List[pnx[topLevel] * pny[topLevel]];
+        for (int j = 0; j < pny[topLevel]; j++) {
+            for (int i = 0; i < pnx[topLevel]; i++) {
+                Region root = block(topLevel, i, j);
+                topSupports[j * pnx[topLevel] + i] = relevant(index.near(root.cx, root.cy, root.half), root);
+            }
+        }
     }
 
     /** A region of centre columns with a lower bound of D over it. */
@@ -88,7 +98,7 @@ public final class EnvelopeRefiner {
         final double half;
         final double lowD;
         final int depth;
-        final List<Support> supports;
+        List<Support> supports;
         double bound;
 
         Region(int level, int i, int j, double cx, double cy, double half, double lowD, int depth, List<Support> supports) {
@@ -100,7 +110,7 @@ public final class EnvelopeRefiner {
             this.half = half;
             this.lowD = lowD;
             this.depth = depth;
-            this.supports = supports;
+            this.supports = supports == null ? List.of() : supports;
         }
 
         @Override
@@ -141,7 +151,9 @@ public final class EnvelopeRefiner {
         int j1 = (int) Math.floor((b[3] + radius - grid.y0()) / blockSize);
         for (int j = Math.max(0, j0); j <= Math.min(pny[topLevel] - 1, j1); j++) {
             for (int i = Math.max(0, i0); i <= Math.min(pnx[topLevel] - 1, i1); i++) {
-                upper = Math.min(upper, offer(queue, block(topLevel, i, j), target));
+                Region root = block(topLevel, i, j);
+                root.supports = topSupports[j * pnx[topLevel] + i];
+                upper = Math.min(upper, offer(queue, root, target, line));
             }
         }
         int popped = 0;
@@ -161,38 +173,29 @@ public final class EnvelopeRefiner {
                     for (int di = 0; di < 2; di++) {
                         int ci = 2 * r.i + di, cj = 2 * r.j + dj;
                         if (ci < pnx[r.level - 1] && cj < pny[r.level - 1]) {
-                            upper = Math.min(upper, offer(queue, block(r.level - 1, ci, cj), target));
+                            Region child = block(r.level - 1, ci, cj);
+                            child.supports = relevant(r.supports, child);
+                            upper = Math.min(upper, offer(queue, child, target, line));
                         }
                     }
                 }
             } else if (r.depth >= MAX_SPLIT_DEPTH) {
                 return new EnvelopeBound(Math.min(r.bound, upper), upper);
             } else {
-                List<Support> candidates = r.level == 0 ? index.near(r.cx, r.cy, r.half) : r.supports;
-                List<Support> relevant = new ArrayList<>();
-                for (Support s : candidates) {
-                    if (s.upperBound(r.cx, r.cy, r.half) >= r.lowD) {
-                        relevant.add(s);
-                    }
-                }
                 double q = r.half / 2;
                 for (int dj = -1; dj <= 1; dj += 2) {
                     for (int di = -1; di <= 1; di += 2) {
                         double sx = r.cx + di * q, sy = r.cy + dj * q;
                         double low = r.lowD;
                         double exact = radius;
-                        for (Support s : relevant) {
+                        for (Support s : r.supports) {
                             low = Math.max(low, s.lowerBound(sx, sy, q));
                             exact = Math.max(exact, s.centreHeight(sx, sy));
                         }
-                        Region sub = new Region(-1, 0, 0, sx, sy, q, low, r.depth + 1, relevant);
+                        Region sub = new Region(-1, 0, 0, sx, sy, q, low, r.depth + 1, null);
+                        sub.supports = relevant(r.supports, sub);
                         upper = Math.min(upper, evaluate(sx, sy, exact, target));
-                        if (bound(sub, target)) {
-                            if (line != null) {
-                                for (Support s : relevant) {
-                                    sub.bound = Math.max(sub.bound, s.jointLowerBound(sx, sy, q, line[0], line[1], line[2], line[3]));
-                                }
-                            }
+                        if (bound(sub, target, line)) {
                             queue.add(sub);
                         }
                     }
@@ -200,6 +203,17 @@ public final class EnvelopeRefiner {
             }
         }
         return new EnvelopeBound(upper, upper);
+    }
+
+    /** The supports of {@code from} that can be the highest somewhere in the region (upper bound ≥ its lower bound of D). */
+    private static List<Support> relevant(List<Support> from, Region r) {
+        List<Support> out = new ArrayList<>(Math.min(from.size(), 16));
+        for (Support s : from) {
+            if (s.upperBound(r.cx, r.cy, r.half) >= r.lowD) {
+                out.add(s);
+            }
+        }
+        return out;
     }
 
     /** Supports that may constrain centres in the square of half-side {@code half} around (x, y). */
@@ -226,17 +240,55 @@ public final class EnvelopeRefiner {
     }
 
     /**
-     * For a point target (p, zero tangent) or a segment target (its start and unit tangent), the
-     * reference for joint bounds; null for targets with area.
+     * The point (zero tangent) or line whose distance bounds the distance from every centre of the
+     * region to the target from below, for the joint bounds; null when the region overlaps the
+     * target's bounding box in both axes (the distance may be zero there).
+     */
+    private static double[] jointReference(Region r, Target target, double[] line) {
+        if (target instanceof Target.Square || target instanceof Target.Union) {
+            double[] b = target.bounds();
+            if (b[0] == b[2] && b[1] == b[3]) {
+                return line;
+            }
+            boolean right = r.cx - r.half >= b[2], left = r.cx + r.half <= b[0];
+            boolean up = r.cy - r.half >= b[3], down = r.cy + r.half <= b[1];
+            double ex = right ? b[2] : b[0], ey = up ? b[3] : b[1];
+            if ((right || left) && (up || down)) {
+                return new double[] {ex, ey, 0, 0};
+            } else if (right || left) {
+                return new double[] {ex, b[1], 0, 1};
+            } else if (up || down) {
+                return new double[] {b[0], ey, 1, 0};
+            }
+            return null;
+        }
+        double px = line[0], py = line[1], tx = line[2], ty = line[3];
+        if (tx != 0 || ty != 0) {
+            // beyond an end of the segment, the nearest target point is that end for the whole region
+            double along = tx * (r.cx - px) + ty * (r.cy - py), spread = r.half * (Math.abs(tx) + Math.abs(ty));
+            if (along + spread <= 0) {
+                return new double[] {px, py, 0, 0};
+            } else if (along - spread >= line[4]) {
+                return new double[] {px + tx * line[4], py + ty * line[4], 0, 0};
+            }
+        }
+        return line;
+    }
+
+    /**
+     * For a point, square or union target (its centre, zero tangent) or a segment target (its start,
+     * unit tangent and length), the reference for joint bounds; areas are refined per region by the
+     * side or corner of their bounding box that faces it.
      */
     private static double[] jointLine(Target target) {
-        if (target instanceof Target.Square sq && sq.half() == 0) {
-            return new double[] {sq.x(), sq.y(), 0, 0};
+        if (target instanceof Target.Square || target instanceof Target.Union) {
+            double[] b = target.bounds();
+            return new double[] {(b[0] + b[2]) / 2, (b[1] + b[3]) / 2, 0, 0, 0};
         }
         if (target instanceof Target.Segment seg) {
             double len = Math.hypot(seg.x1() - seg.x0(), seg.y1() - seg.y0());
-            return len == 0 ? new double[] {seg.x0(), seg.y0(), 0, 0}
-                    : new double[] {seg.x0(), seg.y0(), (seg.x1() - seg.x0()) / len, (seg.y1() - seg.y0()) / len};
+            return len == 0 ? new double[] {seg.x0(), seg.y0(), 0, 0, 0}
+                    : new double[] {seg.x0(), seg.y0(), (seg.x1() - seg.x0()) / len, (seg.y1() - seg.y0()) / len, len};
         }
         return null;
     }
@@ -248,8 +300,8 @@ public final class EnvelopeRefiner {
     }
 
     /** Queues the region if it can reach the target; returns the upper bound from its best node. */
-    private double offer(PriorityQueue<Region> queue, Region r, Target target) {
-        if (!bound(r, target)) {
+    private double offer(PriorityQueue<Region> queue, Region r, Target target, double[] line) {
+        if (!bound(r, target, line)) {
             return Double.POSITIVE_INFINITY;
         }
         queue.add(r);
@@ -261,13 +313,24 @@ public final class EnvelopeRefiner {
         return evaluate(grid.nodeX(ci), grid.nodeY(cj), surface.nodeHeight(ci, cj), target);
     }
 
-    private boolean bound(Region r, Target target) {
+    /**
+     * Sets the region's bound: its lower bound of D less the sphere term at its nearest distance to
+     * the target, raised by the supports' joint bounds where the target allows them. False when no
+     * centre of the region can reach the target.
+     */
+    private boolean bound(Region r, Target target, double[] line) {
         double d = target.lowerDistance(r.cx, r.cy, r.half);
         double d2 = d * d;
         if (d2 > r2) {
             return false;
         }
         r.bound = r.lowD - Math.sqrt(r2 - d2);
+        double[] ref = line == null ? null : jointReference(r, target, line);
+        if (ref != null) {
+            for (Support s : r.supports) {
+                r.bound = Math.max(r.bound, s.jointLowerBound(r.cx, r.cy, r.half, ref[0], ref[1], ref[2], ref[3]));
+            }
+        }
         return true;
     }
 

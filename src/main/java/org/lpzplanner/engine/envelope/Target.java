@@ -12,11 +12,24 @@ public sealed interface Target {
     }
 
     /** Union of squares: distances are the least over its members. */
-    record Union(java.util.List<Square> squares) implements Target {
+    record Union(java.util.List<Square> squares, double[] box) implements Target {
         public Union {
             if (squares.isEmpty()) {
                 throw new IllegalArgumentException("a union target needs at least one square");
             }
+        }
+
+        Union(java.util.List<Square> squares) {
+            this(squares, boxOf(squares));
+        }
+
+        private static double[] boxOf(java.util.List<Square> squares) {
+            double[] b = squares.get(0).bounds();
+            for (Square s : squares) {
+                double[] o = s.bounds();
+                b = new double[] {Math.min(b[0], o[0]), Math.min(b[1], o[1]), Math.max(b[2], o[2]), Math.max(b[3], o[3])};
+            }
+            return b;
         }
 
         @Override
@@ -48,12 +61,7 @@ public sealed interface Target {
 
         @Override
         public double[] bounds() {
-            double[] b = squares.get(0).bounds();
-            for (Square s : squares) {
-                double[] o = s.bounds();
-                b = new double[] {Math.min(b[0], o[0]), Math.min(b[1], o[1]), Math.max(b[2], o[2]), Math.max(b[3], o[3])};
-            }
-            return b;
+            return box.clone();
         }
 
         @Override

@@ -30,13 +30,15 @@ final class EdgeExposureOp {
     private static List<EdgeExposure> edge(ExposureContext ctx, RoofEdge e) {
         Coordinate a = e.p0(), b = e.p1();
         int n = Math.max(1, (int) Math.ceil(e.planLength() / ctx.grid.h()));
+        boolean[] exposed = new boolean[n];
+        decide(ctx, a, b, 0, n, n, exposed);
         List<EdgeExposure> out = new ArrayList<>();
         int runStart = -1;
         for (int k = 0; k <= n; k++) {
-            boolean exposed = k < n && piece(ctx, a, b, (double) k / n, (double) (k + 1) / n);
-            if (exposed && runStart < 0) {
+            boolean on = k < n && exposed[k];
+            if (on && runStart < 0) {
                 runStart = k;
-            } else if (!exposed && runStart >= 0) {
+            } else if (!on && runStart >= 0) {
                 Coordinate p = lerp(a, b, (double) runStart / n), q = lerp(a, b, (double) k / n);
                 out.add(new EdgeExposure(e.ownerId(), e.ownerName(), e.kind(),
                         ctx.gf.createLineString(new Coordinate[] {p, q}), p.distance3D(q)));
@@ -46,14 +48,31 @@ final class EdgeExposureOp {
         return out;
     }
 
-    private static boolean piece(ExposureContext ctx, Coordinate a, Coordinate b, double t0, double t1) {
-        Coordinate p = lerp(a, b, t0), q = lerp(a, b, t1);
+    /**
+     * Decides pieces [k0, k1) of n. A stretch proven protected as a whole (the envelope's least value
+     * along it above its highest point) settles all its pieces in one query; otherwise it is halved
+     * down to single pieces, so long protected edges cost a few queries instead of one per piece.
+     */
+    private static void decide(ExposureContext ctx, Coordinate a, Coordinate b, int k0, int k1, int n, boolean[] out) {
+        Coordinate p = lerp(a, b, (double) k0 / n), q = lerp(a, b, (double) k1 / n);
         double top = Math.max(p.getZ(), q.getZ());
-        double mx = (p.x + q.x) / 2, my = (p.y + q.y) / 2;
-        if (ctx.surface.topHeight(mx, my) > top + 1e-6) {
-            return false; // inside a higher solid: not a surface
+        if (k1 - k0 == 1) {
+            double mx = (p.x + q.x) / 2, my = (p.y + q.y) / 2;
+            if (ctx.surface.topHeight(mx, my) > top + 1e-6) {
+                return; // inside a higher solid: not a surface
+            }
+            // the sphere resting straight above the piece's middle touches it unless held up
+            double middle = (p.getZ() + q.getZ()) / 2;
+            out[k0] = middle + ExposureContext.MARGIN >= ctx.field.refiner().centreHeight(mx, my) - ctx.field.radius()
+                    || ctx.isExposed(Target.segment(p.x, p.y, q.x, q.y), top);
+            return;
         }
-        return ctx.isExposed(Target.segment(p.x, p.y, q.x, q.y), top);
+        if (!ctx.isExposed(Target.segment(p.x, p.y, q.x, q.y), top)) {
+            return;
+        }
+        int mid = (k0 + k1) / 2;
+        decide(ctx, a, b, k0, mid, n, out);
+        decide(ctx, a, b, mid, k1, n, out);
     }
 
     /** Grid cells each owner's exposed edge stretches pass through, keyed by owner id. */
