@@ -29,6 +29,9 @@ public final class EnvelopeRefiner {
      */
     private static final int MAX_REGIONS = 200_000;
 
+    /** Joint bounds are tried on regions up to this half-size, as a share of R: larger ones rarely gain. */
+    private static final double JOINT_MAX_HALF = 0.125;
+
     private final CentreSurface surface;
     private final SupportIndex index;
     private final Grid grid;
@@ -325,7 +328,7 @@ public final class EnvelopeRefiner {
             return false;
         }
         r.bound = r.lowD - Math.sqrt(r2 - d2);
-        double[] ref = line == null ? null : jointReference(r, target, line);
+        double[] ref = line == null || r.half > JOINT_MAX_HALF * radius ? null : jointReference(r, target, line);
         if (ref != null) {
             for (Support s : r.supports) {
                 r.bound = Math.max(r.bound, s.jointLowerBound(r.cx, r.cy, r.half, ref[0], ref[1], ref[2], ref[3]));

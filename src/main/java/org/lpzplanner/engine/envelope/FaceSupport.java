@@ -52,6 +52,40 @@ public final class FaceSupport implements Support {
         return plane.z(x, y) + (Math.abs(plane.a()) + Math.abs(plane.b())) * half + lift;
     }
 
+    /**
+     * On a square whose contacts all lie in the face, D = plane(c) + R·s exactly, and
+     * plane(c) − √(R² − b(c)²) is convex (linear plus the lower half of a circle), so it lies above
+     * its tangent plane at the square's centre: a bound that is tight to second order near the
+     * best centre.
+     */
+    @Override
+    public double jointLowerBound(double cx, double cy, double half, double px, double py, double tx, double ty) {
+        if (!polygon.containsSquare(cx + offsetX, cy + offsetY, half)) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        double signed, nx, ny, spread;
+        if (tx == 0 && ty == 0) {
+            double dx = cx - px, dy = cy - py;
+            signed = Math.sqrt(dx * dx + dy * dy);
+            nx = signed > 0 ? dx / signed : 0;
+            ny = signed > 0 ? dy / signed : 0;
+            spread = half * Math.sqrt(2);
+        } else {
+            nx = -ty;
+            ny = tx;
+            signed = nx * (cx - px) + ny * (cy - py);
+            spread = half * (Math.abs(nx) + Math.abs(ny));
+        }
+        double r2 = radius * radius;
+        if (Math.abs(signed) + spread >= radius) {
+            return Double.NEGATIVE_INFINITY;
+        }
+        double s0 = Math.sqrt(r2 - signed * signed);
+        double k = signed / s0;
+        double gx = plane.a() + k * nx, gy = plane.b() + k * ny;
+        return plane.z(cx, cy) + lift - s0 - half * (Math.abs(gx) + Math.abs(gy));
+    }
+
     @Override
     public double[] reach() {
         return new double[] {polygon.minX() - offsetX, polygon.minY() - offsetY,
