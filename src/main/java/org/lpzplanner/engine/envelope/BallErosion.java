@@ -68,8 +68,23 @@ public final class BallErosion {
         int maxDj = (int) Math.floor(radius / h);
         RowEroder eroder = new RowEroder(nx);
         double[] tmp = new double[nx];
+        // Every output is at most its own value less R (the ball straight above), so a source row
+        // whose least value less ρ is not below that ceiling anywhere in a target row cannot change it.
+        double[] rowMin = new double[ny];
+        double[] ceiling = new double[ny];
+        double topCeiling = Double.NEGATIVE_INFINITY;
+        for (int j = 0; j < ny; j++) {
+            double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+            for (int i = 0; i < nx; i++) {
+                lo = Math.min(lo, v[j * nx + i]);
+                hi = Math.max(hi, v[j * nx + i]);
+            }
+            rowMin[j] = lo;
+            ceiling[j] = hi - radius;
+            topCeiling = Math.max(topCeiling, ceiling[j]);
+        }
         for (int js = from; js < to; js++) {
-            eroder.load(v, js * nx, h);
+            boolean loaded = false;
             for (int dj = 0; dj <= maxDj; dj++) {
                 int up = js + dj, down = js - dj;
                 if (up >= ny && down < 0) {
@@ -77,11 +92,24 @@ public final class BallErosion {
                 }
                 double dy = dj * h;
                 double rho = Math.sqrt(Math.max(0, radius * radius - dy * dy));
+                double least = rowMin[js] - rho;
+                if (least >= topCeiling) {
+                    break; // ρ only shrinks from here
+                }
+                boolean needUp = up < ny && least < ceiling[up];
+                boolean needDown = dj > 0 && down >= 0 && least < ceiling[down];
+                if (!needUp && !needDown) {
+                    continue;
+                }
+                if (!loaded) {
+                    eroder.load(v, js * nx, h);
+                    loaded = true;
+                }
                 eroder.erode(rho / h, tmp);
-                if (up < ny) {
+                if (needUp) {
                     minInto(out, up * nx, tmp, h);
                 }
-                if (dj > 0 && down >= 0) {
+                if (needDown) {
                     minInto(out, down * nx, tmp, h);
                 }
             }
@@ -197,19 +225,22 @@ public final class BallErosion {
                 return hi;
             }
             double r2 = r * r;
-            double dLo = wa - Math.sqrt(Math.max(0, r2 - (lo - a) * (lo - a))) - wb;
-            if (dLo >= 0) {
-                return lo;
-            }
-            double dHi = wa - (wb - Math.sqrt(Math.max(0, r2 - (hi - b) * (hi - b))));
-            if (dHi <= 0) {
-                return hi;
-            }
             double dx = b - a, dw = wb - wa;
-            double dist = Math.sqrt(dx * dx + dw * dw);
-            double t = Math.sqrt(Math.max(0, r2 - dist * dist / 4));
-            double x = (a + b) / 2 + t * dw / dist;
-            return x < lo ? lo : (x > hi ? hi : x);
+            double dist2 = dx * dx + dw * dw;
+            double t2 = r2 - dist2 / 4;
+            if (t2 > 0) {
+                // the two circles cross; their lower crossing is the switch when it lies on both lower arcs
+                double dist = Math.sqrt(dist2);
+                double t = Math.sqrt(t2);
+                double y = (wa + wb) / 2 - t * dx / dist;
+                if (y <= Math.min(wa, wb)) {
+                    double x = (a + b) / 2 + t * dw / dist;
+                    return x < lo ? lo : (x > hi ? hi : x);
+                }
+            }
+            // no crossing of the lower arcs: one bowl is lower over the whole common domain
+            double dLo = wa - Math.sqrt(Math.max(0, r2 - (lo - a) * (lo - a))) - wb;
+            return dLo >= 0 ? lo : hi;
         }
     }
 }
