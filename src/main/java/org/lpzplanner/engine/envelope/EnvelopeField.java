@@ -5,8 +5,7 @@ package org.lpzplanner.engine.envelope;
  * is protected from direct strikes iff z &lt; E(x, y).
  *
  * <p>Holds, per grid cell, a lower bound of E over the whole cell (from the cells' lower bounds of
- * D, eroded on the vertex lattice: min over T's corners u of eroded(u) ≤ min over T of E), and an
- * upper bound of E at the cell's node (from exact D at nodes, eroded on the node lattice). Exact
+ * D, eroded on the vertex lattice: min over T's corners u of eroded(u) ≤ min over T of E). Exact
  * queries anywhere go through {@link EnvelopeRefiner}. Immutable and thread-safe.
  */
 public final class EnvelopeField {
@@ -14,13 +13,11 @@ public final class EnvelopeField {
     private final CentreSurface centres;
     private final EnvelopeRefiner refiner;
     private final double[] vertexLower;
-    private final double[] nodeUpper;
 
-    EnvelopeField(CentreSurface centres, EnvelopeRefiner refiner, double[] vertexLower, double[] nodeUpper) {
+    EnvelopeField(CentreSurface centres, EnvelopeRefiner refiner, double[] vertexLower) {
         this.centres = centres;
         this.refiner = refiner;
         this.vertexLower = vertexLower;
-        this.nodeUpper = nodeUpper;
     }
 
     public Grid grid() { return centres.grid(); }
@@ -38,10 +35,6 @@ public final class EnvelopeField {
         return Math.min(Math.min(vertexLower[k], vertexLower[k + 1]), Math.min(vertexLower[k + w], vertexLower[k + w + 1]));
     }
 
-    /** A value ≥ E at the node (centre) of cell (i, j). */
-    public double nodeUpper(int i, int j) {
-        return nodeUpper[j * grid().nx() + i];
-    }
 
     /**
      * E at (x, y), evaluated at that exact point, never above the true value and at most

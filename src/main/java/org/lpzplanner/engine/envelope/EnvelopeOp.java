@@ -41,12 +41,7 @@ public final class EnvelopeOp {
         Grid grid = gridFor(surface, supports, radius, h);
         CentreSurface centres = CentreSurface.compute(grid, supports, radius);
         double[] vertexLower = BallErosion.erode(centres.vertexLowers(), grid.nx() + 1, grid.ny() + 1, h, radius);
-        // the sphere resting straight above a node bounds E there from above: E(p) ≤ D(p) − R
-        double[] nodeUpper = centres.nodeHeights().clone();
-        for (int k = 0; k < nodeUpper.length; k++) {
-            nodeUpper[k] -= radius;
-        }
         SupportIndex index = new SupportIndex(supports, grid, Math.max(4 * h, radius / 4));
-        return new EnvelopeField(centres, new EnvelopeRefiner(centres, index), vertexLower, nodeUpper);
+        return new EnvelopeField(centres, new EnvelopeRefiner(centres, index), vertexLower);
     }
 }

@@ -128,14 +128,9 @@ public final class EnvelopeRefiner {
     }
 
     /**
-     * Bounds on the least envelope height over the target square. With a threshold θ (not NaN) it
-     * may stop early once "least height ≤ θ" is proven (upper ≤ θ) or refuted (lower &gt; θ).
+     * Bounds on the least envelope height over the target. With a threshold θ (not NaN) it may
+     * stop early once "least height ≤ θ" is proven (upper ≤ θ) or refuted (lower &gt; θ).
      */
-    public EnvelopeBound overSquare(double tx, double ty, double th, double tolerance, double threshold) {
-        return lowest(Target.square(tx, ty, th), tolerance, threshold);
-    }
-
-    /** As {@link #overSquare}, for any target. */
     public EnvelopeBound lowest(Target target, double tolerance, double threshold) {
         boolean decide = !Double.isNaN(threshold);
         double[] line = jointLine(target);
@@ -229,15 +224,6 @@ public final class EnvelopeRefiner {
         double d = radius;
         for (Support s : index.near(x, y, 0)) {
             d = Math.max(d, s.centreHeight(x, y));
-        }
-        return d;
-    }
-
-    /** A value ≤ D over the square of half-side {@code half} around (x, y). */
-    public double centreLowerBound(double x, double y, double half) {
-        double d = radius;
-        for (Support s : index.near(x, y, half)) {
-            d = Math.max(d, s.lowerBound(x, y, half));
         }
         return d;
     }

@@ -2,7 +2,6 @@ package org.lpzplanner.engine.exposure;
 
 import java.util.concurrent.atomic.AtomicLong;
 import org.locationtech.jts.geom.GeometryFactory;
-import org.lpzplanner.engine.envelope.EnvelopeBound;
 import org.lpzplanner.engine.envelope.EnvelopeField;
 import org.lpzplanner.engine.envelope.Grid;
 import org.lpzplanner.engine.envelope.Target;
@@ -62,12 +61,5 @@ final class ExposureContext {
         }
         refined.incrementAndGet();
         return field.refiner().lowest(target, tolerance, threshold).lower() <= threshold;
-    }
-
-    /** Least envelope height over the target, never above the true value. */
-    double lowestEnvelope(Target target, double tol) {
-        refined.incrementAndGet();
-        EnvelopeBound b = field.refiner().lowest(target, tol, Double.NaN);
-        return Math.max(0, b.lower());
     }
 }

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import org.locationtech.jts.algorithm.Orientation;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
@@ -284,9 +283,5 @@ public final class SiteSurfaceBuilder {
         Polygon q = (Polygon) p.copy();
         q.normalize(); // JTS normal form: shell clockwise
         return (Polygon) q.reverse();
-    }
-
-    static boolean isCounterClockwise(Polygon p) {
-        return Orientation.isCCW(p.getExteriorRing().getCoordinates());
     }
 }
