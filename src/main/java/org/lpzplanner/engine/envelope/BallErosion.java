@@ -1,6 +1,5 @@
 package org.lpzplanner.engine.envelope;
 
-import java.util.Arrays;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -29,8 +28,7 @@ public final class BallErosion {
     public static double[] erode(double[] v, int nx, int ny, double h, double radius) {
         int threads = Math.max(1, Math.min(Runtime.getRuntime().availableProcessors(), ny / 8));
         if (threads == 1) {
-            double[] out = new double[v.length];
-            Arrays.fill(out, Double.POSITIVE_INFINITY);
+            double[] out = selfTerms(v, radius);
             erodeRows(v, nx, ny, h, radius, 0, ny, out);
             return out;
         }
@@ -41,8 +39,7 @@ public final class BallErosion {
             for (int t = 0; t < threads; t++) {
                 int from = (int) ((long) ny * t / threads), to = (int) ((long) ny * (t + 1) / threads);
                 parts[t] = pool.submit(() -> {
-                    double[] out = new double[v.length];
-                    Arrays.fill(out, Double.POSITIVE_INFINITY);
+                    double[] out = selfTerms(v, radius);
                     erodeRows(v, nx, ny, h, radius, from, to, out);
                     return out;
                 });
@@ -64,27 +61,51 @@ public final class BallErosion {
         }
     }
 
+    /**
+     * Every output starts at its own value less R: the ball straight above (distance 0). No later
+     * term can be needed unless it is lower, which is what lets whole chunks of rows be skipped.
+     */
+    private static double[] selfTerms(double[] v, double radius) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = v[i] - radius;
+        }
+        return out;
+    }
+
+    /** Columns per chunk for deciding which parts of a row a source row can still lower. */
+    private static final int CHUNK = 64;
+
     private static void erodeRows(double[] v, int nx, int ny, double h, double radius, int from, int to, double[] out) {
         int maxDj = (int) Math.floor(radius / h);
         RowEroder eroder = new RowEroder(nx);
         double[] tmp = new double[nx];
-        // Every output is at most its own value less R (the ball straight above), so a source row
-        // whose least value less ρ is not below that ceiling anywhere in a target row cannot change it.
-        double[] rowMin = new double[ny];
-        double[] ceiling = new double[ny];
+        // Every output is at most its own value less R (the ball straight above). A source chunk whose
+        // least value less ρ is not below that ceiling anywhere in a target chunk within reach cannot
+        // lower it, so only the target columns some source can still lower are computed.
+        int chunks = (nx + CHUNK - 1) / CHUNK;
+        double[] chunkMin = new double[ny * chunks];
+        double[] chunkCeiling = new double[ny * chunks];
         double topCeiling = Double.NEGATIVE_INFINITY;
         for (int j = 0; j < ny; j++) {
-            double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
-            for (int i = 0; i < nx; i++) {
-                lo = Math.min(lo, v[j * nx + i]);
-                hi = Math.max(hi, v[j * nx + i]);
+            for (int c = 0; c < chunks; c++) {
+                double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+                for (int i = c * CHUNK; i < Math.min(nx, (c + 1) * CHUNK); i++) {
+                    lo = Math.min(lo, v[j * nx + i]);
+                    hi = Math.max(hi, v[j * nx + i]);
+                }
+                chunkMin[j * chunks + c] = lo;
+                chunkCeiling[j * chunks + c] = hi - radius;
+                topCeiling = Math.max(topCeiling, hi - radius);
             }
-            rowMin[j] = lo;
-            ceiling[j] = hi - radius;
-            topCeiling = Math.max(topCeiling, ceiling[j]);
         }
+        double[] reachMin = new double[chunks];
         for (int js = from; js < to; js++) {
             boolean loaded = false;
+            double rowMin = Double.POSITIVE_INFINITY;
+            for (int c = 0; c < chunks; c++) {
+                rowMin = Math.min(rowMin, chunkMin[js * chunks + c]);
+            }
             for (int dj = 0; dj <= maxDj; dj++) {
                 int up = js + dj, down = js - dj;
                 if (up >= ny && down < 0) {
@@ -92,32 +113,50 @@ public final class BallErosion {
                 }
                 double dy = dj * h;
                 double rho = Math.sqrt(Math.max(0, radius * radius - dy * dy));
-                double least = rowMin[js] - rho;
-                if (least >= topCeiling) {
+                if (rowMin - rho >= topCeiling) {
                     break; // ρ only shrinks from here
                 }
-                boolean needUp = up < ny && least < ceiling[up];
-                boolean needDown = dj > 0 && down >= 0 && least < ceiling[down];
-                if (!needUp && !needDown) {
+                double r = rho / h;
+                int reach = (int) Math.ceil(r / CHUNK) + 1;
+                for (int c = 0; c < chunks; c++) {
+                    double m = Double.POSITIVE_INFINITY;
+                    for (int sc = Math.max(0, c - reach); sc <= Math.min(chunks - 1, c + reach); sc++) {
+                        m = Math.min(m, chunkMin[js * chunks + sc]);
+                    }
+                    reachMin[c] = m - rho;
+                }
+                int lo = nx, hi = -1;
+                boolean needUp = false, needDown = false;
+                for (int c = 0; c < chunks; c++) {
+                    boolean u = up < ny && reachMin[c] < chunkCeiling[up * chunks + c];
+                    boolean d = dj > 0 && down >= 0 && reachMin[c] < chunkCeiling[down * chunks + c];
+                    if (u || d) {
+                        lo = Math.min(lo, c * CHUNK);
+                        hi = Math.max(hi, Math.min(nx, (c + 1) * CHUNK) - 1);
+                        needUp |= u;
+                        needDown |= d;
+                    }
+                }
+                if (hi < lo) {
                     continue;
                 }
                 if (!loaded) {
                     eroder.load(v, js * nx, h);
                     loaded = true;
                 }
-                eroder.erode(rho / h, tmp);
+                eroder.erode(r, tmp, lo, hi);
                 if (needUp) {
-                    minInto(out, up * nx, tmp, h);
+                    minInto(out, up * nx, tmp, h, lo, hi);
                 }
                 if (needDown) {
-                    minInto(out, down * nx, tmp, h);
+                    minInto(out, down * nx, tmp, h, lo, hi);
                 }
             }
         }
     }
 
-    private static void minInto(double[] out, int offset, double[] row, double h) {
-        for (int i = 0; i < row.length; i++) {
+    private static void minInto(double[] out, int offset, double[] row, double h, int lo, int hi) {
+        for (int i = lo; i <= hi; i++) {
             double val = row[i] * h;
             if (val < out[offset + i]) {
                 out[offset + i] = val;
@@ -167,12 +206,26 @@ public final class BallErosion {
             }
         }
 
-        /** out[x] = min over k of [w_k − √(r² − (x − k)²)], for positions within r. */
-        void erode(double r, double[] out) {
-            int top = 0;
-            stack[0] = 0;
-            from[0] = Double.NEGATIVE_INFINITY;
-            for (int q = 1; q < bowls; q++) {
+        /**
+         * out[x] = min over k of [w_k − √(r² − (x − k)²)] for x in [lo, hi]; only bowls within r of
+         * that range can reach it.
+         */
+        void erode(double r, double[] out, int lo, int hi) {
+            int first = 0, last = bowls - 1;
+            double reachLo = lo - r, reachHi = hi + r;
+            while (first < bowls && bowlPos[first] < reachLo) {
+                first++;
+            }
+            while (last >= first && bowlPos[last] > reachHi) {
+                last--;
+            }
+            int top = -1;
+            for (int q = first; q <= last; q++) {
+                if (top < 0) {
+                    stack[++top] = q;
+                    from[top] = Double.NEGATIVE_INFINITY;
+                    continue;
+                }
                 double s;
                 while (true) {
                     s = switchPoint(bowlPos[stack[top]], bowlVal[stack[top]], bowlPos[q], bowlVal[q], r);
@@ -192,17 +245,20 @@ public final class BallErosion {
             }
             int k = 0;
             double r2 = r * r;
-            for (int x = 0; x < n; x++) {
-                while (k < top && from[k + 1] <= x) {
-                    k++;
-                }
-                double best = bowl(stack[k], x, r2);
-                // near a crossing, rounding may pick the wrong side: look at both neighbours there
-                if (k > 0 && x - from[k] < NEAR) {
-                    best = Math.min(best, bowl(stack[k - 1], x, r2));
-                }
-                if (k < top && from[k + 1] - x < NEAR) {
-                    best = Math.min(best, bowl(stack[k + 1], x, r2));
+            for (int x = lo; x <= hi; x++) {
+                double best = Double.POSITIVE_INFINITY;
+                if (top >= 0) {
+                    while (k < top && from[k + 1] <= x) {
+                        k++;
+                    }
+                    best = bowl(stack[k], x, r2);
+                    // near a crossing, rounding may pick the wrong side: look at both neighbours there
+                    if (k > 0 && x - from[k] < NEAR) {
+                        best = Math.min(best, bowl(stack[k - 1], x, r2));
+                    }
+                    if (k < top && from[k + 1] - x < NEAR) {
+                        best = Math.min(best, bowl(stack[k + 1], x, r2));
+                    }
                 }
                 double self = w[x] - r;
                 out[x] = self < best ? self : best;
