@@ -10,6 +10,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Random;
 import org.lpzplanner.engine.envelope.CentreSurface;
+import org.lpzplanner.engine.envelope.EnvelopeOp;
+import org.lpzplanner.engine.geom.SiteSurface;
+import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
+import org.lpzplanner.engine.model.Rod;
 import org.lpzplanner.engine.envelope.EnvelopeField;
 import org.lpzplanner.engine.envelope.Grid;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
@@ -59,6 +63,9 @@ public final class EngineBenchmark {
             queries(out, r);
         }
         naiveRatio(out, campusResults.get(campusResults.size() - 1));
+        for (ProtectionLevel level : ProtectionLevel.values()) {
+            moveOneRod(out, campus, level);
+        }
         System.out.print(out);
     }
 
@@ -146,6 +153,35 @@ public final class EngineBenchmark {
                 + "(%d of %d rows timed, scaled); the engine's whole envelope stage: %d ms; ratio %.0f× (check %.1f).%n",
                 r.sphere().level(), naiveMs, rows, g.ny(), r.envelopeMillis(), naiveMs / Math.max(1, r.envelopeMillis()),
                 sink / rows / g.nx()));
+    }
+
+    /** Envelope update after moving one rod 2 m, against a fresh computation (median of 5). */
+    private static void moveOneRod(StringBuilder out, Site campus, ProtectionLevel level) {
+        double radius = level.sphereRadius();
+        SiteSurface before = SiteSurfaceBuilder.build(campus);
+        EnvelopeField field = EnvelopeOp.compute(before, radius, 0.5);
+        Rod rod = campus.rods().get(0);
+        long[] updates = new long[5];
+        long[] fresh = new long[5];
+        for (int k = 0; k < 7; k++) {
+            Rod moved = new Rod(rod.id(), rod.name(), rod.x() + (k % 2 == 0 ? 2 : -2), rod.y(), rod.height());
+            List<Rod> rods = new ArrayList<>(campus.rods());
+            rods.set(0, moved);
+            long t0 = System.nanoTime();
+            SiteSurface after = SiteSurfaceBuilder.build(campus.withAirTermination(rods, campus.conductors()));
+            EnvelopeOp.update(field, after, Math.min(rod.x(), moved.x()), rod.y(), Math.max(rod.x(), moved.x()), rod.y());
+            long t1 = System.nanoTime();
+            EnvelopeOp.compute(after, radius, 0.5);
+            long t2 = System.nanoTime();
+            if (k >= 2) {
+                updates[k - 2] = (t1 - t0) / 1_000_000;
+                fresh[k - 2] = (t2 - t1) / 1_000_000;
+            }
+        }
+        Arrays.sort(updates);
+        Arrays.sort(fresh);
+        out.append(String.format(Locale.ROOT, "Envelope update after moving one rod, campus, level %s: %d ms "
+                + "(fresh envelope: %d ms).%n", level, updates[2], fresh[2]));
     }
 
     private static void resetPeaks() {

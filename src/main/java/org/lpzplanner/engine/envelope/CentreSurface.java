@@ -30,14 +30,44 @@ public final class CentreSurface {
         double[] low = new double[nx * ny];
         Arrays.fill(node, radius);
         Arrays.fill(low, radius);
+        rasterize(grid, supports, radius, node, low, 0, 0, nx - 1, ny - 1);
+        return new CentreSurface(grid, radius, node, low);
+    }
+
+    /**
+     * The same surface after a change to the supports that only affects cells in [i0, i1] × [j0, j1]:
+     * those cells are computed afresh from all supports, the rest are kept. Equal to
+     * {@link #compute} with the new supports when the window holds every cell within R of what
+     * changed.
+     */
+    public CentreSurface recompute(List<Support> supports, int i0, int j0, int i1, int j1) {
+        int nx = grid.nx();
+        double[] node = nodeHeight.clone();
+        double[] low = cellLower.clone();
+        for (int j = Math.max(0, j0); j <= Math.min(grid.ny() - 1, j1); j++) {
+            for (int i = Math.max(0, i0); i <= Math.min(nx - 1, i1); i++) {
+                node[j * nx + i] = radius;
+                low[j * nx + i] = radius;
+            }
+        }
+        rasterize(grid, supports, radius, node, low, Math.max(0, i0), Math.max(0, j0),
+                Math.min(nx - 1, i1), Math.min(grid.ny() - 1, j1));
+        return new CentreSurface(grid, radius, node, low);
+    }
+
+    /** Raises node and cell values in the window to every support's exact value and lower bound. */
+    private static void rasterize(Grid grid, List<Support> supports, double radius, double[] node, double[] low,
+            int wi0, int wj0, int wi1, int wj1) {
+        int nx = grid.nx();
         double half = grid.h() / 2;
-        int bands = Math.max(1, Math.min(ny, 4 * Runtime.getRuntime().availableProcessors()));
+        int rows = wj1 - wj0 + 1;
+        int bands = Math.max(1, Math.min(rows, 4 * Runtime.getRuntime().availableProcessors()));
         IntStream.range(0, bands).parallel().forEach(b -> {
-            int jFrom = (int) ((long) ny * b / bands), jTo = (int) ((long) ny * (b + 1) / bands);
+            int jFrom = wj0 + (int) ((long) rows * b / bands), jTo = wj0 + (int) ((long) rows * (b + 1) / bands);
             for (Support s : supports) {
                 double[] r = s.reach();
-                int i0 = Math.max(0, (int) Math.floor((r[0] - grid.x0()) / grid.h()) - 1);
-                int i1 = Math.min(nx - 1, (int) Math.floor((r[2] - grid.x0()) / grid.h()) + 1);
+                int i0 = Math.max(wi0, (int) Math.floor((r[0] - grid.x0()) / grid.h()) - 1);
+                int i1 = Math.min(wi1, (int) Math.floor((r[2] - grid.x0()) / grid.h()) + 1);
                 int j0 = Math.max(jFrom, (int) Math.floor((r[1] - grid.y0()) / grid.h()) - 1);
                 int j1 = Math.min(jTo - 1, (int) Math.floor((r[3] - grid.y0()) / grid.h()) + 1);
                 for (int j = j0; j <= j1; j++) {
@@ -57,7 +87,6 @@ public final class CentreSurface {
                 }
             }
         });
-        return new CentreSurface(grid, radius, node, low);
     }
 
     public Grid grid() { return grid; }

@@ -22,6 +22,8 @@ public final class EnvelopeField {
 
     public Grid grid() { return centres.grid(); }
 
+    double[] vertexLowers() { return vertexLower; }
+
     public double radius() { return centres.radius(); }
 
     public CentreSurface centres() { return centres; }
