@@ -1,0 +1,200 @@
+package org.lpzplanner.engine.design;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.algorithm.Orientation;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.Structure;
+
+/**
+ * Number and positions of down-conductors round a structure [IEC 62305-3:2010 5.3]: at least two,
+ * spread round the perimeter, at exposed corners first, no further apart than the typical spacing of
+ * the level (Table 4: 10, 10, 15, 20 m for I to IV).
+ *
+ * <p><b>Count.</b> Per outer ring of the footprint (each separate part of a multipolygon is its own
+ * outline): n = max(2, ⌈perimeter / typical spacing⌉).
+ *
+ * <p><b>Positions.</b> Outside (convex) corners first. When there are more corners than n, the corners
+ * nearest the given exposed points are taken; without exposed points the corners are spread: the
+ * first outside corner in ring order, then repeatedly the corner farthest along the ring from those
+ * already taken (ties in ring order). The remaining positions go into the gaps between chosen
+ * positions, each time into the gap whose share would be longest, and are spaced evenly within each
+ * gap. Distances are measured along the ring. Because corners stay fixed, an irregular outline can
+ * leave one gap longer than the typical spacing although the count suffices on average; the layout
+ * reports it ({@link DownConductorLayout#exceedsTypicalSpacing()}) and the designer decides whether
+ * to add one.
+ *
+ * <p><b>Limits.</b> Courtyards (footprint holes) get no down-conductors here; access, windows and
+ * the actual conductor routes are for the designer. Stateless and thread-safe.
+ */
+public final class DownConductorPlan {
+
+    private static final double EPS = 1e-9;
+
+    private DownConductorPlan() {
+    }
+
+    /** Layout for the structure at the level's typical spacing, corners taken in spread order. */
+    public static DownConductorLayout plan(Structure structure, ProtectionLevel level) {
+        return plan(structure, level.downConductorSpacing(), List.of());
+    }
+
+    /**
+     * Layout for the structure at the given typical spacing, preferring the corners nearest
+     * {@code exposedPoints} (may be empty).
+     */
+    public static DownConductorLayout plan(Structure structure, double typicalSpacing, List<Coordinate> exposedPoints) {
+        if (!(typicalSpacing > 0)) {
+            throw new IllegalArgumentException("typical down-conductor spacing must be positive, got " + typicalSpacing);
+        }
+        Geometry footprint = structure.footprint();
+        List<Coordinate> positions = new ArrayList<>();
+        double perimeter = 0;
+        double largest = 0;
+        for (int k = 0; k < footprint.getNumGeometries(); k++) {
+            Polygon part = (Polygon) footprint.getGeometryN(k);
+            Ring ring = new Ring(part.getExteriorRing().getCoordinates());
+            int n = Math.max(2, (int) Math.ceil(ring.length / typicalSpacing - EPS));
+            List<Double> stations = ring.stations(n, exposedPoints);
+            for (double s : stations) {
+                positions.add(ring.pointAt(s));
+            }
+            for (int i = 0; i < stations.size(); i++) {
+                double next = i + 1 < stations.size() ? stations.get(i + 1) : stations.get(0) + ring.length;
+                largest = Math.max(largest, next - stations.get(i));
+            }
+            perimeter += ring.length;
+        }
+        return new DownConductorLayout(structure.id(), perimeter, typicalSpacing, positions, largest);
+    }
+
+    /** A closed ring, counter-clockwise, with the distance along it of each vertex. */
+    private static final class Ring {
+        final Coordinate[] cs;
+        final double[] at;
+        final double length;
+
+        Ring(Coordinate[] closed) {
+            Coordinate[] c = closed.clone();
+            if (!Orientation.isCCW(c)) {
+                for (int i = 0, j = c.length - 1; i < j; i++, j--) {
+                    Coordinate t = c[i];
+                    c[i] = c[j];
+                    c[j] = t;
+                }
+            }
+            cs = c;
+            at = new double[c.length];
+            for (int i = 1; i < c.length; i++) {
+                at[i] = at[i - 1] + c[i - 1].distance(c[i]);
+            }
+            length = at[c.length - 1];
+        }
+
+        /** Distances along the ring of the n positions, sorted. */
+        List<Double> stations(int n, List<Coordinate> exposed) {
+            List<Integer> corners = outsideCorners();
+            List<Double> chosen = new ArrayList<>();
+            if (!exposed.isEmpty()) {
+                corners.sort(Comparator.comparingDouble(i -> nearest(cs[i], exposed)));
+                for (int i = 0; i < Math.min(n, corners.size()); i++) {
+                    chosen.add(at[corners.get(i)]);
+                }
+            } else {
+                List<Integer> left = new ArrayList<>(corners);
+                while (chosen.size() < n && !left.isEmpty()) {
+                    int bestIndex = 0;
+                    double bestGap = -1;
+                    for (int j = 0; j < left.size(); j++) {
+                        double gap = chosen.isEmpty() ? 0 : gapTo(at[left.get(j)], chosen);
+                        if (gap > bestGap + EPS) {
+                            bestGap = gap;
+                            bestIndex = j;
+                        }
+                    }
+                    chosen.add(at[left.remove(bestIndex)]);
+                }
+            }
+            if (chosen.isEmpty()) {
+                chosen.add(0.0);
+            }
+            chosen.sort(Double::compare);
+            return fillGaps(chosen, n);
+        }
+
+        /** Adds n − chosen.size() stations, each into the gap whose even share is longest. */
+        private List<Double> fillGaps(List<Double> chosen, int n) {
+            int m = chosen.size();
+            double[] gap = new double[m];
+            int[] extra = new int[m];
+            for (int i = 0; i < m; i++) {
+                gap[i] = (i + 1 < m ? chosen.get(i + 1) : chosen.get(0) + length) - chosen.get(i);
+            }
+            for (int added = m; added < n; added++) {
+                int best = 0;
+                for (int i = 1; i < m; i++) {
+                    if (gap[i] / (extra[i] + 1) > gap[best] / (extra[best] + 1) + EPS) {
+                        best = i;
+                    }
+                }
+                extra[best]++;
+            }
+            List<Double> out = new ArrayList<>();
+            for (int i = 0; i < m; i++) {
+                for (int e = 0; e <= extra[i]; e++) {
+                    out.add((chosen.get(i) + gap[i] * e / (extra[i] + 1)) % length);
+                }
+            }
+            out.sort(Double::compare);
+            return out;
+        }
+
+        /** Shortest distance along the ring from s to any chosen station. */
+        private double gapTo(double s, List<Double> chosen) {
+            double best = Double.POSITIVE_INFINITY;
+            for (double c : chosen) {
+                double d = Math.abs(s - c);
+                best = Math.min(best, Math.min(d, length - d));
+            }
+            return best;
+        }
+
+        /** Indices of the vertices where the outline turns left (outside corners of a CCW ring), in ring order. */
+        private List<Integer> outsideCorners() {
+            List<Integer> out = new ArrayList<>();
+            int n = cs.length - 1;
+            for (int i = 0; i < n; i++) {
+                Coordinate prev = cs[(i + n - 1) % n], here = cs[i], next = cs[i + 1];
+                double cross = (here.x - prev.x) * (next.y - here.y) - (here.y - prev.y) * (next.x - here.x);
+                double scale = prev.distance(here) * here.distance(next);
+                if (scale > 0 && cross > 1e-6 * scale) {
+                    out.add(i);
+                }
+            }
+            return out;
+        }
+
+        private static double nearest(Coordinate c, List<Coordinate> points) {
+            double best = Double.POSITIVE_INFINITY;
+            for (Coordinate p : points) {
+                best = Math.min(best, c.distance(p));
+            }
+            return best;
+        }
+
+        Coordinate pointAt(double s) {
+            for (int i = 1; i < cs.length; i++) {
+                if (s <= at[i] + EPS) {
+                    double seg = at[i] - at[i - 1];
+                    double t = seg == 0 ? 0 : (s - at[i - 1]) / seg;
+                    return new Coordinate(cs[i - 1].x + t * (cs[i].x - cs[i - 1].x), cs[i - 1].y + t * (cs[i].y - cs[i - 1].y));
+                }
+            }
+            return new Coordinate(cs[0].x, cs[0].y);
+        }
+    }
+}

@@ -1,0 +1,12 @@
+/**
+ * Design checks of an air-termination and down-conductor layout by the simple methods of
+ * IEC 62305-3:2010: the protective angle method, the mesh method, the number and positions of
+ * down-conductors, and the separation distance.
+ *
+ * <p>Rules of the package: plain Java and JTS only; every formula carries its source (standard and
+ * clause or table); rules of the trade with no single source are marked as common practice; values
+ * recalled rather than derived are marked "from memory". These checks complement the rolling sphere
+ * envelope, which remains the reference method of the product: where they disagree, the rolling
+ * sphere governs. Results follow the 2010 edition; the 2024 edition revised the separation distance.
+ */
+package org.lpzplanner.engine.design;

@@ -1,0 +1,100 @@
+package org.lpzplanner.engine.design;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.Structure;
+
+class DownConductorPlanTest {
+
+    private static final Structure HALL = DesignSites.flatBuilding(DesignSites.rectangle(0, 0, 40, 20), 8);
+
+    @Test
+    void rectangleAtClassOneGetsOneDownConductorPerTenMetres() {
+        // perimeter 120 m / 10 m (IEC 62305-3:2010 Table 4) = 12
+        DownConductorLayout layout = DownConductorPlan.plan(HALL, ProtectionLevel.I);
+        assertThat(layout.perimeter()).isCloseTo(120, within(1e-9));
+        assertThat(layout.count()).isEqualTo(12);
+        assertThat(layout.largestSpacing()).isCloseTo(10, within(1e-9));
+        assertThat(layout.meanSpacing()).isCloseTo(10, within(1e-9));
+        assertContainsPoints(layout, new double[][] {{0, 0}, {40, 0}, {40, 20}, {0, 20}});
+    }
+
+    @Test
+    void rectangleAtClassFourGetsOneDownConductorPerTwentyMetres() {
+        // 120 m / 20 m (Table 4) = 6: four corners plus the middle of each long side
+        DownConductorLayout layout = DownConductorPlan.plan(HALL, ProtectionLevel.IV);
+        assertThat(layout.count()).isEqualTo(6);
+        assertThat(layout.largestSpacing()).isCloseTo(20, within(1e-9));
+        assertContainsPoints(layout, new double[][] {{0, 0}, {40, 0}, {40, 20}, {0, 20}, {20, 0}, {20, 20}});
+    }
+
+    @Test
+    void smallBoxGetsTheMinimumOfTwoOnOppositeCorners() {
+        // perimeter 20 m / 10 m = 2, which is also the minimum (IEC 62305-3:2010 5.3)
+        Structure box = DesignSites.flatBuilding(DesignSites.rectangle(0, 0, 5, 5), 4);
+        DownConductorLayout layout = DownConductorPlan.plan(box, ProtectionLevel.I);
+        assertThat(layout.count()).isEqualTo(2);
+        assertThat(layout.largestSpacing()).isCloseTo(10, within(1e-9));
+        assertContainsPoints(layout, new double[][] {{0, 0}, {5, 5}});
+    }
+
+    @Test
+    void tinyStructureStillGetsTwo() {
+        Structure kiosk = DesignSites.flatBuilding(DesignSites.rectangle(0, 0, 2, 1), 3);
+        assertThat(DownConductorPlan.plan(kiosk, ProtectionLevel.IV).count()).isEqualTo(2);
+    }
+
+    @Test
+    void lShapeUsesItsFiveOutsideCornersFirst() {
+        // perimeter 80 m / 10 m = 8; outside corners (0,0) (20,0) (20,10) (10,20) (0,20); (10,10) is an inside corner
+        Structure ell = DesignSites.flatBuilding(DesignSites.polygon(0, 0, 20, 0, 20, 10, 10, 10, 10, 20, 0, 20), 6);
+        DownConductorLayout layout = DownConductorPlan.plan(ell, ProtectionLevel.I);
+        assertThat(layout.count()).isEqualTo(8);
+        assertThat(layout.largestSpacing()).isCloseTo(10, within(1e-9));
+        assertContainsPoints(layout, new double[][] {{0, 0}, {20, 0}, {20, 10}, {10, 20}, {0, 20}});
+    }
+
+    @Test
+    void exposedCornersAreTakenFirstWhenThereAreMoreCornersThanDownConductors() {
+        Structure box = DesignSites.flatBuilding(DesignSites.rectangle(0, 0, 5, 5), 4);
+        DownConductorLayout layout = DownConductorPlan.plan(box, 10, List.of(new Coordinate(6, -1), new Coordinate(-1, 6)));
+        assertThat(layout.count()).isEqualTo(2);
+        assertContainsPoints(layout, new double[][] {{5, 0}, {0, 5}});
+    }
+
+    @Test
+    void everyPositionLiesOnTheFootprintOutline() {
+        Structure ell = DesignSites.flatBuilding(DesignSites.polygon(0, 0, 33, 0, 33, 7, 12, 7, 12, 25, 0, 25), 6);
+        DownConductorLayout layout = DownConductorPlan.plan(ell, ProtectionLevel.III);
+        for (Coordinate c : layout.positions()) {
+            assertThat(ell.footprint().getBoundary().distance(new org.locationtech.jts.geom.GeometryFactory().createPoint(c)))
+                    .isLessThan(1e-9);
+        }
+        // 116 m / 15 m = 7.7, rounded up to 8
+        assertThat(layout.count()).isEqualTo(8);
+    }
+
+    @Test
+    void fixedCornersCanLeaveAGapLongerThanTheTypicalSpacing() {
+        // hand count: outside-corner gaps along the ring 33, 7, 39, 12, 25 m; three more positions split 39, 33
+        // and 25 m, so the longest gap is 39 / 2 = 19.5 m although 116 m / 8 = 14.5 m on average
+        Structure ell = DesignSites.flatBuilding(DesignSites.polygon(0, 0, 33, 0, 33, 7, 12, 7, 12, 25, 0, 25), 6);
+        DownConductorLayout layout = DownConductorPlan.plan(ell, ProtectionLevel.III);
+        assertThat(layout.largestSpacing()).isCloseTo(19.5, within(1e-9));
+        assertThat(layout.meanSpacing()).isCloseTo(14.5, within(1e-9));
+        assertThat(layout.exceedsTypicalSpacing()).isTrue();
+        assertThat(DownConductorPlan.plan(HALL, ProtectionLevel.I).exceedsTypicalSpacing()).isFalse();
+    }
+
+    private static void assertContainsPoints(DownConductorLayout layout, double[][] points) {
+        for (double[] p : points) {
+            assertThat(layout.positions()).as("position (%s, %s)", p[0], p[1])
+                    .anyMatch(c -> Math.hypot(c.x - p[0], c.y - p[1]) < 1e-9);
+        }
+    }
+}
