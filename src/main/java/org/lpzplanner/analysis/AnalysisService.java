@@ -1,0 +1,115 @@
+package org.lpzplanner.analysis;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.time.Clock;
+import java.time.temporal.ChronoUnit;
+import java.util.HexFormat;
+import java.util.Map;
+import java.util.Optional;
+import org.lpzplanner.engine.exposure.AnalysisOptions;
+import org.lpzplanner.engine.exposure.AnalysisResult;
+import org.lpzplanner.engine.exposure.ExposureAnalysis;
+import org.lpzplanner.engine.io.SiteDocument;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SphereSpec;
+import org.lpzplanner.sites.SiteRepository;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.system.InvalidInputException;
+import org.lpzplanner.system.Settings;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.support.TransactionTemplate;
+
+/**
+ * Runs the rolling-sphere analysis of a stored site and keeps each run as a numbered revision.
+ * The engine does the work; this class picks the settings, stores the summary and the result
+ * GeoJSON, and marks the site as changed.
+ */
+@Service
+public class AnalysisService {
+
+    private final SiteService sites;
+    private final SiteRepository siteRows;
+    private final AnalysisRepository analyses;
+    private final TransactionTemplate transactions;
+    private final Clock clock;
+
+    public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
+            TransactionTemplate transactions, Clock clock) {
+        this.sites = sites;
+        this.siteRows = siteRows;
+        this.analyses = analyses;
+        this.transactions = transactions;
+        this.clock = clock;
+    }
+
+    /**
+     * Analyses a site and stores the result as its next revision.
+     *
+     * @param levelText      "I".."IV", or blank for the site's own level (and custom radius)
+     * @param radiusText     custom sphere radius in metres, or blank for the level's own radius
+     * @param resolutionText grid spacing in metres, or blank to let the engine choose
+     * @return the stored revision, with its result GeoJSON
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
+     * @throws InvalidInputException when a setting cannot be used
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed or was
+     *         deleted while the analysis ran
+     */
+    public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText) {
+        StoredSite site = sites.get(siteId);
+        SphereSpec sphere = sphere(site, levelText, radiusText);
+        Double resolution = Settings.resolution(resolutionText);
+        SiteDocument document = sites.document(site);
+        AnalysisResult result;
+        try {
+            result = ExposureAnalysis.analyze(document.site(),
+                    new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
+        }
+        String geoJson = ResultGeoJson.write(document.site(), result);
+        return transactions.execute(status -> {
+            var now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
+            AnalysisRevision revision = analyses.insert(new AnalysisRevision(0, site.id(),
+                    analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), result.resolution(),
+                    sha256(site.sourceText()), result.totalExposedRoofArea(), result.totalExposedEdgeLength(),
+                    result.corners().size(), result.facades().size(), result.protectedGround().planArea(),
+                    result.isFullyProtected(), geoJson, now, result.totalMillis()));
+            siteRows.touch(site.id(), site.version(), now);
+            return revision;
+        });
+    }
+
+    /** The site's latest revision with its result GeoJSON, empty when it was never analysed. */
+    public Optional<AnalysisRevision> latest(long siteId) {
+        sites.get(siteId);
+        return analyses.latest(siteId);
+    }
+
+    /** The latest revision of every analysed site, without result GeoJSON, by site id. */
+    public Map<Long, AnalysisRevision> latestSummaries() {
+        return analyses.latestSummaries();
+    }
+
+    private static SphereSpec sphere(StoredSite site, String levelText, String radiusText) {
+        Double radius = Settings.radius(radiusText);
+        if ((levelText == null || levelText.isBlank()) && radius == null) {
+            return site.sphere();
+        }
+        ProtectionLevel level = Settings.level(levelText, site.level());
+        return radius == null ? SphereSpec.of(level) : new SphereSpec(level, radius);
+    }
+
+    /** Hex SHA-256 of the text's UTF-8 bytes. */
+    static String sha256(String text) {
+        try {
+            return HexFormat.of().formatHex(
+                    MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8)));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime has SHA-256", e);
+        }
+    }
+
+}

@@ -1,0 +1,21 @@
+package org.lpzplanner.analysis;
+
+import java.time.Instant;
+
+/**
+ * The numbers of one analysis revision as the API shows them. Areas are plan areas in m², lengths
+ * in metres, rounded to the centimetre.
+ */
+public record AnalysisSummary(int revision, String method, String level, double radius, double resolution,
+        double exposedRoofArea, double exposedEdgeLength, int exposedCorners, int facadeBands,
+        double protectedGroundArea, boolean fullyProtected, String inputsSha256, long engineMillis,
+        Instant analysedAt) {
+
+    public static AnalysisSummary of(AnalysisRevision r) {
+        return new AnalysisSummary(r.revision(), ResultGeoJson.METHOD, r.level().name(), ResultGeoJson.round(r.sphereRadius()),
+                ResultGeoJson.round(r.resolution()), ResultGeoJson.round(r.exposedRoofArea()),
+                ResultGeoJson.round(r.exposedEdgeLength()), r.exposedCorners(), r.facadeBands(),
+                ResultGeoJson.round(r.protectedGroundArea()), r.fullyProtected(), r.inputsSha256(), r.engineMillis(),
+                r.createdAt());
+    }
+}

@@ -1,0 +1,268 @@
+package org.lpzplanner.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * Draws the plan of an analysed site as an inline SVG element, from the stored
+ * {@link ResultGeoJson}: structures shaded by height (darker is higher) with their names, rooftop
+ * objects, protected open ground, exposed roof areas, facade bands, exposed edges and corners,
+ * air-termination parts, a scale bar, a north arrow and a legend. North is up (the y axis is
+ * flipped). Every text from the site file is escaped; every other text comes from {@link Labels}.
+ */
+public final class PlanSvg {
+
+    /** Supplies the plan's own words (legend, north mark, scale), by message key. */
+    @FunctionalInterface
+    public interface Labels {
+        String text(String key, Object... args);
+    }
+
+    /** Colours of the plan, also used by the legend. */
+    static final String GROUND = "#cfe9c8";
+    static final String OBJECT = "#b9ad94";
+    static final String EXPOSED_ROOF = "#f28c28";
+    static final String FACADE = "#7b4fa0";
+    static final String EDGE = "#c8102e";
+    static final String PART = "#1f5fbf";
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
+    private static final double WIDTH = 820;
+    private static final double DRAW_HEIGHT = 560;
+    private static final double MARGIN = 36;
+    private static final double LEGEND_ROW = 20;
+
+    private PlanSvg() {
+    }
+
+    /** The SVG markup for one result. */
+    public static String render(String resultGeoJson, Labels labels) {
+        JsonNode root = JSON.readTree(resultGeoJson);
+        List<JsonNode> features = new ArrayList<>();
+        root.path("features").forEach(features::add);
+        double[] box = bounds(features);
+        double dx = Math.max(box[2] - box[0], 1);
+        double dy = Math.max(box[3] - box[1], 1);
+        double scale = Math.min((WIDTH - 2 * MARGIN) / dx, (DRAW_HEIGHT - 2 * MARGIN) / dy);
+        double drawHeight = dy * scale + 2 * MARGIN;
+        Frame frame = new Frame(box[0], box[3], scale);
+        String[] legendKeys = {"plan.legend.structure", "plan.legend.object", "plan.legend.ground",
+            "plan.legend.roof", "plan.legend.facade", "plan.legend.edge", "plan.legend.part"};
+        double height = drawHeight + 10 + LEGEND_ROW * legendKeys.length;
+        double maxHeight = features.stream().filter(f -> layer(f).equals("structure"))
+                .mapToDouble(f -> f.path("properties").path("height").asDouble(0)).max().orElse(1);
+
+        StringBuilder svg = new StringBuilder();
+        svg.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"plan\" viewBox=\"0 0 %.0f %.0f\""
+                + " width=\"%.0f\" height=\"%.0f\" role=\"img\" aria-label=\"%s\">", WIDTH, height, WIDTH, height,
+                escape(labels.text("plan.title", text(root, "name")))));
+        svg.append(String.format(Locale.ROOT, "<rect x=\"0\" y=\"0\" width=\"%.0f\" height=\"%.0f\" fill=\"#fbfbf8\"/>",
+                WIDTH, drawHeight));
+        for (String layer : ResultGeoJson.LAYERS) {
+            for (JsonNode f : features) {
+                if (layer(f).equals(layer)) {
+                    draw(svg, f, frame, maxHeight);
+                }
+            }
+        }
+        for (JsonNode f : features) {
+            if (layer(f).equals("structure")) {
+                label(svg, f, frame);
+            }
+        }
+        scaleBar(svg, frame, drawHeight, labels);
+        northArrow(svg, labels);
+        legend(svg, drawHeight + 10, legendKeys, labels);
+        return svg.append("</svg>").toString();
+    }
+
+    private record Frame(double minX, double maxY, double scale) {
+        double x(double x) {
+            return MARGIN + (x - minX) * scale;
+        }
+
+        double y(double y) {
+            return MARGIN + (maxY - y) * scale;
+        }
+    }
+
+    private static void draw(StringBuilder svg, JsonNode f, Frame frame, double maxHeight) {
+        JsonNode properties = f.path("properties");
+        JsonNode g = f.path("geometry");
+        switch (layer(f)) {
+            case "structure" -> {
+                double share = Math.min(1, properties.path("height").asDouble(0) / maxHeight);
+                int grey = (int) Math.round(225 - 130 * share);
+                String fill = String.format(Locale.ROOT, "#%02x%02x%02x", grey, grey, grey + 6 > 255 ? 255 : grey + 6);
+                svg.append("<path class=\"structure\" fill=\"").append(fill)
+                        .append("\" stroke=\"#333333\" stroke-width=\"1\" fill-rule=\"evenodd\" d=\"")
+                        .append(polygonPath(g, frame)).append("\"><title>").append(escape(text(f, "name")))
+                        .append("</title></path>");
+            }
+            case "rooftop-object" -> svg.append("<path class=\"rooftop-object\" fill=\"").append(OBJECT)
+                    .append("\" stroke=\"#555555\" stroke-width=\"0.8\" fill-rule=\"evenodd\" d=\"")
+                    .append(polygonPath(g, frame)).append("\"><title>").append(escape(text(f, "name")))
+                    .append("</title></path>");
+            case "protected-ground" -> svg.append("<path class=\"protected-ground\" fill=\"").append(GROUND)
+                    .append("\" stroke=\"none\" fill-rule=\"evenodd\" d=\"").append(polygonPath(g, frame))
+                    .append("\"/>");
+            case "exposed-roof" -> svg.append("<path class=\"exposed-roof\" fill=\"").append(EXPOSED_ROOF)
+                    .append("\" fill-opacity=\"0.75\" stroke=\"none\" fill-rule=\"evenodd\" d=\"")
+                    .append(polygonPath(g, frame)).append("\"/>");
+            case "facade-band" -> line(svg, "facade-band", g, frame, FACADE, 5, null);
+            case "exposed-edge" -> line(svg, "exposed-edge", g, frame, EDGE, 2.5, null);
+            case "conductor" -> line(svg, "conductor", g, frame, PART, 2, "5 3");
+            case "exposed-corner" -> svg.append(String.format(Locale.ROOT,
+                    "<circle class=\"exposed-corner\" cx=\"%.1f\" cy=\"%.1f\" r=\"3.5\" fill=\"%s\"/>",
+                    frame.x(g.path("coordinates").path(0).asDouble()), frame.y(g.path("coordinates").path(1).asDouble()),
+                    EDGE));
+            case "rod" -> svg.append(String.format(Locale.ROOT,
+                    "<circle class=\"rod\" cx=\"%.1f\" cy=\"%.1f\" r=\"4\" fill=\"#ffffff\" stroke=\"%s\" stroke-width=\"2\"/>",
+                    frame.x(g.path("coordinates").path(0).asDouble()), frame.y(g.path("coordinates").path(1).asDouble()),
+                    PART));
+            default -> {
+                // layers this drawing does not know are left out
+            }
+        }
+    }
+
+    private static void line(StringBuilder svg, String cssClass, JsonNode g, Frame frame, String colour, double width,
+            String dash) {
+        StringBuilder d = new StringBuilder();
+        ring(d, g.path("coordinates"), frame, false);
+        svg.append("<path class=\"").append(cssClass).append("\" fill=\"none\" stroke=\"").append(colour)
+                .append("\" stroke-linecap=\"round\" stroke-width=\"").append(width).append('"');
+        if (dash != null) {
+            svg.append(" stroke-dasharray=\"").append(dash).append('"');
+        }
+        svg.append(" d=\"").append(d).append("\"/>");
+    }
+
+    private static void label(StringBuilder svg, JsonNode f, Frame frame) {
+        double[] box = bounds(List.of(f));
+        double x = frame.x((box[0] + box[2]) / 2);
+        double y = frame.y((box[1] + box[3]) / 2);
+        String text = escape(text(f, "name")) + String.format(Locale.ROOT, " (%s m)",
+                number(f.path("properties").path("height").asDouble()));
+        svg.append(String.format(Locale.ROOT, "<text class=\"structure-label\" x=\"%.1f\" y=\"%.1f\" text-anchor=\"middle\""
+                + " font-size=\"11\" font-family=\"sans-serif\" fill=\"#111111\" stroke=\"#ffffff\" stroke-width=\"3\""
+                + " paint-order=\"stroke\">%s</text>", x, y, text));
+    }
+
+    private static void scaleBar(StringBuilder svg, Frame frame, double drawHeight, Labels labels) {
+        double target = (WIDTH - 2 * MARGIN) / 5 / frame.scale();
+        double magnitude = Math.pow(10, Math.floor(Math.log10(target)));
+        double length = magnitude;
+        for (double step : new double[] {1, 2, 5, 10}) {
+            if (step * magnitude <= target) {
+                length = step * magnitude;
+            }
+        }
+        double px = length * frame.scale();
+        double y = drawHeight - 14;
+        svg.append(String.format(Locale.ROOT, "<g class=\"scale-bar\"><rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"5\""
+                + " fill=\"#222222\"/><text x=\"%.1f\" y=\"%.1f\" font-size=\"11\" font-family=\"sans-serif\">%s</text></g>",
+                MARGIN, y, px, MARGIN, y - 4, escape(labels.text("plan.scale", number(length)))));
+    }
+
+    private static void northArrow(StringBuilder svg, Labels labels) {
+        double x = WIDTH - MARGIN;
+        svg.append(String.format(Locale.ROOT, "<g class=\"north-arrow\"><path d=\"M %.1f 14 L %.1f 44 L %.1f 36 L %.1f 44 Z\""
+                + " fill=\"#222222\"/><text x=\"%.1f\" y=\"58\" text-anchor=\"middle\" font-size=\"12\""
+                + " font-family=\"sans-serif\" font-weight=\"bold\">%s</text></g>", x, x - 8, x, x + 8, x,
+                escape(labels.text("plan.north"))));
+    }
+
+    private static void legend(StringBuilder svg, double top, String[] keys, Labels labels) {
+        String[] colours = {"#9a9a9f", OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, PART};
+        svg.append("<g class=\"legend\" font-size=\"12\" font-family=\"sans-serif\">");
+        for (int i = 0; i < keys.length; i++) {
+            double y = top + i * LEGEND_ROW;
+            svg.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"18\" height=\"12\" fill=\"%s\""
+                    + " stroke=\"#444444\" stroke-width=\"0.5\"/><text x=\"%.1f\" y=\"%.1f\">%s</text>", MARGIN, y,
+                    colours[i], MARGIN + 26, y + 10, escape(labels.text(keys[i]))));
+        }
+        svg.append("</g>");
+    }
+
+    /** SVG path data of a (Multi)Polygon's rings. */
+    private static String polygonPath(JsonNode g, Frame frame) {
+        StringBuilder d = new StringBuilder();
+        JsonNode coordinates = g.path("coordinates");
+        if ("Polygon".equals(g.path("type").asString())) {
+            coordinates.forEach(r -> ring(d, r, frame, true));
+        } else {
+            coordinates.forEach(p -> p.forEach(r -> ring(d, r, frame, true)));
+        }
+        return d.toString();
+    }
+
+    private static void ring(StringBuilder d, JsonNode positions, Frame frame, boolean close) {
+        for (int i = 0; i < positions.size(); i++) {
+            JsonNode p = positions.get(i);
+            d.append(i == 0 ? "M" : " L").append(String.format(Locale.ROOT, " %.1f %.1f",
+                    frame.x(p.path(0).asDouble()), frame.y(p.path(1).asDouble())));
+        }
+        if (close && positions.size() > 0) {
+            d.append(" Z ");
+        }
+    }
+
+    /** minX, minY, maxX, maxY over all positions of the features. */
+    private static double[] bounds(List<JsonNode> features) {
+        double[] box = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY,
+            Double.NEGATIVE_INFINITY};
+        for (JsonNode f : features) {
+            collect(f.path("geometry").path("coordinates"), box);
+        }
+        if (box[0] > box[2]) {
+            return new double[] {0, 0, 1, 1};
+        }
+        return box;
+    }
+
+    private static void collect(JsonNode node, double[] box) {
+        if (node.isArray() && node.size() >= 2 && node.get(0).isNumber()) {
+            double x = node.get(0).asDouble();
+            double y = node.get(1).asDouble();
+            box[0] = Math.min(box[0], x);
+            box[1] = Math.min(box[1], y);
+            box[2] = Math.max(box[2], x);
+            box[3] = Math.max(box[3], y);
+        } else if (node.isArray()) {
+            node.forEach(child -> collect(child, box));
+        }
+    }
+
+    private static String layer(JsonNode f) {
+        return f.path("properties").path("layer").asString("");
+    }
+
+    private static String text(JsonNode node, String field) {
+        JsonNode value = node.has("properties") ? node.path("properties").path(field) : node.path(field);
+        return value.isNull() || value.isMissingNode() ? "" : value.asString();
+    }
+
+    static String number(double value) {
+        return value == Math.rint(value) ? String.valueOf((long) value) : String.format(Locale.ROOT, "%.1f", value);
+    }
+
+    /** Escapes text for SVG/XML content and attribute values. */
+    static String escape(String text) {
+        StringBuilder out = new StringBuilder(text.length());
+        for (char c : text.toCharArray()) {
+            switch (c) {
+                case '&' -> out.append("&amp;");
+                case '<' -> out.append("&lt;");
+                case '>' -> out.append("&gt;");
+                case '"' -> out.append("&quot;");
+                case '\'' -> out.append("&#39;");
+                default -> out.append(c < 0x20 && c != '\t' && c != '\n' && c != '\r' ? ' ' : c);
+            }
+        }
+        return out.toString();
+    }
+}

@@ -1,0 +1,18 @@
+package org.lpzplanner.sites;
+
+/** No site is stored under the id asked for. The message can be shown to users. */
+public class SiteNotFoundException extends RuntimeException {
+
+    private static final long serialVersionUID = 1L;
+
+    private final long siteId;
+
+    public SiteNotFoundException(long siteId) {
+        super("no site with id " + siteId + " is stored");
+        this.siteId = siteId;
+    }
+
+    public long siteId() {
+        return siteId;
+    }
+}

@@ -1,0 +1,155 @@
+package org.lpzplanner.sites;
+
+import java.io.IOException;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.lpzplanner.analysis.AnalysisRevision;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.analysis.PlanSvg;
+import org.lpzplanner.analysis.ResultGeoJson;
+import org.lpzplanner.common.Cautions;
+import org.lpzplanner.engine.io.SiteFormatException;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.context.MessageSource;
+import org.springframework.http.HttpStatus;
+import org.springframework.stereotype.Controller;
+import org.springframework.ui.Model;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.multipart.MultipartFile;
+import org.springframework.web.servlet.ModelAndView;
+
+/**
+ * The server-rendered pages: the site list with the upload form ({@code /}) and the site plan
+ * ({@code /sites/{id}}). Uploading a site stores it and analyses it at once; a bad file is
+ * reported on the list page and nothing is stored.
+ */
+@Controller
+public class SitePageController {
+
+    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+
+    private final SiteService sites;
+    private final AnalysisService analyses;
+    private final MessageSource messages;
+
+    public SitePageController(SiteService sites, AnalysisService analyses, MessageSource messages) {
+        this.sites = sites;
+        this.analyses = analyses;
+        this.messages = messages;
+    }
+
+    /** One line of the site list; {@code status} is the exposure at a glance, already worded. */
+    public record SiteRow(long id, String name, String level, String lastChange, String status, boolean exposed) {
+    }
+
+    @GetMapping("/")
+    public String list(Model model, Locale locale) {
+        model.addAttribute("rows", rows(locale));
+        model.addAttribute("levels", ProtectionLevel.values());
+        model.addAttribute("defaultLevel", ProtectionLevel.II.name());
+        return "sites/list";
+    }
+
+    @PostMapping("/sites")
+    public ModelAndView upload(@RequestParam(value = "file", required = false) MultipartFile file,
+            @RequestParam(required = false) String name, @RequestParam(required = false) String level,
+            Locale locale) throws IOException {
+        try {
+            String fileName = file == null ? null : file.getOriginalFilename();
+            byte[] bytes = file == null ? new byte[0] : file.getBytes();
+            StoredSite site = sites.create(fileName, bytes, name, level, null);
+            analyses.run(site.id(), null, null, null);
+            return new ModelAndView("redirect:/sites/" + site.id());
+        } catch (SiteFormatException | InvalidInputException e) {
+            ModelAndView page = new ModelAndView("sites/list", HttpStatus.BAD_REQUEST);
+            page.addObject("rows", rows(locale));
+            page.addObject("levels", ProtectionLevel.values());
+            page.addObject("defaultLevel", level == null || level.isBlank() ? ProtectionLevel.II.name() : level);
+            page.addObject("uploadError", e.getMessage());
+            page.addObject("enteredName", name);
+            return page;
+        }
+    }
+
+    @GetMapping("/sites/{id}")
+    public String plan(@PathVariable long id, Model model, Locale locale) {
+        StoredSite site = sites.get(id);
+        AnalysisRevision latest = analyses.latest(id).orElse(null);
+        model.addAttribute("site", site);
+        model.addAttribute("lastChange", WHEN.format(site.updatedAt()));
+        model.addAttribute("latest", latest);
+        model.addAttribute("method", ResultGeoJson.METHOD);
+        model.addAttribute("cautions", Cautions.lines());
+        model.addAttribute("levels", ProtectionLevel.values());
+        if (latest != null) {
+            model.addAttribute("analysedAt", WHEN.format(latest.createdAt()));
+            model.addAttribute("radius", number(latest.sphereRadius()));
+            model.addAttribute("summary", summary(latest));
+            model.addAttribute("svg", PlanSvg.render(latest.resultGeoJson(),
+                    (key, args) -> messages.getMessage(key, args, locale)));
+        }
+        return "sites/plan";
+    }
+
+    /** Runs a new analysis from the plan page and shows its result. */
+    @PostMapping("/sites/{id}/analyses")
+    public String analyse(@PathVariable long id, @RequestParam(required = false) String level,
+            @RequestParam(required = false) String radius) {
+        analyses.run(id, level, radius, null);
+        return "redirect:/sites/" + id;
+    }
+
+    private List<SiteRow> rows(Locale locale) {
+        Map<Long, AnalysisRevision> latest = analyses.latestSummaries();
+        return sites.list().stream().map(s -> {
+            AnalysisRevision r = latest.get(s.id());
+            String status;
+            boolean exposed = false;
+            if (r == null) {
+                status = messages.getMessage("sites.status.notAnalysed", null, locale);
+            } else if (r.fullyProtected()) {
+                status = messages.getMessage("sites.status.none", null, locale);
+            } else {
+                exposed = true;
+                status = messages.getMessage("sites.status.exposed", new Object[] {number(r.exposedRoofArea()),
+                    number(r.exposedEdgeLength()), r.exposedCorners(), r.facadeBands()}, locale);
+            }
+            return new SiteRow(s.id(), s.name(), r == null ? s.level().name() : r.level().name(),
+                    WHEN.format(latestOf(s.updatedAt(), r)), status, exposed);
+        }).toList();
+    }
+
+    private static Instant latestOf(Instant siteChange, AnalysisRevision r) {
+        return r == null || siteChange.isAfter(r.createdAt()) ? siteChange : r.createdAt();
+    }
+
+    /** Summary table rows: message key and value. */
+    private static List<Map.Entry<String, String>> summary(AnalysisRevision r) {
+        return List.of(
+                Map.entry("summary.revision", String.valueOf(r.revision())),
+                Map.entry("summary.exposedRoof", number(r.exposedRoofArea())),
+                Map.entry("summary.exposedEdges", number(r.exposedEdgeLength())),
+                Map.entry("summary.corners", String.valueOf(r.exposedCorners())),
+                Map.entry("summary.facadeBands", String.valueOf(r.facadeBands())),
+                Map.entry("summary.protectedGround", number(r.protectedGroundArea())),
+                Map.entry("summary.resolution", number(r.resolution())),
+                Map.entry("summary.engineTime", String.valueOf(r.engineMillis())),
+                Map.entry("summary.checksum", r.inputsSha256()));
+    }
+
+    /** A whole number when it is one, else one decimal. */
+    static String number(double value) {
+        double rounded = Math.round(value * 10) / 10.0;
+        return rounded == Math.rint(rounded) ? String.valueOf((long) rounded)
+                : String.format(Locale.ROOT, "%.1f", rounded);
+    }
+}

@@ -1,0 +1,37 @@
+package org.lpzplanner.sites;
+
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.http.HttpStatus;
+import org.springframework.web.bind.annotation.ControllerAdvice;
+import org.springframework.web.bind.annotation.ExceptionHandler;
+import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import org.springframework.web.servlet.ModelAndView;
+
+/**
+ * Errors of the site pages shown as pages: an unknown site (or an id that is not a number) gives a
+ * 404 page saying so; an unusable analysis setting gives a 400 page with the reason.
+ */
+@ControllerAdvice(assignableTypes = SitePageController.class)
+public class SitePageErrors {
+
+    @ExceptionHandler(SiteNotFoundException.class)
+    ModelAndView notFound(SiteNotFoundException e) {
+        ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
+        page.addObject("siteId", String.valueOf(e.siteId()));
+        return page;
+    }
+
+    @ExceptionHandler(MethodArgumentTypeMismatchException.class)
+    ModelAndView badId(MethodArgumentTypeMismatchException e) {
+        ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
+        page.addObject("siteId", String.valueOf(e.getValue()));
+        return page;
+    }
+
+    @ExceptionHandler(InvalidInputException.class)
+    ModelAndView invalid(InvalidInputException e) {
+        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
+        page.addObject("reason", e.getMessage());
+        return page;
+    }
+}

@@ -1,0 +1,28 @@
+package org.lpzplanner.sites;
+
+import java.time.Instant;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SphereSpec;
+
+/**
+ * A stored site: its name, the protection level it is assessed at, and the site file exactly as
+ * it was uploaded.
+ *
+ * @param id           database id
+ * @param name         display name chosen by the user (or taken from the file)
+ * @param level        protection level the site is assessed at by default
+ * @param customRadius sphere radius in metres replacing the level's own, or null
+ * @param sourceName   the uploaded file's name, e.g. {@code north-yard.geojson}
+ * @param sourceText   the uploaded file's content, verbatim
+ * @param createdAt    when it was stored
+ * @param updatedAt    when it or its analyses last changed
+ * @param version      optimistic-locking counter, raised on every change
+ */
+public record StoredSite(long id, String name, ProtectionLevel level, Double customRadius, String sourceName,
+        String sourceText, Instant createdAt, Instant updatedAt, long version) {
+
+    /** The sphere the site is assessed with by default. */
+    public SphereSpec sphere() {
+        return customRadius == null ? SphereSpec.of(level) : new SphereSpec(level, customRadius);
+    }
+}

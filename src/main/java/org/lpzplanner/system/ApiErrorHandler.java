@@ -1,0 +1,96 @@
+package org.lpzplanner.system;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import org.lpzplanner.engine.io.SiteFormatException;
+import org.lpzplanner.sites.SiteNotFoundException;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.springframework.dao.OptimisticLockingFailureException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.HttpStatusCode;
+import org.springframework.http.ResponseEntity;
+import org.springframework.web.ErrorResponse;
+import org.springframework.web.bind.annotation.ExceptionHandler;
+import org.springframework.web.bind.annotation.RestController;
+import org.springframework.web.bind.annotation.RestControllerAdvice;
+import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import org.springframework.web.multipart.MaxUploadSizeExceededException;
+import org.springframework.web.multipart.MultipartException;
+
+/**
+ * Turns every failure of the JSON API into a JSON body {@code {"error": "..."}} with a fitting
+ * status, never a stack trace: 400 for unusable input (site files also name {@code file},
+ * {@code feature}, {@code featureName}, {@code line} and {@code field} where known), 404 for unknown
+ * sites, 409 for concurrent changes, 413 for oversized uploads, 500 with a plain message otherwise.
+ */
+@RestControllerAdvice(annotations = RestController.class)
+public class ApiErrorHandler {
+
+    private static final Logger LOG = LoggerFactory.getLogger(ApiErrorHandler.class);
+
+    @ExceptionHandler(SiteFormatException.class)
+    ResponseEntity<Map<String, Object>> siteFormat(SiteFormatException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("file", e.source());
+        body.put("feature", e.featureIndex());
+        body.put("featureName", e.featureName());
+        body.put("line", e.line());
+        body.put("field", e.field());
+        body.put("problem", e.problem());
+        return ResponseEntity.badRequest().body(body);
+    }
+
+    @ExceptionHandler(InvalidInputException.class)
+    ResponseEntity<Map<String, Object>> invalid(InvalidInputException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("field", e.field());
+        return ResponseEntity.badRequest().body(body);
+    }
+
+    @ExceptionHandler(SiteNotFoundException.class)
+    ResponseEntity<Map<String, Object>> notFound(SiteNotFoundException e) {
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    }
+
+    @ExceptionHandler(MethodArgumentTypeMismatchException.class)
+    ResponseEntity<Map<String, Object>> typeMismatch(MethodArgumentTypeMismatchException e) {
+        return ResponseEntity.badRequest().body(error(e.getName() + " must be a whole number, got \""
+                + e.getValue() + "\""));
+    }
+
+    @ExceptionHandler(MaxUploadSizeExceededException.class)
+    ResponseEntity<Map<String, Object>> tooLarge(MaxUploadSizeExceededException e) {
+        return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).body(error("the file is too large to upload"));
+    }
+
+    @ExceptionHandler(MultipartException.class)
+    ResponseEntity<Map<String, Object>> multipart(MultipartException e) {
+        return ResponseEntity.badRequest().body(error("the upload could not be read as a multipart form"));
+    }
+
+    @ExceptionHandler(OptimisticLockingFailureException.class)
+    ResponseEntity<Map<String, Object>> conflict(OptimisticLockingFailureException e) {
+        return ResponseEntity.status(HttpStatus.CONFLICT).body(error(
+                "the site was changed or removed meanwhile; reload it and try again"));
+    }
+
+    /** Spring's own request errors (missing parameter, wrong method, …) keep their status. */
+    @ExceptionHandler(Exception.class)
+    ResponseEntity<Map<String, Object>> other(Exception e) {
+        if (e instanceof ErrorResponse response) {
+            HttpStatusCode status = response.getStatusCode();
+            String detail = response.getBody().getDetail();
+            return ResponseEntity.status(status).body(error(detail == null ? "the request cannot be handled" : detail));
+        }
+        LOG.error("Unexpected failure of an API request", e);
+        return ResponseEntity.status(HttpStatus.INTERNAL_SERVER_ERROR).body(error(
+                "something went wrong on the server; the request was not completed"));
+    }
+
+    private static Map<String, Object> error(String message) {
+        Map<String, Object> body = new LinkedHashMap<>();
+        body.put("error", message);
+        return body;
+    }
+}
