@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 
 /**
  * The command-line entry point: picks the command named by the first argument, runs it and turns
@@ -99,6 +100,8 @@ public final class CommandLine {
             out.flush();
             return OK;
         } catch (CliException e) {
+            return error(err, e.getMessage(), INVALID);
+        } catch (AnalysisTooLargeException e) {
             return error(err, e.getMessage(), INVALID);
         } catch (OutOfMemoryError e) {
             return error(err, "the analysis ran out of memory; try a coarser --resolution, or give Java more"

@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
 import org.springframework.web.bind.annotation.ControllerAdvice;
@@ -9,7 +10,8 @@ import org.springframework.web.servlet.ModelAndView;
 
 /**
  * Errors of the site pages shown as pages: an unknown site (or an id that is not a number) gives a
- * 404 page saying so; an unusable analysis setting gives a 400 page with the reason.
+ * 404 page saying so; an unusable analysis setting, or an analysis too large to run, gives a 400
+ * page with the reason.
  */
 @ControllerAdvice(assignableTypes = SitePageController.class)
 public class SitePageErrors {
@@ -25,6 +27,13 @@ public class SitePageErrors {
     ModelAndView badId(MethodArgumentTypeMismatchException e) {
         ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
         page.addObject("siteId", String.valueOf(e.getValue()));
+        return page;
+    }
+
+    @ExceptionHandler(AnalysisTooLargeException.class)
+    ModelAndView tooLarge(AnalysisTooLargeException e) {
+        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
+        page.addObject("reason", e.getMessage());
         return page;
     }
 

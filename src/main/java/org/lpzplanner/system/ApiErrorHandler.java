@@ -11,6 +11,7 @@ import org.springframework.http.HttpStatus;
 import org.springframework.http.HttpStatusCode;
 import org.springframework.http.ResponseEntity;
 import org.springframework.web.ErrorResponse;
+import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
@@ -38,6 +39,14 @@ public class ApiErrorHandler {
         body.put("line", e.line());
         body.put("field", e.field());
         body.put("problem", e.problem());
+        return ResponseEntity.badRequest().body(body);
+    }
+
+    @ExceptionHandler(AnalysisTooLargeException.class)
+    ResponseEntity<Map<String, Object>> tooLarge(AnalysisTooLargeException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("field", "resolution");
+        body.put("suggestedResolution", e.suggestedResolution());
         return ResponseEntity.badRequest().body(body);
     }
 

@@ -159,4 +159,18 @@ class CommandLineErrorsTest {
         assertInvalid(CliRun.of("envelope", "--site", lonLatSite, "--level", "II", "--points", csv),
                 "metres.csv, line 3", "longitude");
     }
+
+    @Test
+    void analysisTooLargeForTheResolutionIsRefusedWithASuggestion() {
+        // two sheds 6 km apart: at 0.5 m the grid would hold about 150 million cells
+        String farApart = TestFiles.write(folder, "far-apart.geojson",
+                "{\"type\":\"FeatureCollection\",\"coordinates\":\"local-metres\",\"features\":["
+                + "{\"type\":\"Feature\",\"properties\":{\"kind\":\"structure\",\"height\":5},"
+                + "\"geometry\":{\"type\":\"Polygon\",\"coordinates\":[[[0,0],[10,0],[10,10],[0,10],[0,0]]]}},"
+                + "{\"type\":\"Feature\",\"properties\":{\"kind\":\"structure\",\"height\":5},"
+                + "\"geometry\":{\"type\":\"Polygon\",\"coordinates\":[[[6000,6000],[6010,6000],[6010,6010],[6000,6010],[6000,6000]]]}}]}")
+                .toString();
+        assertInvalid(CliRun.of("analyze", "--site", farApart, "--level", "II", "--resolution", "0.5"),
+                "cells", "choose a resolution of");
+    }
 }

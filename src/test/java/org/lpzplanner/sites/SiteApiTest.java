@@ -183,4 +183,23 @@ class SiteApiTest {
         mvc.perform(delete("/api/sites/" + id)).andExpect(status().isNoContent());
         mvc.perform(get("/api/sites/" + id)).andExpect(status().isNotFound());
     }
+
+    @Test
+    void analysisTooLargeForItsResolutionIsRefusedWithASuggestion() throws Exception {
+        // two small sheds 6 km apart: at 0.5 m the grid would hold about 150 million cells
+        String site = "{\"type\":\"FeatureCollection\",\"coordinates\":\"local-metres\",\"features\":["
+                + "{\"type\":\"Feature\",\"properties\":{\"kind\":\"structure\",\"height\":5},"
+                + "\"geometry\":{\"type\":\"Polygon\",\"coordinates\":[[[0,0],[10,0],[10,10],[0,10],[0,0]]]}},"
+                + "{\"type\":\"Feature\",\"properties\":{\"kind\":\"structure\",\"height\":5},"
+                + "\"geometry\":{\"type\":\"Polygon\",\"coordinates\":[[[6000,6000],[6010,6000],[6010,6010],[6000,6010],[6000,6000]]]}}]}";
+        long id = upload(new MockMultipartFile("file", "far-apart.geojson", "application/geo+json",
+                site.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+
+        mvc.perform(post("/api/sites/" + id + "/analyses").param("resolution", "0.5"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.field").value("resolution"))
+                .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("choose a resolution")))
+                .andExpect(jsonPath("$.suggestedResolution").isNumber());
+        mvc.perform(get("/api/sites/" + id + "/analyses/latest")).andExpect(status().isNotFound());
+    }
 }

@@ -13,6 +13,12 @@ import org.lpzplanner.engine.geom.SiteSurface;
  */
 public final class EnvelopeOp {
 
+    /**
+     * Largest grid an analysis may use: about 12 arrays of 8-byte values per cell at peak, so
+     * 12 million cells stay near 1 GiB.
+     */
+    public static final long MAX_CELLS = 12_000_000L;
+
     private EnvelopeOp() {
     }
 
@@ -78,9 +84,18 @@ public final class EnvelopeOp {
         return new EnvelopeField(centres, new EnvelopeRefiner(centres, index), vertexLower);
     }
 
+    /**
+     * @throws AnalysisTooLargeException when the grid at spacing h would exceed {@link #MAX_CELLS};
+     *         nothing is computed then
+     */
     public static EnvelopeField compute(SiteSurface surface, double radius, double h) {
         List<Support> supports = Supports.of(surface, radius);
         Grid grid = gridFor(surface, supports, radius, h);
+        long cells = (long) grid.nx() * grid.ny();
+        if (cells > MAX_CELLS) {
+            double fits = Math.ceil(h * Math.sqrt((double) cells / MAX_CELLS) * 1.05 * 100) / 100;
+            throw new AnalysisTooLargeException(cells, h, fits);
+        }
         CentreSurface centres = CentreSurface.compute(grid, supports, radius);
         double[] vertexLower = BallErosion.erode(centres.vertexLowers(), grid.nx() + 1, grid.ny() + 1, h, radius);
         SupportIndex index = new SupportIndex(supports, grid, Math.max(4 * h, radius / 4));
