@@ -1,0 +1,42 @@
+package org.lpzplanner.browser;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import org.junit.jupiter.api.Assumptions;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+
+/**
+ * A real headless Chromium for browser tests, from the Debian packages {@code chromium} and
+ * {@code chromium-driver}. Where they are missing the tests are skipped with a message, except
+ * under CI (environment variable CI=true), where a missing browser fails the run.
+ */
+final class BrowserSupport {
+
+    static final Path BROWSER = Path.of("/usr/bin/chromium");
+    static final Path DRIVER = Path.of("/usr/bin/chromedriver");
+
+    private BrowserSupport() {
+    }
+
+    static ChromeDriver start() {
+        boolean present = Files.isExecutable(BROWSER) && Files.isExecutable(DRIVER);
+        if (!present && "true".equalsIgnoreCase(System.getenv("CI"))) {
+            throw new IllegalStateException("browser tests need " + BROWSER + " and " + DRIVER
+                    + " (Debian packages chromium and chromium-driver); .ci/run installs them");
+        }
+        Assumptions.assumeTrue(present, "browser tests skipped: install the Debian packages chromium and chromium-driver");
+        ChromeOptions options = new ChromeOptions();
+        options.setBinary(BROWSER.toFile());
+        options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
+                "--disable-background-networking", "--disable-component-update", "--disable-sync",
+                "--no-first-run", "--window-size=1400,1400");
+        ChromeDriverService service = new ChromeDriverService.Builder().usingDriverExecutable(DRIVER.toFile())
+                .usingAnyFreePort().build();
+        ChromeDriver driver = new ChromeDriver(service, options);
+        driver.manage().timeouts().implicitlyWait(Duration.ofSeconds(5));
+        return driver;
+    }
+}
