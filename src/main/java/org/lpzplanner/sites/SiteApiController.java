@@ -8,24 +8,32 @@ import java.util.Map;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.AnalysisSummary;
+import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
 import org.springframework.web.bind.annotation.DeleteMapping;
 import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PatchMapping;
 import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.multipart.MultipartFile;
+import tools.jackson.databind.JsonNode;
 
 /**
  * JSON API for sites: list ({@code GET /api/sites}), upload ({@code POST /api/sites}, multipart
  * {@code file} with optional {@code name}, {@code level}, {@code radius}), one site
- * ({@code GET /api/sites/{id}}), removal ({@code DELETE /api/sites/{id}}) and the stored file
- * ({@code GET /api/sites/{id}/file}). Errors are JSON, see
+ * ({@code GET /api/sites/{id}}), changes ({@code PATCH /api/sites/{id}}, a JSON object with the
+ * site's {@code version} and any of {@code name}, {@code level}, {@code radius}; a null radius goes
+ * back to the level's own), a copy ({@code POST /api/sites/{id}/duplicate}), removal
+ * ({@code DELETE /api/sites/{id}}, optionally {@code ?version=N}), the stored file ({@code GET /api/sites/{id}/file}) and the
+ * files corrections replaced ({@code GET /api/sites/{id}/file/versions} and
+ * {@code .../versions/{number}}). A stale {@code version} answers 409. Errors are JSON, see
  * {@link org.lpzplanner.system.ApiErrorHandler}.
  */
 @RestController
@@ -45,12 +53,16 @@ public class SiteApiController {
      * {@code lastChange} is when the site or its analyses last changed.
      */
     public record SiteView(long id, String name, String level, Double customRadius, String fileName,
-            Instant createdAt, Instant lastChange, AnalysisSummary latest) {
+            Instant createdAt, Instant lastChange, long version, AnalysisSummary latest) {
 
         static SiteView of(StoredSite s, AnalysisRevision latest) {
             return new SiteView(s.id(), s.name(), s.level().name(), s.customRadius(), s.sourceName(), s.createdAt(),
-                    s.updatedAt(), latest == null ? null : AnalysisSummary.of(latest));
+                    s.updatedAt(), s.version(), latest == null ? null : AnalysisSummary.of(latest));
         }
+    }
+
+    /** An earlier site file: its number, name, size in bytes and when a correction replaced it. */
+    public record FileVersionView(int number, String fileName, int bytes, Instant replacedAt) {
     }
 
     @GetMapping
@@ -73,9 +85,74 @@ public class SiteApiController {
         return SiteView.of(site, analyses.latest(id).orElse(null));
     }
 
+    @PatchMapping(value = "/{id}", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public SiteView update(@PathVariable long id, @RequestBody JsonNode body) {
+        if (!body.isObject()) {
+            throw new InvalidInputException("body", "the body must be a JSON object with \"version\" and any of"
+                    + " \"name\", \"level\", \"radius\"");
+        }
+        JsonNode version = body.path("version");
+        if (!version.isIntegralNumber()) {
+            throw new InvalidInputException("version", "version is required: the site's version as last read"
+                    + " (GET /api/sites/" + id + ")");
+        }
+        String name = text(body, "name");
+        String level = text(body, "level");
+        String radius = body.has("radius") && body.get("radius").isNull() ? "" : text(body, "radius");
+        StoredSite site = sites.update(id, version.longValue(), name, level, radius);
+        return SiteView.of(site, analyses.latest(id).orElse(null));
+    }
+
+    @PostMapping("/{id}/duplicate")
+    public ResponseEntity<SiteView> duplicate(@PathVariable long id) {
+        StoredSite copy = sites.duplicate(id);
+        return ResponseEntity.created(URI.create("/api/sites/" + copy.id())).body(SiteView.of(copy, null));
+    }
+
+    @GetMapping("/{id}/file/versions")
+    public List<FileVersionView> fileVersions(@PathVariable long id) {
+        return sites.fileVersions(id).stream().map(v -> new FileVersionView(v.number(), v.sourceName(),
+                v.sourceText().getBytes(StandardCharsets.UTF_8).length, v.replacedAt())).toList();
+    }
+
+    /** An earlier site file exactly as it was stored. */
+    @GetMapping("/{id}/file/versions/{number}")
+    public ResponseEntity<byte[]> fileVersion(@PathVariable long id, @PathVariable int number) {
+        SiteFileVersion version = sites.fileVersion(id, number);
+        return textFile(version.sourceName(), version.sourceText());
+    }
+
+    /** A JSON string or number member as text, null when absent. */
+    private static String text(JsonNode body, String field) {
+        JsonNode node = body.get(field);
+        if (node == null) {
+            return null;
+        }
+        if (node.isString()) {
+            return node.stringValue();
+        }
+        if (node.isNumber()) {
+            return node.asString();
+        }
+        throw new InvalidInputException(field, field + " must be a string" + ("name".equals(field) ? "" : " or number"));
+    }
+
+    private static ResponseEntity<byte[]> textFile(String fileName, String text) {
+        return ResponseEntity.ok()
+                .header(HttpHeaders.CONTENT_DISPOSITION, ContentDisposition.attachment()
+                        .filename(fileName, StandardCharsets.UTF_8).build().toString())
+                .contentType(new MediaType("text", "plain", StandardCharsets.UTF_8))
+                .body(text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** With {@code ?version=N} the site is removed only while it is still at that version (else 409). */
     @DeleteMapping("/{id}")
-    public ResponseEntity<Void> delete(@PathVariable long id) {
-        sites.delete(id);
+    public ResponseEntity<Void> delete(@PathVariable long id, @RequestParam(required = false) Long version) {
+        if (version == null) {
+            sites.delete(id);
+        } else {
+            sites.delete(id, version);
+        }
         return ResponseEntity.noContent().build();
     }
 
@@ -83,10 +160,6 @@ public class SiteApiController {
     @GetMapping("/{id}/file")
     public ResponseEntity<byte[]> file(@PathVariable long id) {
         StoredSite site = sites.get(id);
-        return ResponseEntity.ok()
-                .header(HttpHeaders.CONTENT_DISPOSITION, ContentDisposition.attachment()
-                        .filename(site.sourceName(), StandardCharsets.UTF_8).build().toString())
-                .contentType(new MediaType("text", "plain", StandardCharsets.UTF_8))
-                .body(site.sourceText().getBytes(StandardCharsets.UTF_8));
+        return textFile(site.sourceName(), site.sourceText());
     }
 }

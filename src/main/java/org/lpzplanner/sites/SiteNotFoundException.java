@@ -12,6 +12,12 @@ public class SiteNotFoundException extends RuntimeException {
         this.siteId = siteId;
     }
 
+    /** For something of the site that is missing, such as an earlier file; the message says what. */
+    public SiteNotFoundException(long siteId, String message) {
+        super(message);
+        this.siteId = siteId;
+    }
+
     public long siteId() {
         return siteId;
     }

@@ -9,9 +9,6 @@ import java.util.Locale;
 import java.util.Map;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
-import org.lpzplanner.analysis.PlanSvg;
-import org.lpzplanner.analysis.ResultGeoJson;
-import org.lpzplanner.common.Cautions;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.system.InvalidInputException;
@@ -34,21 +31,25 @@ import org.springframework.web.servlet.ModelAndView;
 @Controller
 public class SitePageController {
 
-    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
+    static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
 
     private final SiteService sites;
     private final AnalysisService analyses;
     private final MessageSource messages;
+    private final PlanPage planPage;
 
-    public SitePageController(SiteService sites, AnalysisService analyses, MessageSource messages) {
+    public SitePageController(SiteService sites, AnalysisService analyses, MessageSource messages,
+            PlanPage planPage) {
         this.sites = sites;
         this.analyses = analyses;
         this.messages = messages;
+        this.planPage = planPage;
     }
 
     /** One line of the site list; {@code status} is the exposure at a glance, already worded. */
-    public record SiteRow(long id, String name, String level, String lastChange, String status, boolean exposed) {
+    public record SiteRow(long id, String name, String level, String lastChange, String status, boolean exposed,
+            long version) {
     }
 
     @GetMapping("/")
@@ -82,21 +83,7 @@ public class SitePageController {
 
     @GetMapping("/sites/{id}")
     public String plan(@PathVariable long id, Model model, Locale locale) {
-        StoredSite site = sites.get(id);
-        AnalysisRevision latest = analyses.latest(id).orElse(null);
-        model.addAttribute("site", site);
-        model.addAttribute("lastChange", WHEN.format(site.updatedAt()));
-        model.addAttribute("latest", latest);
-        model.addAttribute("method", ResultGeoJson.METHOD);
-        model.addAttribute("cautions", Cautions.lines());
-        model.addAttribute("levels", ProtectionLevel.values());
-        if (latest != null) {
-            model.addAttribute("analysedAt", WHEN.format(latest.createdAt()));
-            model.addAttribute("radius", number(latest.sphereRadius()));
-            model.addAttribute("summary", summary(latest));
-            model.addAttribute("svg", PlanSvg.render(latest.resultGeoJson(),
-                    (key, args) -> messages.getMessage(key, args, locale)));
-        }
+        model.addAllAttributes(planPage.attributes(id, locale));
         return "sites/plan";
     }
 
@@ -124,26 +111,12 @@ public class SitePageController {
                     number(r.exposedEdgeLength()), r.exposedCorners(), r.facadeBands()}, locale);
             }
             return new SiteRow(s.id(), s.name(), r == null ? s.level().name() : r.level().name(),
-                    WHEN.format(latestOf(s.updatedAt(), r)), status, exposed);
+                    WHEN.format(latestOf(s.updatedAt(), r)), status, exposed, s.version());
         }).toList();
     }
 
     private static Instant latestOf(Instant siteChange, AnalysisRevision r) {
         return r == null || siteChange.isAfter(r.createdAt()) ? siteChange : r.createdAt();
-    }
-
-    /** Summary table rows: message key and value. */
-    private static List<Map.Entry<String, String>> summary(AnalysisRevision r) {
-        return List.of(
-                Map.entry("summary.revision", String.valueOf(r.revision())),
-                Map.entry("summary.exposedRoof", number(r.exposedRoofArea())),
-                Map.entry("summary.exposedEdges", number(r.exposedEdgeLength())),
-                Map.entry("summary.corners", String.valueOf(r.exposedCorners())),
-                Map.entry("summary.facadeBands", String.valueOf(r.facadeBands())),
-                Map.entry("summary.protectedGround", number(r.protectedGroundArea())),
-                Map.entry("summary.resolution", number(r.resolution())),
-                Map.entry("summary.engineTime", String.valueOf(r.engineMillis())),
-                Map.entry("summary.checksum", r.inputsSha256()));
     }
 
     /** A whole number when it is one, else one decimal. */

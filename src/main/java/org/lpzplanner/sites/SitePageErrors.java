@@ -13,7 +13,7 @@ import org.springframework.web.servlet.ModelAndView;
  * 404 page saying so; an unusable analysis setting, or an analysis too large to run, gives a 400
  * page with the reason.
  */
-@ControllerAdvice(assignableTypes = SitePageController.class)
+@ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class})
 public class SitePageErrors {
 
     @ExceptionHandler(SiteNotFoundException.class)
@@ -25,6 +25,11 @@ public class SitePageErrors {
 
     @ExceptionHandler(MethodArgumentTypeMismatchException.class)
     ModelAndView badId(MethodArgumentTypeMismatchException e) {
+        if (!"id".equals(e.getName())) {
+            ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
+            page.addObject("reason", e.getName() + " must be a whole number, got \"" + e.getValue() + "\"");
+            return page;
+        }
         ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
         page.addObject("siteId", String.valueOf(e.getValue()));
         return page;

@@ -73,6 +73,85 @@ public class SiteRepository {
         }
     }
 
+    /**
+     * Changes name, level and custom radius, provided nobody changed the site since
+     * {@code expectedVersion} was read.
+     *
+     * @throws OptimisticLockingFailureException when the stored version differs
+     */
+    public void updateSettings(long id, long expectedVersion, String name, ProtectionLevel level,
+            Double customRadius, Instant now) {
+        int rows = jdbc.sql("UPDATE sites SET name = ?, protection_level = ?, custom_radius = ?, updated_at = ?,"
+                        + " version = version + 1 WHERE id = ? AND version = ?")
+                .params(name, level.name(), customRadius, Timestamp.from(now), id, expectedVersion).update();
+        if (rows == 0) {
+            throw stale(id);
+        }
+    }
+
+    /**
+     * Replaces the site file text, provided nobody changed the site since {@code expectedVersion}.
+     *
+     * @throws OptimisticLockingFailureException when the stored version differs
+     */
+    public void replaceFile(long id, long expectedVersion, String sourceText, Instant now) {
+        int rows = jdbc.sql("UPDATE sites SET source_text = ?, updated_at = ?, version = version + 1"
+                        + " WHERE id = ? AND version = ?")
+                .params(sourceText, Timestamp.from(now), id, expectedVersion).update();
+        if (rows == 0) {
+            throw stale(id);
+        }
+    }
+
+    /**
+     * Deletes a site provided nobody changed it since {@code expectedVersion}; false when there was
+     * no such site.
+     *
+     * @throws OptimisticLockingFailureException when the site exists at another version
+     */
+    public boolean delete(long id, long expectedVersion) {
+        if (jdbc.sql("DELETE FROM sites WHERE id = ? AND version = ?").params(id, expectedVersion).update() > 0) {
+            return true;
+        }
+        if (findById(id).isPresent()) {
+            throw stale(id);
+        }
+        return false;
+    }
+
+    /** Keeps a replaced site file as the site's next earlier file and returns it. */
+    public SiteFileVersion insertFileVersion(long siteId, String sourceName, String sourceText, Instant replacedAt) {
+        Integer max = jdbc.sql("SELECT MAX(file_number) FROM site_file_versions WHERE site_id = ?").param(siteId)
+                .query(Integer.class).optional().orElse(null);
+        int number = max == null ? 1 : max + 1;
+        jdbc.sql("INSERT INTO site_file_versions (site_id, file_number, source_name, source_text, replaced_at)"
+                        + " VALUES (?, ?, ?, ?, ?)")
+                .params(siteId, number, sourceName, sourceText, Timestamp.from(replacedAt)).update();
+        return new SiteFileVersion(number, sourceName, sourceText, replacedAt);
+    }
+
+    /** The site's earlier files, oldest first. */
+    public List<SiteFileVersion> findFileVersions(long siteId) {
+        return jdbc.sql("SELECT file_number, source_name, source_text, replaced_at FROM site_file_versions"
+                        + " WHERE site_id = ? ORDER BY file_number")
+                .param(siteId).query(SiteRepository::fileRow).list();
+    }
+
+    public Optional<SiteFileVersion> findFileVersion(long siteId, int number) {
+        return jdbc.sql("SELECT file_number, source_name, source_text, replaced_at FROM site_file_versions"
+                        + " WHERE site_id = ? AND file_number = ?")
+                .params(siteId, number).query(SiteRepository::fileRow).optional();
+    }
+
+    private static OptimisticLockingFailureException stale(long id) {
+        return new OptimisticLockingFailureException("site " + id + " was changed or deleted meanwhile");
+    }
+
+    private static SiteFileVersion fileRow(ResultSet rs, int rowNum) throws SQLException {
+        return new SiteFileVersion(rs.getInt("file_number"), rs.getString("source_name"),
+                rs.getString("source_text"), rs.getTimestamp("replaced_at").toInstant());
+    }
+
     private static StoredSite row(ResultSet rs, int rowNum) throws SQLException {
         double radius = rs.getDouble("custom_radius");
         Double customRadius = rs.wasNull() ? null : radius;

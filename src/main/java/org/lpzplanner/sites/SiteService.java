@@ -57,10 +57,7 @@ public class SiteService {
         if (siteName == null || siteName.isBlank()) {
             siteName = sourceName;
         }
-        if (siteName.length() > MAX_NAME_LENGTH) {
-            throw new InvalidInputException("name", "name must be at most " + MAX_NAME_LENGTH
-                    + " characters, got " + siteName.length());
-        }
+        checkName(siteName);
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         return sites.insert(siteName, level, radius, sourceName, text, now);
     }
@@ -82,6 +79,126 @@ public class SiteService {
     public void delete(long id) {
         if (!sites.delete(id)) {
             throw new SiteNotFoundException(id);
+        }
+    }
+
+    /**
+     * Removes a site with all its analyses, provided it is still at {@code expectedVersion}.
+     *
+     * @throws SiteNotFoundException when no site has this id
+     * @throws org.springframework.dao.OptimisticLockingFailureException when it changed meanwhile
+     */
+    @Transactional
+    public void delete(long id, long expectedVersion) {
+        if (!sites.delete(id, expectedVersion)) {
+            throw new SiteNotFoundException(id);
+        }
+    }
+
+    /**
+     * Changes a site's name, protection level or custom radius; a null value keeps the stored one,
+     * a blank radius goes back to the level's own radius.
+     *
+     * @throws SiteNotFoundException     when no site has this id
+     * @throws InvalidInputException     when a value cannot be used (nothing changes)
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site is no longer
+     *         at {@code expectedVersion} (nothing changes)
+     */
+    @Transactional
+    public StoredSite update(long id, long expectedVersion, String name, String levelText, String radiusText) {
+        StoredSite site = get(id);
+        String newName = site.name();
+        if (name != null) {
+            newName = name.strip();
+            if (newName.isEmpty()) {
+                throw new InvalidInputException("name", "name must not be empty");
+            }
+            checkName(newName);
+        }
+        ProtectionLevel level = levelText == null ? site.level() : Settings.level(levelText, site.level());
+        Double radius = radiusText == null ? site.customRadius() : Settings.radius(radiusText);
+        sites.updateSettings(id, expectedVersion, newName, level, radius, now());
+        return get(id);
+    }
+
+    /**
+     * Stores a copy of a site: the same file, byte for byte, and the same settings, named
+     * "&lt;name&gt; (copy)"; its analyses are not copied.
+     *
+     * @throws SiteNotFoundException when no site has this id
+     */
+    @Transactional
+    public StoredSite duplicate(long id) {
+        StoredSite site = get(id);
+        String suffix = " (copy)";
+        String base = site.name();
+        if (base.length() + suffix.length() > MAX_NAME_LENGTH) {
+            base = base.substring(0, MAX_NAME_LENGTH - suffix.length()).strip();
+        }
+        return sites.insert(base + suffix, site.level(), site.customRadius(), site.sourceName(), site.sourceText(),
+                now());
+    }
+
+    /**
+     * Corrects one structure by writing a corrected site file in the same format, read back through
+     * the engine's reader; the file it replaces is kept as an earlier file of the site.
+     *
+     * @throws SiteNotFoundException when no site has this id
+     * @throws InvalidInputException when a typed value cannot be used (nothing changes)
+     * @throws SiteFormatException   when the corrected file is not a valid site, naming the field
+     *                               (nothing changes)
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site is no longer
+     *         at {@code expectedVersion} (nothing changes)
+     */
+    @Transactional
+    public StoredSite correctStructure(long id, long expectedVersion, StructureCorrection correction) {
+        StoredSite site = get(id);
+        int count = document(site).site().structures().size();
+        if (correction.index() < 0 || correction.index() >= count) {
+            throw new InvalidInputException("structure", "structure must be a number from 1 to " + count
+                    + ", got " + (correction.index() + 1));
+        }
+        String corrected = SiteFileCorrector.correct(site.sourceText(), site.sourceName(), correction);
+        SiteFiles.read(corrected, site.sourceName());
+        Instant now = now();
+        sites.replaceFile(id, expectedVersion, corrected, now);
+        sites.insertFileVersion(id, site.sourceName(), site.sourceText(), now);
+        return get(id);
+    }
+
+    /** The structures of the stored site file, in file order. */
+    public List<StructureRow> structures(StoredSite site) {
+        return StructureRow.of(document(site).site().structures());
+    }
+
+    /** Whether the site's file is GeoJSON (all fields can be corrected) rather than WKT (heights only). */
+    public boolean isGeoJson(StoredSite site) {
+        return SiteFileCorrector.isGeoJson(site.sourceText(), site.sourceName());
+    }
+
+    /** The files corrections replaced, oldest first. @throws SiteNotFoundException for an unknown site */
+    @Transactional(readOnly = true)
+    public List<SiteFileVersion> fileVersions(long id) {
+        get(id);
+        return sites.findFileVersions(id);
+    }
+
+    /** One earlier file. @throws SiteNotFoundException for an unknown site or file number */
+    @Transactional(readOnly = true)
+    public SiteFileVersion fileVersion(long id, int number) {
+        get(id);
+        return sites.findFileVersion(id, number).orElseThrow(() -> new SiteNotFoundException(id,
+                "site " + id + " has no earlier file number " + number));
+    }
+
+    private Instant now() {
+        return clock.instant().truncatedTo(ChronoUnit.MILLIS);
+    }
+
+    private static void checkName(String name) {
+        if (name.length() > MAX_NAME_LENGTH) {
+            throw new InvalidInputException("name", "name must be at most " + MAX_NAME_LENGTH
+                    + " characters, got " + name.length());
         }
     }
 

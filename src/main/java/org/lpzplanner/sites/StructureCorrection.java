@@ -1,0 +1,29 @@
+package org.lpzplanner.sites;
+
+/**
+ * A correction of one structure as typed in: each value is text, and a blank value keeps what the
+ * file says.
+ *
+ * @param index       0-based position of the structure among the site's structures (file order)
+ * @param height      wall-top height above ground, metres
+ * @param roof        roof form: {@code flat}, {@code gable}, {@code hip} or {@code shed}
+ * @param ridgeHeight ridge (or high side) height above ground, metres
+ * @param bearing     ridge bearing of a gable roof, or high-side bearing of a shed roof, degrees
+ * @param parapet     parapet height above a flat roof, metres
+ */
+public record StructureCorrection(int index, String height, String roof, String ridgeHeight, String bearing,
+        String parapet) {
+
+    static boolean given(String text) {
+        return text != null && !text.isBlank();
+    }
+
+    /** Whether anything other than the height is to change. */
+    boolean changesRoof() {
+        return given(roof) || given(ridgeHeight) || given(bearing) || given(parapet);
+    }
+
+    boolean isEmpty() {
+        return !given(height) && !changesRoof();
+    }
+}

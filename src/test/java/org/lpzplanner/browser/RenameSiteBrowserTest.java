@@ -1,0 +1,65 @@
+package org.lpzplanner.browser;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.test.web.server.LocalServerPort;
+
+/**
+ * In a real browser: rename a stored site with the form on its plan page, and find the new name,
+ * shown as text, on the plan and in the site list.
+ */
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+class RenameSiteBrowserTest {
+
+    @LocalServerPort
+    int port;
+
+    @Autowired
+    SiteService sites;
+
+    private ChromeDriver browser;
+
+    @BeforeEach
+    void openBrowser() {
+        browser = BrowserSupport.start();
+    }
+
+    @AfterEach
+    void closeBrowser() {
+        if (browser != null) {
+            browser.quit();
+        }
+    }
+
+    @Test
+    void renamingASiteOnItsPlanPageShowsTheNewNameOnThePlanAndInTheList() throws Exception {
+        StoredSite site = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Old shed name", "II", null);
+
+        browser.get("http://localhost:" + port + "/sites/" + site.id());
+        WebElement name = browser.findElement(By.cssSelector("#rename-form input[name=name]"));
+        name.clear();
+        name.sendKeys("Renamed <quay> shed");
+        browser.findElement(By.cssSelector("#rename-form button[type=submit]")).click();
+
+        assertThat(browser.getCurrentUrl()).endsWith("/sites/" + site.id());
+        assertThat(browser.findElement(By.tagName("h1")).getText()).isEqualTo("Renamed <quay> shed");
+        assertThat(sites.get(site.id()).name()).isEqualTo("Renamed <quay> shed");
+
+        browser.get("http://localhost:" + port + "/");
+        assertThat(browser.findElement(By.cssSelector("a[href='/sites/" + site.id() + "']")).getText())
+                .isEqualTo("Renamed <quay> shed");
+    }
+}
