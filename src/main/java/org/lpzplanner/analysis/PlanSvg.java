@@ -12,6 +12,12 @@ import tools.jackson.databind.json.JsonMapper;
  * objects, protected open ground, exposed roof areas, facade bands, exposed edges and corners,
  * air-termination parts, a scale bar, a north arrow and a legend. North is up (the y axis is
  * flipped). Every text from the site file is escaped; every other text comes from {@link Labels}.
+ *
+ * <p>The {@code <svg>} element carries its frame so that a script can turn a point of the drawing
+ * back into local metres: {@code x = originX + (svgX - margin) / scale} and, the y axis being
+ * flipped, {@code y = originY - (svgY - margin) / scale} ({@code data-origin-x},
+ * {@code data-origin-y}, {@code data-scale} in SVG units per metre, {@code data-margin},
+ * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}.
  */
 public final class PlanSvg {
 
@@ -57,8 +63,10 @@ public final class PlanSvg {
 
         StringBuilder svg = new StringBuilder();
         svg.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"plan\" viewBox=\"0 0 %.0f %.0f\""
-                + " width=\"%.0f\" height=\"%.0f\" role=\"img\" aria-label=\"%s\">", WIDTH, height, WIDTH, height,
-                escape(labels.text("plan.title", text(root, "name")))));
+                + " width=\"%.0f\" height=\"%.0f\" role=\"img\" aria-label=\"%s\" data-origin-x=\"%s\" data-origin-y=\"%s\""
+                + " data-scale=\"%s\" data-margin=\"%s\" data-y-flipped=\"true\" data-draw-height=\"%.0f\">",
+                WIDTH, height, WIDTH, height, escape(labels.text("plan.title", text(root, "name"))),
+                exact(frame.minX()), exact(frame.maxY()), exact(frame.scale()), exact(MARGIN), drawHeight));
         svg.append(String.format(Locale.ROOT, "<rect x=\"0\" y=\"0\" width=\"%.0f\" height=\"%.0f\" fill=\"#fbfbf8\"/>",
                 WIDTH, drawHeight));
         for (String layer : ResultGeoJson.LAYERS) {
@@ -120,9 +128,10 @@ public final class PlanSvg {
                     frame.x(g.path("coordinates").path(0).asDouble()), frame.y(g.path("coordinates").path(1).asDouble()),
                     EDGE));
             case "rod" -> svg.append(String.format(Locale.ROOT,
-                    "<circle class=\"rod\" cx=\"%.1f\" cy=\"%.1f\" r=\"4\" fill=\"#ffffff\" stroke=\"%s\" stroke-width=\"2\"/>",
+                    "<circle class=\"rod\" data-rod-id=\"%s\" cx=\"%.1f\" cy=\"%.1f\" r=\"5\" fill=\"#ffffff\" stroke=\"%s\""
+                    + " stroke-width=\"2\"><title>%s</title></circle>", escape(text(f, "id")),
                     frame.x(g.path("coordinates").path(0).asDouble()), frame.y(g.path("coordinates").path(1).asDouble()),
-                    PART));
+                    PART, escape(text(f, "name"))));
             default -> {
                 // layers this drawing does not know are left out
             }
@@ -149,7 +158,7 @@ public final class PlanSvg {
                 number(f.path("properties").path("height").asDouble()));
         svg.append(String.format(Locale.ROOT, "<text class=\"structure-label\" x=\"%.1f\" y=\"%.1f\" text-anchor=\"middle\""
                 + " font-size=\"11\" font-family=\"sans-serif\" fill=\"#111111\" stroke=\"#ffffff\" stroke-width=\"3\""
-                + " paint-order=\"stroke\">%s</text>", x, y, text));
+                + " paint-order=\"stroke\" pointer-events=\"none\">%s</text>", x, y, text));
     }
 
     private static void scaleBar(StringBuilder svg, Frame frame, double drawHeight, Labels labels) {
@@ -248,6 +257,11 @@ public final class PlanSvg {
 
     static String number(double value) {
         return value == Math.rint(value) ? String.valueOf((long) value) : String.format(Locale.ROOT, "%.1f", value);
+    }
+
+    /** A coordinate-frame number for the data attributes, exact enough to invert the drawing. */
+    private static String exact(double value) {
+        return String.format(Locale.ROOT, "%.6f", value);
     }
 
     /** Escapes text for SVG/XML content and attribute values. */

@@ -36,7 +36,8 @@ import tools.jackson.databind.node.ObjectNode;
  *   <li>{@code exposed-corner}: a point, {@code owner};</li>
  *   <li>{@code facade-band}: along a wall, {@code owner}, {@code length}, {@code bottom}, {@code top};</li>
  *   <li>{@code protected-ground}: open ground no sphere reaches (LPZ 0B at ground level), {@code area};</li>
- *   <li>{@code rod} and {@code conductor}: air-termination parts, {@code name}, {@code intercepts}.</li>
+ *   <li>{@code rod} and {@code conductor}: air-termination parts, {@code id}, {@code name},
+ *       {@code intercepts}; a rod also its {@code height} above what it stands on.</li>
  * </ul>
  */
 public final class ResultGeoJson {
@@ -104,7 +105,9 @@ public final class ResultGeoJson {
         }
         for (Rod rod : site.rods()) {
             ObjectNode f = feature(features, "rod", point(new Coordinate(rod.x(), rod.y())));
+            f.put("id", rod.id());
             f.put("name", rod.name());
+            f.put("height", round(rod.height()));
             f.put("intercepts", intercepts(result, rod.id()));
         }
         for (Conductor c : site.conductors()) {
@@ -113,6 +116,7 @@ public final class ResultGeoJson {
             ArrayNode coordinates = g.putArray("coordinates");
             c.path().forEach(p -> coordinates.add(position(p)));
             ObjectNode f = feature(features, "conductor", g);
+            f.put("id", c.id());
             f.put("name", c.name());
             f.put("intercepts", intercepts(result, c.id()));
         }

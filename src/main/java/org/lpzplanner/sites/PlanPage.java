@@ -22,6 +22,8 @@ import org.springframework.stereotype.Component;
 class PlanPage {
 
     private static final List<String> ROOF_FORMS = List.of("flat", "gable", "hip", "shed");
+    /** Heights offered for a new rod, in metres; any other value can be typed. */
+    private static final List<String> ROD_HEIGHTS = List.of("0.5", "1", "1.5", "2", "3");
 
     private final SiteService sites;
     private final AnalysisService analyses;
@@ -46,6 +48,7 @@ class PlanPage {
         model.put("levels", ProtectionLevel.values());
         model.put("structures", sites.structures(site));
         model.put("roofForms", ROOF_FORMS);
+        model.put("rodHeights", ROD_HEIGHTS);
         model.put("fullCorrection", sites.isGeoJson(site));
         model.put("fileVersions", sites.fileVersions(id).stream()
                 .map(v -> new EarlierFile(v.number(), v.sourceName(), SitePageController.WHEN.format(v.replacedAt())))
@@ -64,17 +67,25 @@ class PlanPage {
     record EarlierFile(int number, String fileName, String replacedAt) {
     }
 
-    /** Summary table rows: message key and value. */
-    private static List<Map.Entry<String, String>> summary(AnalysisRevision r) {
+    /**
+     * One summary table row: message key, the name of the value in the API's summary (the plan
+     * editor fills the cell from it after a change) and the value as shown.
+     */
+    record SummaryRow(String key, String field, String value) {
+    }
+
+    private static List<SummaryRow> summary(AnalysisRevision r) {
         return List.of(
-                Map.entry("summary.revision", String.valueOf(r.revision())),
-                Map.entry("summary.exposedRoof", SitePageController.number(r.exposedRoofArea())),
-                Map.entry("summary.exposedEdges", SitePageController.number(r.exposedEdgeLength())),
-                Map.entry("summary.corners", String.valueOf(r.exposedCorners())),
-                Map.entry("summary.facadeBands", String.valueOf(r.facadeBands())),
-                Map.entry("summary.protectedGround", SitePageController.number(r.protectedGroundArea())),
-                Map.entry("summary.resolution", SitePageController.number(r.resolution())),
-                Map.entry("summary.engineTime", String.valueOf(r.engineMillis())),
-                Map.entry("summary.checksum", r.inputsSha256()));
+                new SummaryRow("summary.revision", "revision", String.valueOf(r.revision())),
+                new SummaryRow("summary.exposedRoof", "exposedRoofArea", SitePageController.number(r.exposedRoofArea())),
+                new SummaryRow("summary.exposedEdges", "exposedEdgeLength",
+                        SitePageController.number(r.exposedEdgeLength())),
+                new SummaryRow("summary.corners", "exposedCorners", String.valueOf(r.exposedCorners())),
+                new SummaryRow("summary.facadeBands", "facadeBands", String.valueOf(r.facadeBands())),
+                new SummaryRow("summary.protectedGround", "protectedGroundArea",
+                        SitePageController.number(r.protectedGroundArea())),
+                new SummaryRow("summary.resolution", "resolution", SitePageController.number(r.resolution())),
+                new SummaryRow("summary.engineTime", "engineMillis", String.valueOf(r.engineMillis())),
+                new SummaryRow("summary.checksum", "inputsSha256", r.inputsSha256()));
     }
 }

@@ -56,6 +56,30 @@ class PlanSvgTest {
         assertThat(svg).doesNotContain("<script>").contains("&lt;script&gt;alert(1)&lt;/script&gt; &amp; &quot;co&quot;");
     }
 
+    @Test
+    void theFrameOnTheSvgElementTurnsDrawingPointsBackIntoLocalMetres() {
+        String svg = drawing("POLYGON ((10 20, 30 20, 30 40, 10 40, 10 20)) 8\n", "block.wkt");
+        double originX = attribute(svg, "data-origin-x");
+        double originY = attribute(svg, "data-origin-y");
+        double scale = attribute(svg, "data-scale");
+        double margin = attribute(svg, "data-margin");
+        assertThat(svg).contains("data-y-flipped=\"true\"");
+
+        // the footprint's first corner (10, 20) is the first point of the structure's path
+        String d = svg.substring(svg.indexOf("class=\"structure\""));
+        String[] xy = d.substring(d.indexOf("d=\"M ") + 5).split(" ");
+        double x = originX + (Double.parseDouble(xy[0]) - margin) / scale;
+        double y = originY - (Double.parseDouble(xy[1]) - margin) / scale;
+        // the path is written to 0.1 SVG unit, so the corner comes back within 0.1 / scale metres
+        assertThat(x).isCloseTo(10, org.assertj.core.api.Assertions.within(0.1 / scale + 1e-9));
+        assertThat(y).isCloseTo(20, org.assertj.core.api.Assertions.within(0.1 / scale + 1e-9));
+    }
+
+    private static double attribute(String svg, String name) {
+        int start = svg.indexOf(name + "=\"") + name.length() + 2;
+        return Double.parseDouble(svg.substring(start, svg.indexOf('"', start)));
+    }
+
     private static double firstY(String fromPath) {
         String d = fromPath.substring(fromPath.indexOf("d=\"M ") + 5);
         return Double.parseDouble(d.split(" ")[1]);

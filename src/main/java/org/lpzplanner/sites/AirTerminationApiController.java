@@ -1,0 +1,165 @@
+package org.lpzplanner.sites;
+
+import java.net.URI;
+import java.util.List;
+import java.util.Locale;
+import org.lpzplanner.analysis.AnalysisRevision;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.analysis.AnalysisSummary;
+import org.lpzplanner.analysis.PlanSvg;
+import org.lpzplanner.analysis.ResultGeoJson;
+import org.lpzplanner.common.Cautions;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.context.MessageSource;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
+import org.springframework.web.bind.annotation.DeleteMapping;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.PutMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.bind.annotation.RestController;
+import tools.jackson.databind.JsonNode;
+
+/**
+ * JSON API for the air-termination parts of a site: {@code GET /api/sites/{id}/parts} lists rods
+ * and conductors; {@code POST /api/sites/{id}/rods} adds a rod (JSON {@code version}, {@code x},
+ * {@code y} in local metres, {@code height}, optional {@code name} and {@code id});
+ * {@code PUT /api/sites/{id}/rods/{rodId}} moves it ({@code x}, {@code y}) and/or changes its
+ * {@code height}; {@code DELETE /api/sites/{id}/rods/{rodId}?version=N} removes it. Each change
+ * rewrites the stored file, analyses the site again and answers with the new summary, plan drawing,
+ * method, level, radius and cautions. A stale {@code version} answers 409.
+ */
+@RestController
+@RequestMapping("/api/sites/{id}")
+public class AirTerminationApiController {
+
+    private final AirTerminationService parts;
+    private final AnalysisService analyses;
+    private final SiteService sites;
+    private final MessageSource messages;
+
+    public AirTerminationApiController(AirTerminationService parts, AnalysisService analyses, SiteService sites,
+            MessageSource messages) {
+        this.parts = parts;
+        this.analyses = analyses;
+        this.sites = sites;
+        this.messages = messages;
+    }
+
+    /**
+     * The answer to a change: the rod concerned ({@code rodId}; {@code before} is the rod as it was,
+     * null for a new one), the site's new {@code version}, the new analysis ({@code summary},
+     * {@code svg}, the worded {@code basis} and {@code status} lines, {@code cautions}), the parts
+     * as they are now, and the server time taken in milliseconds.
+     */
+    public record Change(String rodId, AirTerminationService.RodView before, long version, AnalysisSummary summary,
+            String svg, String basis, String status, List<String> cautions, AirTerminationService.Parts parts,
+            long serverMillis) {
+    }
+
+    @GetMapping("/parts")
+    public AirTerminationService.Parts parts(@PathVariable long id) {
+        return parts.parts(id);
+    }
+
+    @PostMapping(value = "/rods", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public ResponseEntity<Change> add(@PathVariable long id, @RequestBody JsonNode body, Locale locale) {
+        long start = System.nanoTime();
+        String rodId = parts.addRod(id, version(body), input(body));
+        return ResponseEntity.status(HttpStatus.CREATED).location(URI.create("/api/sites/" + id + "/rods/" + rodId))
+                .body(answer(id, rodId, null, start, locale));
+    }
+
+    @PutMapping(value = "/rods/{rodId}", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public Change change(@PathVariable long id, @PathVariable String rodId, @RequestBody JsonNode body,
+            Locale locale) {
+        long start = System.nanoTime();
+        AirTerminationService.RodView before = parts.changeRod(id, version(body), rodId, input(body));
+        return answer(id, rodId, before, start, locale);
+    }
+
+    @DeleteMapping("/rods/{rodId}")
+    public Change remove(@PathVariable long id, @PathVariable String rodId, @RequestParam Long version,
+            Locale locale) {
+        long start = System.nanoTime();
+        AirTerminationService.RodView before = parts.removeRod(id, version, rodId);
+        return answer(id, rodId, before, start, locale);
+    }
+
+    private Change answer(long id, String rodId, AirTerminationService.RodView before, long start, Locale locale) {
+        AnalysisRevision revision = analyses.run(id, null, null, null);
+        String svg = PlanSvg.render(revision.resultGeoJson(), (key, args) -> messages.getMessage(key, args, locale));
+        String basis = messages.getMessage("plan.basis", new Object[] {ResultGeoJson.METHOD, revision.level().name(),
+                SitePageController.number(revision.sphereRadius()), SitePageController.WHEN.format(revision.createdAt())},
+                locale);
+        String status = messages.getMessage(revision.fullyProtected() ? "summary.fullyProtected"
+                : "summary.notFullyProtected", null, locale);
+        AirTerminationService.Parts now = parts.parts(id);
+        long millis = (System.nanoTime() - start) / 1_000_000;
+        return new Change(rodId, before, sites.get(id).version(), AnalysisSummary.of(revision), svg, basis, status,
+                Cautions.lines(), now, millis);
+    }
+
+    private static long version(JsonNode body) {
+        if (!body.isObject()) {
+            throw new InvalidInputException("body", "the body must be a JSON object with \"version\"");
+        }
+        JsonNode version = body.path("version");
+        if (!version.isIntegralNumber()) {
+            throw new InvalidInputException("version", "version is required: the site's version as last read");
+        }
+        return version.longValue();
+    }
+
+    private static AirTerminationService.RodInput input(JsonNode body) {
+        return new AirTerminationService.RodInput(text(body, "id"), text(body, "name"), coordinate(body, "x"),
+                coordinate(body, "y"), number(body, "height"));
+    }
+
+    private static Double coordinate(JsonNode body, String field) {
+        JsonNode node = body.get(field);
+        if (node == null || node.isNull()) {
+            return null;
+        }
+        String text = node.isNumber() ? node.asString() : node.isString() ? node.stringValue().strip() : null;
+        try {
+            double value = Double.parseDouble(text == null ? "" : text);
+            if (Double.isFinite(value)) {
+                return value;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new InvalidInputException(field, field + " must be a number of metres, got " + node);
+    }
+
+    private static String number(JsonNode body, String field) {
+        JsonNode node = body.get(field);
+        if (node == null || node.isNull()) {
+            return null;
+        }
+        if (node.isNumber()) {
+            return node.asString();
+        }
+        if (node.isString()) {
+            return node.stringValue();
+        }
+        throw new InvalidInputException(field, field + " must be a number of metres, got " + node);
+    }
+
+    private static String text(JsonNode body, String field) {
+        JsonNode node = body.get(field);
+        if (node == null || node.isNull()) {
+            return null;
+        }
+        if (!node.isString()) {
+            throw new InvalidInputException(field, field + " must be a string");
+        }
+        return node.stringValue();
+    }
+}

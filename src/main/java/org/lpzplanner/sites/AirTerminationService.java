@@ -1,0 +1,233 @@
+package org.lpzplanner.sites;
+
+import java.math.BigDecimal;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.io.LocalProjection;
+import org.lpzplanner.engine.io.SiteDocument;
+import org.lpzplanner.engine.model.Conductor;
+import org.lpzplanner.engine.model.Rod;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.dao.OptimisticLockingFailureException;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+/**
+ * Lists the air-termination parts of a stored site and adds, moves and removes its rods by
+ * rewriting the stored GeoJSON file (see {@link RodFileEditor}). Every change is read back through
+ * the engine's reader before it is stored, so a bad height or position stores nothing; the file it
+ * replaces is kept as an earlier file of the site. WKT files cannot hold rods.
+ */
+@Service
+public class AirTerminationService {
+
+    private final SiteService sites;
+    private final SiteRepository rows;
+    private final Clock clock;
+
+    public AirTerminationService(SiteService sites, SiteRepository rows, Clock clock) {
+        this.sites = sites;
+        this.rows = rows;
+        this.clock = clock;
+    }
+
+    /** A rod as the API shows it: plan position in local metres and in the file's own coordinates. */
+    public record RodView(String id, String name, double x, double y, double[] sitePosition, double height) {
+    }
+
+    /** A conductor: its path in local metres ([x, y] or [x, y, z]) and in the file's own coordinates. */
+    public record ConductorView(String id, String name, List<double[]> path, List<double[]> sitePath,
+            Double heightAboveRoof) {
+    }
+
+    /**
+     * The parts of a site. {@code coordinates} is {@code "lon-lat"} or {@code "local-metres"}, the
+     * file's own; {@code editable} says whether rods can be placed (GeoJSON files only).
+     */
+    public record Parts(long siteId, long version, String coordinates, boolean editable, List<RodView> rods,
+            List<ConductorView> conductors) {
+    }
+
+    /** Values for a new rod or a change; null leaves a value unchanged (or, for a new rod, unset). */
+    public record RodInput(String id, String name, Double x, Double y, String height) {
+    }
+
+    /** @throws SiteNotFoundException when no site has this id */
+    @Transactional(readOnly = true)
+    public Parts parts(long siteId) {
+        StoredSite site = sites.get(siteId);
+        SiteDocument document = sites.document(site);
+        LocalProjection projection = document.projection();
+        List<RodView> rods = document.site().rods().stream().map(r -> new RodView(r.id(), r.name(), round(r.x()),
+                round(r.y()), sitePosition(projection, r.x(), r.y()), r.height())).toList();
+        List<ConductorView> conductors = new ArrayList<>();
+        for (Conductor c : document.site().conductors()) {
+            List<double[]> path = new ArrayList<>();
+            List<double[]> sitePath = new ArrayList<>();
+            for (Coordinate p : c.path()) {
+                path.add(Double.isNaN(p.getZ()) || c.followsSurface() ? new double[] {round(p.x), round(p.y)}
+                        : new double[] {round(p.x), round(p.y), round(p.getZ())});
+                sitePath.add(sitePosition(projection, p.x, p.y));
+            }
+            conductors.add(new ConductorView(c.id(), c.name(), path, sitePath, c.heightAboveRoof()));
+        }
+        return new Parts(site.id(), site.version(), projection == null ? "local-metres" : "lon-lat",
+                sites.isGeoJson(site), rods, conductors);
+    }
+
+    /**
+     * Adds a rod at (x, y) local metres; an id, when given, must not be in use (it lets a removed
+     * rod come back under its old id).
+     *
+     * @return the new rod's id
+     * @throws SiteNotFoundException  when no site has this id
+     * @throws InvalidInputException  when a value is missing or unusable, or the file is WKT
+     * @throws org.lpzplanner.engine.io.SiteFormatException when the changed file is not a valid
+     *         site, naming the field
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public String addRod(long siteId, long expectedVersion, RodInput input) {
+        StoredSite site = editable(siteId, expectedVersion);
+        if (input.x() == null || input.y() == null) {
+            throw new InvalidInputException(input.x() == null ? "x" : "y", "x and y (local metres) are required");
+        }
+        BigDecimal height = height(input.height() == null ? "1" : input.height());
+        if (input.name() != null && input.name().strip().length() > SiteService.MAX_NAME_LENGTH) {
+            throw new InvalidInputException("name", "name must be at most " + SiteService.MAX_NAME_LENGTH + " characters");
+        }
+        SiteDocument document = sites.document(site);
+        Set<String> used = usedIds(document.site());
+        String id;
+        if (input.id() != null && !input.id().isBlank()) {
+            id = input.id().strip();
+            if (used.contains(id)) {
+                throw new InvalidInputException("id", "the id \"" + id + "\" is already used in this site");
+            }
+        } else {
+            int n = 1;
+            while (used.contains("rod-" + n)) {
+                n++;
+            }
+            id = "rod-" + n;
+        }
+        RodFileEditor editor = new RodFileEditor(site.sourceText(), document.site().rods(), document.projection());
+        editor.add(id, input.name(), input.x(), input.y(), height);
+        store(site, editor.text());
+        return id;
+    }
+
+    /**
+     * Moves a rod to (x, y) local metres and/or changes its height.
+     *
+     * @return the rod as it was before the change
+     * @throws SiteNotFoundException when no site has this id or the site no rod with this id
+     */
+    @Transactional
+    public RodView changeRod(long siteId, long expectedVersion, String rodId, RodInput input) {
+        StoredSite site = editable(siteId, expectedVersion);
+        if ((input.x() == null) != (input.y() == null)) {
+            throw new InvalidInputException(input.x() == null ? "x" : "y", "give both x and y to move a rod");
+        }
+        if (input.x() == null && input.height() == null) {
+            throw new InvalidInputException("x", "give x and y, a height, or both");
+        }
+        BigDecimal height = input.height() == null ? null : height(input.height());
+        SiteDocument document = sites.document(site);
+        int index = rodIndex(site, document.site(), rodId);
+        RodView before = view(document.site().rods().get(index), document.projection());
+        RodFileEditor editor = new RodFileEditor(site.sourceText(), document.site().rods(), document.projection());
+        editor.change(index, input.x(), input.y(), height);
+        store(site, editor.text());
+        return before;
+    }
+
+    /**
+     * Removes a rod.
+     *
+     * @return the rod as it was, so that it can be put back
+     * @throws SiteNotFoundException when no site has this id or the site no rod with this id
+     */
+    @Transactional
+    public RodView removeRod(long siteId, long expectedVersion, String rodId) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        int index = rodIndex(site, document.site(), rodId);
+        RodView before = view(document.site().rods().get(index), document.projection());
+        RodFileEditor editor = new RodFileEditor(site.sourceText(), document.site().rods(), document.projection());
+        editor.remove(index);
+        store(site, editor.text());
+        return before;
+    }
+
+    private StoredSite editable(long siteId, long expectedVersion) {
+        StoredSite site = sites.get(siteId);
+        if (site.version() != expectedVersion) {
+            throw new OptimisticLockingFailureException("site " + siteId + " is at version " + site.version()
+                    + ", not " + expectedVersion);
+        }
+        if (!sites.isGeoJson(site)) {
+            throw new InvalidInputException("file", "a WKT site file cannot hold rods (it holds flat-roofed"
+                    + " structures only); upload the site as GeoJSON to place air-termination");
+        }
+        return site;
+    }
+
+    private void store(StoredSite site, String changed) {
+        SiteFiles.read(changed, site.sourceName());
+        Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
+        rows.replaceFile(site.id(), site.version(), changed, now);
+        rows.insertFileVersion(site.id(), site.sourceName(), site.sourceText(), now);
+    }
+
+    private static int rodIndex(StoredSite stored, Site site, String rodId) {
+        for (int i = 0; i < site.rods().size(); i++) {
+            if (site.rods().get(i).id().equals(rodId)) {
+                return i;
+            }
+        }
+        throw new SiteNotFoundException(stored.id(), "site " + stored.id() + " has no rod \"" + rodId + "\"");
+    }
+
+    private static RodView view(Rod r, LocalProjection projection) {
+        return new RodView(r.id(), r.name(), round(r.x()), round(r.y()), sitePosition(projection, r.x(), r.y()),
+                r.height());
+    }
+
+    private static Set<String> usedIds(Site site) {
+        Set<String> used = new HashSet<>();
+        site.structures().forEach(s -> used.add(s.id()));
+        site.rooftopObjects().forEach(o -> used.add(o.id()));
+        site.rods().forEach(r -> used.add(r.id()));
+        site.conductors().forEach(c -> used.add(c.id()));
+        return used;
+    }
+
+    private static BigDecimal height(String text) {
+        try {
+            return new BigDecimal(text.strip());
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException("height", "height must be a number of metres, got \"" + text.strip() + "\"");
+        }
+    }
+
+    private static double[] sitePosition(LocalProjection projection, double x, double y) {
+        if (projection == null) {
+            return new double[] {round(x), round(y)};
+        }
+        Coordinate lonLat = projection.toLonLat(x, y);
+        return new double[] {Math.round(lonLat.x * 1e8) / 1e8, Math.round(lonLat.y * 1e8) / 1e8};
+    }
+
+    /** To the millimetre. */
+    private static double round(double value) {
+        return Math.round(value * 1000) / 1000.0;
+    }
+}
