@@ -3,6 +3,7 @@ package org.lpzplanner.analysis;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
@@ -17,7 +18,9 @@ import tools.jackson.databind.json.JsonMapper;
  * back into local metres: {@code x = originX + (svgX - margin) / scale} and, the y axis being
  * flipped, {@code y = originY - (svgY - margin) / scale} ({@code data-origin-x},
  * {@code data-origin-y}, {@code data-scale} in SVG units per metre, {@code data-margin},
- * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}.
+ * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}. Exposed edges, corners and
+ * facade bands carry their {@link ReviewItems} key in {@code data-item-key}; those a designer
+ * accepted also get the class {@code accepted} and a title with the reason (escaped).
  */
 public final class PlanSvg {
 
@@ -46,9 +49,19 @@ public final class PlanSvg {
 
     /** The SVG markup for one result. */
     public static String render(String resultGeoJson, Labels labels) {
+        return render(resultGeoJson, labels, Map.of());
+    }
+
+    /**
+     * The SVG markup for one result, with the accepted review items marked.
+     *
+     * @param accepted the reason of each accepted item, by item key
+     */
+    public static String render(String resultGeoJson, Labels labels, Map<String, String> accepted) {
         JsonNode root = JSON.readTree(resultGeoJson);
         List<JsonNode> features = new ArrayList<>();
         root.path("features").forEach(features::add);
+        Map<JsonNode, String> keys = ReviewItems.keys(features);
         double[] box = bounds(features);
         double dx = Math.max(box[2] - box[0], 1);
         double dy = Math.max(box[3] - box[1], 1);
@@ -73,6 +86,10 @@ public final class PlanSvg {
             for (JsonNode f : features) {
                 if (layer(f).equals(layer)) {
                     draw(svg, f, frame, maxHeight);
+                    String key = keys.get(f);
+                    if (key != null) {
+                        markItem(svg, key, accepted.get(key), labels);
+                    }
                 }
             }
         }
@@ -135,6 +152,30 @@ public final class PlanSvg {
             default -> {
                 // layers this drawing does not know are left out
             }
+        }
+    }
+
+    /**
+     * Adds the item key (and, when accepted, the class and a title) to the element just drawn, the
+     * last start tag in {@code svg}.
+     */
+    private static void markItem(StringBuilder svg, String key, String reason, Labels labels) {
+        int start = svg.lastIndexOf("<");
+        int classAt = svg.indexOf("class=\"", start) + "class=\"".length();
+        int classEnd = svg.indexOf("\"", classAt);
+        if (reason != null) {
+            svg.insert(classEnd, " accepted");
+        }
+        int tagEnd = svg.lastIndexOf("/>");
+        if (tagEnd < start) {
+            tagEnd = svg.length();
+        }
+        StringBuilder extra = new StringBuilder(" data-item-key=\"").append(escape(key)).append('"');
+        svg.insert(tagEnd, extra);
+        if (reason != null) {
+            int close = svg.lastIndexOf("/>");
+            svg.replace(close, close + 2, "><title>" + escape(labels.text("review.status.accepted", reason))
+                    + "</title></" + svg.substring(start + 1, svg.indexOf(" ", start)) + ">");
         }
     }
 

@@ -32,8 +32,9 @@ import tools.jackson.databind.node.ObjectNode;
  *   <li>{@code structure}: footprint, {@code name}, {@code height} (top of the structure);</li>
  *   <li>{@code rooftop-object}: footprint, {@code name}, {@code top};</li>
  *   <li>{@code exposed-roof}: the part of a roof face a sphere reaches, {@code owner}, {@code area};</li>
- *   <li>{@code exposed-edge}: {@code owner}, {@code kind}, {@code length};</li>
- *   <li>{@code exposed-corner}: a point, {@code owner};</li>
+ *   <li>{@code exposed-edge}: {@code owner}, {@code kind}, {@code length}, {@code top} (highest
+ *       elevation along it);</li>
+ *   <li>{@code exposed-corner}: a point, {@code owner}, {@code top} (its elevation);</li>
  *   <li>{@code facade-band}: along a wall, {@code owner}, {@code length}, {@code bottom}, {@code top};</li>
  *   <li>{@code protected-ground}: open ground no sphere reaches (LPZ 0B at ground level), {@code area};</li>
  *   <li>{@code rod} and {@code conductor}: air-termination parts, {@code id}, {@code name},
@@ -99,9 +100,22 @@ public final class ResultGeoJson {
             f.put("owner", e.ownerName());
             f.put("kind", e.kind().name().toLowerCase(Locale.ROOT).replace('_', '-'));
             f.put("length", round(e.length()));
+            double top = Double.NEGATIVE_INFINITY;
+            for (Coordinate c : e.line().getCoordinates()) {
+                if (!Double.isNaN(c.getZ())) {
+                    top = Math.max(top, c.getZ());
+                }
+            }
+            if (Double.isFinite(top)) {
+                f.put("top", round(top));
+            }
         }
         for (CornerExposure c : result.corners()) {
-            feature(features, "exposed-corner", point(c.point())).put("owner", c.ownerName());
+            ObjectNode f = feature(features, "exposed-corner", point(c.point()));
+            f.put("owner", c.ownerName());
+            if (!Double.isNaN(c.point().getZ())) {
+                f.put("top", round(c.point().getZ()));
+            }
         }
         for (Rod rod : site.rods()) {
             ObjectNode f = feature(features, "rod", point(new Coordinate(rod.x(), rod.y())));

@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -8,6 +9,8 @@ import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.analysis.ResultGeoJson;
+import org.lpzplanner.analysis.ReviewItems;
+import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.springframework.context.MessageSource;
@@ -28,11 +31,13 @@ class PlanPage {
     private final SiteService sites;
     private final AnalysisService analyses;
     private final MessageSource messages;
+    private final ReviewService reviews;
 
-    PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages) {
+    PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews) {
         this.sites = sites;
         this.analyses = analyses;
         this.messages = messages;
+        this.reviews = reviews;
     }
 
     /** @throws SiteNotFoundException when no site has this id */
@@ -56,11 +61,42 @@ class PlanPage {
         if (latest != null) {
             model.put("analysedAt", SitePageController.WHEN.format(latest.createdAt()));
             model.put("radius", SitePageController.number(latest.sphereRadius()));
-            model.put("summary", summary(latest));
+            ReviewService.Review review = reviews.review(latest);
+            List<SummaryRow> summary = new ArrayList<>(summary(latest));
+            summary.add(new SummaryRow("summary.review", null, messages.getMessage("review.counts",
+                    new Object[] {review.items().size(), review.acceptedCount()}, locale)));
+            model.put("summary", summary);
+            model.put("reviewRows", review.items().stream()
+                    .map(i -> ReviewRow.of(i, review.accepted().get(i.key()))).toList());
             model.put("svg", PlanSvg.render(latest.resultGeoJson(),
-                    (key, args) -> messages.getMessage(key, args, locale)));
+                    (key, args) -> messages.getMessage(key, args, locale), review.accepted()));
         }
         return model;
+    }
+
+    /**
+     * One line of the review list, numbers already written: {@code length} and {@code height} are
+     * "-" where the result has none; {@code reason} is null while the item counts as exposed.
+     */
+    record ReviewRow(int number, String key, String owner, String kind, String length, String height,
+            String reason) {
+
+        static ReviewRow of(ReviewItems.Item item, String reason) {
+            String length = item.length() == null ? "-" : SitePageController.number(item.length());
+            String height;
+            if (item.top() == null) {
+                height = "-";
+            } else if (item.bottom() != null) {
+                height = metres(item.bottom()) + "\u2013" + metres(item.top());
+            } else {
+                height = metres(item.top());
+            }
+            return new ReviewRow(item.number(), item.key(), item.owner(), item.kind(), length, height, reason);
+        }
+
+        private static String metres(double value) {
+            return String.format(Locale.ROOT, "%.2f", value);
+        }
     }
 
     /** An earlier file as the page lists it. */
@@ -84,7 +120,7 @@ class PlanPage {
                 new SummaryRow("summary.facadeBands", "facadeBands", String.valueOf(r.facadeBands())),
                 new SummaryRow("summary.protectedGround", "protectedGroundArea",
                         SitePageController.number(r.protectedGroundArea())),
-                new SummaryRow("summary.resolution", "resolution", SitePageController.number(r.resolution())),
+                new SummaryRow("summary.resolution", "resolution", String.format(java.util.Locale.ROOT, "%.2f", r.resolution())),
                 new SummaryRow("summary.engineTime", "engineMillis", String.valueOf(r.engineMillis())),
                 new SummaryRow("summary.checksum", "inputsSha256", r.inputsSha256()));
     }

@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
@@ -11,9 +12,10 @@ import org.springframework.web.servlet.ModelAndView;
 /**
  * Errors of the site pages shown as pages: an unknown site (or an id that is not a number) gives a
  * 404 page saying so; an unusable analysis setting, or an analysis too large to run, gives a 400
- * page with the reason.
+ * page with the reason; an unknown review item gives a 404 page with the reason.
  */
-@ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class})
+@ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
+    ReviewPageController.class})
 public class SitePageErrors {
 
     @ExceptionHandler(SiteNotFoundException.class)
@@ -32,6 +34,13 @@ public class SitePageErrors {
         }
         ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
         page.addObject("siteId", String.valueOf(e.getValue()));
+        return page;
+    }
+
+    @ExceptionHandler(ReviewItemNotFoundException.class)
+    ModelAndView noItem(ReviewItemNotFoundException e) {
+        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.NOT_FOUND);
+        page.addObject("reason", e.getMessage());
         return page;
     }
 

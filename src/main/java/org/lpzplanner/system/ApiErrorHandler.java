@@ -2,6 +2,7 @@ package org.lpzplanner.system;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.slf4j.Logger;
@@ -23,7 +24,7 @@ import org.springframework.web.multipart.MultipartException;
  * Turns every failure of the JSON API into a JSON body {@code {"error": "..."}} with a fitting
  * status, never a stack trace: 400 for unusable input (site files also name {@code file},
  * {@code feature}, {@code featureName}, {@code line} and {@code field} where known), 404 for unknown
- * sites, 409 for concurrent changes, 413 for oversized uploads, 500 with a plain message otherwise.
+ * sites and review items, 409 for concurrent changes, 413 for oversized uploads, 500 with a plain message otherwise.
  */
 @RestControllerAdvice(annotations = RestController.class)
 public class ApiErrorHandler {
@@ -59,6 +60,11 @@ public class ApiErrorHandler {
 
     @ExceptionHandler(SiteNotFoundException.class)
     ResponseEntity<Map<String, Object>> notFound(SiteNotFoundException e) {
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    }
+
+    @ExceptionHandler(ReviewItemNotFoundException.class)
+    ResponseEntity<Map<String, Object>> noItem(ReviewItemNotFoundException e) {
         return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
     }
 

@@ -1,0 +1,89 @@
+package org.lpzplanner.analysis;
+
+import java.util.List;
+import org.lpzplanner.common.Cautions;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.http.MediaType;
+import org.springframework.web.bind.annotation.DeleteMapping;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RestController;
+import tools.jackson.databind.JsonNode;
+
+/**
+ * JSON API for the review of a site's latest analysis:
+ * {@code GET /api/sites/{id}/analyses/latest/items} lists the exposed edges, corners and facade
+ * bands with their status; {@code POST /api/sites/{id}/analyses/latest/accepted} with JSON
+ * {@code {"key": ..., "reason": ...}} marks one accepted; {@code DELETE
+ * /api/sites/{id}/analyses/latest/accepted/{key}} marks it exposed again. Each answers with the
+ * whole review, method, level, radius and cautions. An unknown key answers 404, a missing key or a
+ * blank reason 400 naming the field; nothing is stored then.
+ */
+@RestController
+@RequestMapping("/api/sites/{siteId}/analyses/latest")
+public class ReviewApiController {
+
+    private final ReviewService reviews;
+
+    public ReviewApiController(ReviewService reviews) {
+        this.reviews = reviews;
+    }
+
+    /**
+     * One item. {@code status} is {@code exposed} or {@code accepted} (then with its
+     * {@code reason}); lengths and heights in metres, {@code bottom} for facade bands only.
+     */
+    public record ItemView(int number, String key, String owner, String kind, Double length, Double bottom,
+            Double top, String status, String reason) {
+    }
+
+    /** The review with what a client needs to show it responsibly. */
+    public record ReviewView(long siteId, int revision, String method, String level, double radius,
+            int exposedItems, int accepted, List<ItemView> items, List<String> cautions) {
+
+        static ReviewView of(ReviewService.Review review) {
+            AnalysisRevision r = review.revision();
+            List<ItemView> items = review.items().stream().map(i -> {
+                String reason = review.accepted().get(i.key());
+                return new ItemView(i.number(), i.key(), i.owner(), i.kind(), i.length(), i.bottom(), i.top(),
+                        reason == null ? "exposed" : "accepted", reason);
+            }).toList();
+            return new ReviewView(r.siteId(), r.revision(), ResultGeoJson.METHOD, r.level().name(),
+                    ResultGeoJson.round(r.sphereRadius()), items.size(), review.acceptedCount(), items,
+                    Cautions.lines());
+        }
+    }
+
+    @GetMapping("/items")
+    public ReviewView items(@PathVariable long siteId) {
+        return ReviewView.of(reviews.latest(siteId).orElseThrow(() -> new ReviewItemNotFoundException(
+                "site " + siteId + " has not been analysed yet, so it has no exposed items")));
+    }
+
+    @PostMapping(value = "/accepted", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public ReviewView accept(@PathVariable long siteId, @RequestBody JsonNode body) {
+        if (!body.isObject()) {
+            throw new InvalidInputException("body", "the body must be a JSON object with \"key\" and \"reason\"");
+        }
+        return ReviewView.of(reviews.accept(siteId, text(body, "key"), text(body, "reason")));
+    }
+
+    @DeleteMapping("/accepted/{key}")
+    public ReviewView remove(@PathVariable long siteId, @PathVariable String key) {
+        return ReviewView.of(reviews.remove(siteId, key));
+    }
+
+    private static String text(JsonNode body, String field) {
+        JsonNode node = body.get(field);
+        if (node == null || node.isNull()) {
+            return null;
+        }
+        if (!node.isString()) {
+            throw new InvalidInputException(field, field + " must be a string");
+        }
+        return node.stringValue();
+    }
+}

@@ -1,0 +1,154 @@
+package org.lpzplanner.analysis;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.SiteService;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.ResultActions;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ObjectNode;
+
+@SpringBootTest
+@AutoConfigureMockMvc
+class ReviewApiTest {
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
+
+    @Autowired
+    MockMvc mvc;
+
+    @Autowired
+    SiteService sites;
+
+    @Autowired
+    AnalysisService analyses;
+
+    @Autowired
+    AcceptedItemRepository accepted;
+
+    private long siteId;
+    private String url;
+
+    @BeforeEach
+    void analysedWarehouse() throws Exception {
+        siteId = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Reviewed shed", "II", null).id();
+        analyses.run(siteId, null, null, null);
+        url = "/api/sites/" + siteId + "/analyses/latest";
+    }
+
+    private JsonNode items() throws Exception {
+        return JSON.readTree(mvc.perform(get(url + "/items")).andExpect(status().isOk()).andReturn().getResponse()
+                .getContentAsString());
+    }
+
+    private ResultActions accept(String key, String reason) throws Exception {
+        ObjectNode body = JSON.createObjectNode();
+        body.put("key", key);
+        body.put("reason", reason);
+        return mvc.perform(post(url + "/accepted").contentType(MediaType.APPLICATION_JSON)
+                .content(JSON.writeValueAsString(body)));
+    }
+
+    private long revisionId() {
+        return analyses.latest(siteId).orElseThrow().id();
+    }
+
+    @Test
+    void itemListNamesEveryExposedItemWithKeyKindAndStatusBesideMethodLevelRadiusAndCautions() throws Exception {
+        JsonNode review = items();
+
+        assertThat(review.path("method").asString()).isEqualTo(ResultGeoJson.METHOD);
+        assertThat(review.path("level").asString()).isEqualTo("II");
+        // protection level II rolls a 30 m sphere (IEC 62305-3, Table 2)
+        assertThat(review.path("radius").asDouble()).isEqualTo(30.0);
+        assertThat(review.path("cautions").size()).isPositive();
+        assertThat(review.path("exposedItems").asInt()).isPositive().isEqualTo(review.path("items").size());
+        assertThat(review.path("accepted").asInt()).isZero();
+        JsonNode first = review.path("items").get(0);
+        assertThat(first.path("key").asString()).matches("[a-z0-9-]+");
+        assertThat(first.path("status").asString()).isEqualTo("exposed");
+        assertThat(first.path("owner").asString()).isNotBlank();
+    }
+
+    @Test
+    void acceptingAnItemStoresTheReasonAndTheListShowsItAccepted() throws Exception {
+        String key = items().path("items").get(0).path("key").asString();
+
+        accept(key, "  covered by a natural component  ").andExpect(status().isOk())
+                .andExpect(jsonPath("$.accepted").value(1))
+                .andExpect(jsonPath("$.items[0].status").value("accepted"))
+                .andExpect(jsonPath("$.items[0].reason").value("covered by a natural component"));
+
+        JsonNode review = items();
+        assertThat(review.path("accepted").asInt()).isEqualTo(1);
+        assertThat(review.path("items").get(0).path("reason").asString()).isEqualTo("covered by a natural component");
+        assertThat(accepted.reasons(revisionId())).containsEntry(key, "covered by a natural component");
+    }
+
+    @Test
+    void removingAnAcceptanceMarksTheItemExposedAgain() throws Exception {
+        String key = items().path("items").get(1).path("key").asString();
+        accept(key, "metal roof edge of sufficient thickness").andExpect(status().isOk());
+
+        mvc.perform(delete(url + "/accepted/" + key)).andExpect(status().isOk())
+                .andExpect(jsonPath("$.accepted").value(0))
+                .andExpect(jsonPath("$.items[1].status").value("exposed"));
+        assertThat(accepted.reasons(revisionId())).isEmpty();
+    }
+
+    @Test
+    void unknownKeyAnswers404AndStoresNothing() throws Exception {
+        accept("ridge-000000000000", "covered by a natural component").andExpect(status().isNotFound())
+                .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("ridge-000000000000")));
+        mvc.perform(delete(url + "/accepted/ridge-000000000000")).andExpect(status().isNotFound());
+        assertThat(accepted.reasons(revisionId())).isEmpty();
+    }
+
+    @Test
+    void blankReasonAnswers400NamingTheFieldAndStoresNothing() throws Exception {
+        String key = items().path("items").get(0).path("key").asString();
+
+        accept(key, "   ").andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("reason"));
+        mvc.perform(post(url + "/accepted").contentType(MediaType.APPLICATION_JSON).content("{\"key\": \"" + key + "\"}"))
+                .andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("reason"));
+        mvc.perform(post(url + "/accepted").contentType(MediaType.APPLICATION_JSON).content("{\"reason\": \"fine\"}"))
+                .andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("key"));
+        assertThat(accepted.reasons(revisionId())).isEmpty();
+    }
+
+    @Test
+    void unknownSiteOrNeverAnalysedSiteAnswers404() throws Exception {
+        mvc.perform(get("/api/sites/987654/analyses/latest/items")).andExpect(status().isNotFound());
+        long fresh = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Not analysed", "II", null).id();
+        mvc.perform(get("/api/sites/" + fresh + "/analyses/latest/items")).andExpect(status().isNotFound());
+    }
+
+    @Test
+    void anotherAnalysisStartsAFreshReview() throws Exception {
+        String key = items().path("items").get(0).path("key").asString();
+        accept(key, "covered by a natural component").andExpect(status().isOk());
+
+        analyses.run(siteId, null, null, null);
+
+        JsonNode review = items();
+        assertThat(review.path("accepted").asInt()).isZero();
+        // same inputs, same items: the key of an item does not change between analyses
+        assertThat(review.path("items").get(0).path("key").asString()).isEqualTo(key);
+    }
+}
