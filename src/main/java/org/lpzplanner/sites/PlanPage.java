@@ -32,8 +32,11 @@ class PlanPage {
     private final AnalysisService analyses;
     private final MessageSource messages;
     private final ReviewService reviews;
+    private final SectionPage sectionPage;
 
-    PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews) {
+    PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews,
+            SectionPage sectionPage) {
+        this.sectionPage = sectionPage;
         this.sites = sites;
         this.analyses = analyses;
         this.messages = messages;
@@ -54,6 +57,8 @@ class PlanPage {
         model.put("structures", sites.structures(site));
         model.put("roofForms", ROOF_FORMS);
         model.put("rodHeights", ROD_HEIGHTS);
+        model.put("sectionCut", sectionPage.suggestedCut(site,
+                latest == null ? site.sphere().radius() : latest.sphereRadius()));
         model.put("fullCorrection", sites.isGeoJson(site));
         model.put("fileVersions", sites.fileVersions(id).stream()
                 .map(v -> new EarlierFile(v.number(), v.sourceName(), SitePageController.WHEN.format(v.replacedAt())))

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.time.Duration;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -13,6 +14,8 @@ import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.WebDriverWait;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
 
@@ -49,6 +52,8 @@ class UploadAndPlanBrowserTest {
         browser.findElement(By.name("name")).sendKeys("Browser check shed");
         browser.findElement(By.cssSelector("form button[type=submit]")).click();
 
+        // the upload analyses the site before the plan opens: wait for it
+        new WebDriverWait(browser, Duration.ofSeconds(30)).until(ExpectedConditions.urlMatches(".*/sites/\\d+$"));
         assertThat(browser.getCurrentUrl()).matches(".*/sites/\\d+$");
         WebElement svg = browser.findElement(By.cssSelector("svg.plan"));
         assertThat(svg.findElements(By.cssSelector("text.structure-label"))).anySatisfy(
