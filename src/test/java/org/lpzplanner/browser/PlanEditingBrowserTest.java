@@ -7,8 +7,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.engine.model.Rod;
@@ -17,43 +15,22 @@ import org.lpzplanner.sites.StoredSite;
 import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
-import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.interactions.Actions;
 import org.openqa.selenium.support.ui.Select;
 import org.openqa.selenium.support.ui.WebDriverWait;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * In a real browser: place a rod on a roof of the plan, see the summary change without a page
  * reload, drag the rod, undo the move, and find the work saved after reloading.
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class PlanEditingBrowserTest {
-
-    @LocalServerPort
-    int port;
+class PlanEditingBrowserTest extends BrowserTestBase {
 
     @Autowired
     SiteService sites;
 
     @Autowired
     AnalysisService analyses;
-
-    private ChromeDriver browser;
-
-    @BeforeEach
-    void openBrowser() {
-        browser = BrowserSupport.start();
-    }
-
-    @AfterEach
-    void closeBrowser() {
-        if (browser != null) {
-            browser.quit();
-        }
-    }
 
     private String exposedRoof() {
         return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();

@@ -4,44 +4,21 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebElement;
-import org.openqa.selenium.chrome.ChromeDriver;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * In a real browser: rename a stored site with the form on its plan page, and find the new name,
  * shown as text, on the plan and in the site list.
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class RenameSiteBrowserTest {
-
-    @LocalServerPort
-    int port;
+class RenameSiteBrowserTest extends BrowserTestBase {
 
     @Autowired
     SiteService sites;
-
-    private ChromeDriver browser;
-
-    @BeforeEach
-    void openBrowser() {
-        browser = BrowserSupport.start();
-    }
-
-    @AfterEach
-    void closeBrowser() {
-        if (browser != null) {
-            browser.quit();
-        }
-    }
 
     @Test
     void renamingASiteOnItsPlanPageShowsTheNewNameOnThePlanAndInTheList() throws Exception {

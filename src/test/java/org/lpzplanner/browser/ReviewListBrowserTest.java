@@ -5,8 +5,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.sites.SiteService;
@@ -14,40 +12,19 @@ import org.openqa.selenium.By;
 import org.openqa.selenium.Keys;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
-import org.openqa.selenium.chrome.ChromeDriver;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * In a real browser: selecting a row of the review list, with the mouse or with Enter on the
  * focused row, marks the matching item on the plan and only that one.
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class ReviewListBrowserTest {
-
-    @LocalServerPort
-    int port;
+class ReviewListBrowserTest extends BrowserTestBase {
 
     @Autowired
     SiteService sites;
 
     @Autowired
     AnalysisService analyses;
-
-    private ChromeDriver browser;
-
-    @BeforeEach
-    void openBrowser() {
-        browser = BrowserSupport.start();
-    }
-
-    @AfterEach
-    void closeBrowser() {
-        if (browser != null) {
-            browser.quit();
-        }
-    }
 
     private List<WebElement> highlighted() {
         return browser.findElements(By.cssSelector("#plan-drawing svg .highlighted"));

@@ -6,43 +6,20 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.common.Cautions;
 import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
-import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.WebDriverWait;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * In a real browser: upload a sample site from the site list, land on its plan, and find the drawing,
  * the exposure summary and every caution there. Saves a screenshot of the plan page as a test
  * artefact (target/screenshots/plan-page.png).
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
-class UploadAndPlanBrowserTest {
-
-    @LocalServerPort
-    int port;
-
-    private ChromeDriver browser;
-
-    @BeforeEach
-    void openBrowser() {
-        browser = BrowserSupport.start();
-    }
-
-    @AfterEach
-    void closeBrowser() {
-        if (browser != null) {
-            browser.quit();
-        }
-    }
+class UploadAndPlanBrowserTest extends BrowserTestBase {
 
     @Test
     void uploadedSiteOpensOnItsPlanWithDrawingSummaryAndCautions() throws Exception {
