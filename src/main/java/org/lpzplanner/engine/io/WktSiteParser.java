@@ -83,6 +83,7 @@ final class WktSiteParser {
             throw place.fail("geometry", "is empty; give the outline's corners");
         }
         footprints.requireValid(geometry, place, "the footprint");
+        footprints.requireStructureSize(geometry, place);
         return geometry;
     }
 
