@@ -31,6 +31,12 @@ public class ApiErrorHandler {
 
     private static final Logger LOG = LoggerFactory.getLogger(ApiErrorHandler.class);
 
+    private final UploadLimit uploadLimit;
+
+    public ApiErrorHandler(UploadLimit uploadLimit) {
+        this.uploadLimit = uploadLimit;
+    }
+
     @ExceptionHandler(SiteFormatException.class)
     ResponseEntity<Map<String, Object>> siteFormat(SiteFormatException e) {
         Map<String, Object> body = error(e.getMessage());
@@ -76,7 +82,9 @@ public class ApiErrorHandler {
 
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     ResponseEntity<Map<String, Object>> tooLarge(MaxUploadSizeExceededException e) {
-        return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).body(error("the file is too large to upload"));
+        Map<String, Object> body = error(uploadLimit.message());
+        body.put("field", "file");
+        return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).body(body);
     }
 
     @ExceptionHandler(MultipartException.class)
