@@ -7,6 +7,7 @@ import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.dao.DuplicateKeyException;
 import org.springframework.dao.OptimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.HttpStatusCode;
@@ -92,8 +93,12 @@ public class ApiErrorHandler {
         return ResponseEntity.badRequest().body(error("the upload could not be read as a multipart form"));
     }
 
-    @ExceptionHandler(OptimisticLockingFailureException.class)
-    ResponseEntity<Map<String, Object>> conflict(OptimisticLockingFailureException e) {
+    /**
+     * A stale version, or two saves of one site racing for the same revision or file number (the
+     * database's unique constraints let only the first one in, also across app instances).
+     */
+    @ExceptionHandler({OptimisticLockingFailureException.class, DuplicateKeyException.class})
+    ResponseEntity<Map<String, Object>> conflict(RuntimeException e) {
         return ResponseEntity.status(HttpStatus.CONFLICT).body(error(
                 "the site was changed or removed meanwhile; reload it and try again"));
     }
