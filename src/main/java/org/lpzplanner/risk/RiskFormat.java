@@ -42,6 +42,12 @@ final class RiskFormat {
         return text;
     }
 
+    /** A small percentage to two significant digits, rounded up (a bound stays a bound), e.g. "0.041". */
+    static String percent(double value) {
+        return new java.math.BigDecimal(value).round(new java.math.MathContext(2, java.math.RoundingMode.UP))
+                .stripTrailingZeros().toPlainString();
+    }
+
     /** Whole square metres, e.g. "10027". */
     static String area(double squareMetres) {
         return String.format(Locale.ROOT, "%.0f", squareMetres);

@@ -59,7 +59,7 @@ class RiskPage {
         model.put("saved", a.saved());
         model.put("fields", fields(a, values, locale));
         model.put("outcome", risk.outcome(a, locale));
-        model.put("tolerable", a.choice().chosen().isPresent());
+        model.put("tolerable", a.withoutLps().isTolerable());
         model.put("figures", risk.figures(a, locale));
         model.put("dominance", risk.dominance(a, locale));
         model.put("table", risk.section(a, locale));

@@ -152,7 +152,7 @@ public class RiskService {
                 : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
                         RiskFormat.significant(s.thunderstormDays())));
         lines.add(text(locale, "risk.figure.ad", RiskFormat.area(a.area().area()),
-                RiskFormat.significant(a.area().maxRelativeError() * 100)));
+                RiskFormat.percent(a.area().maxRelativeError() * 100)));
         lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
                 RiskFormat.significant(a.location().value()), text(locale, "risk.location." + a.location().name())));
         lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
