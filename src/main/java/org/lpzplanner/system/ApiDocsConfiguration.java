@@ -2,7 +2,6 @@ package org.lpzplanner.system;
 
 import io.swagger.v3.oas.models.OpenAPI;
 import io.swagger.v3.oas.models.info.Info;
-import io.swagger.v3.oas.models.info.License;
 import io.swagger.v3.oas.models.media.ObjectSchema;
 import org.lpzplanner.common.Cautions;
 import org.springdoc.core.utils.SpringDocUtils;
@@ -26,7 +25,6 @@ public class ApiDocsConfiguration {
     @Bean
     OpenAPI lpzPlannerApi() {
         return new OpenAPI().info(new Info().title("LPZ Planner API").version("1")
-                .license(new License().name("open source, see the project's licence file"))
                 .description("""
                         JSON API of LPZ Planner: sites (site files kept verbatim), analyses by the rolling sphere \
                         method, the review of exposed items, air-termination rods and the risk estimate that picks \

@@ -45,6 +45,9 @@ class RiskApiTest {
     @Autowired
     MockMvc mvc;
 
+    @Autowired
+    org.springframework.jdbc.core.simple.JdbcClient jdbc;
+
     private JsonNode json(String url, int status) throws Exception {
         String body = mvc.perform(get(url)).andExpect(status().is(status)).andReturn().getResponse()
                 .getContentAsString(StandardCharsets.UTF_8);
@@ -172,6 +175,19 @@ class RiskApiTest {
     }
 
     @Test
+    void deletingASiteRemovesItsRiskInputs() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Short-lived block");
+        send("/api/sites/" + id + "/risk", HOSPITAL, 200);
+
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete("/api/sites/" + id))
+                .andExpect(status().isNoContent());
+
+        assertThat(json("/api/sites/" + id + "/risk", 404).path("error").asString()).contains(String.valueOf(id));
+        assertThat(jdbc.sql("SELECT COUNT(*) FROM site_risk_inputs WHERE site_id = ?").param(id).query(Long.class)
+                .single()).isZero();
+    }
+
+    @Test
     void unknownSiteAnswers404AndStoresNothing() throws Exception {
         JsonNode e = json("/api/sites/987654/risk", 404);
         assertThat(e.path("error").asString()).contains("987654");
@@ -179,5 +195,7 @@ class RiskApiTest {
         assertThat(e.path("error").asString()).contains("987654");
         e = json("/api/sites/abc/risk", 400);
         assertThat(e.path("error").asString()).contains("id");
+        assertThat(jdbc.sql("SELECT COUNT(*) FROM site_risk_inputs WHERE site_id = 987654").query(Long.class)
+                .single()).isZero();
     }
 }

@@ -70,6 +70,10 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{id}/risk", "get", List.of("200", "400", "404"));
         hasResponses(doc, "/api/sites/{id}/risk", "put", List.of("200", "400", "404"));
 
+        assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
+                "Review", "Air-termination", "Risk");
+        assertThat(doc.path("tags").toString()).contains("IEC 62305-2:2010");
+
         JsonNode error = doc.path("components").path("schemas").path("ApiError");
         assertThat(error.path("properties").propertyNames()).contains("error", "field");
         assertThat(error.path("required").toString()).contains("error");
