@@ -1,5 +1,8 @@
 package org.lpzplanner.risk;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.Locale;
 
 /** How risk figures are written on the page, in the API's texts and in the report. */
@@ -27,24 +30,22 @@ final class RiskFormat {
         if (exponent >= -2 && exponent <= 3) {
             return significant(value);
         }
-        String digits = new java.math.BigDecimal(mantissa).round(new java.math.MathContext(3)).stripTrailingZeros()
+        String digits = new BigDecimal(mantissa).round(new MathContext(3)).stripTrailingZeros()
                 .toPlainString();
         return ("1".equals(digits) ? "" : digits + " × ") + "10" + superscript(exponent);
     }
 
-    /** Up to four significant digits without a power of ten, e.g. "0.0251" or "10 027". */
+    /** Up to four significant digits without a power of ten, e.g. "0.0251" or "10030". */
     static String significant(double value) {
         if (value == 0) {
             return "0";
         }
-        String text = new java.math.BigDecimal(value).round(new java.math.MathContext(4)).stripTrailingZeros()
-                .toPlainString();
-        return text;
+        return new BigDecimal(value).round(new MathContext(4)).stripTrailingZeros().toPlainString();
     }
 
     /** A small percentage to two significant digits, rounded up (a bound stays a bound), e.g. "0.041". */
     static String percent(double value) {
-        return new java.math.BigDecimal(value).round(new java.math.MathContext(2, java.math.RoundingMode.UP))
+        return new BigDecimal(value).round(new MathContext(2, RoundingMode.UP))
                 .stripTrailingZeros().toPlainString();
     }
 

@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.Function;
+import java.util.function.ToDoubleFunction;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.risk.FireProvisions;
@@ -139,7 +141,7 @@ class RiskPage {
     }
 
     private <E extends Enum<E>> List<Option> options(E[] constants, String symbol,
-            java.util.function.Function<E, String> description, java.util.function.ToDoubleFunction<E> factor,
+            Function<E, String> description, ToDoubleFunction<E> factor,
             Locale locale) {
         List<Option> options = new ArrayList<>();
         for (E e : constants) {

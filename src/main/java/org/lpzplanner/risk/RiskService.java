@@ -5,6 +5,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.function.Function;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.engine.model.ProtectionLevel;
@@ -16,6 +17,7 @@ import org.lpzplanner.engine.risk.LevelChoice;
 import org.lpzplanner.engine.risk.LifeRisk;
 import org.lpzplanner.engine.risk.LifeRiskEstimate;
 import org.lpzplanner.engine.risk.LocationFactor;
+import org.lpzplanner.engine.risk.RiskComponent;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
@@ -51,7 +53,7 @@ public class RiskService {
     @Transactional(readOnly = true)
     public RiskAssessment assess(long siteId) {
         StoredSite site = sites.get(siteId);
-        var saved = inputs.find(siteId);
+        Optional<RiskSettings> saved = inputs.find(siteId);
         return assess(site, saved.orElse(RiskSettings.defaults()), saved.isPresent());
     }
 
@@ -165,7 +167,7 @@ public class RiskService {
         if (none.r1() == 0) {
             return text(locale, "risk.dominant.zero");
         }
-        double part = none.dominant() == org.lpzplanner.engine.risk.RiskComponent.R_A ? none.ra() : none.rb();
+        double part = none.dominant() == RiskComponent.R_A ? none.ra() : none.rb();
         return text(locale, "risk.dominant." + none.dominant().name(), RiskFormat.metres(100 * part / none.r1()));
     }
 
