@@ -73,6 +73,9 @@ class RiskPage {
         ProtectionLevel level = a.choice().level().orElse(null);
         model.put("chosenLevel", level == null ? null : level.name());
         model.put("levelAlreadySet", level != null && a.site().level() == level && a.site().customRadius() == null);
+        // levels are declared I to IV, strictest first
+        model.put("siteLevelStricter", level != null && a.site().level().ordinal() < level.ordinal()
+                ? a.site().level().name() : null);
         model.put("svg", CollectionAreaSvg.render(a.geometry(), a.area().zone(),
                 (key, args) -> messages.getMessage(key, args, locale)));
         model.put("cautions", Cautions.lines());

@@ -113,7 +113,7 @@ class RiskPagesTest {
         String html = page(get("/sites/" + id + "/risk?saved=true"), 200);
         assertThat(html).contains("The risk inputs were saved", "The lowest protection level that brings it below is II",
                 "Use protection level II for this site", "R_B (physical damage) dominates: 99");
-        assertThat(html).doesNotContain("No risk inputs are saved");
+        assertThat(html).doesNotContain("No risk inputs are saved", "stricter than the level");
 
         long version = api("/api/sites/" + id).path("version").asLong();
         mvc.perform(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)))
@@ -127,6 +127,21 @@ class RiskPagesTest {
         // the old version is stale now: 409 and the level stays
         assertThat(page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 409))
                 .contains("changed meanwhile");
+    }
+
+    @Test
+    void aStricterSiteLevelIsPointedOutAsTheSafeSide() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Strict block");
+        long version = api("/api/sites/" + id).path("version").asLong();
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.patch("/api/sites/" + id)
+                .contentType(org.springframework.http.MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + version + ", \"level\": \"I\"}")).andExpect(status().isOk());
+        mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
+
+        String html = page(get("/sites/" + id + "/risk"), 200);
+
+        assertThat(html).contains("assessed at protection level I, stricter than the level II",
+                "Use protection level II for this site");
     }
 
     @Test
