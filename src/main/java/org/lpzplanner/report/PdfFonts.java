@@ -1,0 +1,73 @@
+package org.lpzplanner.report;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.HashMap;
+import java.util.Map;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.font.PDType0Font;
+
+/**
+ * The report's one typeface, Liberation Sans (SIL Open Font License 1.1, shipped inside PDFBox; see
+ * licenses/LiberationSans-OFL.txt), embedded as a subset, and the text measures built on it. Text a
+ * user typed can hold any Unicode: characters the font has no glyph for print as {@value #MISSING},
+ * control characters as spaces, so no name can break a report. One instance per document; not
+ * thread-safe.
+ */
+final class PdfFonts {
+
+    static final String FONT_RESOURCE = "/org/apache/pdfbox/resources/ttf/LiberationSans-Regular.ttf";
+    static final char MISSING = '?';
+
+    final PDType0Font font;
+    private final Map<Integer, Boolean> hasGlyph = new HashMap<>();
+
+    PdfFonts(PDDocument document) {
+        try (InputStream in = PdfFonts.class.getResourceAsStream(FONT_RESOURCE)) {
+            if (in == null) {
+                throw new IllegalStateException("the report font " + FONT_RESOURCE + " is missing from the class path");
+            }
+            font = PDType0Font.load(document, in, true);
+        } catch (IOException e) {
+            throw new UncheckedIOException("the report font cannot be read", e);
+        }
+    }
+
+    /** The text with every character the font cannot show replaced, ready for {@code showText}. */
+    String safe(String text) {
+        if (text == null) {
+            return "";
+        }
+        StringBuilder out = new StringBuilder(text.length());
+        text.codePoints().forEach(cp -> {
+            if (Character.isISOControl(cp) || Character.isWhitespace(cp)) {
+                out.append(' ');
+            } else if (hasGlyph.computeIfAbsent(cp, this::lookUp)) {
+                out.appendCodePoint(cp);
+            } else {
+                out.append(MISSING);
+            }
+        });
+        return out.toString();
+    }
+
+    /** Width in points of already safe text at the size. */
+    float width(String safeText, float size) {
+        try {
+            return font.getStringWidth(safeText) / 1000f * size;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private boolean lookUp(int codePoint) {
+        try {
+            // Throws when the font maps the character to no glyph.
+            font.encode(new String(Character.toChars(codePoint)));
+            return true;
+        } catch (IllegalArgumentException | IOException e) {
+            return false;
+        }
+    }
+}
