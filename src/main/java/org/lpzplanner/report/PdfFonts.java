@@ -22,6 +22,7 @@ final class PdfFonts {
 
     final PDType0Font font;
     private final Map<Integer, Boolean> hasGlyph = new HashMap<>();
+    private final Map<Integer, Float> advance = new HashMap<>();
 
     PdfFonts(PDDocument document) {
         try (InputStream in = PdfFonts.class.getResourceAsStream(FONT_RESOURCE)) {
@@ -52,12 +53,25 @@ final class PdfFonts {
         return out.toString();
     }
 
-    /** Width in points of already safe text at the size. */
+    /**
+     * Width in points of already safe text at the size: the sum of the glyph advances (the text is
+     * shown without kerning), each looked up once per document.
+     */
     float width(String safeText, float size) {
+        float units = 0;
+        for (int i = 0; i < safeText.length(); ) {
+            int cp = safeText.codePointAt(i);
+            units += advance.computeIfAbsent(cp, this::advanceOf);
+            i += Character.charCount(cp);
+        }
+        return units / 1000f * size;
+    }
+
+    private float advanceOf(int codePoint) {
         try {
-            return font.getStringWidth(safeText) / 1000f * size;
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            return font.getStringWidth(new String(Character.toChars(codePoint)));
+        } catch (IOException | IllegalArgumentException e) {
+            return 500;
         }
     }
 

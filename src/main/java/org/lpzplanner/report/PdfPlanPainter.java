@@ -77,16 +77,26 @@ final class PdfPlanPainter {
         if (tiled) {
             float k = pointsPerMetre(overview);
             float ox = PdfPages.MARGIN + frameW / 2, oy = (frameTop + frameBottom) / 2;
-            double x0 = plan.minX() - margin, y1 = plan.maxY() + margin;
+            // The tile grid is centred on the site, like the overview.
+            double x0 = cx - cols * tileW / 2, y1 = cy + rows * tileH / 2;
             int n = 0;
-            for (int r = 0; r < rows; r++) {
-                for (int c = 0; c < cols; c++) {
-                    n++;
-                    double tx = x0 + c * tileW, ty = y1 - (r + 1) * tileH;
-                    float px = (float) (ox + (tx - cx) * k), py = (float) (oy + (ty - cy) * k);
-                    p.strokeRect(px, py, (float) (tileW * k), (float) (tileH * k), PART, 0.8f);
-                    p.text(String.valueOf(n), px + 3, py + (float) (tileH * k) - 10, 8, true, PART);
+            try {
+                p.out.saveGraphicsState();
+                p.out.addRect(PdfPages.MARGIN, frameBottom, frameW, frameH);
+                p.out.clip();
+                for (int r = 0; r < rows; r++) {
+                    for (int c = 0; c < cols; c++) {
+                        n++;
+                        double tx = x0 + c * tileW, ty = y1 - (r + 1) * tileH;
+                        float px = (float) (ox + (tx - cx) * k), py = (float) (oy + (ty - cy) * k);
+                        p.strokeRect(px, py, (float) (tileW * k), (float) (tileH * k), PART, 0.8f);
+                        p.text(String.valueOf(n), Math.max(px, PdfPages.MARGIN) + 3,
+                                Math.min(py + (float) (tileH * k), frameTop) - 10, 8, true, PART);
+                    }
                 }
+                p.out.restoreGraphicsState();
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
             }
             n = 0;
             for (int r = 0; r < rows; r++) {

@@ -152,12 +152,15 @@ public final class ReportAssembler {
             blocks.add(new ReportBlock.Paragraph("No saved cuts, and no structure has an exposed point to cut"
                     + " through."));
         }
-        for (AutomaticCuts.StructureCut c : cuts) {
-            SiteSection section = SiteSection.cut(facts.surface(), facts.field(), c.cut().x1(), c.cut().y1(),
-                    c.cut().x2(), c.cut().y2());
+        // Sections are independent exact envelope queries (the field is thread-safe): sample them in
+        // parallel, keeping the order.
+        List<SiteSection> sections = cuts.parallelStream().map(c -> SiteSection.cut(facts.surface(), facts.field(),
+                c.cut().x1(), c.cut().y1(), c.cut().x2(), c.cut().y2())).toList();
+        for (int i = 0; i < cuts.size(); i++) {
+            AutomaticCuts.StructureCut c = cuts.get(i);
             blocks.add(new ReportBlock.Section("Section through " + c.structure().name(), "Through its highest"
                     + " exposed point (" + metres(c.through().x()) + ", " + metres(c.through().y()) + "), "
-                    + cutText(c.cut()), section));
+                    + cutText(c.cut()), sections.get(i)));
         }
     }
 
