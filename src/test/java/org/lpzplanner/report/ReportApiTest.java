@@ -12,6 +12,8 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StructureCorrection;
+import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
@@ -30,6 +32,9 @@ class ReportApiTest {
 
     @Autowired
     AnalysisService analyses;
+
+    @Autowired
+    JdbcClient jdbc;
 
     private long analysedWarehouse(String name) throws Exception {
         long id = sites.create("harbour-warehouse.geojson",
@@ -57,6 +62,38 @@ class ReportApiTest {
     }
 
     @Test
+    void aRevisionKeepsItsFileWhenTheSiteFileIsCorrectedLater() throws Exception {
+        long id = analysedWarehouse("Corrected later");
+        String before = text(id, 1);
+        sites.correctStructure(id, sites.get(id).version(), new StructureCorrection(0, "21", null, null, null, null));
+        analyses.run(id, null, null, null);
+        assertThat(text(id, 1)).isEqualTo(before);
+        assertThat(text(id, 2)).isNotEqualTo(before).contains("21.00");
+    }
+
+    @Test
+    void revisionsStoredWithoutTheirFileFindItByChecksumOrAnswerConflict() throws Exception {
+        long id = analysedWarehouse("Older revision");
+        String before = text(id, 1);
+        // As stored before revisions kept their inputs.
+        jdbc.sql("UPDATE analysis_revisions SET site_name = NULL, source_name = NULL, source_text = NULL,"
+                + " tolerance = NULL WHERE site_id = ?").param(id).update();
+        assertThat(text(id, 1)).isEqualTo(before);
+        sites.correctStructure(id, sites.get(id).version(), new StructureCorrection(0, "21", null, null, null, null));
+        assertThat(text(id, 1)).isEqualTo(before); // found among the earlier files
+        jdbc.sql("DELETE FROM site_file_versions WHERE site_id = ?").param(id).update();
+        mvc.perform(get("/api/sites/" + id + "/revisions/1/report")).andExpect(status().isConflict())
+                .andExpect(jsonPath("$.field").value("revision"))
+                .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("no longer stored")));
+    }
+
+    private String text(long id, int revision) throws Exception {
+        byte[] pdf = mvc.perform(get("/api/sites/" + id + "/revisions/" + revision + "/report"))
+                .andExpect(status().isOk()).andReturn().getResponse().getContentAsByteArray();
+        return String.join(" ", ReportPdfTest.pages(pdf)).replaceAll("\\s+", " ");
+    }
+
+    @Test
     void thePrintLinkGoesToTheLatestRevision() throws Exception {
         long id = analysedWarehouse("Twice analysed");
         analyses.run(id, null, null, null);
@@ -76,5 +113,6 @@ class ReportApiTest {
                 .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("no analysis revision 7")));
         mvc.perform(get("/api/sites/" + id + "/revisions/one/report")).andExpect(status().isBadRequest())
                 .andExpect(jsonPath("$.error").exists());
+        mvc.perform(get("/sites/999999/report")).andExpect(status().isNotFound());
     }
 }
