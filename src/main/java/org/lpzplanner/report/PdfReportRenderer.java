@@ -220,9 +220,13 @@ public final class PdfReportRenderer {
                 out.stroke();
                 y -= FOOTER_LEADING + 1;
                 String page = "Page " + (i + 1) + " of " + total;
-                PdfPages.text(out, fonts, content.footerTitle(), PdfPages.MARGIN, y, 7, false, TEXT);
-                PdfPages.text(out, fonts, page, PdfPages.MARGIN + PdfPages.CONTENT_WIDTH
-                        - fonts.width(fonts.safe(page), 7), y, 7, true, TEXT);
+                float pageWidth = fonts.width(fonts.safe(page), 7);
+                List<String> title = PdfPages.wrap(fonts, content.footerTitle(), 7,
+                        PdfPages.CONTENT_WIDTH - pageWidth - 16);
+                PdfPages.text(out, fonts, title.get(0) + (title.size() > 1 ? " …" : ""), PdfPages.MARGIN, y, 7, false,
+                        TEXT);
+                PdfPages.text(out, fonts, page, PdfPages.MARGIN + PdfPages.CONTENT_WIDTH - pageWidth, y, 7, true,
+                        TEXT);
                 y -= FOOTER_LEADING + 1;
                 for (String line : cautionLines) {
                     PdfPages.text(out, fonts, line, PdfPages.MARGIN, y, FOOTER, false, MUTED);

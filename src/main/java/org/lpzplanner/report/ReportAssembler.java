@@ -96,6 +96,24 @@ public final class ReportAssembler {
                 new ReportBlock.Fact("Site file SHA-256", s.inputsSha256()),
                 new ReportBlock.Fact("Status", status))));
         blocks.add(new ReportBlock.CautionsBox("Read before use", Cautions.lines()));
+        blocks.add(new ReportBlock.Heading("Findings", 2));
+        long edges = facts.items().stream().filter(i -> !i.kind().equals("corner") && !i.kind().equals("facade-band"))
+                .count();
+        long corners = facts.items().stream().filter(i -> i.kind().equals("corner")).count();
+        long bands = facts.items().stream().filter(i -> i.kind().equals("facade-band")).count();
+        double roofArea = facts.stored().roofAreas().values().stream().mapToDouble(Double::doubleValue).sum();
+        int downConductors = facts.downConductors().stream().mapToInt(d -> d.count()).sum();
+        blocks.add(new ReportBlock.Facts(List.of(
+                new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
+                new ReportBlock.Fact("Exposed roof area", metres(roofArea) + " m² (plan)"),
+                new ReportBlock.Fact("Exposed items", edges + " edges, " + corners + " corners, " + bands
+                        + " facade bands; " + facts.acceptedCount() + " accepted"),
+                new ReportBlock.Fact("Air-termination parts", facts.partNumbers().size() + " ("
+                        + facts.stored().intercepting().size() + " intercepting)"),
+                new ReportBlock.Fact("Down-conductors planned", downConductors + " at the level's typical spacing"))));
+        blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
+                + " air-termination parts, exposed items, down-conductors and separation distances; review and"
+                + " approval."));
     }
 
     private static void method(ReportFacts facts, List<ReportBlock> blocks) {
