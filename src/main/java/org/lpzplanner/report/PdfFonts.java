@@ -6,6 +6,7 @@ import java.io.UncheckedIOException;
 import java.util.HashMap;
 import java.util.Map;
 import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.font.PDType0Font;
 
 /**
@@ -23,6 +24,8 @@ final class PdfFonts {
     final PDType0Font font;
     private final Map<Integer, Boolean> hasGlyph = new HashMap<>();
     private final Map<Integer, Float> advance = new HashMap<>();
+    private PDPageContentStream selectedOn;
+    private float selectedSize;
 
     PdfFonts(PDDocument document) {
         try (InputStream in = PdfFonts.class.getResourceAsStream(FONT_RESOURCE)) {
@@ -33,6 +36,25 @@ final class PdfFonts {
         } catch (IOException e) {
             throw new UncheckedIOException("the report font cannot be read", e);
         }
+    }
+
+    /**
+     * Selects the font at the size on the stream unless it is already selected there. PDFBox builds
+     * the font's glyph substitution worker on every font selection, which costs far more than the
+     * text, so repeated selections are skipped. Call {@link #forget} after restoring a graphics
+     * state, which restores the font selected before it.
+     */
+    void use(PDPageContentStream out, float size) throws IOException {
+        if (out != selectedOn || size != selectedSize) {
+            out.setFont(font, size);
+            selectedOn = out;
+            selectedSize = size;
+        }
+    }
+
+    /** The font selection of the current stream is unknown again. */
+    void forget() {
+        selectedOn = null;
     }
 
     /** The text with every character the font cannot show replaced, ready for {@code showText}. */

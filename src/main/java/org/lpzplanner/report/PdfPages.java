@@ -87,8 +87,8 @@ final class PdfPages {
     static void text(PDPageContentStream out, PdfFonts fonts, String text, float x, float baseline, float size,
             boolean bold, Color colour) {
         try {
+            fonts.use(out, size);
             out.beginText();
-            out.setFont(fonts.font, size);
             out.setNonStrokingColor(colour);
             if (bold) {
                 out.setStrokingColor(colour);

@@ -95,6 +95,7 @@ final class PdfPlanPainter {
                     }
                 }
                 p.out.restoreGraphicsState();
+                p.fonts.forget();
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
@@ -142,6 +143,7 @@ final class PdfPlanPainter {
                 halo(out, p.fonts, text, tx, ty, size);
             }
             out.restoreGraphicsState();
+            p.fonts.forget();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -248,8 +250,8 @@ final class PdfPlanPainter {
 
     private static void halo(PDPageContentStream out, PdfFonts fonts, String safeText, float x, float y, float size)
             throws IOException {
+        fonts.use(out, size);
         out.beginText();
-        out.setFont(fonts.font, size);
         out.setStrokingColor(Color.WHITE);
         out.setLineWidth(size / 4);
         out.setRenderingMode(org.apache.pdfbox.pdmodel.graphics.state.RenderingMode.STROKE);

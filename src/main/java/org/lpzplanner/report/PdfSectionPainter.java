@@ -103,6 +103,7 @@ final class PdfSectionPainter {
                 out.stroke();
             }
             out.restoreGraphicsState();
+            p.fonts.forget();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
