@@ -18,7 +18,8 @@ import org.springframework.web.servlet.ModelAndView;
  * size limit gives a 413 page saying the limit.
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
-    ReviewPageController.class, SectionPageController.class})
+    ReviewPageController.class, SectionPageController.class,
+    org.lpzplanner.report.ReportPageController.class})
 public class SitePageErrors {
 
     private final UploadLimit uploadLimit;

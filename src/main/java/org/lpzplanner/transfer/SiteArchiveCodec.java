@@ -25,6 +25,14 @@ import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.risk.FireProvisions;
+import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.LocationFactor;
+import org.lpzplanner.engine.risk.SpecialHazard;
+import org.lpzplanner.engine.risk.StructureUse;
+import org.lpzplanner.engine.risk.SurfaceType;
+import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.risk.FlashDensitySource;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.StreamReadFeature;
@@ -59,6 +67,7 @@ final class SiteArchiveCodec {
         document.put("site", archive.site());
         document.put("earlierFiles", archive.earlierFiles());
         document.put("revisions", archive.revisions());
+        document.put("riskInputs", archive.riskInputs());
         return JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
     }
 
@@ -94,8 +103,10 @@ final class SiteArchiveCodec {
                     + FORMAT_VERSION);
         }
         SiteArchive.Site site = site(object(member(root, "", "site"), "site"));
+        JsonNode risk = root.get("riskInputs");
         return new SiteArchive(site, earlierFiles(array(root, "", "earlierFiles")),
-                revisions(array(root, "", "revisions")));
+                revisions(array(root, "", "revisions")),
+                risk == null || risk.isNull() ? null : riskInputs(object(risk, "riskInputs")));
     }
 
     private static SiteArchive.Site site(JsonNode node) {
@@ -148,7 +159,9 @@ final class SiteArchiveCodec {
                     nonNegative(node, p, "protectedGroundArea"), bool(node, p, "fullyProtected"),
                     nonBlankText(node, p, "resultGeoJson", LONG_TEXT),
                     whole(node, p, "engineMillis", 0, Long.MAX_VALUE), instant(node, p, "createdAt"),
-                    accepted(array(node, p, "accepted"), p + ".accepted")));
+                    accepted(array(node, p, "accepted"), p + ".accepted"), optionalText(node, p, "siteName", NAME),
+                    optionalText(node, p, "sourceName", FILE_NAME), optionalText(node, p, "sourceText", LONG_TEXT),
+                    optionalPositive(node, p, "tolerance")));
         }
         return out;
     }
@@ -167,6 +180,37 @@ final class SiteArchiveCodec {
                     instant(node, p, "createdAt")));
         }
         return out;
+    }
+
+    private static SiteArchive.RiskInputs riskInputs(JsonNode node) {
+        String p = "riskInputs";
+        JsonNode lines = node.get("lineCount");
+        return new SiteArchive.RiskInputs(choice(node, p, "flashDensitySource", FlashDensitySource.class),
+                optionalPositive(node, p, "flashDensity"), optionalPositive(node, p, "thunderstormDays"),
+                node.hasNonNull("locationFactor") ? choice(node, p, "locationFactor", LocationFactor.class) : null,
+                choice(node, p, "surfaceType", SurfaceType.class), choice(node, p, "fireRisk", FireRisk.class),
+                choice(node, p, "fireProvisions", FireProvisions.class),
+                choice(node, p, "specialHazard", SpecialHazard.class),
+                choice(node, p, "structureUse", StructureUse.class),
+                choice(node, p, "touchStep", TouchStepProtection.class), nonNegative(node, p, "personsInZone"),
+                nonNegative(node, p, "personsTotal"), nonNegative(node, p, "hoursPerYear"),
+                lines == null || lines.isNull() ? null : (int) whole(node, p, "lineCount", 0, 1000),
+                optionalPositive(node, p, "lineLength"), instant(node, p, "updatedAt"));
+    }
+
+    private static <E extends Enum<E>> String choice(JsonNode node, String path, String name, Class<E> choices) {
+        String value = text(node, path, name, 40);
+        try {
+            return Enum.valueOf(choices, value).name();
+        } catch (IllegalArgumentException e) {
+            throw bad(path + "." + name, "must be one of " + java.util.Arrays.toString(choices.getEnumConstants())
+                    + ", got \"" + value + "\"");
+        }
+    }
+
+    private static String optionalText(JsonNode node, String path, String name, int maxLength) {
+        JsonNode value = node.get(name);
+        return value == null || value.isNull() ? null : text(node, path, name, maxLength);
     }
 
     private static String level(JsonNode node, String path) {

@@ -36,9 +36,19 @@ class SiteArchiveRepository {
         List<SiteArchive.Revision> revisions = jdbc.sql("SELECT id, revision, protection_level, sphere_radius,"
                         + " resolution, inputs_sha256, exposed_roof_area, exposed_edge_length, exposed_corners,"
                         + " facade_bands, protected_ground_area, fully_protected, result_geojson, engine_millis,"
-                        + " created_at FROM analysis_revisions WHERE site_id = ? ORDER BY revision")
+                        + " created_at, site_name, source_name, source_text, tolerance FROM analysis_revisions"
+                        + " WHERE site_id = ? ORDER BY revision")
                 .param(siteId).query((rs, n) -> revisionRow(rs, accepted(rs.getLong("id")))).list();
-        return Optional.of(new SiteArchive(site.get(), files, revisions));
+        SiteArchive.RiskInputs risk = jdbc.sql("SELECT * FROM site_risk_inputs WHERE site_id = ?").param(siteId)
+                .query((rs, n) -> new SiteArchive.RiskInputs(rs.getString("flash_density_source"),
+                        nullable(rs, "flash_density"), nullable(rs, "thunderstorm_days"), rs.getString("location_factor"),
+                        rs.getString("surface_type"), rs.getString("fire_risk"), rs.getString("fire_provisions"),
+                        rs.getString("special_hazard"), rs.getString("structure_use"), rs.getString("touch_step"),
+                        rs.getDouble("persons_in_zone"), rs.getDouble("persons_total"), rs.getDouble("hours_per_year"),
+                        nullableInt(rs, "line_count"), nullable(rs, "line_length"),
+                        rs.getTimestamp("updated_at").toInstant()))
+                .optional().orElse(null);
+        return Optional.of(new SiteArchive(site.get(), files, revisions, risk));
     }
 
     private List<SiteArchive.AcceptedItem> accepted(long revisionId) {
@@ -68,12 +78,14 @@ class SiteArchiveRepository {
             KeyHolder revisionKey = new GeneratedKeyHolder();
             jdbc.sql("INSERT INTO analysis_revisions (site_id, revision, protection_level, sphere_radius, resolution,"
                             + " inputs_sha256, exposed_roof_area, exposed_edge_length, exposed_corners, facade_bands,"
-                            + " protected_ground_area, fully_protected, result_geojson, created_at, engine_millis)"
-                            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                            + " protected_ground_area, fully_protected, result_geojson, created_at, engine_millis,"
+                            + " site_name, source_name, source_text, tolerance)"
+                            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
                     .params(siteId, r.revision(), r.level(), r.sphereRadius(), r.resolution(), r.inputsSha256(),
                             r.exposedRoofArea(), r.exposedEdgeLength(), r.exposedCorners(), r.facadeBands(),
                             r.protectedGroundArea(), r.fullyProtected(), r.resultGeoJson(),
-                            Timestamp.from(r.createdAt()), r.engineMillis())
+                            Timestamp.from(r.createdAt()), r.engineMillis(), r.siteName(), r.sourceName(),
+                            r.sourceText(), r.tolerance())
                     .update(revisionKey, "id");
             long revisionId = revisionKey.getKeyAs(Number.class).longValue();
             for (SiteArchive.AcceptedItem a : r.accepted()) {
@@ -81,7 +93,29 @@ class SiteArchiveRepository {
                         .params(revisionId, a.key(), a.reason(), Timestamp.from(a.createdAt())).update();
             }
         }
+        SiteArchive.RiskInputs k = archive.riskInputs();
+        if (k != null) {
+            jdbc.sql("INSERT INTO site_risk_inputs (site_id, flash_density_source, flash_density, thunderstorm_days,"
+                            + " location_factor, surface_type, fire_risk, fire_provisions, special_hazard, structure_use,"
+                            + " touch_step, persons_in_zone, persons_total, hours_per_year, line_count, line_length,"
+                            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                    .params(siteId, k.flashDensitySource(), k.flashDensity(), k.thunderstormDays(), k.locationFactor(),
+                            k.surfaceType(), k.fireRisk(), k.fireProvisions(), k.specialHazard(), k.structureUse(),
+                            k.touchStep(), k.personsInZone(), k.personsTotal(), k.hoursPerYear(), k.lineCount(),
+                            k.lineLength(), Timestamp.from(k.updatedAt()))
+                    .update();
+        }
         return siteId;
+    }
+
+    private static Double nullable(ResultSet rs, String column) throws SQLException {
+        double value = rs.getDouble(column);
+        return rs.wasNull() ? null : value;
+    }
+
+    private static Integer nullableInt(ResultSet rs, String column) throws SQLException {
+        int value = rs.getInt(column);
+        return rs.wasNull() ? null : value;
     }
 
     private static SiteArchive.Site siteRow(ResultSet rs, int rowNum) throws SQLException {
@@ -99,6 +133,7 @@ class SiteArchiveRepository {
                 rs.getDouble("exposed_roof_area"), rs.getDouble("exposed_edge_length"), rs.getInt("exposed_corners"),
                 rs.getInt("facade_bands"), rs.getDouble("protected_ground_area"), rs.getBoolean("fully_protected"),
                 rs.getString("result_geojson"), rs.getLong("engine_millis"), rs.getTimestamp("created_at").toInstant(),
-                accepted);
+                accepted, rs.getString("site_name"), rs.getString("source_name"), rs.getString("source_text"),
+                nullable(rs, "tolerance"));
     }
 }

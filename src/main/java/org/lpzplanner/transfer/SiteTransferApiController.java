@@ -4,6 +4,12 @@ import java.io.IOException;
 import java.net.URI;
 import java.nio.charset.StandardCharsets;
 import java.util.Map;
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
@@ -21,6 +27,7 @@ import org.springframework.web.multipart.MultipartFile;
  * 201 with its id; a bad file answers 400 naming the member and stores nothing).
  */
 @RestController
+@Tag(name = "Sites")
 public class SiteTransferApiController {
 
     private final SiteTransferService transfers;
@@ -29,6 +36,11 @@ public class SiteTransferApiController {
         this.transfers = transfers;
     }
 
+    @Operation(summary = "Export a whole site as one file",
+            description = "Site settings and file, earlier files, every revision with what it read and its accepted"
+                    + " items, and the risk inputs; database ids are left out")
+    @ApiResponse(responseCode = "200", description = "The site export (JSON, as an attachment)")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/api/sites/{id}/export")
     public ResponseEntity<byte[]> export(@PathVariable long id) {
         SiteTransferService.ExportFile file = transfers.export(id);
@@ -39,6 +51,10 @@ public class SiteTransferApiController {
                 .body(file.content());
     }
 
+    @Operation(summary = "Import a site export as a new site", description = "All or nothing: a bad file stores nothing")
+    @ApiResponse(responseCode = "201", description = "Stored; Location names the new site")
+    @ApiResponse(responseCode = "400", description = "Not a usable site export; the member at fault is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "413", description = "The file is larger than the upload limit", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/api/sites/import", consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     public ResponseEntity<Map<String, Object>> importSite(@RequestParam("file") MultipartFile file) throws IOException {
         long id = transfers.importSite(file.getBytes());

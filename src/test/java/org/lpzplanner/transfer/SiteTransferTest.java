@@ -58,6 +58,10 @@ class SiteTransferTest {
         analyses.run(site.id(), null, null, "2");
         String key = reviews.latest(site.id()).orElseThrow().items().get(0).key();
         reviews.accept(site.id(), key, "covered by a natural component (steel gutter)");
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put("/api/sites/" + site.id()
+                        + "/risk").contentType(org.springframework.http.MediaType.APPLICATION_JSON)
+                        .content("{\"flashDensity\": \"4\", \"location\": \"surrounded_by_higher\", \"lineCount\": 2}"))
+                .andExpect(status().isOk());
         return site.id();
     }
 
@@ -77,7 +81,8 @@ class SiteTransferTest {
 
     private long rows() {
         return jdbc.sql("SELECT (SELECT COUNT(*) FROM sites) + (SELECT COUNT(*) FROM site_file_versions)"
-                + " + (SELECT COUNT(*) FROM analysis_revisions) + (SELECT COUNT(*) FROM accepted_items)")
+                + " + (SELECT COUNT(*) FROM analysis_revisions) + (SELECT COUNT(*) FROM accepted_items)"
+                + " + (SELECT COUNT(*) FROM site_risk_inputs)")
                 .query(Long.class).single();
     }
 
@@ -90,6 +95,8 @@ class SiteTransferTest {
         assertThat(doc.path("revisions")).hasSize(2);
         assertThat(doc.path("revisions").get(1).path("accepted")).hasSize(1);
         assertThat(doc.path("site").path("fileText").stringValue()).contains("North rod");
+        assertThat(doc.path("riskInputs").path("flashDensity").asDouble()).isEqualTo(4.0);
+        assertThat(doc.path("revisions").get(1).path("sourceText").stringValue()).contains("North rod");
 
         long copy = importFile(first);
         assertThat(copy).isNotEqualTo(id);
@@ -146,6 +153,9 @@ class SiteTransferTest {
         ObjectNode badTime = good.deepCopy();
         ((ObjectNode) badTime.get("revisions").get(1).get("accepted").get(0)).put("createdAt", "yesterday");
         refused(bytes(badTime), "revisions[1].accepted[0].createdAt", "UTC time");
+        ObjectNode badRisk = good.deepCopy();
+        ((ObjectNode) badRisk.get("riskInputs")).put("fireRisk", "EXTREME");
+        refused(bytes(badRisk), "riskInputs.fireRisk", "must be one of");
 
         // the site file inside is checked like an upload: the engine's reader names the feature
         ObjectNode badSiteFile = good.deepCopy();
