@@ -9,6 +9,8 @@ import java.util.HexFormat;
 import java.util.Map;
 import java.util.Optional;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
+import org.lpzplanner.engine.exposure.AnalysisProgress;
+import org.lpzplanner.engine.exposure.AnalysisState;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.io.SiteDocument;
@@ -35,14 +37,16 @@ public class AnalysisService {
     private final AnalysisRepository analyses;
     private final TransactionTemplate transactions;
     private final Clock clock;
+    private final AnalysisStateCache kept;
 
     public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
-            TransactionTemplate transactions, Clock clock) {
+            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept) {
         this.sites = sites;
         this.siteRows = siteRows;
         this.analyses = analyses;
         this.transactions = transactions;
         this.clock = clock;
+        this.kept = kept;
     }
 
     /**
@@ -58,14 +62,30 @@ public class AnalysisService {
      *         deleted while the analysis ran
      */
     public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText) {
+        return run(siteId, levelText, radiusText, resolutionText, AnalysisProgress.NONE);
+    }
+
+    /**
+     * As {@link #run(long, String, String, String)}, reporting to {@code progress}.
+     *
+     * @throws org.lpzplanner.engine.exposure.AnalysisCancelledException when {@code progress} asked
+     *         to stop; nothing is stored then
+     */
+    public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText,
+            AnalysisProgress progress) {
         StoredSite site = sites.get(siteId);
         SphereSpec sphere = sphere(site, levelText, radiusText);
         Double resolution = Settings.resolution(resolutionText);
         SiteDocument document = sites.document(site);
         AnalysisResult result;
         try {
-            result = ExposureAnalysis.analyze(document.site(),
-                    new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE));
+            AnalysisOptions options = new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE);
+            Optional<AnalysisState> previous = kept.closest(site.id(), site.version());
+            AnalysisState state = previous.isPresent()
+                    ? ExposureAnalysis.update(previous.get(), document.site(), options, progress)
+                    : ExposureAnalysis.analyzeKeepingState(document.site(), options, progress);
+            kept.keep(site.id(), site.version(), state);
+            result = state.result();
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
         }

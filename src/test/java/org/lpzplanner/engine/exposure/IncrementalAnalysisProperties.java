@@ -35,8 +35,7 @@ class IncrementalAnalysisProperties {
                 : List.of(20_261_201L, 20_261_202L);
         List<Arguments> out = new ArrayList<>();
         for (long seed : seeds) {
-            out.add(Arguments.of("brookfield-campus.geojson", ProtectionLevel.I, seed));
-            out.add(Arguments.of("brookfield-campus.geojson", ProtectionLevel.III, seed));
+            out.add(Arguments.of("brookfield-campus.geojson", seed == seeds.get(0) ? ProtectionLevel.I : ProtectionLevel.III, seed));
             out.add(Arguments.of("millbrook-hall.geojson", ProtectionLevel.II, seed));
         }
         return out.stream();
@@ -53,7 +52,7 @@ class IncrementalAnalysisProperties {
             extent.expandToInclude(s.footprint().getEnvelopeInternal());
         }
         AnalysisState state = ExposureAnalysis.analyzeKeepingState(site, options, AnalysisProgress.NONE);
-        for (int step = 0; step < 4; step++) {
+        for (int step = 0; step < 3; step++) {
             site = edit(site, rnd, extent, step);
             state = ExposureAnalysis.update(state, site, options, AnalysisProgress.NONE);
             AnalysisResult fresh = ExposureAnalysis.analyze(site, options);
@@ -77,7 +76,7 @@ class IncrementalAnalysisProperties {
     }
 
     static Stream<Long> structureSeeds() {
-        return Stream.of(3L, 8L);
+        return Stream.of(3L);
     }
 
     private static Site edit(Site site, Random rnd, Envelope extent, int step) {
