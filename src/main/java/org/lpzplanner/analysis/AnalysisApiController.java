@@ -1,9 +1,11 @@
 package org.lpzplanner.analysis;
 
+import java.net.URI;
 import java.util.List;
 import org.lpzplanner.common.Cautions;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.ResponseEntity;
+import org.springframework.web.bind.annotation.DeleteMapping;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -17,7 +19,9 @@ import tools.jackson.databind.json.JsonMapper;
  * JSON API for analyses of a site:
  * {@code POST /api/sites/{id}/analyses} runs one (parameters {@code level}, {@code radius},
  * {@code resolution}, all optional) and {@code GET /api/sites/{id}/analyses/latest} returns the
- * latest. Both answer with the summary, the result GeoJSON and the cautions.
+ * latest. Both answer with the summary, the result GeoJSON and the cautions. With {@code async=true}
+ * the analysis runs in the background: {@code GET .../analyses/jobs/{jobId}} follows it and
+ * {@code DELETE} cancels it.
  */
 @RestController
 @RequestMapping("/api/sites/{siteId}/analyses")
@@ -26,9 +30,11 @@ public class AnalysisApiController {
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private final AnalysisService analyses;
+    private final AnalysisJobs jobs;
 
-    public AnalysisApiController(AnalysisService analyses) {
+    public AnalysisApiController(AnalysisService analyses, AnalysisJobs jobs) {
         this.analyses = analyses;
+        this.jobs = jobs;
     }
 
     /** An analysis with everything a client needs to show it responsibly. */
@@ -40,12 +46,35 @@ public class AnalysisApiController {
         }
     }
 
+    /**
+     * Runs an analysis and answers 201 with it; with {@code async=true} queues it instead and
+     * answers 202 with the job (its address in {@code Location}), or 429 with {@code Retry-After}
+     * when the workers and their queue are full.
+     */
     @PostMapping
-    public ResponseEntity<AnalysisView> run(@PathVariable long siteId,
+    public ResponseEntity<?> run(@PathVariable long siteId,
             @RequestParam(required = false) String level, @RequestParam(required = false) String radius,
-            @RequestParam(required = false) String resolution) {
+            @RequestParam(required = false) String resolution, @RequestParam(defaultValue = "false") boolean async) {
+        if (async) {
+            AnalysisJob job = jobs.submit(siteId, level, radius, resolution);
+            return ResponseEntity.accepted()
+                    .location(URI.create("/api/sites/" + siteId + "/analyses/jobs/" + job.id()))
+                    .body(job.snapshot());
+        }
         AnalysisRevision revision = analyses.run(siteId, level, radius, resolution);
         return ResponseEntity.status(HttpStatus.CREATED).body(AnalysisView.of(revision));
+    }
+
+    /** Where a background analysis is: state, stage, share done, and the revision once done. */
+    @GetMapping("/jobs/{jobId}")
+    public AnalysisJob.Snapshot job(@PathVariable long siteId, @PathVariable String jobId) {
+        return jobs.find(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
+    }
+
+    /** Asks a background analysis to stop; nothing of it is stored. Answers with the job. */
+    @DeleteMapping("/jobs/{jobId}")
+    public AnalysisJob.Snapshot cancel(@PathVariable long siteId, @PathVariable String jobId) {
+        return jobs.cancel(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
     }
 
     /** 404 with a JSON message when the site was never analysed. */

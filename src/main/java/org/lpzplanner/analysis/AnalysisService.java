@@ -102,6 +102,17 @@ public class AnalysisService {
         });
     }
 
+    /**
+     * Checks a site id and settings as {@link #run} would, without analysing.
+     *
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
+     * @throws InvalidInputException when a setting cannot be used
+     */
+    public void check(long siteId, String levelText, String radiusText, String resolutionText) {
+        sphere(sites.get(siteId), levelText, radiusText);
+        Settings.resolution(resolutionText);
+    }
+
     /** The site's latest revision with its result GeoJSON, empty when it was never analysed. */
     public Optional<AnalysisRevision> latest(long siteId) {
         sites.get(siteId);
