@@ -38,15 +38,17 @@ public class AnalysisService {
     private final TransactionTemplate transactions;
     private final Clock clock;
     private final AnalysisStateCache kept;
+    private final AcceptedItemRepository accepted;
 
     public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
-            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept) {
+            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted) {
         this.sites = sites;
         this.siteRows = siteRows;
         this.analyses = analyses;
         this.transactions = transactions;
         this.clock = clock;
         this.kept = kept;
+        this.accepted = accepted;
     }
 
     /**
@@ -92,12 +94,14 @@ public class AnalysisService {
         String geoJson = ResultGeoJson.write(document.site(), result);
         return transactions.execute(status -> {
             var now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
+            Optional<AnalysisRevision> previous = analyses.latest(site.id());
             AnalysisRevision revision = analyses.insert(new AnalysisRevision(0, site.id(),
                     analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), result.resolution(),
                     sha256(site.sourceText()), result.totalExposedRoofArea(), result.totalExposedEdgeLength(),
                     result.corners().size(), result.facades().size(), result.protectedGround().planArea(),
                     result.isFullyProtected(), geoJson, now, result.totalMillis()));
             siteRows.touch(site.id(), site.version(), now);
+            previous.ifPresent(p -> carryOverAcceptances(p, revision, now));
             return revision;
         });
     }
@@ -111,6 +115,24 @@ public class AnalysisService {
     public void check(long siteId, String levelText, String radiusText, String resolutionText) {
         sphere(sites.get(siteId), levelText, radiusText);
         Settings.resolution(resolutionText);
+    }
+
+    /**
+     * Accepted review items stay accepted in the new revision where the same item (same key: kind,
+     * owner and geometry to the decimetre) is still exposed; the others are dropped with the old
+     * revision's review.
+     */
+    private void carryOverAcceptances(AnalysisRevision previous, AnalysisRevision next, java.time.Instant now) {
+        Map<String, String> reasons = accepted.reasons(previous.id());
+        if (reasons.isEmpty()) {
+            return;
+        }
+        for (ReviewItems.Item item : ReviewItems.of(next.resultGeoJson())) {
+            String reason = reasons.get(item.key());
+            if (reason != null) {
+                accepted.accept(next.id(), item.key(), reason, now);
+            }
+        }
     }
 
     /** The site's latest revision with its result GeoJSON, empty when it was never analysed. */
