@@ -13,7 +13,9 @@ import org.springframework.stereotype.Component;
  * redoes what the edit can change. A pure speed-up: the engine compares the kept site with the
  * edited one itself and analyses afresh whenever they differ in more than the air-termination, so
  * a state from any version of the site (or none, after a restart or on another app instance) gives
- * the same result. Bounded: the least recently used states go first.
+ * the same result. Bounded in number and in grid cells held (memory grows with them, roughly 100
+ * bytes a cell): the least recently used states go first, and a state larger than the whole budget
+ * is not kept.
  */
 @Component
 public class AnalysisStateCache {
@@ -23,10 +25,13 @@ public class AnalysisStateCache {
     }
 
     private final int capacity;
+    private final long cellBudget;
     private final LinkedHashMap<Key, AnalysisState> states = new LinkedHashMap<>(16, 0.75f, true);
 
-    public AnalysisStateCache(@Value("${lpz.analysis.kept-states:8}") int capacity) {
+    public AnalysisStateCache(@Value("${lpz.analysis.kept-states:8}") int capacity,
+            @Value("${lpz.analysis.kept-cells:3000000}") long cellBudget) {
         this.capacity = Math.max(0, capacity);
+        this.cellBudget = Math.max(0, cellBudget);
     }
 
     /** The state kept for this version of the site, else the one of its latest kept version. */
@@ -45,15 +50,16 @@ public class AnalysisStateCache {
     }
 
     public synchronized void keep(long siteId, long version, AnalysisState state) {
-        if (capacity == 0) {
+        // one state per site is enough to start the next edit from
+        states.keySet().removeIf(k -> k.siteId() == siteId);
+        if (capacity == 0 || state.gridCells() > cellBudget) {
             return;
         }
-        // one state per site is enough to start the next edit from
-        states.keySet().removeIf(k -> k.siteId() == siteId && k.version() != version);
         states.put(new Key(siteId, version), state);
+        long cells = states.values().stream().mapToLong(AnalysisState::gridCells).sum();
         Iterator<Map.Entry<Key, AnalysisState>> oldest = states.entrySet().iterator();
-        while (states.size() > capacity && oldest.hasNext()) {
-            oldest.next();
+        while ((states.size() > capacity || cells > cellBudget) && oldest.hasNext()) {
+            cells -= oldest.next().getValue().gridCells();
             oldest.remove();
         }
     }

@@ -63,6 +63,11 @@ public final class AnalysisState {
         return options;
     }
 
+    /** Grid cells of the envelope it holds: its memory grows with them (roughly 100 bytes a cell). */
+    public long gridCells() {
+        return (long) field.grid().nx() * field.grid().ny();
+    }
+
     /**
      * The plan box [minX, minY, maxX, maxY] of the air-termination parts that differ between this
      * state's site and {@code next}: an empty box (min above max) when none differ, null when
