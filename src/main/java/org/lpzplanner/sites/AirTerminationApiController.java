@@ -1,5 +1,11 @@
 package org.lpzplanner.sites;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import java.net.URI;
 import java.util.List;
 import java.util.Locale;
@@ -37,6 +43,7 @@ import tools.jackson.databind.JsonNode;
  * one, answering the same way. A stale {@code version} answers 409.
  */
 @RestController
+@Tag(name = "Air-termination", description = "Rods and conductors of a site; each change rewrites the site file and analyses again")
 @RequestMapping("/api/sites/{id}")
 public class AirTerminationApiController {
 
@@ -64,11 +71,20 @@ public class AirTerminationApiController {
             long serverMillis) {
     }
 
+    @Operation(summary = "Rods and conductors of a site")
+    @ApiResponse(responseCode = "200", description = "The parts")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/parts")
     public AirTerminationService.Parts parts(@PathVariable long id) {
         return parts.parts(id);
     }
 
+    @Operation(summary = "Add a rod",
+            description = "JSON object with version, x and y (local metres), height and optional name and id. GeoJSON sites only.")
+    @ApiResponse(responseCode = "201", description = "Added; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "A value cannot be used, or the site file cannot hold rods; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/rods", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<Change> add(@PathVariable long id, @RequestBody JsonNode body, Locale locale) {
         long start = System.nanoTime();
@@ -77,6 +93,12 @@ public class AirTerminationApiController {
                 .body(answer(id, rodId, null, start, locale));
     }
 
+    @Operation(summary = "Move or change a rod",
+            description = "JSON object with version and any of x, y, height, name.")
+    @ApiResponse(responseCode = "200", description = "Changed; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or rod", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PutMapping(value = "/rods/{rodId}", consumes = MediaType.APPLICATION_JSON_VALUE)
     public Change change(@PathVariable long id, @PathVariable String rodId, @RequestBody JsonNode body,
             Locale locale) {
@@ -85,6 +107,12 @@ public class AirTerminationApiController {
         return answer(id, rodId, before, start, locale);
     }
 
+    @Operation(summary = "Delete a rod",
+            description = "Parameter version is required.")
+    @ApiResponse(responseCode = "200", description = "Deleted; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "version is missing or not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or rod", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/rods/{rodId}")
     public Change remove(@PathVariable long id, @PathVariable String rodId, @RequestParam Long version,
             Locale locale) {
@@ -104,6 +132,12 @@ public class AirTerminationApiController {
      * {@code heightAboveRoof}, or [[x, y, elevation above ground], ...]), optional {@code name} and
      * {@code id}.
      */
+    @Operation(summary = "Add a roof conductor or catenary wire",
+            description = "JSON object with version, points ([[x, y], ...] in local metres with heightAboveRoof, or [[x, y, elevation above ground], ...]) and optional name and id. GeoJSON sites only.")
+    @ApiResponse(responseCode = "201", description = "Added; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "Points or heights cannot be used, or the site file cannot hold conductors; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/conductors", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<ConductorChange> addConductor(@PathVariable long id, @RequestBody JsonNode body,
             Locale locale) {
@@ -116,6 +150,11 @@ public class AirTerminationApiController {
                 .body(conductorChange(conductorId, null, change));
     }
 
+    @Operation(summary = "Delete a conductor", description = "Parameter version is required.")
+    @ApiResponse(responseCode = "200", description = "Deleted; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "version is missing or not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or conductor", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/conductors/{conductorId}")
     public ConductorChange removeConductor(@PathVariable long id, @PathVariable String conductorId,
             @RequestParam Long version, Locale locale) {

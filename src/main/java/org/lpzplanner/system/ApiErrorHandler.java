@@ -6,6 +6,8 @@ import org.lpzplanner.analysis.AnalysisBusyException;
 import org.lpzplanner.analysis.AnalysisJobNotFoundException;
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.io.SiteFormatException;
+import org.lpzplanner.report.RevisionInputsMissingException;
+import org.lpzplanner.report.RevisionNotFoundException;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -82,6 +84,20 @@ public class ApiErrorHandler {
         body.put("retryAfterSeconds", e.retryAfterSeconds());
         return ResponseEntity.status(HttpStatus.TOO_MANY_REQUESTS)
                 .header("Retry-After", Integer.toString(e.retryAfterSeconds())).body(body);
+    }
+
+    @ExceptionHandler(RevisionNotFoundException.class)
+    ResponseEntity<Map<String, Object>> noRevision(RevisionNotFoundException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("field", "revision");
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(body);
+    }
+
+    @ExceptionHandler(RevisionInputsMissingException.class)
+    ResponseEntity<Map<String, Object>> inputsMissing(RevisionInputsMissingException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("field", "revision");
+        return ResponseEntity.status(HttpStatus.CONFLICT).body(body);
     }
 
     @ExceptionHandler(MethodArgumentTypeMismatchException.class)
