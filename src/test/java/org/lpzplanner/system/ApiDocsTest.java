@@ -66,7 +66,6 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{id}", "get", List.of("200", "400", "404"));
         hasResponses(doc, "/api/sites/{id}", "patch", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}", "delete", List.of("204", "404", "409"));
-        hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "400", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest/items", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post", List.of("200", "400", "404"));
