@@ -2,6 +2,8 @@ package org.lpzplanner.system;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.lpzplanner.analysis.AnalysisBusyException;
+import org.lpzplanner.analysis.AnalysisJobNotFoundException;
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.report.RevisionInputsMissingException;
@@ -27,7 +29,8 @@ import org.springframework.web.multipart.MultipartException;
  * Turns every failure of the JSON API into a JSON body {@code {"error": "..."}} with a fitting
  * status, never a stack trace: 400 for unusable input (site files also name {@code file},
  * {@code feature}, {@code featureName}, {@code line} and {@code field} where known), 404 for unknown
- * sites and review items, 409 for concurrent changes, 413 for oversized uploads, 500 with a plain message otherwise.
+ * sites, review items and analysis jobs, 409 for concurrent changes, 429 with {@code Retry-After}
+ * when the analysis workers are all busy, 413 for oversized uploads, 500 with a plain message otherwise.
  */
 @RestControllerAdvice(annotations = RestController.class)
 public class ApiErrorHandler {
@@ -75,6 +78,19 @@ public class ApiErrorHandler {
     @ExceptionHandler(ReviewItemNotFoundException.class)
     ResponseEntity<Map<String, Object>> noItem(ReviewItemNotFoundException e) {
         return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    }
+
+    @ExceptionHandler(AnalysisJobNotFoundException.class)
+    ResponseEntity<Map<String, Object>> noJob(AnalysisJobNotFoundException e) {
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    }
+
+    @ExceptionHandler(AnalysisBusyException.class)
+    ResponseEntity<Map<String, Object>> busy(AnalysisBusyException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("retryAfterSeconds", e.retryAfterSeconds());
+        return ResponseEntity.status(HttpStatus.TOO_MANY_REQUESTS)
+                .header("Retry-After", Integer.toString(e.retryAfterSeconds())).body(body);
     }
 
     @ExceptionHandler(RevisionNotFoundException.class)
