@@ -12,6 +12,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LinearRing;
 import org.locationtech.jts.geom.Polygon;
+import org.locationtech.jts.operation.union.UnaryUnionOp;
 import org.lpzplanner.engine.envelope.Grid;
 
 /**
@@ -39,8 +40,34 @@ final class CellRegions {
         this.gf = gf;
     }
 
-    /** The union of the marked cells within [i0, i1] × [j0, j1]; marks indexed j * nx + i. */
+    /**
+     * The union of the marked cells within [i0, i1] × [j0, j1]; marks indexed j * nx + i. Should the
+     * tracing ever meet a configuration it cannot chain, the cells are unioned by polygon overlay
+     * instead: slower, but the result (an exposed or protected area) is never lost to an error.
+     */
     Geometry union(boolean[] marked, int i0, int j0, int i1, int j1) {
+        try {
+            return trace(marked, i0, j0, i1, j1);
+        } catch (IllegalStateException e) {
+            return overlay(marked, i0, j0, i1, j1);
+        }
+    }
+
+    Geometry overlay(boolean[] marked, int i0, int j0, int i1, int j1) {
+        List<Geometry> cells = new ArrayList<>();
+        for (int j = j0; j <= j1; j++) {
+            for (int i = i0; i <= i1; i++) {
+                if (marked[j * grid.nx() + i]) {
+                    cells.add(gf.toGeometry(new Envelope(grid.x0() + i * grid.h(), grid.x0() + (i + 1) * grid.h(),
+                            grid.y0() + j * grid.h(), grid.y0() + (j + 1) * grid.h())));
+                }
+            }
+        }
+        return cells.isEmpty() ? gf.createPolygon()
+                : UnaryUnionOp.union(cells);
+    }
+
+    private Geometry trace(boolean[] marked, int i0, int j0, int i1, int j1) {
         int nx = grid.nx();
         int w = i1 - i0 + 2; // vertices per row of the window
         int rows = j1 - j0 + 2;

@@ -55,5 +55,8 @@ class CellRegionsProperties {
         Geometry overlay = CascadedPolygonUnion.union(squares);
         assertThat(traced.getArea()).isCloseTo(squares.size() * grid.h() * grid.h(), org.assertj.core.data.Offset.offset(1e-9));
         assertThat(traced.symDifference(overlay).getArea()).as("area covered by one only").isLessThan(1e-9);
+        // the fallback used should tracing ever fail covers the same cells
+        Geometry fallback = new CellRegions(grid, gf).overlay(marked, i0, j0, i1, j1);
+        assertThat(fallback.symDifference(overlay).getArea()).as("fallback against overlay").isLessThan(1e-9);
     }
 }
