@@ -15,7 +15,7 @@ import org.springframework.web.servlet.ModelAndView;
  * page with the reason; an unknown review item gives a 404 page with the reason.
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
-    ReviewPageController.class, SectionPageController.class})
+    ReviewPageController.class, SectionPageController.class, org.lpzplanner.design.DesignPageController.class})
 public class SitePageErrors {
 
     @ExceptionHandler(SiteNotFoundException.class)
