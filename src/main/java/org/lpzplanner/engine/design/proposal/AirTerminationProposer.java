@@ -35,7 +35,8 @@ import org.lpzplanner.engine.model.Site;
  *     sampled points or spheres) is sampled again against the new envelope and covered by further
  *     parts, up to {@value #MAX_ROUNDS} rounds; from the second round on, points the sampling
  *     cannot settle get the tallest rod next to them ({@link NearestFix}). A round that leaves no
- *     less exposed than before is taken back and ends the search. These guiding analyses run on a grid of at least
+ *     less exposed than before is taken back; the next round then places rods next to the points
+ *     alone, and if that fails too the search ends. These guiding analyses run on a grid of at least
  *     {@value #GUIDE_RESOLUTION} m; the last one always runs at the site's own resolution (the one
  *     a plain analysis would use, or the one given), and only it decides whether the proposal is complete.</li>
  * </ol>
@@ -83,6 +84,7 @@ public final class AirTerminationProposer {
         SiteSurface proposedSurface = surface;
         int rounds = 0;
         int beyondReach = 0;
+        boolean fixOnly = false;
         while (rounds < MAX_ROUNDS) {
             List<ExposedPoints.Point> points = sampler.of(current, proposedSurface);
             if (points.isEmpty() && !finalCheck) {
@@ -126,7 +128,7 @@ public final class AirTerminationProposer {
             }
             monitor.progress("choosing parts (round " + rounds + ")", to);
             boolean[] coveredNow = new boolean[targets.size()];
-            List<Integer> picked = new ArrayList<>(GreedyCover.choose(sets, costs, coveredNow, monitor));
+            List<Integer> picked = new ArrayList<>(fixOnly ? List.of() : GreedyCover.choose(sets, costs, coveredNow, monitor));
             if (rounds > 1) {
                 picked.addAll(NearestFix.choose(candidates, chosen, picked, points, targets, coveredNow, radius));
             }
@@ -134,6 +136,7 @@ public final class AirTerminationProposer {
                 break;
             }
             List<ProposedPart> before = List.copyOf(parts);
+            List<Integer> chosenBefore = List.copyOf(chosen);
             AnalysisResult beforeResult = current;
             for (int c : picked) {
                 chosen.add(c);
@@ -146,13 +149,18 @@ public final class AirTerminationProposer {
             proposedSurface = SiteSurfaceBuilder.build(proposed);
             checkCancelled(monitor);
             if (rounds > 1 && sampler.of(current, proposedSurface).size() >= points.size()) {
-                // the new parts did not reduce what is left: take them back and stop
+                // the new parts did not reduce what is left: take them back; try once more with
+                // rods next to the points alone, then stop
                 parts.clear();
                 parts.addAll(before);
+                chosen.retainAll(java.util.Set.copyOf(chosenBefore));
                 proposed = withParts(site, parts);
                 proposedSurface = SiteSurfaceBuilder.build(proposed);
                 current = beforeResult;
-                break;
+                if (fixOnly) {
+                    break;
+                }
+                fixOnly = true;
             }
         }
         if (!finalCheck) {
