@@ -10,7 +10,7 @@ import java.util.Set;
  * The fallback for exposed points the sampled spheres could not settle (the free spheres fell
  * between the samples, or the covering estimate proved too hopeful): the tallest allowed rod at the
  * nearest candidate place, within {@value #MAX_DISTANCE} m, for each such point, skipping points
- * that a rod chosen this way already stands near (within a quarter of the rod's protected radius on
+ * that a rod chosen this way already stands near (within half the rod’s protected radius on
  * open ground, √(h(2R − h))). Points higher than the sphere radius above the ground are left alone:
  * a sphere reaches them from the side whatever stands on the roof.
  */
@@ -58,7 +58,7 @@ final class NearestFix {
                 out.add(best);
                 Candidate cand = candidates.get(best);
                 double h = cand.height();
-                placed.add(new double[] {cand.path().get(0).x, cand.path().get(0).y, Math.sqrt(h * (2 * radius - h)) / 4});
+                placed.add(new double[] {cand.path().get(0).x, cand.path().get(0).y, Math.sqrt(h * (2 * radius - h)) / 2});
             }
         }
         return out;
