@@ -2,7 +2,6 @@ package org.lpzplanner.design;
 
 import java.time.Clock;
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -461,6 +460,17 @@ public class DesignService {
         return BillOfQuantities.table(BillOfQuantities.compute(site, positions, fixingsPerMetre));
     }
 
+    /**
+     * The bill of quantities as a report section (the table as on the page, the basis of the
+     * counts as notes), for any report writer.
+     */
+    public org.lpzplanner.common.ReportSection quantitiesSection(long siteId, double fixingsPerMetre) {
+        QuantityTable table = quantities(siteId, fixingsPerMetre);
+        return new org.lpzplanner.common.ReportSection(table.title(), table.columns(), table.rows(), List.of(
+                "Down-conductor lengths are straight drops from the roof edge; the installed route may be longer.",
+                "Test joints and earth terminations: one per down-conductor (common practice)."));
+    }
+
     static double round(double v) {
         return Math.round(v * 100) / 100.0;
     }
@@ -476,7 +486,4 @@ public class DesignService {
         return out;
     }
 
-    static java.util.Set<String> ids(List<String> list) {
-        return new HashSet<>(list);
-    }
 }
