@@ -44,6 +44,8 @@ import tools.jackson.databind.JsonNode;
  */
 @RestController
 @RequestMapping("/api/sites/{id}")
+@io.swagger.v3.oas.annotations.tags.Tag(name = "Design", description = "Proposed air-termination, method cross-checks,"
+        + " down-conductors, separation distances (IEC 62305-3:2010 6.3) and the bill of quantities")
 public class DesignApiController {
 
     private final DesignService design;
