@@ -61,6 +61,38 @@ public final class ReviewItems {
         return items;
     }
 
+    /**
+     * Plan geometries (local metres) of the review items with the given keys: lines for edges and
+     * facade bands, points for corners.
+     */
+    public static List<org.locationtech.jts.geom.Geometry> geometries(String resultGeoJson, Set<String> wanted) {
+        List<JsonNode> features = features(resultGeoJson);
+        Map<JsonNode, String> keys = keys(features);
+        org.locationtech.jts.geom.GeometryFactory gf = new org.locationtech.jts.geom.GeometryFactory();
+        List<org.locationtech.jts.geom.Geometry> out = new ArrayList<>();
+        for (JsonNode f : features) {
+            if (!wanted.contains(keys.get(f))) {
+                continue;
+            }
+            List<org.locationtech.jts.geom.Coordinate> cs = new ArrayList<>();
+            collect(f.path("geometry").path("coordinates"), cs);
+            if (cs.size() == 1) {
+                out.add(gf.createPoint(cs.get(0)));
+            } else if (cs.size() > 1) {
+                out.add(gf.createLineString(cs.toArray(new org.locationtech.jts.geom.Coordinate[0])));
+            }
+        }
+        return out;
+    }
+
+    private static void collect(JsonNode node, List<org.locationtech.jts.geom.Coordinate> out) {
+        if (node.isArray() && node.size() >= 2 && node.get(0).isNumber()) {
+            out.add(new org.locationtech.jts.geom.Coordinate(node.get(0).asDouble(), node.get(1).asDouble()));
+        } else if (node.isArray()) {
+            node.forEach(child -> collect(child, out));
+        }
+    }
+
     /** The key of every review item among {@code features}, by feature identity. */
     public static Map<JsonNode, String> keys(List<JsonNode> features) {
         Map<JsonNode, String> keys = new IdentityHashMap<>();

@@ -125,6 +125,41 @@ public class AirTerminationService {
     }
 
     /**
+     * Adds several rods in one change of the file (one earlier file kept, one new version), e.g. an
+     * accepted proposal. Each gets the next free id {@code rod-N}; names and heights as given.
+     *
+     * @return the new rods' ids, in order
+     * @throws InvalidInputException when a value is unusable (nothing is stored then)
+     */
+    @Transactional
+    public List<String> addRods(long siteId, long expectedVersion, List<RodInput> inputs) {
+        StoredSite site = editable(siteId, expectedVersion);
+        if (inputs.isEmpty()) {
+            throw new InvalidInputException("rods", "there are no rods to add");
+        }
+        SiteDocument document = sites.document(site);
+        Set<String> used = usedIds(document.site());
+        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(),
+                document.projection());
+        List<String> ids = new ArrayList<>();
+        int n = 1;
+        for (RodInput input : inputs) {
+            if (input.x() == null || input.y() == null) {
+                throw new InvalidInputException("x", "x and y (local metres) are required for every rod");
+            }
+            while (used.contains("rod-" + n)) {
+                n++;
+            }
+            String id = "rod-" + n;
+            used.add(id);
+            editor.add(id, input.name(), input.x(), input.y(), height(input.height()));
+            ids.add(id);
+        }
+        store(site, editor.text());
+        return ids;
+    }
+
+    /**
      * Moves a rod to (x, y) local metres and/or changes its height.
      *
      * @return the rod as it was before the change

@@ -19,7 +19,7 @@ import org.springframework.web.servlet.ModelAndView;
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
     ReviewPageController.class, SectionPageController.class,
-    org.lpzplanner.report.ReportPageController.class})
+    org.lpzplanner.report.ReportPageController.class, org.lpzplanner.design.DesignPageController.class})
 public class SitePageErrors {
 
     private final UploadLimit uploadLimit;

@@ -77,7 +77,7 @@ class ApiDocsTest {
                 List.of("200", "400", "404", "409"));
 
         assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
-                "Review", "Air-termination", "Risk", "Report");
+                "Review", "Air-termination", "Risk", "Report", "Design");
         assertThat(doc.path("tags").toString()).contains("IEC 62305-2:2010");
 
         JsonNode error = doc.path("components").path("schemas").path("ApiError");

@@ -1,0 +1,156 @@
+package org.lpzplanner.design;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.lpzplanner.analysis.AnalysisRevision;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.analysis.PlanSvg;
+import org.lpzplanner.analysis.ResultGeoJson;
+import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.common.Cautions;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.context.MessageSource;
+import org.springframework.stereotype.Controller;
+import org.springframework.ui.Model;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.servlet.mvc.support.RedirectAttributes;
+
+/**
+ * The design page of a site ({@code /sites/{id}/design}): the proposal form (run by the
+ * design-page script through the JSON API), the method cross-checks, down-conductors (edited by a
+ * plain form), separation distances with the metal installations, and the bill of quantities.
+ */
+@Controller
+public class DesignPageController {
+
+    private final SiteService sites;
+    private final AnalysisService analyses;
+    private final ReviewService reviews;
+    private final DesignService design;
+    private final MessageSource messages;
+
+    DesignPageController(SiteService sites, AnalysisService analyses, ReviewService reviews, DesignService design,
+            MessageSource messages) {
+        this.sites = sites;
+        this.analyses = analyses;
+        this.reviews = reviews;
+        this.design = design;
+        this.messages = messages;
+    }
+
+    @GetMapping("/sites/{id}/design")
+    public String page(@PathVariable long id, @RequestParam(defaultValue = "1") String fixingsPerMetre, Model model,
+            Locale locale) {
+        StoredSite site = sites.get(id);
+        AnalysisRevision latest = analyses.latest(id).orElse(null);
+        model.addAttribute("site", site);
+        model.addAttribute("method", ResultGeoJson.METHOD);
+        model.addAttribute("level", site.sphere().level().name());
+        model.addAttribute("radius", DesignService.round(site.sphere().radius()));
+        model.addAttribute("editable", sites.isGeoJson(site));
+        model.addAttribute("cautions", Cautions.lines());
+        if (latest != null) {
+            ReviewService.Review review = reviews.review(latest);
+            model.addAttribute("svg", PlanSvg.render(latest.resultGeoJson(),
+                    (key, args) -> messages.getMessage(key, args, locale), review.accepted()));
+        }
+        double rate;
+        try {
+            rate = Double.parseDouble(fixingsPerMetre.strip());
+        } catch (NumberFormatException e) {
+            rate = 1;
+        }
+        rate = Math.max(0, Math.min(20, rate));
+        model.addAttribute("fixingsPerMetre", rate);
+        model.addAttribute("checks", design.methodChecks(id));
+        List<DesignService.DownConductors> downs = design.downConductors(id);
+        model.addAttribute("downConductors", downs);
+        Map<String, String> positionsText = new LinkedHashMap<>();
+        for (DesignService.DownConductors d : downs) {
+            List<String> lines = new ArrayList<>();
+            for (double[] p : d.positions()) {
+                lines.add(String.format(Locale.ROOT, "%.2f, %.2f", p[0], p[1]));
+            }
+            positionsText.put(d.structureId(), String.join("\n", lines));
+        }
+        model.addAttribute("positionsText", positionsText);
+        model.addAttribute("separations", design.separations(id));
+        model.addAttribute("installations", design.installations(id));
+        model.addAttribute("quantities", design.quantities(id, rate));
+        return "sites/design";
+    }
+
+    @PostMapping("/sites/{id}/design/down-conductors/{structureId}")
+    public String saveDownConductors(@PathVariable long id, @PathVariable String structureId,
+            @RequestParam(defaultValue = "") String positions, @RequestParam(required = false) String reset,
+            RedirectAttributes redirect) {
+        try {
+            if (reset != null) {
+                design.resetDownConductors(id, structureId);
+            } else {
+                design.saveDownConductors(id, structureId, parsePositions(positions));
+            }
+        } catch (InvalidInputException e) {
+            redirect.addFlashAttribute("downError", e.getMessage());
+        }
+        return "redirect:/sites/" + id + "/design#down-conductors";
+    }
+
+    @PostMapping("/sites/{id}/design/installations")
+    public String addInstallation(@PathVariable long id, @RequestParam(defaultValue = "") String name,
+            @RequestParam(defaultValue = "") String x, @RequestParam(defaultValue = "") String y,
+            @RequestParam(defaultValue = "") String z, @RequestParam(defaultValue = "AIR") String material,
+            RedirectAttributes redirect) {
+        try {
+            design.addInstallation(id, name, number("x", x), number("y", y), number("z", z), material);
+        } catch (InvalidInputException e) {
+            redirect.addFlashAttribute("installationError", e.getMessage());
+        }
+        return "redirect:/sites/" + id + "/design#separation";
+    }
+
+    @PostMapping("/sites/{id}/design/installations/{installationId}/delete")
+    public String removeInstallation(@PathVariable long id, @PathVariable long installationId) {
+        design.removeInstallation(id, installationId);
+        return "redirect:/sites/" + id + "/design#separation";
+    }
+
+    /** "x, y" per line (or separated by semicolons) into positions. */
+    static List<double[]> parsePositions(String text) {
+        List<double[]> out = new ArrayList<>();
+        int line = 0;
+        for (String raw : text.split("[;\\n]")) {
+            line++;
+            String s = raw.strip();
+            if (s.isEmpty()) {
+                continue;
+            }
+            String[] parts = s.split("[,\\s]+");
+            if (parts.length != 2) {
+                throw new InvalidInputException("positions", "line " + line + ": write one position as \"x, y\" in metres, got \"" + s + "\"");
+            }
+            out.add(new double[] {number("positions", parts[0]), number("positions", parts[1])});
+        }
+        return out;
+    }
+
+    private static double number(String field, String text) {
+        try {
+            double v = Double.parseDouble(text.strip());
+            if (Double.isFinite(v)) {
+                return v;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new InvalidInputException(field, field + " must be a number of metres, got \"" + text.strip() + "\"");
+    }
+}

@@ -1,0 +1,489 @@
+package org.lpzplanner.design;
+
+import java.time.Clock;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.Polygon;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.analysis.ReviewItems;
+import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.engine.design.AngleCoverage;
+import org.lpzplanner.engine.design.AngleMethodCheck;
+import org.lpzplanner.engine.design.DownConductorLayout;
+import org.lpzplanner.engine.design.DownConductorPlan;
+import org.lpzplanner.engine.design.MeshFaceResult;
+import org.lpzplanner.engine.design.MeshMethodCheck;
+import org.lpzplanner.engine.design.SeparationDistance;
+import org.lpzplanner.engine.design.proposal.ProposalOptions;
+import org.lpzplanner.engine.design.proposal.ProposedPart;
+import org.lpzplanner.engine.design.quantities.BillOfQuantities;
+import org.lpzplanner.engine.design.quantities.QuantityTable;
+import org.lpzplanner.engine.exposure.AnalysisOptions;
+import org.lpzplanner.engine.exposure.AnalysisResult;
+import org.lpzplanner.engine.exposure.CornerExposure;
+import org.lpzplanner.engine.exposure.ExposureAnalysis;
+import org.lpzplanner.engine.geom.SiteSurface;
+import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
+import org.lpzplanner.engine.model.RooftopObject;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.model.SphereSpec;
+import org.lpzplanner.engine.model.Structure;
+import org.lpzplanner.sites.AirTerminationService;
+import org.lpzplanner.sites.SiteNotFoundException;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.dao.OptimisticLockingFailureException;
+import org.springframework.stereotype.Service;
+
+/**
+ * The design of a stored site: proposals (run by {@link ProposalJobs}) and their acceptance into
+ * the site file, the angle and mesh method cross-checks, down-conductors (planned, or as edited),
+ * separation distances and the bill of quantities.
+ */
+@Service
+public class DesignService {
+
+    /** Largest number of keep-out areas and vertices per area a request may give. */
+    static final int MAX_KEEP_OUT = 50;
+    static final int MAX_VERTICES = 200;
+
+    private final SiteService sites;
+    private final AirTerminationService parts;
+    private final AnalysisService analyses;
+    private final ReviewService reviews;
+    private final DesignRepository store;
+    private final ProposalJobs jobs;
+    private final Clock clock;
+
+    public DesignService(SiteService sites, AirTerminationService parts, AnalysisService analyses, ReviewService reviews,
+            DesignRepository store, ProposalJobs jobs, Clock clock) {
+        this.sites = sites;
+        this.parts = parts;
+        this.analyses = analyses;
+        this.reviews = reviews;
+        this.store = store;
+        this.jobs = jobs;
+        this.clock = clock;
+    }
+
+    /** What a designer asks for: allowed rod heights, mast heights (may be empty), keep-out polygons in local metres. */
+    public record ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, List<List<double[]>> keepOut) {
+    }
+
+    public ProposalJobs.Job propose(long siteId, ProposeRequest request) {
+        StoredSite stored = sites.get(siteId);
+        Site site = sites.document(stored).site();
+        if (request.rodHeights() == null || request.rodHeights().isEmpty()) {
+            throw new InvalidInputException("rodHeights", "give at least one allowed rod height, e.g. [0.5, 1, 2]");
+        }
+        for (Double h : request.rodHeights()) {
+            if (h == null || !(h >= 0.1 && h <= 10)) {
+                throw new InvalidInputException("rodHeights", "rod heights must be between 0.1 m and 10 m, got " + h);
+            }
+        }
+        List<Double> masts = request.mastHeights() == null ? List.of() : request.mastHeights();
+        for (Double h : masts) {
+            if (h == null || !(h >= 1 && h <= 60)) {
+                throw new InvalidInputException("mastHeights", "mast heights must be between 1 m and 60 m, got " + h);
+            }
+        }
+        List<Polygon> keepOut = keepOut(request.keepOut());
+        List<Geometry> accepted = reviews.latest(siteId)
+                .map(r -> ReviewItems.geometries(r.revision().resultGeoJson(), r.accepted().keySet()))
+                .orElse(List.of());
+        ProposalOptions options = new ProposalOptions(stored.sphere(), List.copyOf(new java.util.TreeSet<>(request.rodHeights())),
+                false, false, List.copyOf(new java.util.TreeSet<>(masts)), keepOut, accepted, null);
+        return jobs.start(siteId, stored.version(), site, options);
+    }
+
+    private static List<Polygon> keepOut(List<List<double[]>> areas) {
+        List<Polygon> out = new ArrayList<>();
+        if (areas == null) {
+            return out;
+        }
+        if (areas.size() > MAX_KEEP_OUT) {
+            throw new InvalidInputException("keepOut", "at most " + MAX_KEEP_OUT + " keep-out areas, got " + areas.size());
+        }
+        var gf = new org.locationtech.jts.geom.GeometryFactory();
+        for (int i = 0; i < areas.size(); i++) {
+            List<double[]> ring = areas.get(i);
+            if (ring == null || ring.size() < 3 || ring.size() > MAX_VERTICES) {
+                throw new InvalidInputException("keepOut[" + i + "]", "a keep-out area needs 3 to " + MAX_VERTICES
+                        + " corners [x, y] in local metres");
+            }
+            List<Coordinate> cs = new ArrayList<>();
+            for (double[] p : ring) {
+                if (p == null || p.length != 2 || !Double.isFinite(p[0]) || !Double.isFinite(p[1])) {
+                    throw new InvalidInputException("keepOut[" + i + "]", "every corner must be [x, y] in metres");
+                }
+                cs.add(new Coordinate(p[0], p[1]));
+            }
+            cs.add(cs.get(0));
+            Polygon polygon = gf.createPolygon(cs.toArray(new Coordinate[0]));
+            Geometry valid = polygon.buffer(0);
+            if (valid.isEmpty() || valid.getArea() < 1e-6) {
+                throw new InvalidInputException("keepOut[" + i + "]", "the keep-out area has no area (its corners lie on a line)");
+            }
+            for (int k = 0; k < valid.getNumGeometries(); k++) {
+                out.add((Polygon) valid.getGeometryN(k));
+            }
+        }
+        return out;
+    }
+
+    /** @throws SiteNotFoundException when the site or the job is unknown */
+    public ProposalJobs.Job job(long siteId, String jobId) {
+        sites.get(siteId);
+        ProposalJobs.Job job = jobs.get(siteId, jobId);
+        if (job == null) {
+            throw new SiteNotFoundException(siteId, "site " + siteId + " has no proposal \"" + jobId + "\" (proposals are"
+                    + " kept in memory until the server restarts)");
+        }
+        return job;
+    }
+
+    public ProposalJobs.Job cancel(long siteId, String jobId) {
+        ProposalJobs.Job job = job(siteId, jobId);
+        jobs.cancel(job);
+        return job;
+    }
+
+    /**
+     * Writes the proposal's rods and masts into the site file as ordinary rods (one change), then
+     * analyses the site again.
+     *
+     * @throws InvalidInputException when the proposal is not finished
+     * @throws OptimisticLockingFailureException when the site changed since the proposal started or since {@code version}
+     */
+    public List<String> accept(long siteId, String jobId, long version) {
+        ProposalJobs.Job job = job(siteId, jobId);
+        if (job.state() != ProposalJobs.State.DONE) {
+            throw new InvalidInputException("proposal", "the proposal is " + job.state().name().toLowerCase(Locale.ROOT)
+                    + "; only a finished proposal can be accepted");
+        }
+        if (job.siteVersion() != version) {
+            throw new OptimisticLockingFailureException("the proposal was made for version " + job.siteVersion());
+        }
+        List<AirTerminationService.RodInput> rods = new ArrayList<>();
+        for (ProposedPart p : job.result().parts()) {
+            if (p.rod() != null) {
+                rods.add(new AirTerminationService.RodInput(null, p.rod().name(), p.rod().x(), p.rod().y(),
+                        BillOfQuantities.metresText(p.rod().height())));
+            }
+        }
+        List<String> ids = parts.addRods(siteId, version, rods);
+        analyses.run(siteId, null, null, null);
+        return ids;
+    }
+
+    /** One structure's cross-check of the rolling sphere against the angle and mesh methods. */
+    public record MethodCheck(String structureId, String name, int sphereExposedItems, double sphereExposedRoofArea,
+            boolean angleCovered, double angleUncoveredArea, int meshFacesPassing, int meshFacesFailing,
+            int meshFacesNotApplicable, String agreement, List<String> notes) {
+    }
+
+    public List<MethodCheck> methodChecks(long siteId) {
+        StoredSite stored = sites.get(siteId);
+        Site site = sites.document(stored).site();
+        SphereSpec sphere = stored.sphere();
+        AnalysisResult result = ExposureAnalysis.analyze(site, AnalysisOptions.of(sphere));
+        SiteSurface surface = SiteSurfaceBuilder.build(site);
+        List<MeshFaceResult> mesh = MeshMethodCheck.check(surface, sphere.level().meshSize());
+        List<MethodCheck> out = new ArrayList<>();
+        for (Structure s : site.structures()) {
+            int items = (int) (result.edges().stream().filter(e -> e.ownerId().equals(s.id())).count()
+                    + result.corners().stream().filter(c -> c.ownerId().equals(s.id())).count()
+                    + result.facades().stream().filter(f -> f.ownerId().equals(s.id())).count());
+            double roof = result.roofs().stream().filter(r -> r.ownerId().equals(s.id())).mapToDouble(r -> r.exposedPlanArea()).sum();
+            AngleCoverage angle = AngleMethodCheck.check(surface, s.id(), sphere.radius());
+            int pass = 0, fail = 0, na = 0;
+            for (MeshFaceResult m : mesh) {
+                if (m.ownerId().equals(s.id())) {
+                    switch (m.status()) {
+                        case PASS -> pass++;
+                        case FAIL -> fail++;
+                        default -> na++;
+                    }
+                }
+            }
+            boolean sphereProtected = items == 0 && roof == 0;
+            String agreement;
+            if (sphereProtected == angle.isCovered()) {
+                agreement = sphereProtected ? "agree: protected" : "agree: not protected";
+            } else if (angle.isCovered()) {
+                agreement = "disagree: the angle method covers the roof, the rolling sphere still reaches parts of the structure";
+            } else {
+                agreement = "disagree: the rolling sphere finds the structure protected, the angle method leaves roof uncovered";
+            }
+            out.add(new MethodCheck(s.id(), s.name() == null ? s.id() : s.name(), items, round(roof), angle.isCovered(),
+                    round(angle.uncoveredArea()), pass, fail, na, agreement, angle.notes()));
+        }
+        return out;
+    }
+
+    /** Down-conductors of one structure: planned or edited positions (local metres). */
+    public record DownConductors(String structureId, String name, double perimeter, double typicalSpacing,
+            int required, List<double[]> positions, boolean edited, double height, List<String> warnings) {
+    }
+
+    public List<DownConductors> downConductors(long siteId) {
+        StoredSite stored = sites.get(siteId);
+        Site site = sites.document(stored).site();
+        return downConductors(site, stored, store.downConductors(siteId));
+    }
+
+    private List<DownConductors> downConductors(Site site, StoredSite stored, Map<String, List<double[]>> edited) {
+        double spacing = stored.sphere().level().downConductorSpacing();
+        List<Coordinate> exposedCorners = new ArrayList<>();
+        for (CornerExposure c : ExposureAnalysis.analyze(site.withAirTermination(List.of(), List.of()),
+                AnalysisOptions.of(stored.sphere()).withResolution(1.0)).corners()) {
+            exposedCorners.add(c.point());
+        }
+        List<DownConductors> out = new ArrayList<>();
+        for (Structure s : site.structures()) {
+            DownConductorLayout planned = DownConductorPlan.plan(s, spacing, exposedCorners);
+            int required = Math.max(2, (int) Math.ceil(planned.perimeter() / spacing - 1e-9));
+            List<double[]> positions = new ArrayList<>();
+            boolean isEdited = edited.containsKey(s.id());
+            if (isEdited) {
+                positions.addAll(edited.get(s.id()));
+            } else {
+                for (Coordinate c : planned.positions()) {
+                    positions.add(new double[] {round(c.x), round(c.y)});
+                }
+            }
+            List<String> warnings = new ArrayList<>();
+            if (positions.size() < required) {
+                warnings.add(String.format(Locale.ROOT, "%d down-conductors, fewer than the %d a perimeter of %.1f m needs at"
+                        + " %.0f m typical spacing", positions.size(), required, planned.perimeter(), spacing));
+            }
+            if (!isEdited && planned.exceedsTypicalSpacing()) {
+                warnings.add(String.format(Locale.ROOT, "one gap along the outline is %.1f m, longer than the typical"
+                        + " spacing of %.0f m", planned.largestSpacing(), spacing));
+            }
+            out.add(new DownConductors(s.id(), s.name() == null ? s.id() : s.name(), round(planned.perimeter()), spacing,
+                    required, positions, isEdited, s.height(), warnings));
+        }
+        return out;
+    }
+
+    /** Stores edited positions of one structure's down-conductors (at least two). */
+    public List<DownConductors> saveDownConductors(long siteId, String structureId, List<double[]> positions) {
+        StoredSite stored = sites.get(siteId);
+        Site site = sites.document(stored).site();
+        Structure structure = site.structures().stream().filter(s -> s.id().equals(structureId)).findFirst()
+                .orElseThrow(() -> new SiteNotFoundException(siteId, "site " + siteId + " has no structure \"" + structureId + "\""));
+        if (positions == null || positions.size() < 2) {
+            throw new InvalidInputException("positions", "a structure needs at least two down-conductors"
+                    + " (IEC 62305-3 5.3); give two or more [x, y] positions");
+        }
+        if (positions.size() > 500) {
+            throw new InvalidInputException("positions", "at most 500 down-conductors per structure");
+        }
+        Geometry near = structure.footprint().getBoundary().buffer(2.0);
+        var gf = new org.locationtech.jts.geom.GeometryFactory();
+        for (int i = 0; i < positions.size(); i++) {
+            double[] p = positions.get(i);
+            if (p == null || p.length != 2 || !Double.isFinite(p[0]) || !Double.isFinite(p[1])) {
+                throw new InvalidInputException("positions[" + i + "]", "every position must be [x, y] in local metres");
+            }
+            if (!near.contains(gf.createPoint(new Coordinate(p[0], p[1])))) {
+                throw new InvalidInputException("positions[" + i + "]", "the position is more than 2 m from the outline of "
+                        + structureId);
+            }
+        }
+        store.saveDownConductors(siteId, structureId, positions, clock.instant());
+        return downConductors(siteId);
+    }
+
+    public List<DownConductors> resetDownConductors(long siteId, String structureId) {
+        sites.get(siteId);
+        store.resetDownConductors(siteId, structureId);
+        return downConductors(siteId);
+    }
+
+    /** One separation distance check. */
+    public record Separation(String kind, String name, double[] installation, double[] nearestLps, double actual,
+            double length, int downConductors, String material, double required, boolean passes, String note) {
+    }
+
+    public List<Separation> separations(long siteId) {
+        StoredSite stored = sites.get(siteId);
+        Site site = sites.document(stored).site();
+        SiteSurface surface = SiteSurfaceBuilder.build(site);
+        List<DownConductors> downs = downConductors(site, stored, store.downConductors(siteId));
+        List<double[]> segments = lpsSegments(surface);
+        List<Separation> out = new ArrayList<>();
+        if (segments.isEmpty()) {
+            return out;
+        }
+        for (RooftopObject o : site.rooftopObjects()) {
+            Coordinate best = null;
+            double[] bestLps = null;
+            double bestDistance = Double.POSITIVE_INFINITY;
+            Geometry ring = org.locationtech.jts.densify.Densifier.densify(o.footprint().getExteriorRing(), 0.5);
+            for (Coordinate c : ring.getCoordinates()) {
+                Coordinate p = new Coordinate(c.x, c.y, o.top());
+                double[] q = nearest(segments, p);
+                double d = p.distance3D(new Coordinate(q[0], q[1], q[2]));
+                if (d < bestDistance) {
+                    bestDistance = d;
+                    best = p;
+                    bestLps = q;
+                }
+            }
+            out.add(separation("rooftop object", o.name() == null ? o.id() : o.name(), best, bestLps, downs, stored,
+                    SeparationDistance.Material.AIR));
+        }
+        for (DesignRepository.Installation i : store.installations(siteId)) {
+            Coordinate p = new Coordinate(i.x(), i.y(), i.z());
+            double[] q = nearest(segments, p);
+            out.add(separation("metal installation #" + i.id(), i.name(), p, q, downs, stored,
+                    SeparationDistance.Material.valueOf(i.material())));
+        }
+        return out;
+    }
+
+    private static Separation separation(String kind, String name, Coordinate p, double[] lps, List<DownConductors> downs,
+            StoredSite stored, SeparationDistance.Material material) {
+        // l: down the shortest way from the LPS point: across the roof to the nearest down-conductor
+        // (√2 times the plan distance, as conductors run along edges and axes) and down to the ground
+        double nearestDown = Double.POSITIVE_INFINITY;
+        int count = 0;
+        for (DownConductors d : downs) {
+            for (double[] q : d.positions()) {
+                double dist = Math.hypot(q[0] - lps[0], q[1] - lps[1]);
+                if (dist < nearestDown) {
+                    nearestDown = dist;
+                    count = d.positions().size();
+                }
+            }
+        }
+        if (count == 0) {
+            count = 1;
+            nearestDown = 0;
+        }
+        double l = lps[2] + Math.sqrt(2) * nearestDown;
+        SeparationDistance.Result r = SeparationDistance.check(stored.sphere().level(), count, material, p,
+                new Coordinate(lps[0], lps[1], lps[2]), l);
+        return new Separation(kind, name, new double[] {round(p.x), round(p.y), round(p.getZ())},
+                new double[] {round(lps[0]), round(lps[1]), round(lps[2])}, round(r.actual()), round(r.length()), count,
+                material.name(), Math.round(r.required() * 1000) / 1000.0, r.passes(),
+                "l estimated: height of the nearest LPS point plus √2 × its plan distance to the nearest down-conductor;"
+                        + " measure the real route before relying on a pass");
+    }
+
+    /** Air-termination as 3D segments: rods from foot to tip, conductor legs. */
+    private static List<double[]> lpsSegments(SiteSurface surface) {
+        List<double[]> out = new ArrayList<>();
+        for (SiteSurface.PlacedRod r : surface.rods()) {
+            out.add(new double[] {r.tip().x, r.tip().y, r.base(), r.tip().x, r.tip().y, r.tip().getZ()});
+        }
+        for (SiteSurface.PlacedConductor c : surface.conductors()) {
+            for (int i = 1; i < c.path().size(); i++) {
+                Coordinate a = c.path().get(i - 1), b = c.path().get(i);
+                out.add(new double[] {a.x, a.y, a.getZ(), b.x, b.y, b.getZ()});
+            }
+        }
+        return out;
+    }
+
+    private static double[] nearest(List<double[]> segments, Coordinate p) {
+        double[] best = null;
+        double bestD = Double.POSITIVE_INFINITY;
+        for (double[] s : segments) {
+            double vx = s[3] - s[0], vy = s[4] - s[1], vz = s[5] - s[2];
+            double len2 = vx * vx + vy * vy + vz * vz;
+            double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s[0]) * vx + (p.y - s[1]) * vy + (p.getZ() - s[2]) * vz) / len2));
+            double[] q = {s[0] + t * vx, s[1] + t * vy, s[2] + t * vz};
+            double d = Math.sqrt((q[0] - p.x) * (q[0] - p.x) + (q[1] - p.y) * (q[1] - p.y) + (q[2] - p.getZ()) * (q[2] - p.getZ()));
+            if (d < bestD) {
+                bestD = d;
+                best = q;
+            }
+        }
+        return best;
+    }
+
+    public DesignRepository.Installation addInstallation(long siteId, String name, Double x, Double y, Double z,
+            String material) {
+        sites.get(siteId);
+        if (name == null || name.isBlank() || name.strip().length() > 200) {
+            throw new InvalidInputException("name", "give the installation a name of 1 to 200 characters");
+        }
+        for (Object[] f : new Object[][] {{"x", x}, {"y", y}, {"z", z}}) {
+            Double v = (Double) f[1];
+            if (v == null || !Double.isFinite(v)) {
+                throw new InvalidInputException((String) f[0], f[0] + " is required, in metres");
+            }
+        }
+        if (z < 0) {
+            throw new InvalidInputException("z", "z is the height above ground and cannot be negative");
+        }
+        String m = material == null ? "AIR" : material.strip().toUpperCase(Locale.ROOT);
+        if (!m.equals("AIR") && !m.equals("CONCRETE_OR_BRICK")) {
+            throw new InvalidInputException("material", "material must be AIR or CONCRETE_OR_BRICK, got \"" + material + "\"");
+        }
+        long id = store.addInstallation(siteId, name.strip(), x, y, z, m, clock.instant());
+        return new DesignRepository.Installation(id, name.strip(), x, y, z, m);
+    }
+
+    public void removeInstallation(long siteId, long id) {
+        sites.get(siteId);
+        if (!store.removeInstallation(siteId, id)) {
+            throw new SiteNotFoundException(siteId, "site " + siteId + " has no metal installation " + id);
+        }
+    }
+
+    public List<DesignRepository.Installation> installations(long siteId) {
+        sites.get(siteId);
+        return store.installations(siteId);
+    }
+
+    /** The bill of quantities of the site as it is (its parts and down-conductors). */
+    public QuantityTable quantities(long siteId, double fixingsPerMetre) {
+        if (!(fixingsPerMetre >= 0 && fixingsPerMetre <= 20)) {
+            throw new InvalidInputException("fixingsPerMetre", "fixings per metre must be between 0 and 20, got " + fixingsPerMetre);
+        }
+        StoredSite stored = sites.get(siteId);
+        Site site = sites.document(stored).site();
+        List<Coordinate> positions = new ArrayList<>();
+        for (DownConductors d : downConductors(site, stored, store.downConductors(siteId))) {
+            d.positions().forEach(p -> positions.add(new Coordinate(p[0], p[1])));
+        }
+        return BillOfQuantities.table(BillOfQuantities.compute(site, positions, fixingsPerMetre));
+    }
+
+    /**
+     * The bill of quantities as a report section (the table as on the page, the basis of the
+     * counts as notes), for any report writer.
+     */
+    public org.lpzplanner.common.ReportSection quantitiesSection(long siteId, double fixingsPerMetre) {
+        QuantityTable table = quantities(siteId, fixingsPerMetre);
+        return new org.lpzplanner.common.ReportSection(table.title(), table.columns(), table.rows(), List.of(
+                "Down-conductor lengths are straight drops from the roof edge; the installed route may be longer.",
+                "Test joints and earth terminations: one per down-conductor (common practice)."));
+    }
+
+    static double round(double v) {
+        return Math.round(v * 100) / 100.0;
+    }
+
+    /** Counts of the parts of a proposal by kind and height, e.g. {"rod 1 m": 4}. */
+    public static Map<String, Integer> partCounts(List<ProposedPart> parts) {
+        Map<String, Integer> out = new LinkedHashMap<>();
+        for (ProposedPart p : parts) {
+            String key = p.rod() != null ? (p.kind() == ProposedPart.Kind.MAST ? "mast " : "rod ")
+                    + BillOfQuantities.metresText(p.rod().height()) + " m" : p.kind().name().toLowerCase(Locale.ROOT);
+            out.merge(key, 1, Integer::sum);
+        }
+        return out;
+    }
+
+}

@@ -1,0 +1,116 @@
+package org.lpzplanner.engine.design.proposal;
+
+import org.lpzplanner.engine.envelope.CentreSurface;
+import org.lpzplanner.engine.envelope.EnvelopeField;
+import org.lpzplanner.engine.envelope.EnvelopeRefiner;
+import org.lpzplanner.engine.envelope.Grid;
+
+/**
+ * The spheres that touch a point of the structure from above without entering the solid, sampled
+ * on rings round the point.
+ *
+ * <p>A sphere of radius R whose centre stands over column c at plan distance d ≤ R from p touches
+ * p when its centre is at height z<sub>p</sub> + √(R² − d²); it is free when that is not below the
+ * centre surface D(c) (domain model: the lowest free centre over each column). p is exposed exactly
+ * when such a free centre exists. Here D is taken from the grid cells' lower bounds, so a sphere may
+ * count as free that is not (a part then has to block more than it needs to: the safe side).
+ *
+ * <p>Sampling: n rings ({@value #RINGS} at first, more for what a first choice left) at d = R·k/n,
+ * k = 0..n, with about one sample per R/n of circumference. Free spheres between samples can be missed; the proposal's
+ * final check by the full analysis is what decides, this only guides the choice of parts.
+ */
+final class FreeSpheres {
+
+    static final int RINGS = 10;
+
+    /**
+     * A sphere within this much of being free counts as free, metres: the analysis counts a point
+     * within its 1 mm margin (plus the 1 mm tolerance of exact queries) of the envelope as exposed.
+     */
+    static final double FREE_SLACK = 0.003;
+
+    private final int rings;
+
+    private final CentreSurface surface;
+    private final EnvelopeRefiner exact;
+    private final Grid grid;
+    private final double radius;
+
+    FreeSpheres(EnvelopeField field, int rings) {
+        this.rings = rings;
+        this.surface = field.centres();
+        this.exact = field.refiner();
+        this.grid = surface.grid();
+        this.radius = surface.radius();
+    }
+
+    /**
+     * Free centres touching (x, y, z), as x, y, z triples, the centre straight above first; null
+     * when no sample is free (the free spheres, if any, fall between the samples).
+     */
+    double[] at(ExposedPoints.Point p) {
+        double x = p.x(), y = p.y(), z = p.z();
+        double[] out = new double[3 * 512];
+        int n = 0;
+        // spheres in the plane across a line (edge, wall top, facade) and the sphere on a sloped
+        // roof's normal: where the free spheres lie on a straight edge or plane, so they are
+        // sampled finely on purpose rather than met by chance on the rings
+        int fine = 4 * rings;
+        if (p.dx() != 0 || p.dy() != 0) {
+            for (int side = -1; side <= 1; side += 2) {
+                double nx = -p.dy() * side, ny = p.dx() * side;
+                for (int k = 1; k <= fine; k++) {
+                    double d = radius * (k == fine ? 0.995 : (double) k / fine);
+                    double cx = x + d * nx, cy = y + d * ny, cz = z + Math.sqrt(radius * radius - d * d);
+                    if (isFree(cx, cy, cz)) {
+                        out = put(out, n++, cx, cy, cz);
+                    }
+                }
+            }
+        }
+        if (p.a() != 0 || p.b() != 0) {
+            double s = Math.sqrt(1 + p.a() * p.a() + p.b() * p.b());
+            double cx = x - radius * p.a() / s, cy = y - radius * p.b() / s, cz = z + radius / s;
+            if (isFree(cx, cy, cz)) {
+                out = put(out, n++, cx, cy, cz);
+            }
+        }
+        for (int k = 0; k <= rings; k++) {
+            double d = radius * (k == rings ? 0.995 : (double) k / rings);
+            double s = Math.sqrt(radius * radius - d * d);
+            int count = k == 0 ? 1 : Math.max(6, (int) Math.ceil(2 * Math.PI * k));
+            for (int a = 0; a < count; a++) {
+                double angle = 2 * Math.PI * (a + 0.5 * (k % 2)) / count;
+                double cx = x + d * Math.cos(angle), cy = y + d * Math.sin(angle);
+                double cz = z + s;
+                if (isFree(cx, cy, cz)) {
+                    out = put(out, n++, cx, cy, cz);
+                }
+            }
+        }
+        if (n == 0) {
+            return null;
+        }
+        return java.util.Arrays.copyOf(out, 3 * n);
+    }
+
+    private boolean isFree(double cx, double cy, double cz) {
+        return lowestCentre(cx, cy) - cz <= FREE_SLACK && exact.centreHeight(cx, cy) - cz <= FREE_SLACK;
+    }
+
+    private static double[] put(double[] out, int n, double cx, double cy, double cz) {
+        double[] o = n * 3 + 3 > out.length ? java.util.Arrays.copyOf(out, out.length * 2) : out;
+        o[3 * n] = cx;
+        o[3 * n + 1] = cy;
+        o[3 * n + 2] = cz;
+        return o;
+    }
+
+    /** A value ≤ D at (x, y): the cell's lower bound; open ground (R) outside the grid. */
+    private double lowestCentre(double x, double y) {
+        if (!grid.contains(x, y)) {
+            return radius;
+        }
+        return surface.cellLower(grid.column(x), grid.row(y));
+    }
+}

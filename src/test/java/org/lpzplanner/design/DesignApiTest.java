@@ -1,0 +1,201 @@
+package org.lpzplanner.design;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.charset.StandardCharsets;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.SiteService;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.mock.web.MockMultipartFile;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.RequestBuilder;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/** The design API: propose, poll, accept; down-conductors, separation distances, quantities; error paths. */
+@SpringBootTest
+@AutoConfigureMockMvc
+class DesignApiTest {
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
+
+    /** A 30 × 12 m flat-roofed block, 8 m high, with a 1.5 m plant box (invented). */
+    private static final String BLOCK = """
+            {"type": "FeatureCollection", "name": "Test block", "coordinates": "local-metres", "features": [
+              {"type": "Feature", "properties": {"kind": "structure", "name": "Block", "height": 8, "roof": "flat"},
+               "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [30, 0], [30, 12], [0, 12], [0, 0]]]}},
+              {"type": "Feature", "properties": {"kind": "rooftop-object", "name": "Plant box", "top": 9.5},
+               "geometry": {"type": "Polygon", "coordinates": [[[20, 4], [23, 4], [23, 7], [20, 7], [20, 4]]]}}
+            ]}""";
+
+    @Autowired
+    MockMvc mvc;
+
+    @Autowired
+    SiteService sites;
+
+    private long upload() throws Exception {
+        return upload("III");
+    }
+
+    private long upload(String level) throws Exception {
+        String body = mvc.perform(multipart("/api/sites").file(new MockMultipartFile("file", "block.geojson",
+                "application/geo+json", BLOCK.getBytes(StandardCharsets.UTF_8))).param("level", level))
+                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
+        return JSON.readTree(body).path("id").asLong();
+    }
+
+    private JsonNode send(RequestBuilder request, int status) throws Exception {
+        String body = mvc.perform(request).andExpect(status().is(status)).andReturn().getResponse().getContentAsString();
+        return body.isEmpty() ? null : JSON.readTree(body);
+    }
+
+    private JsonNode finished(long id, String job) throws Exception {
+        JsonNode view = null;
+        for (int i = 0; i < 600; i++) {
+            view = send(get("/api/sites/" + id + "/proposals/" + job), 200);
+            if (!view.path("state").asString().equals("running")) {
+                return view;
+            }
+            Thread.sleep(100);
+        }
+        return view;
+    }
+
+    @Test
+    void proposeThenAcceptWritesTheRodsAndTheSiteIsProtected() throws Exception {
+        long id = upload("I");
+        long version = sites.get(id).version();
+        JsonNode started = send(post("/api/sites/" + id + "/proposals").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"rodHeights\": [0.5, 1, 2], \"keepOut\": [[[5, 5], [8, 5], [8, 8], [5, 8]]]}"), 202);
+        JsonNode done = finished(id, started.path("jobId").asString());
+
+        assertThat(done.path("state").asString()).isEqualTo("done");
+        assertThat(done.path("complete").asBoolean()).isTrue();
+        assertThat(done.path("count").asInt()).isPositive().isLessThan(done.path("regularLayoutCount").asInt());
+        assertThat(done.path("cautions").size()).isPositive();
+        for (JsonNode part : done.path("parts")) {
+            boolean inKeepOut = part.path("x").asDouble() >= 5 && part.path("x").asDouble() <= 8
+                    && part.path("y").asDouble() >= 5 && part.path("y").asDouble() <= 8;
+            assertThat(inKeepOut).as("part %s in the keep-out area", part).isFalse();
+        }
+
+        JsonNode accepted = send(post("/api/sites/" + id + "/proposals/" + started.path("jobId").asString() + "/accept")
+                .contentType(MediaType.APPLICATION_JSON).content("{\"version\": " + version + "}"), 200);
+        assertThat(accepted.path("rodIds").size()).isEqualTo(done.path("count").asInt());
+        JsonNode parts = send(get("/api/sites/" + id + "/parts"), 200);
+        assertThat(parts.path("rods").size()).isEqualTo(done.path("count").asInt());
+        JsonNode analysis = send(post("/api/sites/" + id + "/analyses"), 201);
+        JsonNode summary = analysis.has("summary") ? analysis.path("summary") : analysis;
+        assertThat(summary.path("fullyProtected").asBoolean()).isTrue();
+
+        // the same proposal cannot be accepted twice: the site has moved on
+        send(post("/api/sites/" + id + "/proposals/" + started.path("jobId").asString() + "/accept")
+                .contentType(MediaType.APPLICATION_JSON).content("{\"version\": " + version + "}"), 409);
+    }
+
+    @Test
+    void proposalErrorsAreClear() throws Exception {
+        long id = upload();
+        JsonNode noHeights = send(post("/api/sites/" + id + "/proposals").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"rodHeights\": []}"), 400);
+        assertThat(noHeights.path("field").asString()).isEqualTo("rodHeights");
+        JsonNode tooTall = send(post("/api/sites/" + id + "/proposals").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"rodHeights\": [1, 25]}"), 400);
+        assertThat(tooTall.path("error").asString()).contains("between 0.1 m and 10 m");
+        JsonNode badArea = send(post("/api/sites/" + id + "/proposals").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"rodHeights\": [1], \"keepOut\": [[[0, 0], [1, 1]]]}"), 400);
+        assertThat(badArea.path("field").asString()).isEqualTo("keepOut[0]");
+        send(get("/api/sites/" + id + "/proposals/nosuchjob"), 404);
+        send(post("/api/sites/999999/proposals").contentType(MediaType.APPLICATION_JSON).content("{\"rodHeights\": [1]}"), 404);
+        JsonNode noVersion = send(post("/api/sites/" + id + "/proposals/nosuchjob/accept")
+                .contentType(MediaType.APPLICATION_JSON).content("{}"), 400);
+        assertThat(noVersion.path("field").asString()).isEqualTo("version");
+    }
+
+    @Test
+    void downConductorsArePlannedEditedAndReset() throws Exception {
+        long id = upload();
+        JsonNode planned = send(get("/api/sites/" + id + "/down-conductors"), 200).path("structures").get(0);
+        // perimeter 2 · (30 + 12) = 84 m at class III, typical spacing 15 m [IEC 62305-3:2010 Table 4]:
+        // ⌈84 / 15⌉ = 6
+        assertThat(planned.path("perimeter").asDouble()).isCloseTo(84, within(1e-9));
+        assertThat(planned.path("required").asInt()).isEqualTo(6);
+        assertThat(planned.path("positions").size()).isEqualTo(6);
+        assertThat(planned.path("edited").asBoolean()).isFalse();
+
+        JsonNode edited = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString())
+                .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0], [30, 12]]}"), 200)
+                .path("structures").get(0);
+        assertThat(edited.path("edited").asBoolean()).isTrue();
+        assertThat(edited.path("positions").size()).isEqualTo(2);
+        assertThat(edited.path("warnings").get(0).asString()).contains("fewer than the 6");
+
+        JsonNode one = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString())
+                .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0]]}"), 400);
+        assertThat(one.path("error").asString()).contains("at least two");
+        JsonNode far = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString())
+                .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0], [100, 100]]}"), 400);
+        assertThat(far.path("field").asString()).isEqualTo("positions[1]");
+        send(put("/api/sites/" + id + "/down-conductors/nosuch").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"positions\": [[0, 0], [30, 12]]}"), 404);
+
+        JsonNode reset = send(delete("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString()), 200)
+                .path("structures").get(0);
+        assertThat(reset.path("edited").asBoolean()).isFalse();
+        assertThat(reset.path("positions").size()).isEqualTo(6);
+    }
+
+    @Test
+    void separationDistancesFollowTheFormulaWithTheEstimatedLength() throws Exception {
+        long id = upload();
+        long version = sites.get(id).version();
+        send(post("/api/sites/" + id + "/rods").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + version + ", \"x\": 15, \"y\": 6, \"height\": \"2\"}"), 201);
+        send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"name\": \"Pipe\", \"x\": 15, \"y\": 8, \"z\": 9, \"material\": \"AIR\"}"), 201);
+        JsonNode checks = send(get("/api/sites/" + id + "/separation-distances"), 200).path("checks");
+        assertThat(checks.size()).isEqualTo(2);
+        for (JsonNode c : checks) {
+            // s = ki · kc / km · l [IEC 62305-3:2010 6.3]; class III ki = 0.04 (Table 10), kc = 0.44 for
+            // three or more down-conductors (Annex C, simplified), km = 1 in air (Table 11)
+            double s = 0.04 * 0.44 / 1.0 * c.path("length").asDouble();
+            assertThat(c.path("required").asDouble()).isCloseTo(s, within(0.001));
+            assertThat(c.path("passes").asBoolean()).isEqualTo(c.path("actual").asDouble() >= c.path("required").asDouble());
+        }
+        JsonNode pipe = checks.get(1);
+        // nearest LPS point to (15, 8, 9): the rod shaft (15, 6, 8..10) at z = 9, 2 m away
+        assertThat(pipe.path("actual").asDouble()).isCloseTo(2.0, within(0.01));
+
+        JsonNode noName = send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"x\": 1, \"y\": 1, \"z\": 1}"), 400);
+        assertThat(noName.path("field").asString()).isEqualTo("name");
+        JsonNode badMaterial = send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"name\": \"Rail\", \"x\": 1, \"y\": 1, \"z\": 1, \"material\": \"wood\"}"), 400);
+        assertThat(badMaterial.path("field").asString()).isEqualTo("material");
+        send(delete("/api/sites/" + id + "/metal-installations/987654"), 404);
+    }
+
+    @Test
+    void quantitiesAsTableAndCsv() throws Exception {
+        long id = upload();
+        JsonNode table = send(get("/api/sites/" + id + "/quantities?fixingsPerMetre=2"), 200);
+        assertThat(table.path("columns").size()).isEqualTo(4);
+        String csv = mvc.perform(get("/api/sites/" + id + "/quantities.csv")).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsString();
+        assertThat(csv).startsWith("Item,Unit,Quantity,Basis\r\n").contains("Test joint,pcs,6,");
+        JsonNode bad = send(get("/api/sites/" + id + "/quantities?fixingsPerMetre=-1"), 400);
+        assertThat(bad.path("field").asString()).isEqualTo("fixingsPerMetre");
+        send(get("/api/sites/" + id + "/quantities?fixingsPerMetre=abc"), 400);
+    }
+}
