@@ -8,6 +8,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.HexFormat;
 import java.util.Map;
 import java.util.Optional;
+import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
@@ -35,9 +36,11 @@ public class AnalysisService {
     private final AnalysisRepository analyses;
     private final TransactionTemplate transactions;
     private final Clock clock;
+    private final AuditTrail audit;
 
     public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
-            TransactionTemplate transactions, Clock clock) {
+            TransactionTemplate transactions, Clock clock, AuditTrail audit) {
+        this.audit = audit;
         this.sites = sites;
         this.siteRows = siteRows;
         this.analyses = analyses;
@@ -78,6 +81,10 @@ public class AnalysisService {
                     result.corners().size(), result.facades().size(), result.protectedGround().planArea(),
                     result.isFullyProtected(), geoJson, now, result.totalMillis()));
             siteRows.touch(site.id(), site.version(), now);
+            audit.record(site.id(), "analysis", String.format(java.util.Locale.ROOT,
+                    "revision %d at level %s, sphere radius %s m: %s", revision.revision(), sphere.level().name(),
+                    ResultGeoJson.round(sphere.radius()), revision.fullyProtected() ? "no exposed items"
+                            : "exposed items remain"));
             return revision;
         });
     }
@@ -88,7 +95,10 @@ public class AnalysisService {
         return analyses.latest(siteId);
     }
 
-    /** The latest revision of every analysed site, without result GeoJSON, by site id. */
+    /**
+     * The latest revision of every analysed site, without result GeoJSON, by site id. Not limited
+     * to a team: callers look up only the ids of sites they were allowed to list.
+     */
     public Map<Long, AnalysisRevision> latestSummaries() {
         return analyses.latestSummaries();
     }

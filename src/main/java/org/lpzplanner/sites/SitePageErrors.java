@@ -1,6 +1,7 @@
 package org.lpzplanner.sites;
 
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
+import org.lpzplanner.comments.CommentPageController;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
@@ -15,7 +16,7 @@ import org.springframework.web.servlet.ModelAndView;
  * page with the reason; an unknown review item gives a 404 page with the reason.
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
-    ReviewPageController.class, SectionPageController.class})
+    ReviewPageController.class, SectionPageController.class, CommentPageController.class})
 public class SitePageErrors {
 
     @ExceptionHandler(SiteNotFoundException.class)
