@@ -4,6 +4,7 @@ import java.util.Optional;
 import java.util.function.Supplier;
 import org.springframework.security.access.AccessDeniedException;
 import org.springframework.security.core.Authentication;
+import org.springframework.security.core.context.SecurityContext;
 import org.springframework.security.core.context.SecurityContextHolder;
 
 /**
@@ -51,6 +52,34 @@ public final class CurrentAccount {
             return system.name();
         }
         return signedIn().map(SignedInAccount::email).orElse("anonymous");
+    }
+
+    /**
+     * Wraps work to run on another thread (a worker pool) as whoever acts on this thread now: the
+     * signed-in account's security context, or the system task. Without it the team check on the
+     * other thread fails closed.
+     */
+    public static <T> Supplier<T> carry(Supplier<T> work) {
+        SecurityContext context = SecurityContextHolder.getContext();
+        SystemActor system = SYSTEM.get();
+        return () -> {
+            SecurityContext previousContext = SecurityContextHolder.getContext();
+            SystemActor previousSystem = SYSTEM.get();
+            SecurityContextHolder.setContext(context);
+            if (system != null) {
+                SYSTEM.set(system);
+            }
+            try {
+                return work.get();
+            } finally {
+                SecurityContextHolder.setContext(previousContext);
+                if (previousSystem == null) {
+                    SYSTEM.remove();
+                } else {
+                    SYSTEM.set(previousSystem);
+                }
+            }
+        };
     }
 
     /** Runs a task of the app itself for one team, e.g. storing the demo sites. */

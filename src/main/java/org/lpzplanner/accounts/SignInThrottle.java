@@ -22,6 +22,8 @@ public class SignInThrottle {
     private final int maxPerAccount;
     private final int maxPerAddress;
     private final Duration window;
+    /** Attempts recorded by this instance; every hundredth one also drops expired rows. */
+    private final java.util.concurrent.atomic.AtomicLong recorded = new java.util.concurrent.atomic.AtomicLong();
 
     public SignInThrottle(JdbcClient jdbc, Clock clock,
             @Value("${lpz.sign-in.max-failures-per-account:5}") int maxPerAccount,
@@ -63,6 +65,9 @@ public class SignInThrottle {
     }
 
     private void record(String email, String address, boolean succeeded) {
+        if (recorded.incrementAndGet() % 100 == 0) {
+            forgetOld();
+        }
         jdbc.sql("INSERT INTO sign_in_attempts (email, address, succeeded, attempted_at) VALUES (?, ?, ?, ?)")
                 .params(key(email), address(address), succeeded, Timestamp.from(Instant.now(clock))).update();
     }

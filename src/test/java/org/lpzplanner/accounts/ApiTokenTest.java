@@ -92,13 +92,20 @@ class ApiTokenTest {
                 .andExpect(status().isForbidden());
     }
 
+    @Autowired
+    org.springframework.jdbc.core.simple.JdbcClient jdbc;
+
     @Test
-    void onlyAHashOfTheTokenIsStored() {
+    void onlyTheSha256OfTheTokenIsStored() throws Exception {
         long accountId = ((SignedInAccount) TestSecurityContextHolder.getContext().getAuthentication().getPrincipal())
                 .accountId();
         String token = tokens.create(accountId, "hash check");
-        // SHA-256 of the token's UTF-8 bytes (FIPS 180-4), as hex
-        assertThat(ApiTokenService.sha256(token)).hasSize(64).doesNotContain(token.substring(4));
+        // SHA-256 of the token's UTF-8 bytes (FIPS 180-4) from the JDK, as lower-case hex
+        String expected = java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(token.getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        String stored = jdbc.sql("SELECT token_sha256 FROM api_tokens WHERE label = 'hash check'")
+                .query(String.class).single();
+        assertThat(stored).isEqualTo(expected).doesNotContain(token.substring(4));
         assertThat(tokens.authenticate(token)).isPresent();
         assertThat(tokens.authenticate(token + "x")).isEmpty();
     }
