@@ -10,7 +10,9 @@ import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.chrome.ChromeDriver;
+import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.boot.test.web.server.LocalServerPort;
 import org.springframework.test.annotation.DirtiesContext;
 
@@ -28,6 +30,9 @@ class FirstStartBrowserTest {
     int port;
 
     ChromeDriver browser;
+
+    @Autowired
+    JdbcClient jdbc;
 
     @AfterEach
     void closeBrowser() {
@@ -62,6 +67,9 @@ class FirstStartBrowserTest {
         browser.findElement(By.name("password")).sendKeys("a long enough password");
         browser.findElement(By.cssSelector("#sign-in-form button[type=submit]")).click();
         assertThat(browser.findElement(By.id("account-link")).getText()).contains("Ada Fielding");
+        // the session is kept in the database (Spring Session JDBC), where every app instance finds it
+        assertThat(jdbc.sql("SELECT COUNT(*) FROM SPRING_SESSION WHERE PRINCIPAL_NAME = 'ada@example.org'")
+                .query(Long.class).single()).isPositive();
         Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("signed-in.png"),
                 StandardCopyOption.REPLACE_EXISTING);
     }
