@@ -11,6 +11,7 @@ import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.common.Cautions;
@@ -73,8 +74,11 @@ class PlanPage {
                 .toList());
         model.put("comments", comments.comments(id).stream().map(c -> new CommentRow(c.author(), c.body(),
                 SitePageController.WHEN.format(c.at()))).toList());
-        model.put("revisionReviews", comments.reviews(id).stream().map(r -> new ReviewedMark(r.revision(),
+        var marks = comments.reviews(id);
+        model.put("revisionReviews", marks.stream().map(r -> new ReviewedMark(r.revision(),
                 r.reviewer(), SitePageController.WHEN.format(r.at()))).toList());
+        String me = CurrentAccount.actorName();
+        model.put("reviewedByMe", marks.stream().anyMatch(r -> r.reviewer().equals(me)));
         model.put("history", audit.forSite(id, HISTORY_ROWS).stream().map(e -> new HistoryRow(
                 SitePageController.WHEN.format(e.at()), e.actor(),
                 messages.getMessage("history.action." + e.action(), null, e.action(), locale), e.detail())).toList());
