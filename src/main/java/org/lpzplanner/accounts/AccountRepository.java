@@ -60,6 +60,11 @@ public class AccountRepository {
         jdbc.sql("UPDATE accounts SET password_hash = ? WHERE id = ?").params(passwordHash, id).update();
     }
 
+    /** Ends every stored session of the account (Spring Session JDBC indexes them by principal name). */
+    public void endSessions(String email) {
+        jdbc.sql("DELETE FROM SPRING_SESSION WHERE PRINCIPAL_NAME = ?").param(email).update();
+    }
+
     public long countEnabledAdmins() {
         return jdbc.sql("SELECT COUNT(*) FROM accounts WHERE role = 'ADMIN' AND enabled = TRUE")
                 .query(Long.class).single();

@@ -87,8 +87,10 @@ public class AccountService {
     }
 
     /**
-     * Changes an account's role, team or whether it may sign in. The last enabled administrator
-     * cannot be demoted or disabled, so the app always has someone who can manage accounts.
+     * Changes an account's role, team or whether it may sign in, and ends the account's sessions on
+     * every instance when any of them changed. The last enabled administrator cannot be demoted or
+     * disabled, so the app always has someone who can manage accounts. (API tokens look the
+     * account up on every request, so they follow the change by themselves.)
      */
     @Transactional
     public Account update(long accountId, Role role, long teamId, boolean enabled) {
@@ -102,6 +104,10 @@ public class AccountService {
             throw new InvalidInputException("role", "the last administrator must stay an enabled administrator");
         }
         accounts.update(accountId, role, teamId, enabled);
+        if (role != account.role() || teamId != account.teamId() || enabled != account.enabled()) {
+            // sessions keep the role and team they signed in with: end them, so the change counts at once
+            accounts.endSessions(account.email());
+        }
         return get(accountId);
     }
 

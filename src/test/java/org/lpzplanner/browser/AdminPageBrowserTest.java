@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.accounts.Account;
 import org.lpzplanner.accounts.AccountService;
 import org.lpzplanner.accounts.Role;
 import org.lpzplanner.accounts.SignedIn;
@@ -16,7 +17,8 @@ import org.springframework.beans.factory.annotation.Autowired;
 
 /**
  * An administrator adds a team and a reviewer account on the admin page; the new account is
- * listed with its role. Screenshot: target/screenshots/admin-page.png.
+ * listed with its role. Disabling an account ends its open sessions. Screenshot:
+ * target/screenshots/admin-page.png.
  */
 @SignedIn(role = Role.ADMIN)
 class AdminPageBrowserTest extends BrowserTestBase {
@@ -49,5 +51,18 @@ class AdminPageBrowserTest extends BrowserTestBase {
         Path shots = Files.createDirectories(Path.of("target", "screenshots"));
         Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("admin-page.png"),
                 StandardCopyOption.REPLACE_EXISTING);
+    }
+
+    @Test
+    @SignedIn(role = Role.DESIGNER, email = "leaving@default.test")
+    void disablingAnAccountEndsItsSessionAtOnce() throws Exception {
+        browser.get("http://localhost:" + port + "/");
+        assertThat(browser.findElements(By.id("account-link"))).isNotEmpty();
+        Account leaving = accounts.list().stream().filter(a -> a.email().equals("leaving@default.test")).findFirst()
+                .orElseThrow();
+        accounts.update(leaving.id(), Role.DESIGNER, leaving.teamId(), false);
+
+        browser.get("http://localhost:" + port + "/");
+        assertThat(browser.getCurrentUrl()).endsWith("/login");
     }
 }
