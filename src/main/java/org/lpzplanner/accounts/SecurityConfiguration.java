@@ -27,7 +27,7 @@ import org.springframework.security.web.util.matcher.RequestMatcher;
 
 /**
  * Who may do what. Everything needs a signed-in account except the sign-in page, the first-run
- * setup page, static files and the error page. Reading is open to every role; comments and the
+ * setup page, static files, the error page and the health check. Reading is open to every role; comments and the
  * reviewed mark to every role; every other state-changing request needs a designer or an
  * administrator; account management needs an administrator. Team ownership of sites is checked
  * in the services ({@link CurrentAccount}), so another team's site answers 404 everywhere.
@@ -74,6 +74,9 @@ public class SecurityConfiguration {
                 .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
                 .authorizeHttpRequests(a -> a
                         .requestMatchers("/login", "/setup", "/css/**", "/js/**", "/favicon.ico", "/error").permitAll()
+                        // load balancers and container health checks ask without an account; the
+                        // answer holds no site data
+                        .requestMatchers(HttpMethod.GET, "/actuator/health", "/actuator/health/**").permitAll()
                         .requestMatchers("/admin/**").hasRole(Role.ADMIN.name())
                         .requestMatchers(HttpMethod.POST, "/sites/*/comments", "/sites/*/reviewed",
                                 "/api/sites/*/comments", "/api/sites/*/analyses/latest/reviewed", "/account/**")
