@@ -68,6 +68,13 @@ public class AccountPageController {
         }
     }
 
+    private static final java.time.format.DateTimeFormatter WHEN = java.time.format.DateTimeFormatter
+            .ofPattern("yyyy-MM-dd HH:mm 'UTC'", java.util.Locale.ROOT).withZone(java.time.ZoneOffset.UTC);
+
+    /** A token as the page lists it, times already written. */
+    record TokenRow(long id, String label, String createdAt, String lastUsedAt) {
+    }
+
     private static SignedInAccount me() {
         return CurrentAccount.signedIn().orElseThrow();
     }
@@ -77,7 +84,8 @@ public class AccountPageController {
         ModelAndView page = new ModelAndView("accounts/account", status);
         page.addObject("account", me);
         page.addObject("team", accounts.team(me.teamId()).name());
-        page.addObject("tokens", tokens.list(me.accountId()));
+        page.addObject("tokens", tokens.list(me.accountId()).stream().map(t -> new TokenRow(t.id(), t.label(),
+                WHEN.format(t.createdAt()), t.lastUsedAt() == null ? null : WHEN.format(t.lastUsedAt()))).toList());
         page.addObject("minPassword", AccountService.MIN_PASSWORD);
         return page;
     }
