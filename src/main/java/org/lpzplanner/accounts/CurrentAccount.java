@@ -82,6 +82,15 @@ public final class CurrentAccount {
         };
     }
 
+    /** {@link #carry(Supplier)} for work without a result, e.g. {@code pool.execute(CurrentAccount.carry(task))}. */
+    public static Runnable carry(Runnable work) {
+        Supplier<Void> carried = carry(() -> {
+            work.run();
+            return null;
+        });
+        return carried::get;
+    }
+
     /** Runs a task of the app itself for one team, e.g. storing the demo sites. */
     public static <T> T asSystem(String name, long teamId, Supplier<T> work) {
         SystemActor previous = SYSTEM.get();
