@@ -33,17 +33,22 @@ public class AnalysisRepository {
         return max == null ? 1 : max + 1;
     }
 
-    /** Stores a revision (its id is ignored) and returns it with the id given by the database. */
-    public AnalysisRevision insert(AnalysisRevision r) {
+    /**
+     * Stores a revision (its id is ignored) with the inputs it read and returns it with the id given
+     * by the database.
+     */
+    public AnalysisRevision insert(AnalysisRevision r, RevisionInputs inputs) {
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO analysis_revisions (site_id, revision, protection_level, sphere_radius, resolution,"
                         + " inputs_sha256, exposed_roof_area, exposed_edge_length, exposed_corners, facade_bands,"
-                        + " protected_ground_area, fully_protected, result_geojson, created_at, engine_millis)"
-                        + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                        + " protected_ground_area, fully_protected, result_geojson, created_at, engine_millis,"
+                        + " site_name, source_name, source_text, tolerance)"
+                        + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
                 .params(r.siteId(), r.revision(), r.level().name(), r.sphereRadius(), r.resolution(), r.inputsSha256(),
                         r.exposedRoofArea(), r.exposedEdgeLength(), r.exposedCorners(), r.facadeBands(),
                         r.protectedGroundArea(), r.fullyProtected(), r.resultGeoJson(), Timestamp.from(r.createdAt()),
-                        r.engineMillis())
+                        r.engineMillis(), inputs.siteName(), inputs.sourceName(), inputs.sourceText(),
+                        inputs.tolerance())
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
         return new AnalysisRevision(id, r.siteId(), r.revision(), r.level(), r.sphereRadius(), r.resolution(),
@@ -56,6 +61,26 @@ public class AnalysisRepository {
         return jdbc.sql("SELECT " + SUMMARY_COLUMNS + ", result_geojson FROM analysis_revisions WHERE site_id = ?"
                         + " ORDER BY revision DESC LIMIT 1")
                 .param(siteId).query((rs, n) -> row(rs, rs.getString("result_geojson"))).optional();
+    }
+
+    /** One revision of a site by its number, with its result GeoJSON. */
+    public Optional<AnalysisRevision> find(long siteId, int revision) {
+        return jdbc.sql("SELECT " + SUMMARY_COLUMNS + ", result_geojson FROM analysis_revisions WHERE site_id = ?"
+                        + " AND revision = ?")
+                .params(siteId, revision).query((rs, n) -> row(rs, rs.getString("result_geojson"))).optional();
+    }
+
+    /**
+     * The inputs stored with a revision; empty for revisions stored before inputs were kept (their
+     * columns are NULL).
+     */
+    public Optional<RevisionInputs> inputs(long revisionId) {
+        return jdbc.sql("SELECT site_name, source_name, source_text, tolerance FROM analysis_revisions WHERE id = ?"
+                        + " AND source_text IS NOT NULL")
+                .param(revisionId)
+                .query((rs, n) -> new RevisionInputs(rs.getString("site_name"), rs.getString("source_name"),
+                        rs.getString("source_text"), rs.getDouble("tolerance")))
+                .optional();
     }
 
     /** The latest revision of every analysed site, without result GeoJSON, by site id. */

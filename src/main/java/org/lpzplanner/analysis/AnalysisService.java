@@ -79,7 +79,9 @@ public class AnalysisService {
                     analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), result.resolution(),
                     sha256(site.sourceText()), result.totalExposedRoofArea(), result.totalExposedEdgeLength(),
                     result.corners().size(), result.facades().size(), result.protectedGround().planArea(),
-                    result.isFullyProtected(), geoJson, now, result.totalMillis()));
+                    result.isFullyProtected(), geoJson, now, result.totalMillis()),
+                    new RevisionInputs(site.name(), site.sourceName(), site.sourceText(),
+                            result.tolerance()));
             siteRows.touch(site.id(), site.version(), now);
             audit.record(site.id(), "analysis", String.format(java.util.Locale.ROOT,
                     "revision %d at level %s, sphere radius %s m: %s", revision.revision(), sphere.level().name(),
@@ -113,7 +115,7 @@ public class AnalysisService {
     }
 
     /** Hex SHA-256 of the text's UTF-8 bytes. */
-    static String sha256(String text) {
+    public static String sha256(String text) {
         try {
             return HexFormat.of().formatHex(
                     MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8)));

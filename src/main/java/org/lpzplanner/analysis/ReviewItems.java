@@ -62,7 +62,7 @@ public final class ReviewItems {
     }
 
     /** The key of every review item among {@code features}, by feature identity. */
-    static Map<JsonNode, String> keys(List<JsonNode> features) {
+    public static Map<JsonNode, String> keys(List<JsonNode> features) {
         Map<JsonNode, String> keys = new IdentityHashMap<>();
         Map<String, Integer> seen = new HashMap<>();
         for (JsonNode f : features) {

@@ -29,12 +29,14 @@ public final class CommandLine {
     /** Asks for help as the first argument only (elsewhere it could be a file name). */
     private static final String HELP_COMMAND = "help";
 
-    private static final Map<String, Command> COMMANDS = commands(new AnalyzeCommand(), new EnvelopeCommand());
+    private static final Map<String, Command> COMMANDS = commands(new AnalyzeCommand(), new EnvelopeCommand(),
+            new ReportCommand());
 
     static final String USAGE = String.join(System.lineSeparator(),
             "Usage:",
             "  java -jar lpz-planner.jar analyze  --site FILE --level LEVEL [--radius M] [--resolution M] [--out FILE]",
             "  java -jar lpz-planner.jar envelope --site FILE --level LEVEL [--radius M] [--resolution M] --points FILE",
+            "  java -jar lpz-planner.jar report   --site FILE --level LEVEL [--parts FILE] [--radius M] [--resolution M] --out FILE",
             "  java -jar lpz-planner.jar --help",
             "",
             "Assesses a site for direct lightning strikes with the rolling sphere method (IEC 62305-3:2010).",
@@ -45,6 +47,8 @@ public final class CommandLine {
             "             also write these results as GeoJSON",
             "  envelope   print, as CSV x,y,envelope_m, the height of the protection envelope above",
             "             ground at each point of a CSV file",
+            "  report     write the printed assessment (PDF): plan to scale, sections, schedules,",
+            "             cautions and a review block for the licensed reviewer",
             "",
             "Options:",
             "  --site FILE        site file: GeoJSON (.geojson, .json) or WKT (.wkt, .txt);",
@@ -52,7 +56,8 @@ public final class CommandLine {
             "  --level LEVEL      protection level I, II, III or IV (sphere radius 20, 30, 45 or 60 m)",
             "  --radius M         roll a sphere of this radius in metres instead of the level's",
             "  --resolution M     grid spacing in metres, 0.05 to 10 (default: chosen from the site's size)",
-            "  --out FILE         analyze: also write the results as GeoJSON to FILE",
+            "  --out FILE         analyze: also write the results as GeoJSON to FILE; report: the PDF",
+            "  --parts FILE       report: GeoJSON of rod and conductor features added to the site's",
             "  --points FILE      envelope: CSV with the header line x,y and one point per line, in the",
             "                     site file's coordinates (longitude,latitude or local metres)",
             "  --help             print this text",

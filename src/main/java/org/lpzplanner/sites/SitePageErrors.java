@@ -16,7 +16,8 @@ import org.springframework.web.servlet.ModelAndView;
  * page with the reason; an unknown review item gives a 404 page with the reason.
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
-    ReviewPageController.class, SectionPageController.class, CommentPageController.class})
+    ReviewPageController.class, SectionPageController.class, CommentPageController.class,
+    org.lpzplanner.report.ReportPageController.class})
 public class SitePageErrors {
 
     @ExceptionHandler(SiteNotFoundException.class)

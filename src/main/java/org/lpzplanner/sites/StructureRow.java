@@ -17,7 +17,7 @@ import org.lpzplanner.engine.model.Structure;
 public record StructureRow(int index, String id, String name, double footprintArea, double height, String roof,
         Double ridgeHeight, Double bearing, Double parapet) {
 
-    static List<StructureRow> of(List<Structure> structures) {
+    public static List<StructureRow> of(List<Structure> structures) {
         List<StructureRow> rows = new ArrayList<>();
         for (int i = 0; i < structures.size(); i++) {
             Structure s = structures.get(i);

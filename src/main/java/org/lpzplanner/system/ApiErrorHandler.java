@@ -4,6 +4,8 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.io.SiteFormatException;
+import org.lpzplanner.report.RevisionInputsMissingException;
+import org.lpzplanner.report.RevisionNotFoundException;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -66,6 +68,20 @@ public class ApiErrorHandler {
     @ExceptionHandler(ReviewItemNotFoundException.class)
     ResponseEntity<Map<String, Object>> noItem(ReviewItemNotFoundException e) {
         return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    }
+
+    @ExceptionHandler(RevisionNotFoundException.class)
+    ResponseEntity<Map<String, Object>> noRevision(RevisionNotFoundException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("field", "revision");
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(body);
+    }
+
+    @ExceptionHandler(RevisionInputsMissingException.class)
+    ResponseEntity<Map<String, Object>> inputsMissing(RevisionInputsMissingException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("field", "revision");
+        return ResponseEntity.status(HttpStatus.CONFLICT).body(body);
     }
 
     @ExceptionHandler(MethodArgumentTypeMismatchException.class)

@@ -61,7 +61,7 @@ class FirstStartBrowserTest {
         Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("first-sites.png"),
                 StandardCopyOption.REPLACE_EXISTING);
 
-        browser.findElement(By.cssSelector("#sign-out-form button")).click();
+        browser.findElement(By.cssSelector("#sign-out-form input[type=submit]")).click();
         assertThat(browser.findElement(By.id("signed-out")).isDisplayed()).isTrue();
         browser.findElement(By.name("email")).sendKeys("ada@example.org");
         browser.findElement(By.name("password")).sendKeys("a long enough password");

@@ -1,0 +1,172 @@
+package org.lpzplanner.report;
+
+import java.awt.Color;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.List;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.lpzplanner.analysis.SiteSection;
+import org.lpzplanner.analysis.SiteSection.Point;
+
+/**
+ * Draws a {@link SiteSection} to a standard scale, the same across and up: the structure profile
+ * filled, the part of it in LPZ 0A marked along its top, rods, the envelope (dashed) and the sphere
+ * at its resting positions clipped to the frame, with distance and height ticks and a one-line legend.
+ */
+final class PdfSectionPainter {
+
+    static final float MAX_FRAME_HEIGHT = 250;
+    private static final float LEFT = 30;
+    private static final float BOTTOM = 18;
+    private static final Color PROFILE = new Color(0xa7, 0xa9, 0xb0);
+    private static final Color EXPOSED = new Color(0xe0, 0x6c, 0x00);
+    private static final Color ENVELOPE = new Color(0x0b, 0x6e, 0x8a);
+    private static final Color SPHERE = new Color(0x6d, 0x6d, 0x6d);
+    private static final Color ROD = new Color(0x1f, 0x5f, 0xbf);
+
+    private PdfSectionPainter() {
+    }
+
+    static void paint(PdfPages p, ReportBlock.Section block) {
+        SiteSection s = block.section();
+        double highest = 1;
+        for (Point pt : s.profile()) {
+            highest = Math.max(highest, pt.z());
+        }
+        for (Point pt : s.envelope()) {
+            highest = Math.max(highest, pt.z());
+        }
+        for (SiteSection.RodMark r : s.rods()) {
+            highest = Math.max(highest, r.top());
+        }
+        double zMax = highest * 1.25 + 2;
+        float drawW = PdfPages.CONTENT_WIDTH - LEFT - 6;
+        int denominator = PdfPlanPainter.fitScale(s.length(), zMax, drawW, MAX_FRAME_HEIGHT - BOTTOM - 6);
+        float k = PdfPlanPainter.pointsPerMetre(denominator);
+        float frameH = (float) (zMax * k) + BOTTOM + 6;
+        List<String> caption = PdfPages.wrap(p.fonts, block.caption() + " Scale 1:" + denominator
+                + " on A4, the same across and up.", 7.8f, PdfPages.CONTENT_WIDTH);
+        float needed = 16 + caption.size() * 10 + frameH + 22;
+        p.ensure(needed);
+        p.text(block.title(), PdfPages.MARGIN, p.y - 10.5f, 10.5f, true, PdfReportRenderer.TEXT);
+        p.y -= 15;
+        for (String line : caption) {
+            p.text(line, PdfPages.MARGIN, p.y - 7.8f, 7.8f, false, PdfReportRenderer.MUTED);
+            p.y -= 10;
+        }
+        float frameTop = p.y - 2, frameBottom = frameTop - frameH;
+        float x0 = PdfPages.MARGIN + LEFT, z0 = frameBottom + BOTTOM;
+        float drawRight = x0 + (float) (s.length() * k);
+        PDPageContentStream out = p.out;
+        try {
+            out.saveGraphicsState();
+            out.addRect(x0, z0, drawRight - x0, frameTop - z0);
+            out.clip();
+            // profile
+            out.moveTo(x0, z0);
+            for (Point pt : s.profile()) {
+                out.lineTo(x0 + (float) (pt.s() * k), z0 + (float) (pt.z() * k));
+            }
+            out.lineTo(drawRight, z0);
+            out.closePath();
+            out.setNonStrokingColor(PROFILE);
+            out.setStrokingColor(new Color(0x33, 0x33, 0x33));
+            out.setLineWidth(0.5f);
+            out.fillAndStroke();
+            exposedRuns(out, s, k, x0, z0);
+            for (SiteSection.RodMark r : s.rods()) {
+                out.setStrokingColor(ROD);
+                out.setLineWidth(1.6f);
+                out.moveTo(x0 + (float) (r.s() * k), z0 + (float) (r.base() * k));
+                out.lineTo(x0 + (float) (r.s() * k), z0 + (float) (r.top() * k));
+                out.stroke();
+            }
+            List<Point> env = s.envelope();
+            for (int i = 0; i < env.size(); i++) {
+                float x = x0 + (float) (env.get(i).s() * k), z = z0 + (float) (env.get(i).z() * k);
+                if (i == 0) {
+                    out.moveTo(x, z);
+                } else {
+                    out.lineTo(x, z);
+                }
+            }
+            out.setStrokingColor(ENVELOPE);
+            out.setLineWidth(1.2f);
+            out.setLineDashPattern(new float[] {4, 2}, 0);
+            out.stroke();
+            out.setLineDashPattern(new float[0], 0);
+            for (Point c : s.spheres()) {
+                PdfPlanPainter.circle(out, x0 + (float) (c.s() * k), z0 + (float) (c.z() * k),
+                        (float) (s.radius() * k));
+                out.setStrokingColor(SPHERE);
+                out.setLineWidth(0.7f);
+                out.stroke();
+            }
+            out.restoreGraphicsState();
+            p.fonts.forget();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        p.line(x0, z0, drawRight, z0, PdfReportRenderer.TEXT, 0.8f);
+        p.line(x0, z0, x0, frameTop, PdfReportRenderer.TEXT, 0.6f);
+        ticks(p, s.length(), zMax, k, x0, z0, frameTop);
+        p.y = frameBottom - 4;
+        legend(p);
+        p.y -= 14;
+    }
+
+    private static void exposedRuns(PDPageContentStream out, SiteSection s, float k, float x0, float z0)
+            throws IOException {
+        List<Point> profile = s.profile();
+        out.setStrokingColor(EXPOSED);
+        out.setLineWidth(3f);
+        for (int i = 0; i + 1 < profile.size(); i++) {
+            if (s.exposed().get(i) && s.exposed().get(i + 1)) {
+                out.moveTo(x0 + (float) (profile.get(i).s() * k), z0 + (float) (profile.get(i).z() * k));
+                out.lineTo(x0 + (float) (profile.get(i + 1).s() * k), z0 + (float) (profile.get(i + 1).z() * k));
+                out.stroke();
+            }
+        }
+    }
+
+    private static void ticks(PdfPages p, double length, double zMax, float k, float x0, float z0, float top) {
+        double step = niceStep(length / 6);
+        for (double d = 0; d <= length + 1e-9; d += step) {
+            float x = x0 + (float) (d * k);
+            p.line(x, z0, x, z0 - 3, PdfReportRenderer.TEXT, 0.5f);
+            p.text(ReportFacts.oneDecimal(d).replace(".0", ""), x - 4, z0 - 11, 6, false, PdfReportRenderer.MUTED);
+        }
+        p.text("m along the cut", x0 + (float) (length * k) - 48, z0 - 17, 6, false, PdfReportRenderer.MUTED);
+        double zStep = niceStep(zMax / 4);
+        for (double z = zStep; z <= zMax + 1e-9; z += zStep) {
+            float y = z0 + (float) (z * k);
+            if (y > top - 4) {
+                break;
+            }
+            p.line(x0 - 3, y, x0, y, PdfReportRenderer.TEXT, 0.5f);
+            p.text(ReportFacts.oneDecimal(z).replace(".0", "") + " m", PdfPages.MARGIN, y - 2, 6, false,
+                    PdfReportRenderer.MUTED);
+        }
+    }
+
+    private static double niceStep(double target) {
+        double magnitude = Math.pow(10, Math.floor(Math.log10(Math.max(target, 1e-6))));
+        for (double m : new double[] {1, 2, 5, 10}) {
+            if (m * magnitude >= target) {
+                return m * magnitude;
+            }
+        }
+        return 10 * magnitude;
+    }
+
+    private static void legend(PdfPages p) {
+        String[] names = {"Structure", "Exposed (LPZ 0A)", "Envelope (LPZ 0A / 0B boundary)", "Rod", "Sphere"};
+        Color[] colours = {PROFILE, EXPOSED, ENVELOPE, ROD, SPHERE};
+        float x = PdfPages.MARGIN;
+        for (int i = 0; i < names.length; i++) {
+            p.fillRect(x, p.y - 7, 12, 6, colours[i]);
+            p.text(names[i], x + 15, p.y - 7, 6.8f, false, PdfReportRenderer.TEXT);
+            x += 15 + p.fonts.width(p.fonts.safe(names[i]), 6.8f) + 14;
+        }
+    }
+}

@@ -1,0 +1,202 @@
+package org.lpzplanner.report;
+
+import static org.lpzplanner.report.ReportFacts.metres;
+
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.lpzplanner.analysis.SiteSection;
+import org.lpzplanner.common.Cautions;
+import org.lpzplanner.engine.envelope.EnvelopeField;
+import org.lpzplanner.engine.envelope.EnvelopeOp;
+import org.lpzplanner.engine.geom.SiteSurface;
+import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.sites.SiteFiles;
+import org.lpzplanner.sites.StructureRow;
+
+/**
+ * Assembles the content of a report from one {@link ReportSource}: the cover with the status and the
+ * cautions, the method and inputs, the plan drawing, the sections (saved cuts, then one automatic cut
+ * per structure), the schedules of {@link ReportParts} and the review block. Everything comes from
+ * the stored file and result of the revision; only the section envelopes are computed again from
+ * the stored file at the stored sphere and resolution (the engine is deterministic, so they come out
+ * the same every time).
+ */
+public final class ReportAssembler {
+
+    /** Standard and edition the method follows. */
+    public static final String STANDARD = "IEC 62305-3:2010, rolling sphere method (5.2.2, Table 2, Annex A)";
+
+    private static final DateTimeFormatter DATE = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+
+    private ReportAssembler() {
+    }
+
+    /** Assembles a report, computing the envelope from the stored file. */
+    public static ReportContent assemble(ReportSource source) {
+        return assemble(source, null);
+    }
+
+    /**
+     * Assembles a report.
+     *
+     * @param field the envelope of the source's site at its sphere and resolution when the caller
+     *              has it (the command line, right after analysing), or null to compute it
+     */
+    public static ReportContent assemble(ReportSource source, EnvelopeField field) {
+        Site site = SiteFiles.read(source.sourceText(), source.sourceName()).site();
+        SiteSurface surface = SiteSurfaceBuilder.build(site);
+        EnvelopeField envelope = field != null ? field
+                : EnvelopeOp.compute(surface, source.sphere().radius(), source.resolution());
+        ReportFacts facts = ReportFacts.of(source, site, surface, envelope, StoredResult.read(source.resultGeoJson()));
+        List<ReportBlock> blocks = new ArrayList<>();
+        cover(facts, blocks);
+        method(facts, blocks);
+        blocks.add(new ReportBlock.Heading("Plan", 1));
+        blocks.add(new ReportBlock.Plan(PlanDrawings.of(facts)));
+        sections(facts, blocks);
+        blocks.add(new ReportBlock.Heading("Schedules", 1));
+        for (ReportPart part : ReportParts.SCHEDULES) {
+            blocks.addAll(part.blocks(facts));
+        }
+        blocks.add(new ReportBlock.Heading("Review and approval", 1));
+        blocks.add(reviewBlock());
+        String footer = source.siteName() + " · " + revisionText(source) + " · " + levelText(source);
+        return new ReportContent("Lightning-protection assessment", footer, Cautions.lines(), blocks);
+    }
+
+    private static void cover(ReportFacts facts, List<ReportBlock> blocks) {
+        ReportSource s = facts.source();
+        int remaining = facts.items().size() - facts.acceptedCount();
+        boolean roofs = !facts.stored().roofAreas().isEmpty();
+        String status;
+        if (remaining == 0 && !roofs) {
+            status = "No exposed items remain: every roof area, edge, corner and facade band is protected or"
+                    + " accepted by the designer (" + facts.acceptedCount() + " accepted).";
+        } else {
+            status = "Exposed items remain: " + remaining + " edge, corner or facade band item"
+                    + (remaining == 1 ? "" : "s") + (roofs ? " and exposed roof areas" : "")
+                    + " need air-termination or the designer's acceptance (" + facts.acceptedCount() + " accepted).";
+        }
+        blocks.add(new ReportBlock.Heading("Lightning-protection assessment", 1));
+        blocks.add(new ReportBlock.Facts(List.of(
+                new ReportBlock.Fact("Site", s.siteName()),
+                new ReportBlock.Fact("Address", ""),
+                new ReportBlock.Fact("Protection level", levelText(s)),
+                new ReportBlock.Fact("Method", STANDARD),
+                new ReportBlock.Fact("Revision", revisionText(s)),
+                new ReportBlock.Fact("Analysed", DATE.format(s.analysedAt())),
+                new ReportBlock.Fact("Designer", ""),
+                new ReportBlock.Fact("Site file", s.sourceName()),
+                new ReportBlock.Fact("Site file SHA-256", s.inputsSha256()),
+                new ReportBlock.Fact("Status", status))));
+        blocks.add(new ReportBlock.CautionsBox("Read before use", Cautions.lines()));
+        blocks.add(new ReportBlock.Heading("Findings", 2));
+        long edges = facts.items().stream().filter(i -> !i.kind().equals("corner") && !i.kind().equals("facade-band"))
+                .count();
+        long corners = facts.items().stream().filter(i -> i.kind().equals("corner")).count();
+        long bands = facts.items().stream().filter(i -> i.kind().equals("facade-band")).count();
+        double roofArea = facts.stored().roofAreas().values().stream().mapToDouble(Double::doubleValue).sum();
+        int downConductors = facts.downConductors().stream().mapToInt(d -> d.count()).sum();
+        blocks.add(new ReportBlock.Facts(List.of(
+                new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
+                new ReportBlock.Fact("Exposed roof area", metres(roofArea) + " m² (plan)"),
+                new ReportBlock.Fact("Exposed items", edges + " edges, " + corners + " corners, " + bands
+                        + " facade bands; " + facts.acceptedCount() + " accepted"),
+                new ReportBlock.Fact("Air-termination parts", facts.partNumbers().size() + " ("
+                        + facts.stored().intercepting().size() + " intercepting)"),
+                new ReportBlock.Fact("Down-conductors planned", downConductors + " at the level's typical spacing"))));
+        blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
+                + " air-termination parts, exposed items, down-conductors and separation distances; review and"
+                + " approval."));
+    }
+
+    private static void method(ReportFacts facts, List<ReportBlock> blocks) {
+        ReportSource s = facts.source();
+        ProtectionLevel level = s.sphere().level();
+        blocks.add(new ReportBlock.Heading("Method and inputs", 1));
+        blocks.add(new ReportBlock.Paragraph("A sphere of radius R is rolled over every structure, rooftop object"
+                + " and air-termination part of the site in three dimensions; whatever it can touch can be struck"
+                + " (LPZ 0A), whatever lies below the surface its centre can reach less R is protected against"
+                + " direct strikes (LPZ 0B). The engine computes that protection envelope on a grid and refines"
+                + " it exactly where a decision needs it; every value it reports is at most the tolerance below"
+                + " the true envelope and never above it, so every decision errs toward \"exposed\"."));
+        blocks.add(new ReportBlock.Facts(List.of(
+                new ReportBlock.Fact("Standard followed", STANDARD),
+                new ReportBlock.Fact("Protection level", level.name()),
+                new ReportBlock.Fact("Sphere radius R", metres(s.sphere().radius()) + " m"
+                        + (s.sphere().isCustomRadius() ? " (custom; the level's own is "
+                                + metres(level.sphereRadius()) + " m)" : " (IEC 62305-3:2010 Table 2)")),
+                new ReportBlock.Fact("Mesh size of the level", metres(level.meshSize()) + " m × "
+                        + metres(level.meshSize()) + " m (Table 2)"),
+                new ReportBlock.Fact("Typical down-conductor spacing", metres(level.downConductorSpacing())
+                        + " m (Table 4)"),
+                new ReportBlock.Fact("Minimum peak current intercepted", metres(level.minPeakCurrentKa())
+                        + " kA (IEC 62305-1:2010)"),
+                new ReportBlock.Fact("Separation distance ki", String.valueOf(level.ki()) + " (Table 10)"),
+                new ReportBlock.Fact("Grid resolution", metres(s.resolution()) + " m"),
+                new ReportBlock.Fact("Envelope tolerance", String.format(Locale.ROOT, "%.3f m", s.tolerance())))));
+        blocks.add(new ReportBlock.Heading("Assumptions", 2));
+        blocks.add(new ReportBlock.Paragraph("Every structure and rooftop object is solid from the ground up; no"
+                + " sphere reaches under an overhang or a wire (exact while nothing overhangs by more than R)."
+                + " The ground is flat at height 0. Heights, roof forms and parts are as the site file gives them;"
+                + " nothing is inferred. Structures that touch or overlap form one solid."));
+        List<List<String>> rows = new ArrayList<>();
+        for (StructureRow r : StructureRow.of(facts.site().structures())) {
+            rows.add(List.of(r.id(), r.name(), metres(r.footprintArea()), metres(r.height()), r.roof(),
+                    r.ridgeHeight() == null ? "" : metres(r.ridgeHeight()),
+                    r.parapet() == null ? "" : metres(r.parapet()),
+                    metres(facts.site().structures().get(r.index()).topHeight())));
+        }
+        blocks.add(new Schedule("Structures", List.of("Id", "Name", "Footprint (m²)", "Wall top (m)", "Roof",
+                "Ridge (m)", "Parapet (m)", "Top (m)"), List.of(0.6, 2.2, 1.1, 0.9, 0.7, 0.8, 0.8, 0.8), rows,
+                List.of("Heights above ground.")));
+    }
+
+    private static void sections(ReportFacts facts, List<ReportBlock> blocks) {
+        blocks.add(new ReportBlock.Heading("Sections", 1));
+        for (ReportSource.Cut cut : facts.source().savedCuts()) {
+            SiteSection section = SiteSection.cut(facts.surface(), facts.field(), cut.x1(), cut.y1(), cut.x2(),
+                    cut.y2());
+            blocks.add(new ReportBlock.Section("Saved cut: " + cut.name(), cutText(cut), section));
+        }
+        List<AutomaticCuts.StructureCut> cuts = AutomaticCuts.of(facts);
+        if (facts.source().savedCuts().isEmpty() && cuts.isEmpty()) {
+            blocks.add(new ReportBlock.Paragraph("No saved cuts, and no structure has an exposed point to cut"
+                    + " through."));
+        }
+        // Sections are independent exact envelope queries (the field is thread-safe): sample them in
+        // parallel, keeping the order.
+        List<SiteSection> sections = cuts.parallelStream().map(c -> SiteSection.cut(facts.surface(), facts.field(),
+                c.cut().x1(), c.cut().y1(), c.cut().x2(), c.cut().y2())).toList();
+        for (int i = 0; i < cuts.size(); i++) {
+            AutomaticCuts.StructureCut c = cuts.get(i);
+            blocks.add(new ReportBlock.Section("Section through " + c.structure().name(), "Through its highest"
+                    + " exposed point (" + metres(c.through().x()) + ", " + metres(c.through().y()) + "), "
+                    + cutText(c.cut()), sections.get(i)));
+        }
+    }
+
+    private static String cutText(ReportSource.Cut cut) {
+        return "from (" + metres(cut.x1()) + ", " + metres(cut.y1()) + ") to (" + metres(cut.x2()) + ", "
+                + metres(cut.y2()) + "), local metres.";
+    }
+
+    private static ReportBlock reviewBlock() {
+        return new ReportBlock.ReviewBlock("Licensed reviewer", List.of("Name", "Licence number", "Organisation",
+                "Signature", "Date"), "Approved as drawn  /  Approved with the comments below  /  Not approved");
+    }
+
+    static String revisionText(ReportSource s) {
+        return s.revision() > 0 ? "Revision " + s.revision() : "Unsaved analysis (command line)";
+    }
+
+    static String levelText(ReportSource s) {
+        return "Protection level " + s.sphere().level().name() + ", R = " + metres(s.sphere().radius()) + " m";
+    }
+}

@@ -1,0 +1,109 @@
+package org.lpzplanner.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.lpzplanner.analysis.ReviewItems;
+import org.lpzplanner.engine.design.DownConductorLayout;
+import org.lpzplanner.engine.design.DownConductorPlan;
+import org.lpzplanner.engine.envelope.EnvelopeField;
+import org.lpzplanner.engine.geom.SiteSurface;
+import org.lpzplanner.engine.model.Conductor;
+import org.lpzplanner.engine.model.Rod;
+import org.lpzplanner.engine.model.RooftopObject;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.model.Structure;
+
+/**
+ * What every part of a report reads: the source revision, the site read back from its stored file,
+ * the engine's surface and envelope for that file, the review items of the stored result and the
+ * numbers the report gives parts and down-conductors. Built once per report by
+ * {@link ReportAssembler}; a schedule or section added later takes what it needs from here.
+ *
+ * @param site            the site as the analysis read it
+ * @param surface         the engine's surface of that site
+ * @param field           the protection envelope at the revision's sphere and resolution
+ * @param items           the review items of the stored result, numbered as the review list numbers them
+ * @param partNumbers     "A1", "A2", … by part id: rods in file order, then conductors
+ * @param downConductors  the planned down-conductors of each structure, in structure order
+ */
+public record ReportFacts(ReportSource source, Site site, SiteSurface surface, EnvelopeField field,
+        StoredResult stored, List<ReviewItems.Item> items, Map<String, String> partNumbers,
+        List<DownConductorLayout> downConductors) {
+
+    private static final GeometryFactory GEOMETRY = new GeometryFactory();
+
+    public ReportFacts {
+        items = List.copyOf(items);
+        partNumbers = Map.copyOf(partNumbers);
+        downConductors = List.copyOf(downConductors);
+    }
+
+    static ReportFacts of(ReportSource source, Site site, SiteSurface surface, EnvelopeField field,
+            StoredResult stored) {
+        Map<String, String> numbers = new LinkedHashMap<>();
+        for (Rod r : site.rods()) {
+            numbers.put(r.id(), "A" + (numbers.size() + 1));
+        }
+        for (Conductor c : site.conductors()) {
+            numbers.put(c.id(), "A" + (numbers.size() + 1));
+        }
+        List<DownConductorLayout> layouts = new ArrayList<>();
+        for (Structure s : site.structures()) {
+            List<Coordinate> near = new ArrayList<>();
+            for (StoredResult.Marked corner : stored.corners()) {
+                if (s.name().equals(corner.owner())) {
+                    near.add(new Coordinate(corner.x(), corner.y()));
+                }
+            }
+            layouts.add(DownConductorPlan.plan(s, source.sphere().level().downConductorSpacing(), near));
+        }
+        return new ReportFacts(source, site, surface, field, stored, stored.items(), numbers, layouts);
+    }
+
+    /** The number of items a designer accepted. */
+    public int acceptedCount() {
+        return (int) items.stream().filter(i -> source.accepted().containsKey(i.key())).count();
+    }
+
+    /** What stands at (x, y): a rooftop object's or structure's name, or null for open ground. */
+    public String standsOn(double x, double y) {
+        var point = GEOMETRY.createPoint(new Coordinate(x, y));
+        for (RooftopObject o : site.rooftopObjects()) {
+            if (o.footprint().covers(point)) {
+                return o.name();
+            }
+        }
+        for (Structure s : site.structures()) {
+            if (s.footprint().covers(point)) {
+                return s.name();
+            }
+        }
+        return null;
+    }
+
+    /** The index of the structure whose footprint covers (x, y), or -1. */
+    public int structureAt(double x, double y) {
+        var point = GEOMETRY.createPoint(new Coordinate(x, y));
+        for (int i = 0; i < site.structures().size(); i++) {
+            if (site.structures().get(i).footprint().covers(point)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** A length or height in metres to the centimetre. */
+    public static String metres(double value) {
+        return String.format(Locale.ROOT, "%.2f", value + 0.0);
+    }
+
+    /** A number with one decimal. */
+    public static String oneDecimal(double value) {
+        return String.format(Locale.ROOT, "%.1f", value + 0.0);
+    }
+}

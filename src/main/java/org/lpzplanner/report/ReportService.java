@@ -1,0 +1,73 @@
+package org.lpzplanner.report;
+
+import java.util.List;
+import org.lpzplanner.analysis.AcceptedItemRepository;
+import org.lpzplanner.analysis.AnalysisRepository;
+import org.lpzplanner.analysis.AnalysisRevision;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.analysis.RevisionInputs;
+import org.lpzplanner.sites.SiteFileVersion;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.engine.model.SphereSpec;
+import org.springframework.stereotype.Service;
+
+/**
+ * Prints a stored analysis revision. The report is made from what the revision kept: its site file
+ * and name, sphere, resolution, tolerance and result, plus the acceptances of its review items.
+ * Revisions stored before inputs were kept find their file again by its SHA-256 among the site's
+ * current and earlier files.
+ */
+@Service
+public class ReportService {
+
+    private final SiteService sites;
+    private final AnalysisRepository analyses;
+    private final AcceptedItemRepository accepted;
+
+    public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted) {
+        this.sites = sites;
+        this.analyses = analyses;
+        this.accepted = accepted;
+    }
+
+    /**
+     * The source of a revision's report.
+     *
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
+     * @throws RevisionNotFoundException when the site has no such revision
+     * @throws RevisionInputsMissingException when the revision's file is no longer stored
+     */
+    public ReportSource source(long siteId, int revisionNumber) {
+        StoredSite site = sites.get(siteId);
+        AnalysisRevision revision = analyses.find(siteId, revisionNumber).orElseThrow(() ->
+                new RevisionNotFoundException("site " + siteId + " has no analysis revision " + revisionNumber
+                        + "; it has " + analyses.count(siteId) + " revision(s), numbered from 1"));
+        RevisionInputs inputs = analyses.inputs(revision.id()).orElseGet(() -> recovered(site, revision));
+        return new ReportSource(inputs.siteName(), inputs.sourceName(), inputs.sourceText(),
+                new SphereSpec(revision.level(), revision.sphereRadius()), revision.resolution(), inputs.tolerance(),
+                revision.revision(), revision.createdAt(), revision.inputsSha256(), revision.resultGeoJson(),
+                accepted.reasons(revision.id()), List.of());
+    }
+
+    /** The PDF of a revision. Same exceptions as {@link #source}. */
+    public byte[] pdf(long siteId, int revisionNumber) {
+        return PdfReportRenderer.render(ReportAssembler.assemble(source(siteId, revisionNumber)));
+    }
+
+    private RevisionInputs recovered(StoredSite site, AnalysisRevision revision) {
+        double tolerance = org.lpzplanner.engine.exposure.AnalysisOptions.DEFAULT_TOLERANCE;
+        if (AnalysisService.sha256(site.sourceText()).equals(revision.inputsSha256())) {
+            return new RevisionInputs(site.name(), site.sourceName(), site.sourceText(), tolerance);
+        }
+        for (SiteFileVersion file : sites.fileVersions(site.id())) {
+            if (AnalysisService.sha256(file.sourceText()).equals(revision.inputsSha256())) {
+                return new RevisionInputs(site.name(), file.sourceName(), file.sourceText(), tolerance);
+            }
+        }
+        throw new RevisionInputsMissingException("revision " + revision.revision() + " of site " + site.id()
+                + " was analysed from a site file that is no longer stored, so it cannot be printed exactly;"
+                + " analyse the site again and print the new revision");
+    }
+
+}
