@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.time.Duration;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.Role;
 import org.lpzplanner.accounts.SignedIn;
@@ -13,6 +14,8 @@ import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.WebDriverWait;
 import org.springframework.beans.factory.annotation.Autowired;
 
 /**
@@ -41,7 +44,12 @@ class ReviewerBrowserTest extends BrowserTestBase {
 
         browser.findElement(By.cssSelector("#comment-form textarea")).sendKeys("Parapet height to be checked on site.");
         browser.findElement(By.cssSelector("#comment-form button")).click();
+        // each form reloads the page: wait for the new page before the next step
+        new WebDriverWait(browser, Duration.ofSeconds(20)).until(
+                ExpectedConditions.presenceOfElementLocated(By.id("comment-list")));
         browser.findElement(By.cssSelector("#reviewed-form button")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(20)).until(
+                ExpectedConditions.presenceOfElementLocated(By.id("reviewed-marks")));
 
         assertThat(browser.findElement(By.id("comment-list")).getText()).contains("Parapet height to be checked",
                 "reviewer@default.test");
