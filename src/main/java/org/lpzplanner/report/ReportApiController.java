@@ -1,5 +1,11 @@
 package org.lpzplanner.report;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
@@ -14,6 +20,7 @@ import org.springframework.web.bind.annotation.RestController;
  * 400 for an id that is not a number.
  */
 @RestController
+@Tag(name = "Report", description = "The printed assessment of a stored analysis revision")
 public class ReportApiController {
 
     private final ReportService reports;
@@ -22,6 +29,12 @@ public class ReportApiController {
         this.reports = reports;
     }
 
+    @Operation(summary = "The printed assessment as PDF",
+            description = "Plan, sections, schedules, cautions and the review block of one stored revision.")
+    @ApiResponse(responseCode = "200", description = "The PDF")
+    @ApiResponse(responseCode = "400", description = "An id is not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or revision", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The revision's site file is no longer stored", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping(path = "/api/sites/{siteId}/revisions/{revision}/report",
             produces = {MediaType.APPLICATION_PDF_VALUE, MediaType.APPLICATION_JSON_VALUE})
     public ResponseEntity<byte[]> report(@PathVariable long siteId, @PathVariable int revision) {
