@@ -48,6 +48,11 @@ function setUp(root) {
 
   async function call(method, path, body) {
     const options = { method, headers: { Accept: 'application/json' } };
+    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
+    const csrfToken = document.querySelector('meta[name="csrf-token"]');
+    if (csrfHeader && csrfToken) {
+      options.headers[csrfHeader.content] = csrfToken.content;
+    }
     let url = '/api/sites/' + encodeURIComponent(siteId) + path;
     if (method === 'DELETE') {
       url += '?version=' + version;

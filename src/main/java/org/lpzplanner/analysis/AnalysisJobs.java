@@ -1,6 +1,7 @@
 package org.lpzplanner.analysis;
 
 import java.time.Clock;
+import org.lpzplanner.accounts.CurrentAccount;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -10,6 +11,7 @@ import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.ThreadPoolExecutor;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
+import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.engine.exposure.AnalysisCancelledException;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.sites.SiteNotFoundException;
@@ -71,7 +73,7 @@ public class AnalysisJobs {
             }
         }
         try {
-            pool.execute(() -> runJob(job, level, radius, resolution));
+            pool.execute(CurrentAccount.carry(() -> runJob(job, level, radius, resolution)));
         } catch (RejectedExecutionException e) {
             synchronized (jobs) {
                 jobs.remove(job.id());

@@ -8,6 +8,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.HexFormat;
 import java.util.Map;
 import java.util.Optional;
+import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.AnalysisProgress;
 import org.lpzplanner.engine.exposure.AnalysisState;
@@ -39,9 +40,12 @@ public class AnalysisService {
     private final Clock clock;
     private final AnalysisStateCache kept;
     private final AcceptedItemRepository accepted;
+    private final AuditTrail audit;
 
     public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
-            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted) {
+            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted,
+            AuditTrail audit) {
+        this.audit = audit;
         this.sites = sites;
         this.siteRows = siteRows;
         this.analyses = analyses;
@@ -104,6 +108,10 @@ public class AnalysisService {
                             result.tolerance()));
             siteRows.touch(site.id(), site.version(), now);
             previous.ifPresent(p -> carryOverAcceptances(p, revision, now));
+            audit.record(site.id(), "analysis", String.format(java.util.Locale.ROOT,
+                    "revision %d at level %s, sphere radius %s m: %s", revision.revision(), sphere.level().name(),
+                    ResultGeoJson.round(sphere.radius()), revision.fullyProtected() ? "no exposed items"
+                            : "exposed items remain"));
             return revision;
         });
     }
@@ -143,7 +151,10 @@ public class AnalysisService {
         return analyses.latest(siteId);
     }
 
-    /** The latest revision of every analysed site, without result GeoJSON, by site id. */
+    /**
+     * The latest revision of every analysed site, without result GeoJSON, by site id. Not limited
+     * to a team: callers look up only the ids of sites they were allowed to list.
+     */
     public Map<Long, AnalysisRevision> latestSummaries() {
         return analyses.latestSummaries();
     }

@@ -5,6 +5,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.support.TransactionTemplate;
@@ -26,8 +27,11 @@ public class ReviewService {
     private final TransactionTemplate transactions;
     private final Clock clock;
 
+    private final AuditTrail audit;
+
     public ReviewService(AnalysisService analyses, AcceptedItemRepository accepted, TransactionTemplate transactions,
-            Clock clock) {
+            Clock clock, AuditTrail audit) {
+        this.audit = audit;
         this.analyses = analyses;
         this.accepted = accepted;
         this.transactions = transactions;
@@ -76,6 +80,8 @@ public class ReviewService {
         return transactions.execute(status -> {
             Review review = itemReview(siteId, k);
             accepted.accept(review.revision().id(), k, r, clock.instant().truncatedTo(ChronoUnit.MILLIS));
+            audit.record(siteId, "accept", "accepted " + k + " of revision " + review.revision().revision()
+                    + ": " + r);
             return review(review.revision());
         });
     }
@@ -90,6 +96,8 @@ public class ReviewService {
         return transactions.execute(status -> {
             Review review = itemReview(siteId, k);
             accepted.remove(review.revision().id(), k);
+            audit.record(siteId, "unaccept", "marked " + k + " of revision " + review.revision().revision()
+                    + " exposed again");
             return review(review.revision());
         });
     }

@@ -9,6 +9,7 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.engine.io.LocalProjection;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.model.Conductor;
@@ -32,7 +33,10 @@ public class AirTerminationService {
     private final SiteRepository rows;
     private final Clock clock;
 
-    public AirTerminationService(SiteService sites, SiteRepository rows, Clock clock) {
+    private final AuditTrail audit;
+
+    public AirTerminationService(SiteService sites, SiteRepository rows, AuditTrail audit, Clock clock) {
+        this.audit = audit;
         this.sites = sites;
         this.rows = rows;
         this.clock = clock;
@@ -121,6 +125,9 @@ public class AirTerminationService {
         PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
         editor.add(id, input.name(), input.x(), input.y(), height);
         store(site, editor.text());
+        audit.record(siteId, "rod-added", "rod " + id + (input.name() == null || input.name().isBlank() ? ""
+                : " \"" + input.name().strip() + "\"") + " at x " + round(input.x()) + " m, y " + round(input.y())
+                + " m, height " + height.toPlainString() + " m");
         return id;
     }
 
@@ -181,6 +188,9 @@ public class AirTerminationService {
         PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
         editor.change(index, input.x(), input.y(), height);
         store(site, editor.text());
+        audit.record(siteId, "rod-changed", "rod " + rodId + (input.x() == null ? "" : " moved from x " + before.x()
+                + " m, y " + before.y() + " m to x " + round(input.x()) + " m, y " + round(input.y()) + " m")
+                + (height == null ? "" : " height " + before.height() + " m to " + height.toPlainString() + " m"));
         return before;
     }
 
@@ -199,6 +209,7 @@ public class AirTerminationService {
         PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
         editor.remove(index);
         store(site, editor.text());
+        audit.record(siteId, "rod-removed", "rod " + rodId + " at x " + before.x() + " m, y " + before.y() + " m");
         return before;
     }
 

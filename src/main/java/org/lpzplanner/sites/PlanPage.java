@@ -11,6 +11,9 @@ import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.accounts.CurrentAccount;
+import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.springframework.context.MessageSource;
@@ -24,6 +27,8 @@ import org.springframework.stereotype.Component;
 @Component
 class PlanPage {
 
+    /** Most recent changes shown in the page's history. */
+    private static final int HISTORY_ROWS = 100;
     private static final List<String> ROOF_FORMS = List.of("flat", "gable", "hip", "shed");
     /** Heights offered for a new rod, in metres; any other value can be typed. */
     private static final List<String> ROD_HEIGHTS = List.of("0.5", "1", "1.5", "2", "3");
@@ -33,9 +38,13 @@ class PlanPage {
     private final MessageSource messages;
     private final ReviewService reviews;
     private final SectionPage sectionPage;
+    private final CommentService comments;
+    private final AuditTrail audit;
 
     PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews,
-            SectionPage sectionPage) {
+            SectionPage sectionPage, CommentService comments, AuditTrail audit) {
+        this.comments = comments;
+        this.audit = audit;
         this.sectionPage = sectionPage;
         this.sites = sites;
         this.analyses = analyses;
@@ -63,6 +72,16 @@ class PlanPage {
         model.put("fileVersions", sites.fileVersions(id).stream()
                 .map(v -> new EarlierFile(v.number(), v.sourceName(), SitePageController.WHEN.format(v.replacedAt())))
                 .toList());
+        model.put("comments", comments.comments(id).stream().map(c -> new CommentRow(c.author(), c.body(),
+                SitePageController.WHEN.format(c.at()))).toList());
+        var marks = comments.reviews(id);
+        model.put("revisionReviews", marks.stream().map(r -> new ReviewedMark(r.revision(),
+                r.reviewer(), SitePageController.WHEN.format(r.at()))).toList());
+        String me = CurrentAccount.actorName();
+        model.put("reviewedByMe", marks.stream().anyMatch(r -> r.reviewer().equals(me)));
+        model.put("history", audit.forSite(id, HISTORY_ROWS).stream().map(e -> new HistoryRow(
+                SitePageController.WHEN.format(e.at()), e.actor(),
+                messages.getMessage("history.action." + e.action(), null, e.action(), locale), e.detail())).toList());
         if (latest != null) {
             model.put("analysedAt", SitePageController.WHEN.format(latest.createdAt()));
             model.put("radius", SitePageController.number(latest.sphereRadius()));
@@ -102,6 +121,18 @@ class PlanPage {
         private static String metres(double value) {
             return String.format(Locale.ROOT, "%.2f", value);
         }
+    }
+
+    /** A comment as the page lists it. */
+    record CommentRow(String author, String body, String at) {
+    }
+
+    /** A reviewed mark of the latest revision as the page lists it. */
+    record ReviewedMark(int revision, String reviewer, String at) {
+    }
+
+    /** A line of the site's history (audit trail), action already worded. */
+    record HistoryRow(String at, String actor, String action, String detail) {
     }
 
     /** An earlier file as the page lists it. */

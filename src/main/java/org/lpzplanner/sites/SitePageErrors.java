@@ -1,6 +1,7 @@
 package org.lpzplanner.sites;
 
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
+import org.lpzplanner.comments.CommentPageController;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.system.InvalidInputException;
 import org.lpzplanner.system.UploadLimit;
@@ -18,7 +19,7 @@ import org.springframework.web.servlet.ModelAndView;
  * size limit gives a 413 page saying the limit.
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
-    ReviewPageController.class, SectionPageController.class,
+    ReviewPageController.class, SectionPageController.class, CommentPageController.class,
     org.lpzplanner.report.ReportPageController.class, org.lpzplanner.design.DesignPageController.class})
 public class SitePageErrors {
 

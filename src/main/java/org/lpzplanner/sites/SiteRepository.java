@@ -26,14 +26,14 @@ public class SiteRepository {
         this.jdbc = jdbc;
     }
 
-    /** Stores a new site (version 0, both timestamps {@code now}) and returns it with its id. */
-    public StoredSite insert(String name, ProtectionLevel level, Double customRadius, String sourceName,
+    /** Stores a new site of a team (version 0, both timestamps {@code now}) and returns it with its id. */
+    public StoredSite insert(long teamId, String name, ProtectionLevel level, Double customRadius, String sourceName,
             String sourceText, Instant now) {
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO sites (name, protection_level, custom_radius, source_name, source_text, created_at,"
-                        + " updated_at, version) VALUES (?, ?, ?, ?, ?, ?, ?, 0)")
+                        + " updated_at, version, team_id) VALUES (?, ?, ?, ?, ?, ?, ?, 0, ?)")
                 .params(name, level.name(), customRadius, sourceName, sourceText, Timestamp.from(now),
-                        Timestamp.from(now))
+                        Timestamp.from(now), teamId)
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
         return new StoredSite(id, name, level, customRadius, sourceName, sourceText, now, now, 0);
@@ -44,10 +44,22 @@ public class SiteRepository {
                 .optional();
     }
 
+    /** The site if it belongs to the team; another team's site is as absent as a missing one. */
+    public Optional<StoredSite> findById(long id, long teamId) {
+        return jdbc.sql("SELECT " + COLUMNS + " FROM sites WHERE id = ? AND team_id = ?").params(id, teamId)
+                .query(SiteRepository::row).optional();
+    }
+
     /** All sites, most recently changed first. */
     public List<StoredSite> findAll() {
         return jdbc.sql("SELECT " + COLUMNS + " FROM sites ORDER BY updated_at DESC, id DESC")
                 .query(SiteRepository::row).list();
+    }
+
+    /** The team's sites, most recently changed first. */
+    public List<StoredSite> findAll(long teamId) {
+        return jdbc.sql("SELECT " + COLUMNS + " FROM sites WHERE team_id = ? ORDER BY updated_at DESC, id DESC")
+                .param(teamId).query(SiteRepository::row).list();
     }
 
     public long count() {

@@ -8,6 +8,8 @@ import java.time.Clock;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.List;
+import org.lpzplanner.accounts.CurrentAccount;
+import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.engine.model.ProtectionLevel;
@@ -19,6 +21,10 @@ import org.springframework.transaction.annotation.Transactional;
 /**
  * Stores, lists and removes sites. A site is stored only when its file reads without error, so
  * every stored site can be analysed; the file is kept byte for byte.
+ *
+ * <p>Every site belongs to a team, and every method works only on the sites of the team acting on
+ * this thread ({@link CurrentAccount#teamId()}): another team's site is reported as not found,
+ * exactly like a missing one. Every change is recorded in the site's {@link AuditTrail}.
  */
 @Service
 public class SiteService {
@@ -27,10 +33,12 @@ public class SiteService {
     public static final int MAX_NAME_LENGTH = 200;
 
     private final SiteRepository sites;
+    private final AuditTrail audit;
     private final Clock clock;
 
-    public SiteService(SiteRepository sites, Clock clock) {
+    public SiteService(SiteRepository sites, AuditTrail audit, Clock clock) {
         this.sites = sites;
+        this.audit = audit;
         this.clock = clock;
     }
 
@@ -59,27 +67,32 @@ public class SiteService {
         }
         checkName(siteName);
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
-        return sites.insert(siteName, level, radius, sourceName, text, now);
+        StoredSite site = sites.insert(CurrentAccount.teamId(), siteName, level, radius, sourceName, text, now);
+        audit.record(site.id(), "upload", "uploaded " + sourceName + " as \"" + siteName + "\", level "
+                + level.name() + (radius == null ? "" : ", radius " + radius + " m"));
+        return site;
     }
 
-    /** All stored sites, most recently changed first. */
+    /** The team's stored sites, most recently changed first. */
     @Transactional(readOnly = true)
     public List<StoredSite> list() {
-        return sites.findAll();
+        return sites.findAll(CurrentAccount.teamId());
     }
 
-    /** @throws SiteNotFoundException when no site has this id */
+    /** @throws SiteNotFoundException when the team has no site with this id */
     @Transactional(readOnly = true)
     public StoredSite get(long id) {
-        return sites.findById(id).orElseThrow(() -> new SiteNotFoundException(id));
+        return sites.findById(id, CurrentAccount.teamId()).orElseThrow(() -> new SiteNotFoundException(id));
     }
 
     /** Removes a site with all its analyses. @throws SiteNotFoundException when no site has this id */
     @Transactional
     public void delete(long id) {
+        StoredSite site = get(id);
         if (!sites.delete(id)) {
             throw new SiteNotFoundException(id);
         }
+        audit.record(id, "delete", "deleted \"" + site.name() + "\"");
     }
 
     /**
@@ -90,9 +103,11 @@ public class SiteService {
      */
     @Transactional
     public void delete(long id, long expectedVersion) {
+        StoredSite site = get(id);
         if (!sites.delete(id, expectedVersion)) {
             throw new SiteNotFoundException(id);
         }
+        audit.record(id, "delete", "deleted \"" + site.name() + "\"");
     }
 
     /**
@@ -118,6 +133,21 @@ public class SiteService {
         ProtectionLevel level = levelText == null ? site.level() : Settings.level(levelText, site.level());
         Double radius = radiusText == null ? site.customRadius() : Settings.radius(radiusText);
         sites.updateSettings(id, expectedVersion, newName, level, radius, now());
+        List<String> changes = new java.util.ArrayList<>();
+        if (!newName.equals(site.name())) {
+            changes.add("renamed \"" + site.name() + "\" to \"" + newName + "\"");
+        }
+        if (level != site.level()) {
+            changes.add("level " + site.level().name() + " to " + level.name());
+        }
+        if (!java.util.Objects.equals(radius, site.customRadius())) {
+            changes.add("custom radius " + (site.customRadius() == null ? "none" : site.customRadius() + " m")
+                    + " to " + (radius == null ? "none" : radius + " m"));
+        }
+        if (!changes.isEmpty()) {
+            audit.record(id, changes.size() == 1 && changes.get(0).startsWith("renamed") ? "rename" : "settings",
+                    String.join("; ", changes));
+        }
         return get(id);
     }
 
@@ -135,8 +165,10 @@ public class SiteService {
         if (base.length() + suffix.length() > MAX_NAME_LENGTH) {
             base = base.substring(0, MAX_NAME_LENGTH - suffix.length()).strip();
         }
-        return sites.insert(base + suffix, site.level(), site.customRadius(), site.sourceName(), site.sourceText(),
-                now());
+        StoredSite copy = sites.insert(CurrentAccount.teamId(), base + suffix, site.level(), site.customRadius(),
+                site.sourceName(), site.sourceText(), now());
+        audit.record(copy.id(), "duplicate", "copied from site " + site.id() + " \"" + site.name() + "\"");
+        return copy;
     }
 
     /**
@@ -162,7 +194,9 @@ public class SiteService {
         SiteFiles.read(corrected, site.sourceName());
         Instant now = now();
         sites.replaceFile(id, expectedVersion, corrected, now);
-        sites.insertFileVersion(id, site.sourceName(), site.sourceText(), now);
+        SiteFileVersion kept = sites.insertFileVersion(id, site.sourceName(), site.sourceText(), now);
+        audit.record(id, "correction", "structure " + (correction.index() + 1) + ": " + correction.describe()
+                + " (earlier file kept as number " + kept.number() + ")");
         return get(id);
     }
 
@@ -202,6 +236,7 @@ public class SiteService {
         }
     }
 
+    /** How many sites are stored, of all teams (for first-start checks, not for display). */
     public long count() {
         return sites.count();
     }

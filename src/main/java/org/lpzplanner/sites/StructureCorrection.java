@@ -23,6 +23,27 @@ public record StructureCorrection(int index, String height, String roof, String 
         return given(roof) || given(ridgeHeight) || given(bearing) || given(parapet);
     }
 
+    /** The values given, in words, for the audit trail, e.g. {@code height 12.5, roof gable}. */
+    String describe() {
+        java.util.List<String> parts = new java.util.ArrayList<>();
+        if (given(height)) {
+            parts.add("height " + height.strip());
+        }
+        if (given(roof)) {
+            parts.add("roof " + roof.strip());
+        }
+        if (given(ridgeHeight)) {
+            parts.add("ridge height " + ridgeHeight.strip());
+        }
+        if (given(bearing)) {
+            parts.add("bearing " + bearing.strip());
+        }
+        if (given(parapet)) {
+            parts.add("parapet " + parapet.strip());
+        }
+        return parts.isEmpty() ? "no change" : String.join(", ", parts);
+    }
+
     boolean isEmpty() {
         return !given(height) && !changesRoof();
     }

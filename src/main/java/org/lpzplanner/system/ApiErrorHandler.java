@@ -135,6 +135,12 @@ public class ApiErrorHandler {
                 "the site was changed or removed meanwhile; reload it and try again"));
     }
 
+    /** A request that reached a service without a team to act for (never a normal signed-in one). */
+    @ExceptionHandler(org.springframework.security.access.AccessDeniedException.class)
+    ResponseEntity<Map<String, Object>> denied(org.springframework.security.access.AccessDeniedException e) {
+        return ResponseEntity.status(HttpStatus.FORBIDDEN).body(error("you may not do this; sign in first"));
+    }
+
     /** Spring's own request errors (missing parameter, wrong method, …) keep their status. */
     @ExceptionHandler(Exception.class)
     ResponseEntity<Map<String, Object>> other(Exception e) {

@@ -1,5 +1,6 @@
 package org.lpzplanner.analysis;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
@@ -23,6 +24,7 @@ import tools.jackson.databind.json.JsonMapper;
 /** Background analyses through the JSON API: queued, followed to the end, stored; bad requests refused. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class AnalysisJobApiTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -22,7 +22,7 @@ class AnalysisJobsTest {
         volatile int runs;
 
         SlowAnalyses() {
-            super(null, null, null, null, Clock.systemUTC(), new AnalysisStateCache(0, 0), null);
+            super(null, null, null, null, Clock.systemUTC(), new AnalysisStateCache(0, 0), null, null);
         }
 
         @Override

@@ -1,5 +1,6 @@
 package org.lpzplanner.analysis;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
@@ -24,6 +25,7 @@ import tools.jackson.databind.node.ObjectNode;
 
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class ReviewApiTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -2,12 +2,23 @@ package org.lpzplanner.browser;
 
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
+import org.lpzplanner.accounts.SignedIn;
+import org.lpzplanner.accounts.SignedInAccount;
+import org.lpzplanner.accounts.TestAccounts;
+import org.openqa.selenium.By;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
+import org.springframework.security.test.context.TestSecurityContextHolder;
 
-/** The app on a random port and a fresh headless Chromium per test (see {@link BrowserSupport}). */
+/**
+ * The app on a random port and a fresh headless Chromium per test (see {@link BrowserSupport}),
+ * signed in through the sign-in page as the test's {@link SignedIn} account (a designer of the
+ * default team unless the class or method says otherwise); service calls on the test thread act
+ * for the same team.
+ */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@SignedIn
 abstract class BrowserTestBase {
 
     @LocalServerPort
@@ -18,6 +29,18 @@ abstract class BrowserTestBase {
     @BeforeEach
     void openBrowser() {
         browser = BrowserSupport.start();
+        signIn();
+    }
+
+    /** Signs the browser in as the test's account through the sign-in page. */
+    void signIn() {
+        SignedInAccount account = (SignedInAccount) TestSecurityContextHolder.getContext().getAuthentication()
+                .getPrincipal();
+        browser.get("http://localhost:" + port + "/login");
+        browser.findElement(By.name("email")).sendKeys(account.email());
+        browser.findElement(By.name("password")).sendKeys(TestAccounts.PASSWORD);
+        browser.findElement(By.cssSelector("#sign-in-form button[type=submit]")).click();
+        browser.findElement(By.id("account-link"));
     }
 
     @AfterEach

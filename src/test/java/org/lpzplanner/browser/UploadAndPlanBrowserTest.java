@@ -27,7 +27,7 @@ class UploadAndPlanBrowserTest extends BrowserTestBase {
         WebElement file = browser.findElement(By.cssSelector("input[type=file][name=file]"));
         file.sendKeys(Path.of("sample-sites/harbour-warehouse.geojson").toAbsolutePath().toString());
         browser.findElement(By.name("name")).sendKeys("Browser check shed");
-        browser.findElement(By.cssSelector("form button[type=submit]")).click();
+        browser.findElement(By.cssSelector("section.upload form button[type=submit]")).click();
 
         // the upload analyses the site before the plan opens: wait for it
         new WebDriverWait(browser, Duration.ofSeconds(30)).until(ExpectedConditions.urlMatches(".*/sites/\\d+$"));

@@ -1,5 +1,6 @@
 package org.lpzplanner.persistence;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 
@@ -21,6 +22,7 @@ import org.springframework.test.web.servlet.MockMvc;
  */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class ConcurrentSavesTest {
 
     @Autowired

@@ -1,5 +1,6 @@
 package org.lpzplanner.risk;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
@@ -32,6 +33,7 @@ import tools.jackson.databind.JsonNode;
  */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class RiskApiTest {
 
     static final String HOSPITAL = """

@@ -1,5 +1,6 @@
 package org.lpzplanner.risk;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
@@ -22,6 +23,7 @@ import tools.jackson.databind.JsonNode;
 /** The risk page {@code /sites/{id}/risk}, its form, the level button and the report section. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class RiskPagesTest {
 
     @Autowired

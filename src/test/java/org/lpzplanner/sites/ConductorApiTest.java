@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
@@ -25,6 +26,7 @@ import tools.jackson.databind.json.JsonMapper;
 /** Adding and removing roof conductors and catenary wires through the JSON API. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class ConductorApiTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
@@ -27,6 +28,7 @@ import org.springframework.web.util.HtmlUtils;
 
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class ReviewPagesTest {
 
     private static final Pattern ROW_KEY = Pattern.compile("<tr tabindex=\"0\" data-item-key=\"([a-z0-9-]+)\"");

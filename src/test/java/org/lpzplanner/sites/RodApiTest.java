@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.hamcrest.Matchers.containsString;
@@ -27,6 +28,7 @@ import tools.jackson.databind.json.JsonMapper;
 /** Placing, moving and removing rods through the JSON API rewrites the stored file and re-analyses. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class RodApiTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
@@ -22,6 +23,7 @@ import org.springframework.web.util.HtmlUtils;
 /** Rename, duplicate and delete from the pages. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class SiteActionPagesTest {
 
     @Autowired

@@ -1,5 +1,6 @@
 package org.lpzplanner.sites;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
@@ -25,6 +26,7 @@ import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilde
 /** The structure table of the plan page and the correction of one structure. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class StructureCorrectionPagesTest {
 
     @Autowired

@@ -1,5 +1,6 @@
 package org.lpzplanner.system;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;
@@ -14,6 +15,7 @@ import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 
 @SpringBootTest(properties = "lpz.demo-data=true")
+@SignedIn
 class DemoDataTest {
 
     @Autowired

@@ -1,5 +1,6 @@
 package org.lpzplanner.system;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.ByteArrayOutputStream;
@@ -21,6 +22,7 @@ import org.springframework.boot.test.web.server.LocalServerPort;
  * limit, as JSON for the API and as a page for the forms, and stores nothing.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@SignedIn
 class UploadLimitTest {
 
     @LocalServerPort

@@ -1,5 +1,6 @@
 package org.lpzplanner.transfer;
 
+import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
@@ -29,6 +30,7 @@ import tools.jackson.databind.node.ObjectNode;
 
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class SiteTransferTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -1,0 +1,89 @@
+package org.lpzplanner.accounts;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.patch;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.RequestBuilder;
+
+/** Another team's site is invisible: every page and API address answers 404 and shows none of it. */
+@SpringBootTest
+@AutoConfigureMockMvc
+@SignedIn(role = Role.ADMIN)
+class TeamIsolationTest {
+
+    @Autowired
+    MockMvc mvc;
+
+    @Autowired
+    SiteService sites;
+
+    @Autowired
+    AnalysisService analyses;
+
+    @Autowired
+    AccountService accounts;
+
+    long foreignId;
+
+    @BeforeEach
+    void storeSiteOfAnotherTeam() throws Exception {
+        long otherTeam = accounts.teams().stream().filter(t -> t.name().equals("Northfield office")).findFirst()
+                .orElseGet(() -> accounts.createTeam("Northfield office")).id();
+        byte[] file = Files.readAllBytes(Path.of("sample-sites", "brookfield-campus.geojson"));
+        foreignId = CurrentAccount.asSystem("test", otherTeam, () -> {
+            StoredSite s = sites.create("campus.geojson", file, "Secret campus of Northfield", "II", null);
+            analyses.run(s.id(), null, null, null);
+            return s.id();
+        });
+    }
+
+    @Test
+    void everyAddressOfAnotherTeamsSiteAnswers404WithoutItsData() throws Exception {
+        long id = foreignId;
+        RequestBuilder[] requests = {
+            get("/sites/{id}", id), get("/sites/{id}/section", id), get("/sites/{id}/delete", id),
+            post("/sites/{id}/name", id).param("name", "x").param("version", "0"),
+            post("/sites/{id}/duplicate", id), post("/sites/{id}/analyses", id),
+            post("/sites/{id}/delete", id).param("confirm", "yes").param("version", "1"),
+            post("/sites/{id}/comments", id).param("comment", "hello"), post("/sites/{id}/reviewed", id),
+            post("/sites/{id}/accepted", id).param("key", "edge-1").param("reason", "r"),
+            get("/api/sites/{id}", id), get("/api/sites/{id}/file", id), get("/api/sites/{id}/file/versions", id),
+            get("/api/sites/{id}/analyses/latest", id), get("/api/sites/{id}/analyses/latest/items", id),
+            get("/api/sites/{id}/parts", id), get("/api/sites/{id}/comments", id), get("/api/sites/{id}/audit", id),
+            post("/api/sites/{id}/analyses", id), post("/api/sites/{id}/duplicate", id),
+            post("/api/sites/{id}/analyses/latest/reviewed", id),
+            patch("/api/sites/{id}", id).contentType(MediaType.APPLICATION_JSON).content("{\"version\":1,\"name\":\"x\"}"),
+            delete("/api/sites/{id}", id),
+            post("/api/sites/{id}/rods", id).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"version\": 1, \"x\": 1, \"y\": 1}"),
+        };
+        for (RequestBuilder request : requests) {
+            String body = mvc.perform(request).andExpect(status().isNotFound()).andReturn().getResponse()
+                    .getContentAsString();
+            assertThat(body).doesNotContain("Secret campus", "Larch rod");
+        }
+        String list = mvc.perform(get("/")).andReturn().getResponse().getContentAsString();
+        String api = mvc.perform(get("/api/sites")).andReturn().getResponse().getContentAsString();
+        assertThat(list + api).doesNotContain("Secret campus");
+        // and nothing of it changed
+        assertThat(CurrentAccount.asSystem("test", accounts.teams().stream()
+                .filter(t -> t.name().equals("Northfield office")).findFirst().orElseThrow().id(),
+                () -> sites.get(foreignId)).name()).isEqualTo("Secret campus of Northfield");
+    }
+}
