@@ -1,5 +1,11 @@
 package org.lpzplanner.analysis;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import java.util.List;
 import org.lpzplanner.common.Cautions;
 import org.springframework.http.HttpStatus;
@@ -20,6 +26,7 @@ import tools.jackson.databind.json.JsonMapper;
  * latest. Both answer with the summary, the result GeoJSON and the cautions.
  */
 @RestController
+@Tag(name = "Analyses", description = "Rolling sphere analyses of a site")
 @RequestMapping("/api/sites/{siteId}/analyses")
 public class AnalysisApiController {
 
@@ -40,6 +47,11 @@ public class AnalysisApiController {
         }
     }
 
+    @Operation(summary = "Analyse a site",
+            description = "Optional parameters level (I to IV, default the site's), radius (metres) and resolution (metres). Answers with the summary, the result GeoJSON and the cautions.")
+    @ApiResponse(responseCode = "201", description = "The new analysis revision")
+    @ApiResponse(responseCode = "400", description = "A setting cannot be used, or the analysis is too large (with a resolution that fits)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping
     public ResponseEntity<AnalysisView> run(@PathVariable long siteId,
             @RequestParam(required = false) String level, @RequestParam(required = false) String radius,
@@ -49,6 +61,9 @@ public class AnalysisApiController {
     }
 
     /** 404 with a JSON message when the site was never analysed. */
+    @Operation(summary = "The latest analysis of a site")
+    @ApiResponse(responseCode = "200", description = "The latest revision with result and cautions")
+    @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/latest")
     public ResponseEntity<?> latest(@PathVariable long siteId) {
         return analyses.latest(siteId)

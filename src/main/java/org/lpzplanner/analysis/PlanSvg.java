@@ -306,7 +306,7 @@ public final class PlanSvg {
     }
 
     /** Escapes text for SVG/XML content and attribute values. */
-    static String escape(String text) {
+    public static String escape(String text) {
         StringBuilder out = new StringBuilder(text.length());
         for (char c : text.toCharArray()) {
             switch (c) {

@@ -1,5 +1,11 @@
 package org.lpzplanner.analysis;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import java.util.List;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.system.InvalidInputException;
@@ -23,6 +29,7 @@ import tools.jackson.databind.JsonNode;
  * blank reason 400 naming the field; nothing is stored then.
  */
 @RestController
+@Tag(name = "Review", description = "Exposed items of the latest analysis and their acceptances")
 @RequestMapping("/api/sites/{siteId}/analyses/latest")
 public class ReviewApiController {
 
@@ -57,12 +64,21 @@ public class ReviewApiController {
         }
     }
 
+    @Operation(summary = "Exposed items of the latest analysis",
+            description = "Every exposed edge, corner and facade band with its status.")
+    @ApiResponse(responseCode = "200", description = "The review")
+    @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/items")
     public ReviewView items(@PathVariable long siteId) {
         return ReviewView.of(reviews.latest(siteId).orElseThrow(() -> new ReviewItemNotFoundException(
                 "site " + siteId + " has not been analysed yet, so it has no exposed items")));
     }
 
+    @Operation(summary = "Accept an exposed item",
+            description = "JSON object with key and reason (required). Kept with this analysis revision.")
+    @ApiResponse(responseCode = "200", description = "The review after the change")
+    @ApiResponse(responseCode = "400", description = "Key or reason missing or not a string; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site, analysis or item", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/accepted", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ReviewView accept(@PathVariable long siteId, @RequestBody JsonNode body) {
         if (!body.isObject()) {
@@ -71,6 +87,9 @@ public class ReviewApiController {
         return ReviewView.of(reviews.accept(siteId, text(body, "key"), text(body, "reason")));
     }
 
+    @Operation(summary = "Count an accepted item as exposed again")
+    @ApiResponse(responseCode = "200", description = "The review after the change")
+    @ApiResponse(responseCode = "404", description = "No such site, analysis or accepted item", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/accepted/{key}")
     public ReviewView remove(@PathVariable long siteId, @PathVariable String key) {
         return ReviewView.of(reviews.remove(siteId, key));

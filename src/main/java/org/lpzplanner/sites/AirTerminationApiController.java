@@ -1,5 +1,11 @@
 package org.lpzplanner.sites;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import java.net.URI;
 import java.util.List;
 import java.util.Locale;
@@ -35,6 +41,7 @@ import tools.jackson.databind.JsonNode;
  * method, level, radius and cautions. A stale {@code version} answers 409.
  */
 @RestController
+@Tag(name = "Air-termination", description = "Rods and conductors of a site; each change rewrites the site file and analyses again")
 @RequestMapping("/api/sites/{id}")
 public class AirTerminationApiController {
 
@@ -62,11 +69,20 @@ public class AirTerminationApiController {
             long serverMillis) {
     }
 
+    @Operation(summary = "Rods and conductors of a site")
+    @ApiResponse(responseCode = "200", description = "The parts")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/parts")
     public AirTerminationService.Parts parts(@PathVariable long id) {
         return parts.parts(id);
     }
 
+    @Operation(summary = "Add a rod",
+            description = "JSON object with version, x and y (local metres), height and optional name and id. GeoJSON sites only.")
+    @ApiResponse(responseCode = "201", description = "Added; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "A value cannot be used, or the site file cannot hold rods; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/rods", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<Change> add(@PathVariable long id, @RequestBody JsonNode body, Locale locale) {
         long start = System.nanoTime();
@@ -75,6 +91,12 @@ public class AirTerminationApiController {
                 .body(answer(id, rodId, null, start, locale));
     }
 
+    @Operation(summary = "Move or change a rod",
+            description = "JSON object with version and any of x, y, height, name.")
+    @ApiResponse(responseCode = "200", description = "Changed; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or rod", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PutMapping(value = "/rods/{rodId}", consumes = MediaType.APPLICATION_JSON_VALUE)
     public Change change(@PathVariable long id, @PathVariable String rodId, @RequestBody JsonNode body,
             Locale locale) {
@@ -83,6 +105,12 @@ public class AirTerminationApiController {
         return answer(id, rodId, before, start, locale);
     }
 
+    @Operation(summary = "Delete a rod",
+            description = "Parameter version is required.")
+    @ApiResponse(responseCode = "200", description = "Deleted; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "version is missing or not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or rod", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/rods/{rodId}")
     public Change remove(@PathVariable long id, @PathVariable String rodId, @RequestParam Long version,
             Locale locale) {

@@ -1,5 +1,11 @@
 package org.lpzplanner.sites;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import java.net.URI;
 import java.nio.charset.StandardCharsets;
 import java.time.Instant;
@@ -37,6 +43,7 @@ import tools.jackson.databind.JsonNode;
  * {@link org.lpzplanner.system.ApiErrorHandler}.
  */
 @RestController
+@Tag(name = "Sites", description = "Stored sites and their files")
 @RequestMapping("/api/sites")
 public class SiteApiController {
 
@@ -65,12 +72,20 @@ public class SiteApiController {
     public record FileVersionView(int number, String fileName, int bytes, Instant replacedAt) {
     }
 
+    @Operation(summary = "List the sites",
+            description = "Every stored site, most recently changed first, with the summary of its latest analysis.")
+    @ApiResponse(responseCode = "200", description = "The sites")
     @GetMapping
     public List<SiteView> list() {
         Map<Long, AnalysisRevision> latest = analyses.latestSummaries();
         return sites.list().stream().map(s -> SiteView.of(s, latest.get(s.id()))).toList();
     }
 
+    @Operation(summary = "Upload a site file",
+            description = "Multipart: file (GeoJSON or WKT, UTF-8), optional name, level (I to IV, default II) and radius (metres). The file is checked and kept byte for byte; nothing is stored when it is refused.")
+    @ApiResponse(responseCode = "201", description = "Stored; Location names the new site")
+    @ApiResponse(responseCode = "400", description = "The file is not a valid site (file, feature, line and field named) or a setting cannot be used", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "413", description = "The file is too large", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     public ResponseEntity<SiteView> upload(@RequestParam("file") MultipartFile file,
             @RequestParam(required = false) String name, @RequestParam(required = false) String level,
@@ -79,12 +94,22 @@ public class SiteApiController {
         return ResponseEntity.created(URI.create("/api/sites/" + site.id())).body(SiteView.of(site, null));
     }
 
+    @Operation(summary = "One site")
+    @ApiResponse(responseCode = "200", description = "The site")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "The id is not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/{id}")
     public SiteView get(@PathVariable long id) {
         StoredSite site = sites.get(id);
         return SiteView.of(site, analyses.latest(id).orElse(null));
     }
 
+    @Operation(summary = "Change name, level or radius",
+            description = "JSON object with the site's version and any of name, level, radius (null radius: the level's own).")
+    @ApiResponse(responseCode = "200", description = "Changed")
+    @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PatchMapping(value = "/{id}", consumes = MediaType.APPLICATION_JSON_VALUE)
     public SiteView update(@PathVariable long id, @RequestBody JsonNode body) {
         if (!body.isObject()) {
@@ -103,12 +128,20 @@ public class SiteApiController {
         return SiteView.of(site, analyses.latest(id).orElse(null));
     }
 
+    @Operation(summary = "Copy a site",
+            description = "Same file and settings, named '(copy)'; analyses are not copied.")
+    @ApiResponse(responseCode = "201", description = "The copy")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping("/{id}/duplicate")
     public ResponseEntity<SiteView> duplicate(@PathVariable long id) {
         StoredSite copy = sites.duplicate(id);
         return ResponseEntity.created(URI.create("/api/sites/" + copy.id())).body(SiteView.of(copy, null));
     }
 
+    @Operation(summary = "Earlier files of a site",
+            description = "The files that corrections replaced, oldest first.")
+    @ApiResponse(responseCode = "200", description = "The earlier files")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/{id}/file/versions")
     public List<FileVersionView> fileVersions(@PathVariable long id) {
         return sites.fileVersions(id).stream().map(v -> new FileVersionView(v.number(), v.sourceName(),
@@ -116,6 +149,9 @@ public class SiteApiController {
     }
 
     /** An earlier site file exactly as it was stored. */
+    @Operation(summary = "One earlier file, verbatim")
+    @ApiResponse(responseCode = "200", description = "The file as text")
+    @ApiResponse(responseCode = "404", description = "No such site or earlier file", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/{id}/file/versions/{number}")
     public ResponseEntity<byte[]> fileVersion(@PathVariable long id, @PathVariable int number) {
         SiteFileVersion version = sites.fileVersion(id, number);
@@ -146,6 +182,11 @@ public class SiteApiController {
     }
 
     /** With {@code ?version=N} the site is removed only while it is still at that version (else 409). */
+    @Operation(summary = "Delete a site",
+            description = "With its analyses and inputs. With ?version=N only while the site is still at that version.")
+    @ApiResponse(responseCode = "204", description = "Deleted")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/{id}")
     public ResponseEntity<Void> delete(@PathVariable long id, @RequestParam(required = false) Long version) {
         if (version == null) {
@@ -157,6 +198,9 @@ public class SiteApiController {
     }
 
     /** The site file exactly as uploaded, under its original name. */
+    @Operation(summary = "The site file as uploaded")
+    @ApiResponse(responseCode = "200", description = "The file as text")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/{id}/file")
     public ResponseEntity<byte[]> file(@PathVariable long id) {
         StoredSite site = sites.get(id);

@@ -1,0 +1,56 @@
+package org.lpzplanner.risk;
+
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.risk.CollectionArea;
+import org.lpzplanner.engine.risk.DangerousEvents;
+import org.lpzplanner.engine.risk.LevelChoice;
+import org.lpzplanner.engine.risk.LifeRisk;
+import org.lpzplanner.engine.risk.LocationFactor;
+import org.lpzplanner.sites.StoredSite;
+
+/**
+ * Everything the risk page, the API and the report show for one site.
+ *
+ * @param site        the stored site
+ * @param geometry    the site read from its file, local metres
+ * @param settings    the inputs used: the saved ones, or the defaults while none are saved
+ * @param saved       whether {@code settings} were saved by a user
+ * @param area        A_D with its outline
+ * @param suggestion  the app's suggestion for C_D
+ * @param events      N_G, A_D and the C_D used, giving N_D
+ * @param choice      R1 for no LPS and levels IV to I, and the lowest sufficient option
+ * @param lines       flashes to the connected lines, or null when none are entered
+ */
+public record RiskAssessment(StoredSite site, Site geometry, RiskSettings settings, boolean saved,
+        CollectionArea area, LocationSuggestion suggestion, DangerousEvents events, LevelChoice choice,
+        LineFlashes lines) {
+
+    /** The C_D used: the user's choice, or the suggestion. */
+    public LocationFactor location() {
+        return events.location();
+    }
+
+    /** R1 without an LPS (the first option tried). */
+    public LifeRisk withoutLps() {
+        return choice.options().get(0);
+    }
+
+    /**
+     * Flashes to the incoming lines, shown for information only (R1 here does not count them):
+     * A_L = 40·L_L m² per line and N_L = N_G·A_L·10⁻⁶ per year with the installation, environment
+     * and transformer factors at their largest value 1 [IEC 62305-2:2010 Annex A; from memory —
+     * check against the standard].
+     *
+     * @param count  number of lines
+     * @param length L_L of each line, metres
+     * @param collectionAreaPerLine A_L in m²
+     * @param flashesPerLine N_L per year and line
+     */
+    public record LineFlashes(int count, double length, double collectionAreaPerLine, double flashesPerLine) {
+
+        static LineFlashes of(int count, double length, double flashDensity) {
+            double area = 40 * length;
+            return new LineFlashes(count, length, area, flashDensity * area * 1e-6);
+        }
+    }
+}

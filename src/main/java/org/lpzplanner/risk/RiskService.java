@@ -1,0 +1,195 @@
+package org.lpzplanner.risk;
+
+import java.time.Clock;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.function.Function;
+import org.lpzplanner.common.ReportSection;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.risk.CollectionArea;
+import org.lpzplanner.engine.risk.CollectionAreaOp;
+import org.lpzplanner.engine.risk.DangerousEvents;
+import org.lpzplanner.engine.risk.LevelChoice;
+import org.lpzplanner.engine.risk.LifeRisk;
+import org.lpzplanner.engine.risk.LifeRiskEstimate;
+import org.lpzplanner.engine.risk.LocationFactor;
+import org.lpzplanner.engine.risk.RiskComponent;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.context.MessageSource;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+/**
+ * The risk of loss of human life of a site (IEC 62305-2:2010, components due to flashes to the
+ * structure): keeps each site's inputs, runs the engine's estimate on the site's real geometry, and
+ * hands the lowest sufficient protection level to the site's analysis settings.
+ */
+@Service
+public class RiskService {
+
+    private final SiteService sites;
+    private final RiskRepository inputs;
+    private final MessageSource messages;
+    private final Clock clock;
+
+    RiskService(SiteService sites, RiskRepository inputs, MessageSource messages, Clock clock) {
+        this.sites = sites;
+        this.inputs = inputs;
+        this.messages = messages;
+        this.clock = clock;
+    }
+
+    /**
+     * The assessment with the saved inputs, or with the defaults while none are saved.
+     *
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
+     */
+    @Transactional(readOnly = true)
+    public RiskAssessment assess(long siteId) {
+        StoredSite site = sites.get(siteId);
+        Optional<RiskSettings> saved = inputs.find(siteId);
+        return assess(site, saved.orElse(RiskSettings.defaults()), saved.isPresent());
+    }
+
+    /**
+     * Checks and saves the inputs of a site; a missing field takes its default.
+     *
+     * @param values each field's text by name (see {@link RiskSettingsParser#FIELDS})
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id (nothing is saved)
+     * @throws InvalidInputException naming the first field that cannot be used (nothing is saved)
+     */
+    @Transactional
+    public RiskAssessment save(long siteId, Function<String, String> values) {
+        StoredSite site = sites.get(siteId);
+        RiskSettings settings = RiskSettingsParser.parse(values);
+        RiskAssessment assessment = assess(site, settings, true);
+        inputs.save(siteId, settings, clock.instant().truncatedTo(ChronoUnit.MILLIS));
+        return assessment;
+    }
+
+    /**
+     * Makes the lowest sufficient protection level the site's level for its next analysis; the
+     * site's custom radius is dropped so that the level's own sphere is used.
+     *
+     * @param expectedVersion the site's version as last read
+     * @return the level set
+     * @throws InvalidInputException when no LPS is needed, or none of the levels is sufficient
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed meanwhile
+     */
+    @Transactional
+    public ProtectionLevel selectLevel(long siteId, long expectedVersion) {
+        RiskAssessment assessment = assess(siteId);
+        ProtectionLevel level = assessment.choice().level().orElseThrow(() -> new InvalidInputException("level",
+                assessment.choice().chosen().isPresent()
+                        ? "R1 is tolerable without an LPS, so there is no protection level to select"
+                        : "even protection level I leaves R1 above the tolerable risk, so no level can be selected;"
+                                + " add further measures and assess again"));
+        sites.update(siteId, expectedVersion, null, level.name(), "");
+        return level;
+    }
+
+    /**
+     * The risk result of a site as a report section: one row per option (no LPS, levels IV to I)
+     * with R_A, R_B, R1 and whether it is tolerable, and notes with the inputs, the outcome, the
+     * dominant component and the limits of the estimate.
+     *
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
+     */
+    @Transactional(readOnly = true)
+    public ReportSection reportSection(long siteId, Locale locale) {
+        return section(assess(siteId), locale);
+    }
+
+    /** The report section of an assessment already made; see {@link #reportSection(long, Locale)}. */
+    public ReportSection section(RiskAssessment a, Locale locale) {
+        List<String> columns = List.of(text(locale, "risk.table.option"), text(locale, "risk.table.pb"),
+                text(locale, "risk.table.ra"), text(locale, "risk.table.rb"), text(locale, "risk.table.r1"),
+                text(locale, "risk.table.tolerable"));
+        List<List<String>> rows = new ArrayList<>();
+        for (LifeRisk option : a.choice().options()) {
+            rows.add(List.of(optionName(option, locale), RiskFormat.significant(option.pb()),
+                    RiskFormat.scientific(option.ra()), RiskFormat.scientific(option.rb()),
+                    RiskFormat.scientific(option.r1()),
+                    text(locale, option.isTolerable() ? "risk.table.yes" : "risk.table.no")));
+        }
+        List<String> notes = new ArrayList<>();
+        notes.add(outcome(a, locale));
+        notes.addAll(figures(a, locale));
+        notes.add(dominance(a, locale));
+        if (!a.saved()) {
+            notes.add(text(locale, "risk.defaultsInUse"));
+        }
+        notes.add(text(locale, "risk.limits.components"));
+        notes.add(text(locale, "risk.limits.edition"));
+        notes.add(text(locale, "risk.limits.memory"));
+        return new ReportSection(text(locale, "risk.report.title"), columns, rows, notes);
+    }
+
+    /** The outcome in one sentence. */
+    String outcome(RiskAssessment a, Locale locale) {
+        LevelChoice choice = a.choice();
+        if (choice.chosen().isEmpty()) {
+            return text(locale, "risk.outcome.none", RiskFormat.scientific(choice.options().get(4).r1()));
+        }
+        LifeRisk chosen = choice.chosen().get();
+        if (chosen.level() == null) {
+            return text(locale, "risk.outcome.noLps", RiskFormat.scientific(chosen.r1()));
+        }
+        return text(locale, "risk.outcome.level", chosen.level().name(), RiskFormat.scientific(a.withoutLps().r1()),
+                RiskFormat.scientific(chosen.r1()));
+    }
+
+    /** N_G, A_D, C_D and N_D in words, one line each. */
+    List<String> figures(RiskAssessment a, Locale locale) {
+        RiskSettings s = a.settings();
+        List<String> lines = new ArrayList<>();
+        lines.add(s.flashDensitySource() == FlashDensitySource.MEASURED
+                ? text(locale, "risk.figure.ngMeasured", RiskFormat.significant(s.groundFlashDensity()))
+                : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
+                        RiskFormat.significant(s.thunderstormDays())));
+        lines.add(text(locale, "risk.figure.ad", RiskFormat.area(a.area().area()),
+                RiskFormat.percent(a.area().maxRelativeError() * 100)));
+        lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
+                RiskFormat.significant(a.location().value()), text(locale, "risk.location." + a.location().name())));
+        lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
+        return lines;
+    }
+
+    /** Which component dominates without an LPS, and its share of R1. */
+    String dominance(RiskAssessment a, Locale locale) {
+        LifeRisk none = a.withoutLps();
+        if (none.r1() == 0) {
+            return text(locale, "risk.dominant.zero");
+        }
+        double part = none.dominant() == RiskComponent.R_A ? none.ra() : none.rb();
+        return text(locale, "risk.dominant." + none.dominant().name(), RiskFormat.metres(100 * part / none.r1()));
+    }
+
+    String optionName(LifeRisk option, Locale locale) {
+        return option.level() == null ? text(locale, "risk.option.none")
+                : text(locale, "risk.option.level", option.level().name());
+    }
+
+    private RiskAssessment assess(StoredSite site, RiskSettings settings, boolean saved) {
+        Site geometry = sites.document(site).site();
+        CollectionArea area = CollectionAreaOp.of(geometry);
+        LocationSuggestion suggestion = LocationSuggestion.of(geometry);
+        LocationFactor location = settings.location() == null ? suggestion.factor() : settings.location();
+        double ng = settings.groundFlashDensity();
+        DangerousEvents events = new DangerousEvents(ng, area.area(), location);
+        LevelChoice choice = LifeRiskEstimate.choose(settings.lifeRiskInputs(events.perYear()));
+        RiskAssessment.LineFlashes lines = settings.lineCount() == null || settings.lineCount() == 0 ? null
+                : RiskAssessment.LineFlashes.of(settings.lineCount(), settings.lineLength(), ng);
+        return new RiskAssessment(site, geometry, settings, saved, area, suggestion, events, choice, lines);
+    }
+
+    private String text(Locale locale, String key, Object... args) {
+        return messages.getMessage(key, args, locale);
+    }
+}

@@ -1,0 +1,155 @@
+package org.lpzplanner.risk;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
+import org.lpzplanner.engine.risk.FireProvisions;
+import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.LocationFactor;
+import org.lpzplanner.engine.risk.Occupancy;
+import org.lpzplanner.engine.risk.SpecialHazard;
+import org.lpzplanner.engine.risk.StructureUse;
+import org.lpzplanner.engine.risk.SurfaceType;
+import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.system.InvalidInputException;
+
+/**
+ * Reads risk inputs typed in the page form or sent to the API, by field name. A missing or blank
+ * field takes its default ({@link RiskSettings#defaults()}); a value that cannot be used throws
+ * {@link InvalidInputException} naming the field, so nothing half-read is ever stored.
+ */
+final class RiskSettingsParser {
+
+    /** Every field name the form and the API know. */
+    static final List<String> FIELDS = List.of("flashDensitySource", "flashDensity", "thunderstormDays", "location",
+            "surface", "fireRisk", "fireProvisions", "specialHazard", "structureUse", "touchStep", "personsInZone",
+            "personsTotal", "hoursPerYear", "lineCount", "lineLength");
+
+    /** Choice value meaning "use the app's suggestion" for the location factor. */
+    static final String SUGGESTED = "SUGGESTED";
+
+    static final double MAX_FLASH_DENSITY = 100;
+    static final int MAX_LINES = 20;
+    static final double MAX_PERSONS = 1e7;
+    static final double MAX_LINE_LENGTH = 100_000;
+
+    private static final Pattern DECIMAL = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+
+    private RiskSettingsParser() {
+    }
+
+    /**
+     * @param values the text of each field by name; null or blank for "not given"
+     * @throws InvalidInputException for the first field that cannot be used
+     */
+    static RiskSettings parse(Function<String, String> values) {
+        RiskSettings d = RiskSettings.defaults();
+        Double flashDensity = number(values, "flashDensity", false, MAX_FLASH_DENSITY, false);
+        Double days = number(values, "thunderstormDays", false, 366, false);
+        FlashDensitySource source = choice(values, "flashDensitySource", FlashDensitySource.class, null);
+        if (source == null) {
+            if (flashDensity != null && days != null) {
+                throw new InvalidInputException("flashDensitySource", "give either flashDensity or thunderstormDays,"
+                        + " or say which one counts with flashDensitySource (MEASURED or THUNDERSTORM_DAYS)");
+            }
+            source = flashDensity != null ? FlashDensitySource.MEASURED : FlashDensitySource.THUNDERSTORM_DAYS;
+        }
+        if (source == FlashDensitySource.MEASURED) {
+            if (flashDensity == null) {
+                throw new InvalidInputException("flashDensity", "flashDensity is missing: give the ground flash"
+                        + " density in flashes per km² per year, e.g. 2.5");
+            }
+            days = null;
+        } else {
+            flashDensity = null;
+            days = days == null ? d.thunderstormDays() : days;
+        }
+        String locationText = text(values, "location");
+        LocationFactor location = locationText == null || locationText.equalsIgnoreCase(SUGGESTED) ? null
+                : choice(values, "location", LocationFactor.class, null);
+        Occupancy occupancy = occupancy(values, d.occupancy());
+        Double lineCountValue = number(values, "lineCount", true, MAX_LINES, true);
+        Integer lineCount = lineCountValue == null ? null : lineCountValue.intValue();
+        Double lineLength = number(values, "lineLength", false, MAX_LINE_LENGTH, false);
+        if (lineCount == null || lineCount == 0) {
+            lineLength = null;
+        } else if (lineLength == null) {
+            lineLength = RiskSettings.DEFAULT_LINE_LENGTH;
+        }
+        return new RiskSettings(source, flashDensity, days, location,
+                choice(values, "surface", SurfaceType.class, d.surface()),
+                choice(values, "fireRisk", FireRisk.class, d.fireRisk()),
+                choice(values, "fireProvisions", FireProvisions.class, d.fireProvisions()),
+                choice(values, "specialHazard", SpecialHazard.class, d.specialHazard()),
+                choice(values, "structureUse", StructureUse.class, d.use()),
+                choice(values, "touchStep", TouchStepProtection.class, d.touchStep()),
+                occupancy, lineCount, lineLength);
+    }
+
+    private static Occupancy occupancy(Function<String, String> values, Occupancy d) {
+        Double total = number(values, "personsTotal", false, MAX_PERSONS, false);
+        Double inZone = number(values, "personsInZone", true, MAX_PERSONS, false);
+        Double hours = number(values, "hoursPerYear", true, Occupancy.HOURS_PER_YEAR, false);
+        double t = total == null ? d.personsTotal() : total;
+        double z = inZone == null ? Math.min(t, d.personsInZone()) : inZone;
+        if (z > t) {
+            throw new InvalidInputException("personsInZone", "personsInZone (" + plain(z) + ") cannot be more than"
+                    + " personsTotal (" + plain(t) + ")");
+        }
+        return new Occupancy(z, t, hours == null ? d.hoursPerYear() : hours);
+    }
+
+    /**
+     * A number from 0 (or above 0) to {@code max}; null when not given.
+     *
+     * @param zeroAllowed whether 0 itself is allowed
+     * @param whole whether only whole numbers are allowed
+     */
+    private static Double number(Function<String, String> values, String field, boolean zeroAllowed, double max,
+            boolean whole) {
+        String text = text(values, field);
+        if (text == null) {
+            return null;
+        }
+        double value = DECIMAL.matcher(text).matches() ? Double.parseDouble(text) : Double.NaN;
+        String range = (zeroAllowed ? "from 0" : "above 0") + " to " + plain(max);
+        if (!Double.isFinite(value)) {
+            throw new InvalidInputException(field, field + " must be a number " + range + ", got \"" + text + "\"");
+        }
+        if (value < 0 || (value == 0 && !zeroAllowed) || value > max || (whole && value != Math.rint(value))) {
+            throw new InvalidInputException(field, field + " must be a" + (whole ? " whole" : "") + " number " + range
+                    + ", got " + text);
+        }
+        return value;
+    }
+
+    private static <E extends Enum<E>> E choice(Function<String, String> values, String field, Class<E> type,
+            E fallback) {
+        String text = text(values, field);
+        if (text == null) {
+            return fallback;
+        }
+        for (E e : type.getEnumConstants()) {
+            if (e.name().equalsIgnoreCase(text)) {
+                return e;
+            }
+        }
+        String allowed = Arrays.stream(type.getEnumConstants()).map(Enum::name).collect(Collectors.joining(", "));
+        if ("location".equals(field)) {
+            allowed = SUGGESTED + ", " + allowed;
+        }
+        throw new InvalidInputException(field, field + " must be one of " + allowed + ", got \"" + text + "\"");
+    }
+
+    private static String text(Function<String, String> values, String field) {
+        String text = values.apply(field);
+        return text == null || text.isBlank() ? null : text.strip();
+    }
+
+    private static String plain(double value) {
+        return value == Math.rint(value) ? String.valueOf((long) value) : String.format(Locale.ROOT, "%s", value);
+    }
+}

@@ -1,0 +1,89 @@
+package org.lpzplanner.browser;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.Duration;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.common.Cautions;
+import org.openqa.selenium.By;
+import org.openqa.selenium.Dimension;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.Select;
+import org.openqa.selenium.support.ui.WebDriverWait;
+
+/**
+ * In a real browser: open the risk page of an uploaded site from its plan, choose the building's
+ * factors, save, and set the lowest sufficient protection level with the button. The site is one
+ * invented 40 m × 20 m × 10 m block; with T_d = 20, a hospital, high fire risk, automatic fire
+ * provisions and difficulty of evacuation, R1 is 1.46 · 10⁻⁴ per year without an LPS and level II
+ * is the lowest sufficient level (worked out in RiskApiTest from IEC 62305-2:2010's formulas).
+ * Saves target/screenshots/risk-page.png.
+ */
+class RiskPageBrowserTest extends BrowserTestBase {
+
+    private static final String BLOCK = """
+            {"type": "FeatureCollection", "name": "Risk block", "coordinates": "local-metres", "features": [
+              {"type": "Feature", "properties": {"kind": "structure", "name": "Ward block", "height": 10},
+               "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [40, 0], [40, 20], [0, 20], [0, 0]]]}},
+              {"type": "Feature", "properties": {"kind": "structure", "name": "Boiler house", "height": 6},
+               "geometry": {"type": "Polygon", "coordinates": [[[55, 0], [65, 0], [65, 8], [55, 8], [55, 0]]]}}
+            ]}
+            """;
+
+    @Test
+    void designerChoosesFactorsSavesAndSetsTheLowestSufficientLevel() throws Exception {
+        Path file = Files.createDirectories(Path.of("target", "browser-files")).resolve("risk-block.geojson");
+        Files.writeString(file, BLOCK);
+        browser.get("http://localhost:" + port + "/");
+        browser.findElement(By.cssSelector("input[type=file][name=file]")).sendKeys(file.toAbsolutePath().toString());
+        new Select(browser.findElement(By.name("level"))).selectByValue("IV");
+        browser.findElement(By.cssSelector("form button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(30)).until(ExpectedConditions.urlMatches(".*/sites/\\d+$"));
+
+        browser.findElement(By.id("risk-link")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.urlMatches(".*/sites/\\d+/risk$"));
+        assertThat(browser.findElement(By.id("risk-defaults")).getText()).contains("defaults");
+        WebElement svg = browser.findElement(By.cssSelector("svg.collection-area"));
+        assertThat(svg.findElements(By.cssSelector("path.collection-zone"))).hasSize(1);
+        assertThat(browser.findElement(By.id("location-suggestion")).getText()).contains("Ward block");
+
+        WebElement days = browser.findElement(By.name("thunderstormDays"));
+        days.clear();
+        days.sendKeys("20");
+        new Select(browser.findElement(By.name("structureUse"))).selectByValue("HOSPITAL_HOTEL_SCHOOL_CIVIC");
+        new Select(browser.findElement(By.name("fireRisk"))).selectByValue("HIGH");
+        new Select(browser.findElement(By.name("fireProvisions"))).selectByValue("AUTOMATIC");
+        new Select(browser.findElement(By.name("specialHazard"))).selectByValue("DIFFICULT_EVACUATION");
+        browser.findElement(By.id("save-risk")).click();
+
+        new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(By.id("risk-saved")));
+        assertThat(browser.findElement(By.id("risk-outcome")).getText()).contains("lowest protection level", "is II");
+        assertThat(browser.findElement(By.id("risk-dominance")).getText()).contains("R_B");
+        assertThat(browser.findElements(By.cssSelector("#risk-options tbody tr"))).hasSize(5);
+        String page = browser.findElement(By.tagName("body")).getText().replaceAll("\\s+", " ");
+        for (String caution : Cautions.lines()) {
+            assertThat(page).contains(caution);
+        }
+
+        browser.findElement(By.id("select-level")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(By.id("risk-level-set")));
+        assertThat(browser.findElement(By.id("risk-level-set")).getText()).contains("Protection level II");
+        assertThat(browser.findElement(By.id("level-already-set")).getText()).contains("II");
+
+        // the whole page in one picture: the window as tall as the page
+        Number height = (Number) browser.executeScript("return document.documentElement.scrollHeight;");
+        browser.manage().window().setSize(new Dimension(1400, Math.min(8000, height.intValue() + 150)));
+        Path shots = Files.createDirectories(Path.of("target", "screenshots"));
+        Path shot = browser.getScreenshotAs(OutputType.FILE).toPath();
+        Files.copy(shot, shots.resolve("risk-page.png"), StandardCopyOption.REPLACE_EXISTING);
+        assertThat(Files.size(shots.resolve("risk-page.png"))).isGreaterThan(10_000);
+
+        browser.findElement(By.linkText("Back to the plan of Risk block")).click();
+        assertThat(browser.findElement(By.tagName("body")).getText()).contains("Risk block");
+    }
+}

@@ -1,0 +1,197 @@
+package org.lpzplanner.risk;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.redirectedUrl;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.common.Cautions;
+import org.lpzplanner.common.ReportSection;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.test.web.servlet.MockMvc;
+import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilder;
+import org.springframework.web.util.HtmlUtils;
+import tools.jackson.databind.JsonNode;
+
+/** The risk page {@code /sites/{id}/risk}, its form, the level button and the report section. */
+@SpringBootTest
+@AutoConfigureMockMvc
+class RiskPagesTest {
+
+    @Autowired
+    MockMvc mvc;
+
+    @Autowired
+    RiskService risk;
+
+    private String page(MockHttpServletRequestBuilder request, int status) throws Exception {
+        String html = mvc.perform(request).andExpect(status().is(status)).andReturn().getResponse()
+                .getContentAsString(StandardCharsets.UTF_8);
+        return HtmlUtils.htmlUnescape(html);
+    }
+
+    private JsonNode api(String url) throws Exception {
+        return RiskSites.JSON.readTree(mvc.perform(get(url)).andExpect(status().isOk()).andReturn().getResponse()
+                .getContentAsString(StandardCharsets.UTF_8));
+    }
+
+    /** The worked example of {@link RiskApiTest} as the page form sends it. */
+    private static MockHttpServletRequestBuilder hospitalForm(long id) {
+        return hospitalForm(id, java.util.Map.of());
+    }
+
+    /** The worked example with some fields typed differently. */
+    private static MockHttpServletRequestBuilder hospitalForm(long id, java.util.Map<String, String> changed) {
+        MockHttpServletRequestBuilder form = post("/sites/" + id + "/risk");
+        java.util.Map<String, String> values = new java.util.LinkedHashMap<>(HOSPITAL_FORM);
+        values.putAll(changed);
+        values.forEach(form::param);
+        return form;
+    }
+
+    private static final java.util.Map<String, String> HOSPITAL_FORM = hospitalValues();
+
+    private static java.util.Map<String, String> hospitalValues() {
+        var form = post("/").param("flashDensitySource", "THUNDERSTORM_DAYS")
+                .param("flashDensity", "").param("thunderstormDays", "20").param("location", "SUGGESTED")
+                .param("surface", "AGRICULTURAL_OR_CONCRETE").param("fireRisk", "HIGH")
+                .param("fireProvisions", "AUTOMATIC").param("specialHazard", "DIFFICULT_EVACUATION")
+                .param("structureUse", "HOSPITAL_HOTEL_SCHOOL_CIVIC").param("touchStep", "NONE")
+                .param("personsInZone", "1").param("personsTotal", "1").param("hoursPerYear", "8760")
+                .param("lineCount", "").param("lineLength", "");
+        java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
+        form.buildRequest(new org.springframework.mock.web.MockServletContext()).getParameterMap()
+                .forEach((k, v) -> values.put(k, v[0]));
+        return values;
+    }
+
+    @Test
+    void pageShowsEveryInputWithMeaningAndDefaultTheDrawingTheResultAndTheCautions() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Page <block> & co");
+
+        String html = page(get("/sites/" + id + "/risk"), 200);
+
+        assertThat(html).contains("Page <block> & co", "IEC 62305-2:2010", "No risk inputs are saved",
+                "class=\"plan collection-area\"", "class=\"collection-zone\"", "Block (10 m)",
+                "R1 for each option", "No LPS", "LPS of protection level I", "tolerable",
+                "Location factor C_D", "isolated, no other objects nearby", "Suggestion: isolated",
+                "Dangerous events N_D", "Collection area A_D", "Without an LPS, R_");
+        for (String field : RiskSettingsParser.FIELDS) {
+            assertThat(html).contains("name=\"" + field + "\"");
+        }
+        assertThat(html).contains("Floor or ground surface r_t", "Default: agricultural ground or concrete",
+                "Fire provisions r_p", "Default: no fire provisions", "Thunderstorm days T_d", "Default: 25 days");
+        for (String caution : Cautions.lines()) {
+            assertThat(html).contains(caution);
+        }
+        // the site name in the drawing is escaped
+        assertThat(mvc.perform(get("/sites/" + id + "/risk")).andReturn().getResponse()
+                .getContentAsString(StandardCharsets.UTF_8)).doesNotContain("<block>");
+        // defaults: R1 tolerable without an LPS, so no level is offered
+        assertThat(html).doesNotContain("id=\"select-level\"");
+    }
+
+    @Test
+    void planPageAndSiteListLinkToTheRiskPage() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Linked block");
+        assertThat(page(get("/sites/" + id), 200)).contains("href=\"/sites/" + id + "/risk\"");
+        assertThat(page(get("/"), 200)).contains("href=\"/sites/" + id + "/risk\"");
+    }
+
+    @Test
+    void savingTheFormRecalculatesAndOffersTheLevelWhichTheButtonSets() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Form block");
+
+        mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection())
+                .andExpect(redirectedUrl("/sites/" + id + "/risk?saved=true"));
+        String html = page(get("/sites/" + id + "/risk?saved=true"), 200);
+        assertThat(html).contains("The risk inputs were saved", "The lowest protection level that brings it below is II",
+                "Use protection level II for this site", "R_B (physical damage) dominates: 99");
+        assertThat(html).doesNotContain("No risk inputs are saved", "stricter than the level");
+
+        long version = api("/api/sites/" + id).path("version").asLong();
+        mvc.perform(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)))
+                .andExpect(status().is3xxRedirection()).andExpect(redirectedUrl("/sites/" + id + "/risk?levelSet=II"));
+        assertThat(api("/api/sites/" + id).path("level").asString()).isEqualTo("II");
+        html = page(get("/sites/" + id + "/risk?levelSet=II"), 200);
+        assertThat(html).contains("Protection level II is now the site's level",
+                "The site is already assessed at protection level II");
+        assertThat(html).doesNotContain("id=\"select-level\"");
+
+        // the old version is stale now: 409 and the level stays
+        assertThat(page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 409))
+                .contains("changed meanwhile");
+    }
+
+    @Test
+    void aStricterSiteLevelIsPointedOutAsTheSafeSide() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Strict block");
+        long version = api("/api/sites/" + id).path("version").asLong();
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.patch("/api/sites/" + id)
+                .contentType(org.springframework.http.MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + version + ", \"level\": \"I\"}")).andExpect(status().isOk());
+        mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
+
+        String html = page(get("/sites/" + id + "/risk"), 200);
+
+        assertThat(html).contains("assessed at protection level I, stricter than the level II",
+                "Use protection level II for this site");
+    }
+
+    @Test
+    void badFormValueIsShownAgainWithTheReasonAndNothingIsSaved() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Refused block");
+
+        String html = page(hospitalForm(id, java.util.Map.of("thunderstormDays", "lots")), 400);
+
+        assertThat(html).contains("The inputs were not saved: thunderstormDays must be a number", "\"lots\"",
+                "value=\"lots\"", "class=\"risk-field has-error\"");
+        assertThat(html).contains("No risk inputs are saved");
+        assertThat(api("/api/sites/" + id + "/risk").path("saved").asBoolean()).isFalse();
+
+        html = page(hospitalForm(id, java.util.Map.of("personsInZone", "5", "personsTotal", "2")), 400);
+        assertThat(html).contains("personsInZone (5) cannot be more than personsTotal (2)");
+        assertThat(api("/api/sites/" + id + "/risk").path("saved").asBoolean()).isFalse();
+    }
+
+    @Test
+    void levelButtonIsRefusedWhenNoLevelIsNeeded() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Calm block");
+        long version = api("/api/sites/" + id).path("version").asLong();
+
+        String html = page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400);
+
+        assertThat(html).contains("The level was not changed: R1 is tolerable without an LPS");
+        assertThat(api("/api/sites/" + id).path("level").asString()).isEqualTo("IV");
+    }
+
+    @Test
+    void unknownSiteGivesNotFoundPages() throws Exception {
+        assertThat(page(get("/sites/987654/risk"), 404)).contains("987654");
+        assertThat(page(post("/sites/987654/risk").param("thunderstormDays", "20"), 404)).contains("987654");
+        assertThat(page(get("/sites/nonsense/risk"), 404)).contains("nonsense");
+    }
+
+    @Test
+    void reportSectionHasOneRowPerOptionAndTheOutcome() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Report block");
+        mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
+
+        ReportSection section = risk.reportSection(id, Locale.ENGLISH);
+
+        assertThat(section.title()).contains("Risk of loss of human life", "IEC 62305-2:2010");
+        assertThat(section.columns()).hasSize(6);
+        assertThat(section.rows()).hasSize(5);
+        assertThat(section.rows().get(0)).first().isEqualTo("No LPS");
+        assertThat(section.rows().get(3)).containsExactly("LPS of protection level II", "0.05",
+                "7.23 × 10⁻⁸", "7.23 × 10⁻⁶", "7.3 × 10⁻⁶", "yes");
+        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("lowest protection level", "is II"));
+        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("Only R_A and R_B are counted"));
+    }
+}

@@ -1,0 +1,98 @@
+package org.lpzplanner.system;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.test.web.servlet.MockMvc;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The OpenAPI document at {@code /api/docs} (OpenAPI Specification 3.x: {@code paths}, operations
+ * by HTTP method, {@code responses} by status code) describes the main endpoints with their error
+ * answers, and the browsable page is served.
+ */
+@SpringBootTest
+@AutoConfigureMockMvc
+class ApiDocsTest {
+
+    @Autowired
+    MockMvc mvc;
+
+    private JsonNode document() throws Exception {
+        String body = mvc.perform(get("/api/docs")).andExpect(status().isOk()).andReturn().getResponse()
+                .getContentAsString(StandardCharsets.UTF_8);
+        return JsonMapper.builder().build().readTree(body);
+    }
+
+    /** Asserts that the operation exists and lists exactly these status codes, errors with the ApiError body. */
+    private static void hasResponses(JsonNode doc, String path, String method, List<String> codes) {
+        JsonNode operation = doc.path("paths").path(path).path(method);
+        assertThat(operation.isObject()).as(method + " " + path).isTrue();
+        assertThat(operation.path("summary").asString()).as("summary of " + method + " " + path).isNotBlank();
+        JsonNode responses = operation.path("responses");
+        assertThat(responses.propertyNames()).as("responses of " + method + " " + path)
+                .containsExactlyInAnyOrderElementsOf(codes);
+        for (String code : codes) {
+            if (code.startsWith("4")) {
+                assertThat(responses.path(code).path("description").asString()).isNotBlank();
+                assertThat(responses.path(code).path("content").path("application/json").path("schema").path("$ref")
+                        .asString()).as(code + " of " + method + " " + path).isEqualTo("#/components/schemas/ApiError");
+            }
+        }
+    }
+
+    @Test
+    void documentListsTheMainEndpointsWithTheirErrorAnswers() throws Exception {
+        JsonNode doc = document();
+
+        assertThat(doc.path("openapi").asString()).startsWith("3.");
+        assertThat(doc.path("info").path("title").asString()).isEqualTo("LPZ Planner API");
+        assertThat(doc.path("info").path("description").asString()).contains("licensed");
+        hasResponses(doc, "/api/sites", "get", List.of("200"));
+        hasResponses(doc, "/api/sites", "post", List.of("201", "400", "413"));
+        hasResponses(doc, "/api/sites/{id}", "get", List.of("200", "400", "404"));
+        hasResponses(doc, "/api/sites/{id}", "patch", List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}", "delete", List.of("204", "404", "409"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "400", "404"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses/latest", "get", List.of("200", "404"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses/latest/items", "get", List.of("200", "404"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post", List.of("200", "400", "404"));
+        hasResponses(doc, "/api/sites/{id}/rods", "post", List.of("201", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}/rods/{rodId}", "put", List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}/risk", "get", List.of("200", "400", "404"));
+        hasResponses(doc, "/api/sites/{id}/risk", "put", List.of("200", "400", "404"));
+
+        assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
+                "Review", "Air-termination", "Risk");
+        assertThat(doc.path("tags").toString()).contains("IEC 62305-2:2010");
+
+        JsonNode error = doc.path("components").path("schemas").path("ApiError");
+        assertThat(error.path("properties").propertyNames()).contains("error", "field");
+        assertThat(error.path("required").toString()).contains("error");
+        JsonNode riskBody = doc.path("paths").path("/api/sites/{id}/risk").path("put").path("requestBody");
+        assertThat(riskBody.toString()).contains("#/components/schemas/Inputs");
+        // only the JSON API is described, not the pages
+        assertThat(doc.path("paths").propertyNames()).allMatch(p -> p.startsWith("/api/"));
+    }
+
+    @Test
+    void browsablePageIsServed() throws Exception {
+        String target = mvc.perform(get("/api/docs/ui")).andExpect(status().is3xxRedirection()).andReturn()
+                .getResponse().getRedirectedUrl();
+        assertThat(target).contains("swagger-ui/index.html");
+        String page = mvc.perform(get(target.replaceFirst("^https?://[^/]+", "").replaceFirst("\\?.*$", "")))
+                .andExpect(status().isOk()).andReturn().getResponse().getContentAsString(StandardCharsets.UTF_8);
+        assertThat(page).contains("swagger-ui");
+        String config = mvc.perform(get("/api/docs/swagger-config")).andExpect(status().isOk()).andReturn()
+                .getResponse().getContentAsString(StandardCharsets.UTF_8);
+        assertThat(config).contains("/api/docs");
+    }
+}
