@@ -1,5 +1,11 @@
 package org.lpzplanner.report;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.system.ApiError;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
@@ -14,6 +20,8 @@ import org.springframework.web.bind.annotation.RestController;
  * 400 for an id that is not a number.
  */
 @RestController
+@Tag(name = "Reports", description = "The printed assessment (PDF) of a stored analysis revision, made from the"
+        + " site file and result the revision kept")
 public class ReportApiController {
 
     private final ReportService reports;
@@ -22,6 +30,18 @@ public class ReportApiController {
         this.reports = reports;
     }
 
+    @Operation(summary = "The printed assessment of one revision as PDF",
+            description = "Cover with status and cautions, method and inputs, plan to scale, sections,"
+                    + " schedules and a blank review block; the same revision always prints the same content")
+    @ApiResponse(responseCode = "200", description = "The PDF",
+            content = @Content(mediaType = "application/pdf"))
+    @ApiResponse(responseCode = "400", description = "An id or revision number that is not a whole number",
+            content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id, or no revision with this number",
+            content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The revision was analysed before revisions kept their site"
+            + " file, and that file is no longer stored",
+            content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping(path = "/api/sites/{siteId}/revisions/{revision}/report",
             produces = {MediaType.APPLICATION_PDF_VALUE, MediaType.APPLICATION_JSON_VALUE})
     public ResponseEntity<byte[]> report(@PathVariable long siteId, @PathVariable int revision) {

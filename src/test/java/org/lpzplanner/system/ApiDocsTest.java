@@ -69,9 +69,11 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{id}/rods/{rodId}", "put", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}/risk", "get", List.of("200", "400", "404"));
         hasResponses(doc, "/api/sites/{id}/risk", "put", List.of("200", "400", "404"));
+        hasResponses(doc, "/api/sites/{siteId}/revisions/{revision}/report", "get",
+                List.of("200", "400", "404", "409"));
 
         assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
-                "Review", "Air-termination", "Risk");
+                "Review", "Air-termination", "Risk", "Reports");
         assertThat(doc.path("tags").toString()).contains("IEC 62305-2:2010");
 
         JsonNode error = doc.path("components").path("schemas").path("ApiError");
