@@ -19,6 +19,15 @@ function setUp(root) {
   const rodForm = document.getElementById('rod-form');
   const rodSelect = rodForm.elements.rod;
 
+  const conductorButton = document.getElementById('draw-conductor');
+  const conductorForm = document.getElementById('new-conductor-form');
+  const conductorList = document.getElementById('conductor-form');
+  const conductorSelect = conductorList.elements.conductor;
+  const deleteConductor = document.getElementById('delete-conductor');
+  let conductors = [];
+  let drawingConductor = false;
+  let conductorPoints = [];
+
   let version = Number(root.dataset.version);
   let rods = [];
   let selectedId = null;
@@ -115,6 +124,15 @@ function setUp(root) {
   }
 
   function setParts(parts) {
+    conductors = parts.conductors || [];
+    const keepConductor = conductorSelect.options[0];
+    const chosen = conductorSelect.value;
+    conductorSelect.replaceChildren(keepConductor);
+    for (const c of conductors) {
+      conductorSelect.add(new Option(text('RodOption').replace('{0}', c.name).replace('{1}', c.id), c.id));
+    }
+    conductorSelect.value = conductors.some((c) => c.id === chosen) ? chosen : '';
+    deleteConductor.disabled = conductorSelect.value === '';
     rods = parts.rods;
     const keep = rodSelect.options[0];
     rodSelect.replaceChildren(keep);
@@ -249,6 +267,35 @@ function setUp(root) {
     };
   }
 
+  function addConductorCommand(values) {
+    let id = values.id || null;
+    return {
+      async forward() {
+        const data = await call('POST', '/conductors', Object.assign({}, values, { id }));
+        id = data.conductorId;
+        return data;
+      },
+      backward: () => call('DELETE', '/conductors/' + encodeURIComponent(id)),
+    };
+  }
+
+  /** The values that put a removed conductor back as it was. */
+  function conductorValues(c) {
+    const values = { id: c.id, name: c.name, points: c.path };
+    if (c.heightAboveRoof !== null && c.heightAboveRoof !== undefined) {
+      values.heightAboveRoof = c.heightAboveRoof;
+      values.points = c.path.map((p) => [p[0], p[1]]);
+    }
+    return values;
+  }
+
+  function removeConductorCommand(c) {
+    return {
+      forward: () => call('DELETE', '/conductors/' + encodeURIComponent(c.id)),
+      backward: () => call('POST', '/conductors', conductorValues(c)),
+    };
+  }
+
   function updateButtons() {
     undoButton.disabled = undoStack.length === 0;
     redoButton.disabled = redoStack.length === 0;
@@ -323,6 +370,79 @@ function setUp(root) {
     }
   });
 
+  // ---- drawing a new conductor ----
+
+  function conductorPreview() {
+    const element = svg();
+    if (!element) {
+      return;
+    }
+    let line = element.querySelector('polyline.conductor-draft');
+    if (!line) {
+      line = document.createElementNS('http://www.w3.org/2000/svg', 'polyline');
+      line.setAttribute('class', 'conductor-draft');
+      element.appendChild(line);
+    }
+    const f = frame();
+    line.setAttribute('points', conductorPoints.map((p) => (f.margin + (p[0] - f.originX) * f.scale) + ','
+      + (f.margin + (f.originY - p[1]) * f.scale)).join(' '));
+  }
+
+  function setDrawingConductor(on) {
+    if (on) {
+      setPlacing(false);
+    }
+    drawingConductor = on;
+    conductorPoints = [];
+    conductorForm.elements.count.value = '0';
+    conductorButton.setAttribute('aria-pressed', on ? 'true' : 'false');
+    drawing.classList.toggle('placing', on);
+    conductorForm.hidden = !on;
+    const draft = svg() && svg().querySelector('polyline.conductor-draft');
+    if (draft) {
+      draft.remove();
+    }
+    if (on) {
+      show(text('Drawing'), false);
+    }
+  }
+
+  conductorButton.addEventListener('click', () => setDrawingConductor(!drawingConductor));
+  document.getElementById('cancel-conductor').addEventListener('click', () => {
+    setDrawingConductor(false);
+    conductorButton.focus();
+  });
+
+  conductorForm.addEventListener('submit', (event) => {
+    event.preventDefault();
+    const values = conductorForm.elements;
+    const height = number(values.height.value);
+    const body = { points: conductorPoints.slice() };
+    if (values.mounting.value === 'wire') {
+      body.points = body.points.map((p) => [p[0], p[1], height]);
+    } else {
+      body.heightAboveRoof = height;
+    }
+    const name = values.name.value.trim();
+    if (name) {
+      body.name = name;
+    }
+    setDrawingConductor(false);
+    values.name.value = '';
+    perform(addConductorCommand(body));
+  });
+
+  conductorSelect.addEventListener('change', () => {
+    deleteConductor.disabled = conductorSelect.value === '';
+  });
+
+  deleteConductor.addEventListener('click', () => {
+    const c = conductors.find((item) => item.id === conductorSelect.value);
+    if (c) {
+      perform(removeConductorCommand(c));
+    }
+  });
+
   // ---- placing a new rod ----
 
   function setPlacing(on) {
@@ -336,6 +456,9 @@ function setUp(root) {
   }
 
   placeButton.addEventListener('click', () => {
+    if (drawingConductor) {
+      setDrawingConductor(false);
+    }
     setPlacing(!placing);
     if (placing) {
       newForm.elements.x.focus();
@@ -370,6 +493,16 @@ function setUp(root) {
       return;
     }
     element.addEventListener('click', (event) => {
+      if (drawingConductor) {
+        const q = svgPoint(event);
+        if (q.y <= frame().drawHeight) {
+          const local = toLocal(q);
+          conductorPoints.push([round(local.x, 2), round(local.y, 2)]);
+          conductorForm.elements.count.value = String(conductorPoints.length);
+          conductorPreview();
+        }
+        return;
+      }
       if (!placing || event.target.closest('circle.rod')) {
         return;
       }

@@ -1,5 +1,6 @@
 package org.lpzplanner.analysis;
 
+import java.net.URI;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.media.Content;
 import io.swagger.v3.oas.annotations.media.Schema;
@@ -10,6 +11,7 @@ import java.util.List;
 import org.lpzplanner.common.Cautions;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.ResponseEntity;
+import org.springframework.web.bind.annotation.DeleteMapping;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -23,7 +25,9 @@ import tools.jackson.databind.json.JsonMapper;
  * JSON API for analyses of a site:
  * {@code POST /api/sites/{id}/analyses} runs one (parameters {@code level}, {@code radius},
  * {@code resolution}, all optional) and {@code GET /api/sites/{id}/analyses/latest} returns the
- * latest. Both answer with the summary, the result GeoJSON and the cautions.
+ * latest. Both answer with the summary, the result GeoJSON and the cautions. With {@code async=true}
+ * the analysis runs in the background: {@code GET .../analyses/jobs/{jobId}} follows it and
+ * {@code DELETE} cancels it.
  */
 @RestController
 @Tag(name = "Analyses", description = "Rolling sphere analyses of a site")
@@ -33,9 +37,11 @@ public class AnalysisApiController {
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private final AnalysisService analyses;
+    private final AnalysisJobs jobs;
 
-    public AnalysisApiController(AnalysisService analyses) {
+    public AnalysisApiController(AnalysisService analyses, AnalysisJobs jobs) {
         this.analyses = analyses;
+        this.jobs = jobs;
     }
 
     /** An analysis with everything a client needs to show it responsibly. */
@@ -47,17 +53,49 @@ public class AnalysisApiController {
         }
     }
 
+    /**
+     * Runs an analysis and answers 201 with it; with {@code async=true} queues it instead and
+     * answers 202 with the job (its address in {@code Location}), or 429 with {@code Retry-After}
+     * when the workers and their queue are full.
+     */
     @Operation(summary = "Analyse a site",
-            description = "Optional parameters level (I to IV, default the site's), radius (metres) and resolution (metres). Answers with the summary, the result GeoJSON and the cautions.")
+            description = "Optional parameters level (I to IV, default the site's), radius (metres) and resolution (metres). Answers with the summary, the result GeoJSON and the cautions. With async=true the analysis is queued and the answer is the job.")
     @ApiResponse(responseCode = "201", description = "The new analysis revision")
+    @ApiResponse(responseCode = "202", description = "Queued (async=true): the job, its address in Location")
+    @ApiResponse(responseCode = "429", description = "Every analysis worker is busy and the queue is full; Retry-After says when to try again", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "400", description = "A setting cannot be used, or the analysis is too large (with a resolution that fits)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping
-    public ResponseEntity<AnalysisView> run(@PathVariable long siteId,
+    public ResponseEntity<?> run(@PathVariable long siteId,
             @RequestParam(required = false) String level, @RequestParam(required = false) String radius,
-            @RequestParam(required = false) String resolution) {
+            @RequestParam(required = false) String resolution, @RequestParam(defaultValue = "false") boolean async) {
+        if (async) {
+            AnalysisJob job = jobs.submit(siteId, level, radius, resolution);
+            return ResponseEntity.accepted()
+                    .location(URI.create("/api/sites/" + siteId + "/analyses/jobs/" + job.id()))
+                    .body(job.snapshot());
+        }
         AnalysisRevision revision = analyses.run(siteId, level, radius, resolution);
         return ResponseEntity.status(HttpStatus.CREATED).body(AnalysisView.of(revision));
+    }
+
+    /** Where a background analysis is: state, stage, share done, and the revision once done. */
+    @Operation(summary = "Follow a background analysis",
+            description = "State (QUEUED, RUNNING, DONE, FAILED, CANCELLED), stage, share done (0..1), the stored revision once done, or the error.")
+    @ApiResponse(responseCode = "200", description = "The job")
+    @ApiResponse(responseCode = "404", description = "No such job for this site", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @GetMapping("/jobs/{jobId}")
+    public AnalysisJob.Snapshot job(@PathVariable long siteId, @PathVariable String jobId) {
+        return jobs.find(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
+    }
+
+    /** Asks a background analysis to stop; nothing of it is stored. Answers with the job. */
+    @Operation(summary = "Cancel a background analysis", description = "A queued job never starts; a running one stops at its next check. Nothing of it is stored.")
+    @ApiResponse(responseCode = "200", description = "The job, CANCELLED or about to be")
+    @ApiResponse(responseCode = "404", description = "No such job for this site", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @DeleteMapping("/jobs/{jobId}")
+    public AnalysisJob.Snapshot cancel(@PathVariable long siteId, @PathVariable String jobId) {
+        return jobs.cancel(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
     }
 
     /** 404 with a JSON message when the site was never analysed. */

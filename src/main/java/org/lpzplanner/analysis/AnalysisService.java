@@ -9,6 +9,8 @@ import java.util.HexFormat;
 import java.util.Map;
 import java.util.Optional;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
+import org.lpzplanner.engine.exposure.AnalysisProgress;
+import org.lpzplanner.engine.exposure.AnalysisState;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.io.SiteDocument;
@@ -35,14 +37,18 @@ public class AnalysisService {
     private final AnalysisRepository analyses;
     private final TransactionTemplate transactions;
     private final Clock clock;
+    private final AnalysisStateCache kept;
+    private final AcceptedItemRepository accepted;
 
     public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
-            TransactionTemplate transactions, Clock clock) {
+            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted) {
         this.sites = sites;
         this.siteRows = siteRows;
         this.analyses = analyses;
         this.transactions = transactions;
         this.clock = clock;
+        this.kept = kept;
+        this.accepted = accepted;
     }
 
     /**
@@ -58,20 +64,37 @@ public class AnalysisService {
      *         deleted while the analysis ran
      */
     public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText) {
+        return run(siteId, levelText, radiusText, resolutionText, AnalysisProgress.NONE);
+    }
+
+    /**
+     * As {@link #run(long, String, String, String)}, reporting to {@code progress}.
+     *
+     * @throws org.lpzplanner.engine.exposure.AnalysisCancelledException when {@code progress} asked
+     *         to stop; nothing is stored then
+     */
+    public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText,
+            AnalysisProgress progress) {
         StoredSite site = sites.get(siteId);
         SphereSpec sphere = sphere(site, levelText, radiusText);
         Double resolution = Settings.resolution(resolutionText);
         SiteDocument document = sites.document(site);
         AnalysisResult result;
         try {
-            result = ExposureAnalysis.analyze(document.site(),
-                    new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE));
+            AnalysisOptions options = new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE);
+            Optional<AnalysisState> previous = kept.closest(site.id(), site.version());
+            AnalysisState state = previous.isPresent()
+                    ? ExposureAnalysis.update(previous.get(), document.site(), options, progress)
+                    : ExposureAnalysis.analyzeKeepingState(document.site(), options, progress);
+            kept.keep(site.id(), site.version(), state);
+            result = state.result();
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
         }
         String geoJson = ResultGeoJson.write(document.site(), result);
         return transactions.execute(status -> {
             var now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
+            Optional<AnalysisRevision> previous = analyses.latest(site.id());
             AnalysisRevision revision = analyses.insert(new AnalysisRevision(0, site.id(),
                     analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), result.resolution(),
                     sha256(site.sourceText()), result.totalExposedRoofArea(), result.totalExposedEdgeLength(),
@@ -80,8 +103,38 @@ public class AnalysisService {
                     new RevisionInputs(site.name(), site.sourceName(), site.sourceText(),
                             result.tolerance()));
             siteRows.touch(site.id(), site.version(), now);
+            previous.ifPresent(p -> carryOverAcceptances(p, revision, now));
             return revision;
         });
+    }
+
+    /**
+     * Checks a site id and settings as {@link #run} would, without analysing.
+     *
+     * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
+     * @throws InvalidInputException when a setting cannot be used
+     */
+    public void check(long siteId, String levelText, String radiusText, String resolutionText) {
+        sphere(sites.get(siteId), levelText, radiusText);
+        Settings.resolution(resolutionText);
+    }
+
+    /**
+     * Accepted review items stay accepted in the new revision where the same item (same key: kind,
+     * owner and geometry to the decimetre) is still exposed; the others are dropped with the old
+     * revision's review.
+     */
+    private void carryOverAcceptances(AnalysisRevision previous, AnalysisRevision next, java.time.Instant now) {
+        Map<String, String> reasons = accepted.reasons(previous.id());
+        if (reasons.isEmpty()) {
+            return;
+        }
+        for (ReviewItems.Item item : ReviewItems.of(next.resultGeoJson())) {
+            String reason = reasons.get(item.key());
+            if (reason != null) {
+                accepted.accept(next.id(), item.key(), reason, now);
+            }
+        }
     }
 
     /** The site's latest revision with its result GeoJSON, empty when it was never analysed. */

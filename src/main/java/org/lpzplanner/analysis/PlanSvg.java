@@ -83,6 +83,14 @@ public final class PlanSvg {
         svg.append(String.format(Locale.ROOT, "<rect x=\"0\" y=\"0\" width=\"%.0f\" height=\"%.0f\" fill=\"#fbfbf8\"/>",
                 WIDTH, drawHeight));
         for (String layer : ResultGeoJson.LAYERS) {
+            if (layer.equals("exposed-edge")) {
+                // names go under the edges, corners and parts, which must stay visible and clickable
+                for (JsonNode f : features) {
+                    if (layer(f).equals("structure")) {
+                        label(svg, f, frame);
+                    }
+                }
+            }
             for (JsonNode f : features) {
                 if (layer(f).equals(layer)) {
                     draw(svg, f, frame, maxHeight);
@@ -91,11 +99,6 @@ public final class PlanSvg {
                         markItem(svg, key, accepted.get(key), labels);
                     }
                 }
-            }
-        }
-        for (JsonNode f : features) {
-            if (layer(f).equals("structure")) {
-                label(svg, f, frame);
             }
         }
         scaleBar(svg, frame, drawHeight, labels);

@@ -12,7 +12,8 @@ import org.springframework.transaction.support.TransactionTemplate;
 /**
  * The review of a site's latest analysis: its exposed edges, corners and facade bands
  * ({@link ReviewItems}) and which of them a designer accepted, with a reason, as needing no
- * air-termination. Acceptances belong to one analysis revision; a new analysis starts a new review.
+ * air-termination. Acceptances belong to one analysis revision; a new analysis takes over those of
+ * the revision before for the items that are still exposed unchanged (see {@link AnalysisService}).
  */
 @Service
 public class ReviewService {

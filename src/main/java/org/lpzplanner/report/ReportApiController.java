@@ -20,8 +20,7 @@ import org.springframework.web.bind.annotation.RestController;
  * 400 for an id that is not a number.
  */
 @RestController
-@Tag(name = "Reports", description = "The printed assessment (PDF) of a stored analysis revision, made from the"
-        + " site file and result the revision kept")
+@Tag(name = "Report", description = "The printed assessment of a stored analysis revision")
 public class ReportApiController {
 
     private final ReportService reports;
@@ -30,18 +29,12 @@ public class ReportApiController {
         this.reports = reports;
     }
 
-    @Operation(summary = "The printed assessment of one revision as PDF",
-            description = "Cover with status and cautions, method and inputs, plan to scale, sections,"
-                    + " schedules and a blank review block; the same revision always prints the same content")
-    @ApiResponse(responseCode = "200", description = "The PDF",
-            content = @Content(mediaType = "application/pdf"))
-    @ApiResponse(responseCode = "400", description = "An id or revision number that is not a whole number",
-            content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No site with this id, or no revision with this number",
-            content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "409", description = "The revision was analysed before revisions kept their site"
-            + " file, and that file is no longer stored",
-            content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @Operation(summary = "The printed assessment as PDF",
+            description = "Plan, sections, schedules, cautions and the review block of one stored revision.")
+    @ApiResponse(responseCode = "200", description = "The PDF")
+    @ApiResponse(responseCode = "400", description = "An id is not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or revision", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The revision's site file is no longer stored", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping(path = "/api/sites/{siteId}/revisions/{revision}/report",
             produces = {MediaType.APPLICATION_PDF_VALUE, MediaType.APPLICATION_JSON_VALUE})
     public ResponseEntity<byte[]> report(@PathVariable long siteId, @PathVariable int revision) {

@@ -38,7 +38,9 @@ import tools.jackson.databind.JsonNode;
  * {@code PUT /api/sites/{id}/rods/{rodId}} moves it ({@code x}, {@code y}) and/or changes its
  * {@code height}; {@code DELETE /api/sites/{id}/rods/{rodId}?version=N} removes it. Each change
  * rewrites the stored file, analyses the site again and answers with the new summary, plan drawing,
- * method, level, radius and cautions. A stale {@code version} answers 409.
+ * method, level, radius and cautions. {@code POST /api/sites/{id}/conductors} adds a roof conductor
+ * or catenary wire and {@code DELETE /api/sites/{id}/conductors/{conductorId}?version=N} removes
+ * one, answering the same way. A stale {@code version} answers 409.
  */
 @RestController
 @Tag(name = "Air-termination", description = "Rods and conductors of a site; each change rewrites the site file and analyses again")
@@ -117,6 +119,79 @@ public class AirTerminationApiController {
         long start = System.nanoTime();
         AirTerminationService.RodView before = parts.removeRod(id, version, rodId);
         return answer(id, rodId, before, start, locale);
+    }
+
+    /** The answer to a conductor change, as {@link Change} for rods. */
+    public record ConductorChange(String conductorId, AirTerminationService.ConductorView before, long version,
+            AnalysisSummary summary, String svg, String basis, String status, List<String> cautions,
+            AirTerminationService.Parts parts, long serverMillis) {
+    }
+
+    /**
+     * Adds a conductor: JSON {@code version}, {@code points} ([[x, y], ...] in local metres with
+     * {@code heightAboveRoof}, or [[x, y, elevation above ground], ...]), optional {@code name} and
+     * {@code id}.
+     */
+    @Operation(summary = "Add a roof conductor or catenary wire",
+            description = "JSON object with version, points ([[x, y], ...] in local metres with heightAboveRoof, or [[x, y, elevation above ground], ...]) and optional name and id. GeoJSON sites only.")
+    @ApiResponse(responseCode = "201", description = "Added; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "Points or heights cannot be used, or the site file cannot hold conductors; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @PostMapping(value = "/conductors", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public ResponseEntity<ConductorChange> addConductor(@PathVariable long id, @RequestBody JsonNode body,
+            Locale locale) {
+        long start = System.nanoTime();
+        String conductorId = parts.addConductor(id, version(body), new AirTerminationService.ConductorInput(
+                text(body, "id"), text(body, "name"), points(body), number(body, "heightAboveRoof")));
+        Change change = answer(id, null, null, start, locale);
+        return ResponseEntity.status(HttpStatus.CREATED)
+                .location(URI.create("/api/sites/" + id + "/conductors/" + conductorId))
+                .body(conductorChange(conductorId, null, change));
+    }
+
+    @Operation(summary = "Delete a conductor", description = "Parameter version is required.")
+    @ApiResponse(responseCode = "200", description = "Deleted; the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "version is missing or not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or conductor", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @DeleteMapping("/conductors/{conductorId}")
+    public ConductorChange removeConductor(@PathVariable long id, @PathVariable String conductorId,
+            @RequestParam Long version, Locale locale) {
+        long start = System.nanoTime();
+        AirTerminationService.ConductorView before = parts.removeConductor(id, version, conductorId);
+        return conductorChange(conductorId, before, answer(id, null, null, start, locale));
+    }
+
+    private static ConductorChange conductorChange(String conductorId, AirTerminationService.ConductorView before,
+            Change c) {
+        return new ConductorChange(conductorId, before, c.version(), c.summary(), c.svg(), c.basis(), c.status(),
+                c.cautions(), c.parts(), c.serverMillis());
+    }
+
+    private static List<double[]> points(JsonNode body) {
+        JsonNode node = body.get("points");
+        if (node == null || !node.isArray()) {
+            throw new InvalidInputException("points", "points is required: a list of [x, y] or [x, y, elevation]"
+                    + " positions in local metres");
+        }
+        List<double[]> out = new java.util.ArrayList<>();
+        for (JsonNode p : node) {
+            if (!p.isArray() || p.size() < 2 || p.size() > 3) {
+                throw new InvalidInputException("points", "point " + (out.size() + 1) + " must be [x, y] or"
+                        + " [x, y, elevation], got " + p);
+            }
+            double[] values = new double[p.size()];
+            for (int k = 0; k < p.size(); k++) {
+                if (!p.get(k).isNumber() || !Double.isFinite(p.get(k).asDouble())) {
+                    throw new InvalidInputException("points", "point " + (out.size() + 1) + " must hold numbers"
+                            + " of metres, got " + p);
+                }
+                values[k] = p.get(k).asDouble();
+            }
+            out.add(values);
+        }
+        return out;
     }
 
     private Change answer(long id, String rodId, AirTerminationService.RodView before, long start, Locale locale) {

@@ -21,7 +21,7 @@ import org.springframework.transaction.annotation.Transactional;
 
 /**
  * Lists the air-termination parts of a stored site and adds, moves and removes its rods by
- * rewriting the stored GeoJSON file (see {@link RodFileEditor}). Every change is read back through
+ * rewriting the stored GeoJSON file (see {@link PartFileEditor}). Every change is read back through
  * the engine's reader before it is stored, so a bad height or position stores nothing; the file it
  * replaces is kept as an earlier file of the site. WKT files cannot hold rods.
  */
@@ -118,7 +118,7 @@ public class AirTerminationService {
             }
             id = "rod-" + n;
         }
-        RodFileEditor editor = new RodFileEditor(site.sourceText(), document.site().rods(), document.projection());
+        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
         editor.add(id, input.name(), input.x(), input.y(), height);
         store(site, editor.text());
         return id;
@@ -143,7 +143,7 @@ public class AirTerminationService {
         SiteDocument document = sites.document(site);
         int index = rodIndex(site, document.site(), rodId);
         RodView before = view(document.site().rods().get(index), document.projection());
-        RodFileEditor editor = new RodFileEditor(site.sourceText(), document.site().rods(), document.projection());
+        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
         editor.change(index, input.x(), input.y(), height);
         store(site, editor.text());
         return before;
@@ -161,10 +161,126 @@ public class AirTerminationService {
         SiteDocument document = sites.document(site);
         int index = rodIndex(site, document.site(), rodId);
         RodView before = view(document.site().rods().get(index), document.projection());
-        RodFileEditor editor = new RodFileEditor(site.sourceText(), document.site().rods(), document.projection());
+        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
         editor.remove(index);
         store(site, editor.text());
         return before;
+    }
+
+    /**
+     * A new conductor: {@code points} in local metres, each [x, y] (then {@code heightAboveRoof},
+     * metres above the surface below, is required) or each [x, y, elevation above ground] (a
+     * catenary wire or any conductor given in 3D).
+     */
+    public record ConductorInput(String id, String name, List<double[]> points, String heightAboveRoof) {
+    }
+
+    /**
+     * Adds a conductor.
+     *
+     * @return the new conductor's id
+     * @throws InvalidInputException when points or heights are missing or unusable, or the file is WKT
+     * @throws org.lpzplanner.engine.io.SiteFormatException when the changed file is not a valid site
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public String addConductor(long siteId, long expectedVersion, ConductorInput input) {
+        StoredSite site = editable(siteId, expectedVersion);
+        List<double[]> points = input.points();
+        if (points == null || points.size() < 2) {
+            throw new InvalidInputException("points", "a conductor needs at least two points");
+        }
+        if (points.size() > MAX_CONDUCTOR_POINTS) {
+            throw new InvalidInputException("points", "a conductor may have at most " + MAX_CONDUCTOR_POINTS + " points");
+        }
+        boolean elevations = points.get(0).length == 3;
+        for (int k = 0; k < points.size(); k++) {
+            double[] p = points.get(k);
+            if (p.length != (elevations ? 3 : 2)) {
+                throw new InvalidInputException("points", "point " + (k + 1) + " has " + p.length + " values; give every"
+                        + " point as [x, y] or every point as [x, y, elevation above ground]");
+            }
+            if (elevations && p[2] < 0) {
+                throw new InvalidInputException("points", "point " + (k + 1) + " lies below the ground (elevation "
+                        + p[2] + " m)");
+            }
+        }
+        BigDecimal heightAboveRoof = null;
+        if (!elevations) {
+            if (input.heightAboveRoof() == null || input.heightAboveRoof().isBlank()) {
+                throw new InvalidInputException("heightAboveRoof", "heightAboveRoof (metres above the surface below) is"
+                        + " required when the points have no elevations");
+            }
+            heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
+        }
+        if (input.name() != null && input.name().strip().length() > SiteService.MAX_NAME_LENGTH) {
+            throw new InvalidInputException("name", "name must be at most " + SiteService.MAX_NAME_LENGTH + " characters");
+        }
+        SiteDocument document = sites.document(site);
+        Set<String> used = usedIds(document.site());
+        String id;
+        if (input.id() != null && !input.id().isBlank()) {
+            id = input.id().strip();
+            if (used.contains(id)) {
+                throw new InvalidInputException("id", "the id \"" + id + "\" is already used in this site");
+            }
+        } else {
+            int n = 1;
+            while (used.contains("conductor-" + n)) {
+                n++;
+            }
+            id = "conductor-" + n;
+        }
+        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(),
+                document.projection());
+        editor.addConductor(id, input.name(), points, heightAboveRoof);
+        store(site, editor.text());
+        return id;
+    }
+
+    /**
+     * Removes a conductor.
+     *
+     * @return the conductor as it was, so that it can be put back
+     * @throws SiteNotFoundException when no site has this id or the site no conductor with this id
+     */
+    @Transactional
+    public ConductorView removeConductor(long siteId, long expectedVersion, String conductorId) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        List<Conductor> conductors = document.site().conductors();
+        int index = -1;
+        for (int i = 0; i < conductors.size(); i++) {
+            if (conductors.get(i).id().equals(conductorId)) {
+                index = i;
+            }
+        }
+        if (index < 0) {
+            throw new SiteNotFoundException(site.id(), "site " + site.id() + " has no conductor \"" + conductorId + "\"");
+        }
+        ConductorView before = parts(siteId).conductors().get(index);
+        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), conductors,
+                document.projection());
+        editor.removeConductor(index);
+        store(site, editor.text());
+        return before;
+    }
+
+    /** Most points one conductor may have. */
+    public static final int MAX_CONDUCTOR_POINTS = 500;
+
+    private static BigDecimal heightAboveSurface(String text) {
+        BigDecimal value;
+        try {
+            value = new BigDecimal(text.strip());
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException("heightAboveRoof", "heightAboveRoof must be a number of metres, got \""
+                    + text + "\"");
+        }
+        if (value.signum() < 0 || value.compareTo(BigDecimal.valueOf(100)) > 0) {
+            throw new InvalidInputException("heightAboveRoof", "heightAboveRoof must be between 0 and 100 m, got " + value);
+        }
+        return value;
     }
 
     private StoredSite editable(long siteId, long expectedVersion) {

@@ -3,21 +3,30 @@ package org.lpzplanner.sites;
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.system.InvalidInputException;
+import org.lpzplanner.system.UploadLimit;
 import org.springframework.http.HttpStatus;
 import org.springframework.web.bind.annotation.ControllerAdvice;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
+import org.springframework.web.multipart.MaxUploadSizeExceededException;
 import org.springframework.web.servlet.ModelAndView;
 
 /**
  * Errors of the site pages shown as pages: an unknown site (or an id that is not a number) gives a
  * 404 page saying so; an unusable analysis setting, or an analysis too large to run, gives a 400
- * page with the reason; an unknown review item gives a 404 page with the reason.
+ * page with the reason; an unknown review item gives a 404 page with the reason; an upload over the
+ * size limit gives a 413 page saying the limit.
  */
 @ControllerAdvice(assignableTypes = {SitePageController.class, SiteActionsPageController.class,
     ReviewPageController.class, SectionPageController.class,
     org.lpzplanner.report.ReportPageController.class})
 public class SitePageErrors {
+
+    private final UploadLimit uploadLimit;
+
+    public SitePageErrors(UploadLimit uploadLimit) {
+        this.uploadLimit = uploadLimit;
+    }
 
     @ExceptionHandler(SiteNotFoundException.class)
     ModelAndView notFound(SiteNotFoundException e) {
@@ -49,6 +58,13 @@ public class SitePageErrors {
     ModelAndView tooLarge(AnalysisTooLargeException e) {
         ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
         page.addObject("reason", e.getMessage());
+        return page;
+    }
+
+    @ExceptionHandler(MaxUploadSizeExceededException.class)
+    ModelAndView uploadTooLarge(MaxUploadSizeExceededException e) {
+        ModelAndView page = new ModelAndView("sites/upload-refused", HttpStatus.CONTENT_TOO_LARGE);
+        page.addObject("reason", uploadLimit.message());
         return page;
     }
 

@@ -2,6 +2,8 @@ package org.lpzplanner.system;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.lpzplanner.analysis.AnalysisBusyException;
+import org.lpzplanner.analysis.AnalysisJobNotFoundException;
 import org.lpzplanner.analysis.ReviewItemNotFoundException;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.report.RevisionInputsMissingException;
@@ -9,6 +11,7 @@ import org.lpzplanner.report.RevisionNotFoundException;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.dao.DuplicateKeyException;
 import org.springframework.dao.OptimisticLockingFailureException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.HttpStatusCode;
@@ -26,12 +29,19 @@ import org.springframework.web.multipart.MultipartException;
  * Turns every failure of the JSON API into a JSON body {@code {"error": "..."}} with a fitting
  * status, never a stack trace: 400 for unusable input (site files also name {@code file},
  * {@code feature}, {@code featureName}, {@code line} and {@code field} where known), 404 for unknown
- * sites and review items, 409 for concurrent changes, 413 for oversized uploads, 500 with a plain message otherwise.
+ * sites, review items and analysis jobs, 409 for concurrent changes, 429 with {@code Retry-After}
+ * when the analysis workers are all busy, 413 for oversized uploads, 500 with a plain message otherwise.
  */
 @RestControllerAdvice(annotations = RestController.class)
 public class ApiErrorHandler {
 
     private static final Logger LOG = LoggerFactory.getLogger(ApiErrorHandler.class);
+
+    private final UploadLimit uploadLimit;
+
+    public ApiErrorHandler(UploadLimit uploadLimit) {
+        this.uploadLimit = uploadLimit;
+    }
 
     @ExceptionHandler(SiteFormatException.class)
     ResponseEntity<Map<String, Object>> siteFormat(SiteFormatException e) {
@@ -70,6 +80,19 @@ public class ApiErrorHandler {
         return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
     }
 
+    @ExceptionHandler(AnalysisJobNotFoundException.class)
+    ResponseEntity<Map<String, Object>> noJob(AnalysisJobNotFoundException e) {
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    }
+
+    @ExceptionHandler(AnalysisBusyException.class)
+    ResponseEntity<Map<String, Object>> busy(AnalysisBusyException e) {
+        Map<String, Object> body = error(e.getMessage());
+        body.put("retryAfterSeconds", e.retryAfterSeconds());
+        return ResponseEntity.status(HttpStatus.TOO_MANY_REQUESTS)
+                .header("Retry-After", Integer.toString(e.retryAfterSeconds())).body(body);
+    }
+
     @ExceptionHandler(RevisionNotFoundException.class)
     ResponseEntity<Map<String, Object>> noRevision(RevisionNotFoundException e) {
         Map<String, Object> body = error(e.getMessage());
@@ -92,7 +115,9 @@ public class ApiErrorHandler {
 
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     ResponseEntity<Map<String, Object>> tooLarge(MaxUploadSizeExceededException e) {
-        return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).body(error("the file is too large to upload"));
+        Map<String, Object> body = error(uploadLimit.message());
+        body.put("field", "file");
+        return ResponseEntity.status(HttpStatus.CONTENT_TOO_LARGE).body(body);
     }
 
     @ExceptionHandler(MultipartException.class)
@@ -100,8 +125,12 @@ public class ApiErrorHandler {
         return ResponseEntity.badRequest().body(error("the upload could not be read as a multipart form"));
     }
 
-    @ExceptionHandler(OptimisticLockingFailureException.class)
-    ResponseEntity<Map<String, Object>> conflict(OptimisticLockingFailureException e) {
+    /**
+     * A stale version, or two saves of one site racing for the same revision or file number (the
+     * database's unique constraints let only the first one in, also across app instances).
+     */
+    @ExceptionHandler({OptimisticLockingFailureException.class, DuplicateKeyException.class})
+    ResponseEntity<Map<String, Object>> conflict(RuntimeException e) {
         return ResponseEntity.status(HttpStatus.CONFLICT).body(error(
                 "the site was changed or removed meanwhile; reload it and try again"));
     }

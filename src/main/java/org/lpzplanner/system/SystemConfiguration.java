@@ -12,4 +12,10 @@ public class SystemConfiguration {
     static DataDirectory dataDirectory() {
         return new DataDirectory();
     }
+
+    /** Migrations run through this strategy so that databases of earlier releases keep starting. */
+    @Bean
+    PortableMigrationUpgrade portableMigrationUpgrade() {
+        return new PortableMigrationUpgrade();
+    }
 }

@@ -132,23 +132,39 @@ class ReviewApiTest {
     }
 
     @Test
+    void acceptancesCarryOverToANewRevisionOnlyForItemsStillExposedTheSameWay() throws Exception {
+        JsonNode before = items().path("items");
+        String first = before.get(0).path("key").asString(), second = before.get(1).path("key").asString();
+        accept(first, "covered by a natural component").andExpect(status().isOk());
+        accept(second, "metal roof edge of sufficient thickness").andExpect(status().isOk());
+        long firstRevision = revisionId();
+
+        analyses.run(siteId, null, null, null); // same inputs: the same items, so both stay accepted
+        assertThat(revisionId()).isNotEqualTo(firstRevision);
+        assertThat(accepted.reasons(revisionId())).containsEntry(first, "covered by a natural component")
+                .containsEntry(second, "metal roof edge of sufficient thickness").hasSize(2);
+        assertThat(items().path("accepted").asInt()).isEqualTo(2);
+
+        analyses.run(siteId, "IV", null, null); // a 60 m sphere: items change where the sphere reaches differently
+        java.util.Set<String> nowExposed = new java.util.HashSet<>();
+        items().path("items").forEach(i -> nowExposed.add(i.path("key").asString()));
+        java.util.Map<String, String> expected = new java.util.LinkedHashMap<>();
+        if (nowExposed.contains(first)) {
+            expected.put(first, "covered by a natural component");
+        }
+        if (nowExposed.contains(second)) {
+            expected.put(second, "metal roof edge of sufficient thickness");
+        }
+        assertThat(accepted.reasons(revisionId())).isEqualTo(expected);
+        // the earlier revisions keep their own acceptances
+        assertThat(accepted.reasons(firstRevision)).hasSize(2);
+    }
+
+    @Test
     void unknownSiteOrNeverAnalysedSiteAnswers404() throws Exception {
         mvc.perform(get("/api/sites/987654/analyses/latest/items")).andExpect(status().isNotFound());
         long fresh = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Not analysed", "II", null).id();
         mvc.perform(get("/api/sites/" + fresh + "/analyses/latest/items")).andExpect(status().isNotFound());
-    }
-
-    @Test
-    void anotherAnalysisStartsAFreshReview() throws Exception {
-        String key = items().path("items").get(0).path("key").asString();
-        accept(key, "covered by a natural component").andExpect(status().isOk());
-
-        analyses.run(siteId, null, null, null);
-
-        JsonNode review = items();
-        assertThat(review.path("accepted").asInt()).isZero();
-        // same inputs, same items: the key of an item does not change between analyses
-        assertThat(review.path("items").get(0).path("key").asString()).isEqualTo(key);
     }
 }

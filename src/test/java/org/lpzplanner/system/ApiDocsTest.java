@@ -58,10 +58,14 @@ class ApiDocsTest {
         assertThat(doc.path("info").path("description").asString()).contains("licensed");
         hasResponses(doc, "/api/sites", "get", List.of("200"));
         hasResponses(doc, "/api/sites", "post", List.of("201", "400", "413"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "202", "400", "404", "429"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "get", List.of("200", "404"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "delete", List.of("200", "404"));
+        hasResponses(doc, "/api/sites/{id}/conductors", "post", List.of("201", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}/conductors/{conductorId}", "delete", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}", "get", List.of("200", "400", "404"));
         hasResponses(doc, "/api/sites/{id}", "patch", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}", "delete", List.of("204", "404", "409"));
-        hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "400", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest/items", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post", List.of("200", "400", "404"));
@@ -73,7 +77,7 @@ class ApiDocsTest {
                 List.of("200", "400", "404", "409"));
 
         assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
-                "Review", "Air-termination", "Risk", "Reports");
+                "Review", "Air-termination", "Risk", "Report");
         assertThat(doc.path("tags").toString()).contains("IEC 62305-2:2010");
 
         JsonNode error = doc.path("components").path("schemas").path("ApiError");

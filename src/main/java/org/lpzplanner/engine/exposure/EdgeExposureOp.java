@@ -23,11 +23,8 @@ final class EdgeExposureOp {
     private EdgeExposureOp() {
     }
 
-    static List<EdgeExposure> edges(ExposureContext ctx) {
-        return ctx.surface.edges().parallelStream().flatMap(e -> edge(ctx, e).stream()).toList();
-    }
-
-    private static List<EdgeExposure> edge(ExposureContext ctx, RoofEdge e) {
+    /** The exposed stretches of one edge, in order along it. */
+    static List<EdgeExposure> edge(ExposureContext ctx, RoofEdge e) {
         Coordinate a = e.p0(), b = e.p1();
         int n = Math.max(1, (int) Math.ceil(e.planLength() / ctx.grid.h()));
         boolean[] exposed = new boolean[n];
@@ -96,16 +93,22 @@ final class EdgeExposureOp {
         return out;
     }
 
-    static List<CornerExposure> corners(ExposureContext ctx) {
+    /** The surface's corners, each place once (the first owner's). */
+    static List<SiteSurface.Corner> uniqueCorners(SiteSurface surface) {
         Map<String, SiteSurface.Corner> unique = new LinkedHashMap<>();
-        for (SiteSurface.Corner c : ctx.surface.corners()) {
+        for (SiteSurface.Corner c : surface.corners()) {
             unique.putIfAbsent(String.format("%.4f|%.4f|%.4f", c.point().x, c.point().y, c.point().getZ()), c);
         }
-        return unique.values().parallelStream()
-                .filter(c -> ctx.surface.topHeight(c.point().x, c.point().y) <= c.point().getZ() + 1e-6)
-                .filter(c -> ctx.isExposed(Target.point(c.point().x, c.point().y), c.point().getZ()))
-                .map(c -> new CornerExposure(c.ownerId(), c.ownerName(), c.point()))
-                .toList();
+        return List.copyOf(unique.values());
+    }
+
+    /** The corner as exposed, or null when it is protected or inside a higher solid. */
+    static CornerExposure corner(ExposureContext ctx, SiteSurface.Corner c) {
+        if (ctx.surface.topHeight(c.point().x, c.point().y) > c.point().getZ() + 1e-6
+                || !ctx.isExposed(Target.point(c.point().x, c.point().y), c.point().getZ())) {
+            return null;
+        }
+        return new CornerExposure(c.ownerId(), c.ownerName(), c.point());
     }
 
     static Coordinate lerp(Coordinate a, Coordinate b, double t) {

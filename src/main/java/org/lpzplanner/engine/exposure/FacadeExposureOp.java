@@ -30,11 +30,8 @@ final class FacadeExposureOp {
     private FacadeExposureOp() {
     }
 
-    static List<FacadeBand> run(ExposureContext ctx) {
-        return ctx.surface.walls().parallelStream().flatMap(w -> wall(ctx, w).stream()).toList();
-    }
-
-    private static List<FacadeBand> wall(ExposureContext ctx, Wall w) {
+    /** The exposed bands of one wall, in order along it. */
+    static List<FacadeBand> wall(ExposureContext ctx, Wall w) {
         double len = w.length();
         List<FacadeBand> out = new ArrayList<>();
         if (len < 1e-6) {

@@ -2,9 +2,7 @@ package org.lpzplanner.engine.exposure;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
-import java.util.stream.IntStream;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.operation.union.UnaryUnionOp;
@@ -34,67 +32,140 @@ final class RoofExposureOp {
     private RoofExposureOp() {
     }
 
-    static List<RoofExposure> run(ExposureContext ctx, Map<String, Set<Integer>> exposedEdgeCells) {
-        return IntStream.range(0, ctx.surface.faces().size()).parallel()
-                .mapToObj(k -> face(ctx, k, exposedEdgeCells.getOrDefault(ctx.surface.faces().get(k).ownerId(), Set.of())))
-                .toList();
+    /** Cell states of a face. */
+    static final byte OUTSIDE = 0, HIDDEN = 1, PROTECTED = 2, EXPOSED = 3;
+
+    /**
+     * Every decision taken for one face: the state of each cell of its bounding cell range
+     * [i0, i1] × [j0, j1] (row by row), the clearance of each protected whole cell (NaN for the
+     * others), and the face's visible part.
+     */
+    record FaceCells(int i0, int j0, int i1, int j1, byte[] state, double[] clearance, Geometry visible,
+            boolean partlyCovered) {
+
+        int index(int i, int j) {
+            return (j - j0) * (i1 - i0 + 1) + (i - i0);
+        }
     }
 
-    private static RoofExposure face(ExposureContext ctx, int k, Set<Integer> edgeCells) {
+    /** A face's decisions and what they add up to. */
+    record FaceResult(FaceCells cells, RoofExposure exposure) {
+    }
+
+    /**
+     * Decides one face. With {@code previous} (the same face's decisions in the analysis before an
+     * edit), only the cells the change window touches, and the cells whose exposed-edge marks
+     * changed, are decided again; the rest are taken over.
+     */
+    static FaceResult face(ExposureContext ctx, int k, Set<Integer> edgeCells, FaceCells previous,
+            Set<Integer> previousEdgeCells, ChangeWindow window) {
         RoofFace face = ctx.surface.faces().get(k);
         PlanPolygon poly = ctx.surface.facePolygon(k);
         Plane plane = face.plane();
         var g = ctx.grid;
         double half = g.h() / 2;
         int i0 = g.column(poly.minX()), i1 = g.column(poly.maxX()), j0 = g.row(poly.minY()), j1 = g.row(poly.maxY());
-        List<Polygon> covers = coveringFaces(ctx, k);
-        Geometry visible = covers.isEmpty() ? face.polygon() : face.polygon().difference(UnaryUnionOp.union(covers));
+        Geometry visible;
+        boolean partlyCovered;
+        if (previous != null) {
+            visible = previous.visible();
+            partlyCovered = previous.partlyCovered();
+        } else {
+            List<Polygon> covers = coveringFaces(ctx, k);
+            partlyCovered = !covers.isEmpty();
+            visible = partlyCovered ? face.polygon().difference(UnaryUnionOp.union(covers)) : face.polygon();
+        }
+        int w = i1 - i0 + 1;
+        byte[] state = new byte[w * (j1 - j0 + 1)];
+        double[] clearance = new double[state.length];
+        java.util.Arrays.fill(clearance, Double.NaN);
+        FaceCells cells = new FaceCells(i0, j0, i1, j1, state, clearance, visible, partlyCovered);
+        for (int j = j0; j <= j1; j++) {
+            for (int i = i0; i <= i1; i++) {
+                int c = cells.index(i, j);
+                double x = g.nodeX(i), y = g.nodeY(j);
+                int gridIndex = j * g.nx() + i;
+                if (previous != null && !window.touchesCell(x, y, half)
+                        && edgeCells.contains(gridIndex) == previousEdgeCells.contains(gridIndex)) {
+                    state[c] = previous.state()[c];
+                    clearance[c] = previous.clearance()[c];
+                    continue;
+                }
+                decideCell(ctx, poly, plane, edgeCells, cells, i, j);
+            }
+        }
+        return new FaceResult(cells, exposure(ctx, k, cells));
+    }
+
+    private static void decideCell(ExposureContext ctx, PlanPolygon poly, Plane plane, Set<Integer> edgeCells, FaceCells cells, int i, int j) {
+        var g = ctx.grid;
+        double half = g.h() / 2;
+        double x = g.nodeX(i), y = g.nodeY(j);
+        int c = cells.index(i, j);
+        boolean centreInside = poly.contains(x, y);
+        if (!centreInside && poly.distanceToBoundary(x, y) > half * Math.sqrt(2)) {
+            return;
+        }
+        if (cells.partlyCovered() && centreInside && ctx.surface.topHeight(x, y) > plane.z(x, y) + 1e-6) {
+            cells.state()[c] = HIDDEN; // inside a higher solid
+            return;
+        }
+        boolean whole = poly.containsSquare(x, y, half);
+        boolean isExposed;
+        if (whole) {
+            isExposed = squareExposed(ctx, plane, x, y, half, i, j);
+        } else if (roofMax(plane, x, y, half) + ExposureContext.MARGIN < ctx.field.cellLower(i, j)) {
+            isExposed = false; // the whole cell, boundary line included, is below the envelope
+        } else {
+            isExposed = edgeCells.contains(j * g.nx() + i) || boundaryExposed(ctx, poly, plane, x, y, half);
+        }
+        cells.state()[c] = isExposed ? EXPOSED : PROTECTED;
+        if (!isExposed && whole) {
+            cells.clearance()[c] = ctx.field.cellLower(i, j) - roofMax(plane, x, y, half);
+        }
+    }
+
+    /** The face's exposed part, areas and least clearance from its cell decisions. */
+    private static RoofExposure exposure(ExposureContext ctx, int k, FaceCells cells) {
+        RoofFace face = ctx.surface.faces().get(k);
+        var g = ctx.grid;
         boolean[] exposed = new boolean[g.nx() * g.ny()];
         int candidates = 0, exposedCount = 0, hidden = 0;
         double minClearance = Double.NaN;
-        for (int j = j0; j <= j1; j++) {
-            for (int i = i0; i <= i1; i++) {
-                double x = g.nodeX(i), y = g.nodeY(j);
-                boolean centreInside = poly.contains(x, y);
-                if (!centreInside && poly.distanceToBoundary(x, y) > half * Math.sqrt(2)) {
-                    continue;
-                }
-                if (!covers.isEmpty() && centreInside && ctx.surface.topHeight(x, y) > plane.z(x, y) + 1e-6) {
+        for (int j = cells.j0(); j <= cells.j1(); j++) {
+            for (int i = cells.i0(); i <= cells.i1(); i++) {
+                int c = cells.index(i, j);
+                byte s = cells.state()[c];
+                if (s == HIDDEN) {
                     hidden++;
-                    continue; // inside a higher solid
-                }
-                candidates++;
-                boolean whole = poly.containsSquare(x, y, half);
-                boolean isExposed;
-                if (whole) {
-                    isExposed = squareExposed(ctx, plane, x, y, half, i, j);
-                } else if (roofMax(plane, x, y, half) + ExposureContext.MARGIN < ctx.field.cellLower(i, j)) {
-                    isExposed = false; // the whole cell, boundary line included, is below the envelope
-                } else {
-                    isExposed = edgeCells.contains(j * g.nx() + i) || boundaryExposed(ctx, poly, plane, x, y, half);
-                }
-                if (isExposed) {
-                    exposed[j * g.nx() + i] = true;
+                } else if (s == EXPOSED) {
+                    candidates++;
                     exposedCount++;
-                } else if (whole) {
-                    double clearance = ctx.field.cellLower(i, j) - roofMax(plane, x, y, half);
-                    minClearance = Double.isNaN(minClearance) ? clearance : Math.min(minClearance, clearance);
+                    exposed[j * g.nx() + i] = true;
+                } else if (s == PROTECTED) {
+                    candidates++;
+                    double clearance = cells.clearance()[c];
+                    if (!Double.isNaN(clearance)) {
+                        minClearance = Double.isNaN(minClearance) ? clearance : Math.min(minClearance, clearance);
+                    }
                 }
             }
         }
+        Geometry visible = cells.visible();
         Geometry exposedArea;
         if (exposedCount == 0) {
             exposedArea = ctx.gf.createPolygon();
         } else if (exposedCount == candidates && hidden == 0) {
             exposedArea = visible;
         } else {
-            exposedArea = new CellRegions(g, ctx.gf).union(exposed, i0, j0, i1, j1).intersection(visible);
+            exposedArea = new CellRegions(g, ctx.gf).union(exposed, cells.i0(), cells.j0(), cells.i1(), cells.j1())
+                    .intersection(visible);
         }
         if (!Double.isNaN(minClearance)) {
             minClearance = Math.max(0, minClearance);
         }
         return new RoofExposure(face.ownerId(), face.ownerName(), face.kind(), face.index(), face.polygon(),
-                plane.slopeFactor(), exposedArea, visible.getArea(), exposedArea.getArea(), minClearance);
+                face.plane().slopeFactor(), exposedArea, visible.getArea(), exposedArea.getArea(), minClearance);
     }
 
     private static double roofMax(Plane plane, double x, double y, double half) {

@@ -28,6 +28,7 @@ final class FeatureBuilder {
     Structure structure(RawFeature feature, String id) {
         PropertyReader properties = properties(feature);
         footprints.requireValid(feature.geometry(), feature.place(), "the footprint");
+        footprints.requireStructureSize(feature.geometry(), feature.place());
         double height = properties.positive("height", "the wall-top height above ground in metres");
         return new Structure(id, name(feature, id), feature.geometry(), height,
                 new RoofReader(properties, feature.place()).read(height, feature.geometry()));

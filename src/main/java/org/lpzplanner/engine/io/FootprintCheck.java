@@ -38,6 +38,36 @@ final class FootprintCheck {
         }
     }
 
+    /**
+     * Requires a structure's footprint to enclose at least {@link SiteLimits#MIN_FOOTPRINT_AREA}: a
+     * smaller one is a unit mistake (most often longitudes and latitudes in a file declared to be in
+     * local metres), not a building.
+     *
+     * @throws SiteFormatException at field {@code geometry}
+     */
+    void requireStructureSize(Geometry footprint, Place place) {
+        double area = footprint.getArea();
+        if (area >= SiteLimits.MIN_FOOTPRINT_AREA) {
+            return;
+        }
+        String hint = projection == null && looksLikeLonLat(footprint)
+                ? "; these positions look like longitudes and latitudes: if they are, remove \"coordinates\":"
+                        + " \"local-metres\" from the file"
+                : "; positions are metres, so check the units";
+        throw place.fail("geometry", "the footprint encloses only "
+                + (area < 0.01 ? "less than 0.01" : Texts.number(area, 2)) + " m²; a structure"
+                + " needs at least " + Texts.number(SiteLimits.MIN_FOOTPRINT_AREA, 1) + " m²" + hint);
+    }
+
+    private static boolean looksLikeLonLat(Geometry footprint) {
+        for (Coordinate c : footprint.getCoordinates()) {
+            if (Math.abs(c.x) > 180 || Math.abs(c.y) > 90) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** A position for messages: local metres, plus lon/lat when the file was in lon/lat. */
     String where(Coordinate local) {
         String text = "x=" + Texts.metres(local.x) + ", y=" + Texts.metres(local.y) + " m";

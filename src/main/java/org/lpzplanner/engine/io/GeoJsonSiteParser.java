@@ -47,6 +47,7 @@ final class GeoJsonSiteParser {
         for (int i = 0; i < features.size(); i++) {
             raw.add(reader.read(features.get(i), i));
         }
+        DuplicateFeatures.reject(raw);
         List<String> ids = FeatureIds.assign(raw);
         LocalProjection projection = null;
         if (lonLat && !raw.isEmpty()) {

@@ -12,6 +12,9 @@ final class SiteLimits {
     /** Largest east-west or north-south extent of a site, metres. */
     static final double MAX_EXTENT = 20_000;
 
+    /** Smallest footprint of a structure, m²: anything smaller is a unit mistake, not a building. */
+    static final double MIN_FOOTPRINT_AREA = 1;
+
     /** Vertices of the regular polygon inscribed in a circle given as centre and radius. */
     static final int CIRCLE_VERTICES = 32;
 

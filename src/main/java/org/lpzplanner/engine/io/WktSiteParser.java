@@ -32,6 +32,7 @@ final class WktSiteParser {
     SiteDocument parse(String text) {
         List<Structure> structures = new ArrayList<>();
         List<SiteExtent.Part> parts = new ArrayList<>();
+        java.util.Map<String, LinePlace> outlines = new java.util.HashMap<>();
         String[] lines = text.split("\\R", -1);
         for (int i = 0; i < lines.length; i++) {
             String line = lines[i].strip();
@@ -41,6 +42,10 @@ final class WktSiteParser {
             LinePlace place = new LinePlace(source, i + 1);
             int n = structures.size() + 1;
             Structure structure = structure(line, place, "S" + n, "Structure " + n);
+            LinePlace earlier = outlines.putIfAbsent(structure.footprint().norm().toText(), place);
+            if (earlier != null) {
+                throw place.fail("geometry", "repeats the outline of " + earlier.label() + "; remove one of them");
+            }
             structures.add(structure);
             parts.add(new SiteExtent.Part(place, structure.footprint().getEnvelopeInternal()));
         }
@@ -83,6 +88,7 @@ final class WktSiteParser {
             throw place.fail("geometry", "is empty; give the outline's corners");
         }
         footprints.requireValid(geometry, place, "the footprint");
+        footprints.requireStructureSize(geometry, place);
         return geometry;
     }
 

@@ -73,7 +73,8 @@ class GeoJsonSiteReadingTest {
                 + rectangle(0, 0, 5, 5) + "}");
         String withPropertyId = feature("'kind':'structure','id':'S1','height':5", rectangle(10, 0, 15, 5));
 
-        Site site = read(local(withMemberId, withPropertyId, building(), building())).site();
+        Site site = read(local(withMemberId, withPropertyId, building(),
+                feature("'kind':'structure','height':10", rectangle(30, 0, 50, 10)))).site();
 
         assertThat(site.structures()).extracting(Structure::id).containsExactly("7", "S1", "S2", "S3");
     }
@@ -167,10 +168,10 @@ class GeoJsonSiteReadingTest {
 
     @Test
     void localMetreFileIsTakenAtItsWordEvenIfItLooksLikeLonLat() {
-        // Declared local metres: the reader does not guess, so a 0.5 m x 0.25 m shed near (8, 50) is fine.
-        SiteDocument document = read(local(feature("'kind':'structure','height':3", rectangle(8, 50, 8.5, 50.25))));
+        // Declared local metres: the reader does not guess, so a 2 m x 1.5 m shed near (8, 50) is fine.
+        SiteDocument document = read(local(feature("'kind':'structure','height':3", rectangle(8, 50, 10, 51.5))));
 
         assertThat(document.projection()).isNull();
-        assertThat(document.site().structures().get(0).footprint().getArea()).isCloseTo(0.125, within(1e-9));
+        assertThat(document.site().structures().get(0).footprint().getArea()).isCloseTo(3.0, within(1e-9));
     }
 }

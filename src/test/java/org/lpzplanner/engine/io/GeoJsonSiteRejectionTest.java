@@ -501,4 +501,57 @@ class GeoJsonSiteRejectionTest {
         assertThat(e.getMessage()).startsWith("site.geojson: line 1, column ").contains("not valid JSON")
                 .doesNotContain("Source:", "REDACTED");
     }
+
+    @Test
+    void lonLatPositionsInALocalMetreFileAreRejectedWithAHint() {
+        // a 20 m x 20 m building written in degrees (about 0.0002 deg at latitude 47) encloses
+        // 4e-8 "square metres" when the file claims local metres
+        SiteFormatException e = rejected(local(structure("Depot", ",'height':6", rectangle(8.5400, 47.3700, 8.5402, 47.3702))));
+
+        assertThat(e.featureIndex()).isZero();
+        assertThat(e.field()).isEqualTo("geometry");
+        assertThat(e.getMessage()).contains("feature 0 (\"Depot\")", "encloses only less than 0.01 m²",
+                "look like longitudes and latitudes", "remove \"coordinates\": \"local-metres\"");
+    }
+
+    @Test
+    void footprintSmallerThanOneSquareMetreIsNotABuilding() {
+        SiteFormatException e = rejected(local(structure("Kiosk", ",'height':3", rectangle(500, 500, 500.5, 500.5))));
+
+        assertThat(e.field()).isEqualTo("geometry");
+        assertThat(e.getMessage()).contains("encloses only 0.25 m²", "at least 1 m²", "check the units");
+    }
+
+    @Test
+    void repeatedFeatureIsRejectedNamingBoth() {
+        String copy = structure("Hall", ",'height':8", rectangle(40, 0, 60, 10));
+        // the same outline starting at another corner is the same geometry
+        String sameRingOtherStart = structure("Hall again", ",'height':9", polygon(ring(60, 10, 40, 10, 40, 0, 60, 0, 60, 10)));
+
+        SiteFormatException e = rejected(local(copy, building(), sameRingOtherStart));
+
+        assertThat(e.featureIndex()).isEqualTo(2);
+        assertThat(e.field()).isEqualTo("geometry");
+        assertThat(e.getMessage()).contains("feature 2 (\"Hall again\")", "repeats feature 0 (\"Hall\")",
+                "kind (structure)");
+    }
+
+    @Test
+    void twoRodsOnTheSamePointAreRejected() {
+        String rod = feature("'kind':'rod','height':2", point(30, 30));
+
+        SiteFormatException e = rejected(local(building(), rod, rod));
+
+        assertThat(e.featureIndex()).isEqualTo(2);
+        assertThat(e.getMessage()).contains("repeats feature 1", "kind (rod)");
+    }
+
+    @Test
+    void overflowingNumberIsNotFinite() {
+        // 1e999 overflows an IEEE 754 double (largest finite about 1.8e308) and reads as Infinity
+        SiteFormatException e = rejected(local(structure("Tower", ",'height':1e999", rectangle(0, 0, 10, 10))));
+
+        assertThat(e.field()).isEqualTo("height");
+        assertThat(e.getMessage()).contains("not a finite number");
+    }
 }

@@ -79,4 +79,24 @@ class WktSiteReadingTest {
         assertThat(e.getMessage()).contains("north-south", "southmost point belongs to line 1",
                 "northmost to line 3");
     }
+
+    @Test
+    void repeatedOutlineIsRejectedNamingBothLines() {
+        // the same square written from another corner is the same outline
+        SiteFormatException e = rejected("POLYGON ((0 0, 5 0, 5 5, 0 5, 0 0)) 3\n"
+                + "POLYGON ((20 0, 25 0, 25 5, 20 5, 20 0)) 3\n"
+                + "POLYGON ((5 5, 0 5, 0 0, 5 0, 5 5)) 4\n");
+
+        assertThat(e.line()).isEqualTo(3);
+        assertThat(e.field()).isEqualTo("geometry");
+        assertThat(e.getMessage()).contains("repeats the outline of line 1");
+    }
+
+    @Test
+    void footprintUnderOneSquareMetreIsRejected() {
+        SiteFormatException e = rejected("POLYGON ((0 0, 0.5 0, 0.5 0.5, 0 0.5, 0 0)) 3\n");
+
+        assertThat(e.field()).isEqualTo("geometry");
+        assertThat(e.getMessage()).contains("encloses only 0.25 m²", "at least 1 m²");
+    }
 }

@@ -5,6 +5,7 @@ import java.math.RoundingMode;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
 import org.lpzplanner.engine.io.LocalProjection;
+import org.lpzplanner.engine.model.Conductor;
 import org.lpzplanner.engine.model.Rod;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
@@ -15,14 +16,16 @@ import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
- * Adds, moves and removes rods in a stored GeoJSON site file. Positions come in local metres and
+ * Adds, moves and removes rods, and adds and removes conductors, in a stored GeoJSON site file.
+ * Positions come in local metres and
  * are written in the file's own coordinates: local metres (to the millimetre) as they are, lon/lat
- * (to 10⁻⁸ degree, about a millimetre) through the site's {@link LocalProjection}. Every rod of the
- * file is given its id explicitly, so that removing one does not renumber the others. All other
+ * (to 10⁻⁸ degree, about a millimetre) through the site's {@link LocalProjection}; conductor
+ * elevations (third values) stay metres above ground. Every rod and conductor of the file is given
+ * its id explicitly, so that removing one does not renumber the others. All other
  * features and members are kept as they are. The result is not checked here; the caller reads it
  * back through the engine's reader before storing it.
  */
-final class RodFileEditor {
+final class PartFileEditor {
 
     private static final JsonMapper JSON = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
 
@@ -32,9 +35,10 @@ final class RodFileEditor {
 
     /**
      * @param rods       the rods the engine read from {@code text}, in file order
+     * @param conductors the conductors the engine read from {@code text}, in file order
      * @param projection the site's projection, or null when the file is in local metres
      */
-    RodFileEditor(String text, List<Rod> rods, LocalProjection projection) {
+    PartFileEditor(String text, List<Rod> rods, List<Conductor> conductors, LocalProjection projection) {
         String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
         JsonNode parsed;
         try {
@@ -48,7 +52,7 @@ final class RodFileEditor {
         this.root = object;
         this.features = array;
         this.projection = projection;
-        int index = 0;
+        int index = 0, conductorIndex = 0;
         for (JsonNode feature : features) {
             if (isRod(feature)) {
                 if (index < rods.size() && feature instanceof ObjectNode f && !f.has("id")
@@ -56,8 +60,55 @@ final class RodFileEditor {
                     f.put("id", rods.get(index).id());
                 }
                 index++;
+            } else if (isConductor(feature)) {
+                if (conductorIndex < conductors.size() && feature instanceof ObjectNode f && !f.has("id")
+                        && !f.path("properties").has("id")) {
+                    f.put("id", conductors.get(conductorIndex).id());
+                }
+                conductorIndex++;
             }
         }
+    }
+
+    /**
+     * Appends a conductor feature: a LineString through {@code points} ([x, y] local metres, or
+     * [x, y, elevation above ground] for every point), following the surface at
+     * {@code heightAboveRoof} when that is given.
+     */
+    void addConductor(String id, String name, List<double[]> points, BigDecimal heightAboveRoof) {
+        ObjectNode feature = features.addObject();
+        feature.put("type", "Feature");
+        feature.put("id", id);
+        ObjectNode properties = feature.putObject("properties");
+        properties.put("kind", "conductor");
+        if (name != null && !name.isBlank()) {
+            properties.put("name", name.strip());
+        }
+        if (heightAboveRoof != null) {
+            properties.put("heightAboveRoof", heightAboveRoof);
+        }
+        ObjectNode geometry = feature.putObject("geometry");
+        geometry.put("type", "LineString");
+        ArrayNode coordinates = geometry.putArray("coordinates");
+        for (double[] p : points) {
+            ArrayNode position = (ArrayNode) point(p[0], p[1]).get("coordinates");
+            if (heightAboveRoof == null) {
+                position.add(round(p[2], 3));
+            }
+            coordinates.add(position);
+        }
+    }
+
+    /** Removes the conductor at this index among the file's conductors. */
+    void removeConductor(int conductorIndex) {
+        int seen = -1;
+        for (int i = 0; i < features.size(); i++) {
+            if (isConductor(features.get(i)) && ++seen == conductorIndex) {
+                features.remove(i);
+                return;
+            }
+        }
+        throw new IllegalArgumentException("no conductor number " + conductorIndex);
     }
 
     /** Appends a rod feature at the end of the file. */
@@ -136,6 +187,10 @@ final class RodFileEditor {
 
     private static boolean isRod(JsonNode feature) {
         return feature instanceof ObjectNode && "rod".equals(feature.path("properties").path("kind").stringValue());
+    }
+
+    private static boolean isConductor(JsonNode feature) {
+        return feature instanceof ObjectNode && "conductor".equals(feature.path("properties").path("kind").stringValue());
     }
 
     private static BigDecimal round(double value, int places) {

@@ -1,0 +1,9 @@
+package org.lpzplanner.analysis;
+
+/** No background analysis with this id is known for the site (never, or forgotten long ago). */
+public final class AnalysisJobNotFoundException extends RuntimeException {
+
+    public AnalysisJobNotFoundException(long siteId, String jobId) {
+        super("no analysis job " + jobId + " for site " + siteId);
+    }
+}

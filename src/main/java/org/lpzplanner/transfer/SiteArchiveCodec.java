@@ -1,0 +1,224 @@
+package org.lpzplanner.transfer;
+
+import static org.lpzplanner.transfer.ArchiveFields.array;
+import static org.lpzplanner.transfer.ArchiveFields.bad;
+import static org.lpzplanner.transfer.ArchiveFields.bool;
+import static org.lpzplanner.transfer.ArchiveFields.instant;
+import static org.lpzplanner.transfer.ArchiveFields.member;
+import static org.lpzplanner.transfer.ArchiveFields.nonBlankText;
+import static org.lpzplanner.transfer.ArchiveFields.nonNegative;
+import static org.lpzplanner.transfer.ArchiveFields.number;
+import static org.lpzplanner.transfer.ArchiveFields.object;
+import static org.lpzplanner.transfer.ArchiveFields.optionalPositive;
+import static org.lpzplanner.transfer.ArchiveFields.text;
+import static org.lpzplanner.transfer.ArchiveFields.whole;
+
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Pattern;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.risk.FireProvisions;
+import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.LocationFactor;
+import org.lpzplanner.engine.risk.SpecialHazard;
+import org.lpzplanner.engine.risk.StructureUse;
+import org.lpzplanner.engine.risk.SurfaceType;
+import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.risk.FlashDensitySource;
+import org.lpzplanner.system.InvalidInputException;
+import tools.jackson.core.JacksonException;
+import tools.jackson.core.StreamReadFeature;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * Writes a {@link SiteArchive} as a site export file (UTF-8 JSON, described in docs/site-export.md)
+ * and reads one back, checking every member; a bad file is refused with the member's path.
+ */
+final class SiteArchiveCodec {
+
+    static final String FORMAT = "lpz-planner-site-export";
+    static final int FORMAT_VERSION = 1;
+
+    private static final JsonMapper JSON = JsonMapper.builder()
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION).build();
+    private static final Pattern SHA256 = Pattern.compile("[0-9a-f]{64}");
+    /** Column widths of the tables the rows go into. */
+    private static final int NAME = 200;
+    private static final int FILE_NAME = 255;
+    private static final int ITEM_KEY = 80;
+    private static final int REASON = 500;
+    private static final int LONG_TEXT = 50_000_000;
+
+    private SiteArchiveCodec() {}
+
+    static byte[] write(SiteArchive archive) {
+        Map<String, Object> document = new LinkedHashMap<>();
+        document.put("format", FORMAT);
+        document.put("formatVersion", FORMAT_VERSION);
+        document.put("site", archive.site());
+        document.put("earlierFiles", archive.earlierFiles());
+        document.put("revisions", archive.revisions());
+        document.put("riskInputs", archive.riskInputs());
+        return JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
+    }
+
+    /** @throws InvalidInputException naming the member at fault */
+    static SiteArchive read(byte[] bytes) {
+        if (bytes == null || bytes.length == 0) {
+            throw new InvalidInputException("file", "site export: the file is empty; nothing was stored");
+        }
+        JsonNode root;
+        try {
+            String text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
+            root = JSON.readTree(text);
+        } catch (CharacterCodingException e) {
+            throw new InvalidInputException("file", "site export: the file is not UTF-8 text; nothing was stored");
+        } catch (JacksonException e) {
+            String where = e.getLocation() == null ? "" : " at line " + e.getLocation().getLineNr() + ", column "
+                    + e.getLocation().getColumnNr();
+            throw new InvalidInputException("file", "site export: the file is not valid JSON" + where
+                    + "; nothing was stored");
+        }
+        if (root == null || !root.isObject()) {
+            throw new InvalidInputException("file", "site export: the file must hold a JSON object with \"format\": \""
+                    + FORMAT + "\"; nothing was stored");
+        }
+        JsonNode format = root.get("format");
+        if (format == null || !format.isString() || !FORMAT.equals(format.stringValue())) {
+            throw bad("format", "must be \"" + FORMAT + "\": this is not a site export of LPZ Planner");
+        }
+        long version = whole(root, "", "formatVersion", 1, Integer.MAX_VALUE);
+        if (version != FORMAT_VERSION) {
+            throw bad("formatVersion", "is " + version + "; this version of LPZ Planner reads version "
+                    + FORMAT_VERSION);
+        }
+        SiteArchive.Site site = site(object(member(root, "", "site"), "site"));
+        JsonNode risk = root.get("riskInputs");
+        return new SiteArchive(site, earlierFiles(array(root, "", "earlierFiles")),
+                revisions(array(root, "", "revisions")),
+                risk == null || risk.isNull() ? null : riskInputs(object(risk, "riskInputs")));
+    }
+
+    private static SiteArchive.Site site(JsonNode node) {
+        String p = "site";
+        return new SiteArchive.Site(nonBlankText(node, p, "name", NAME), level(node, p),
+                optionalPositive(node, p, "customRadius"), nonBlankText(node, p, "fileName", FILE_NAME),
+                nonBlankText(node, p, "fileText", LONG_TEXT), instant(node, p, "createdAt"),
+                instant(node, p, "updatedAt"), whole(node, p, "version", 0, Long.MAX_VALUE));
+    }
+
+    private static List<SiteArchive.EarlierFile> earlierFiles(JsonNode array) {
+        List<SiteArchive.EarlierFile> out = new ArrayList<>();
+        Set<Integer> numbers = new HashSet<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "earlierFiles[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            int number = (int) whole(node, p, "number", 1, Integer.MAX_VALUE);
+            if (!numbers.add(number)) {
+                throw bad(p + ".number", "repeats file number " + number);
+            }
+            out.add(new SiteArchive.EarlierFile(number, nonBlankText(node, p, "fileName", FILE_NAME),
+                    nonBlankText(node, p, "text", LONG_TEXT), instant(node, p, "replacedAt")));
+        }
+        return out;
+    }
+
+    private static List<SiteArchive.Revision> revisions(JsonNode array) {
+        List<SiteArchive.Revision> out = new ArrayList<>();
+        Set<Integer> numbers = new HashSet<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "revisions[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            int revision = (int) whole(node, p, "revision", 1, Integer.MAX_VALUE);
+            if (!numbers.add(revision)) {
+                throw bad(p + ".revision", "repeats revision " + revision);
+            }
+            String sha = text(node, p, "inputsSha256", 64);
+            if (!SHA256.matcher(sha).matches()) {
+                throw bad(p + ".inputsSha256", "must be 64 lower-case hexadecimal digits");
+            }
+            double radius = number(node, p, "sphereRadius");
+            double resolution = number(node, p, "resolution");
+            if (radius <= 0 || resolution <= 0) {
+                throw bad(p + (radius <= 0 ? ".sphereRadius" : ".resolution"), "must be positive");
+            }
+            out.add(new SiteArchive.Revision(revision, level(node, p), radius, resolution, sha,
+                    nonNegative(node, p, "exposedRoofArea"), nonNegative(node, p, "exposedEdgeLength"),
+                    (int) whole(node, p, "exposedCorners", 0, Integer.MAX_VALUE),
+                    (int) whole(node, p, "facadeBands", 0, Integer.MAX_VALUE),
+                    nonNegative(node, p, "protectedGroundArea"), bool(node, p, "fullyProtected"),
+                    nonBlankText(node, p, "resultGeoJson", LONG_TEXT),
+                    whole(node, p, "engineMillis", 0, Long.MAX_VALUE), instant(node, p, "createdAt"),
+                    accepted(array(node, p, "accepted"), p + ".accepted"), optionalText(node, p, "siteName", NAME),
+                    optionalText(node, p, "sourceName", FILE_NAME), optionalText(node, p, "sourceText", LONG_TEXT),
+                    optionalPositive(node, p, "tolerance")));
+        }
+        return out;
+    }
+
+    private static List<SiteArchive.AcceptedItem> accepted(JsonNode array, String path) {
+        List<SiteArchive.AcceptedItem> out = new ArrayList<>();
+        Set<String> keys = new HashSet<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = path + "[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            String key = nonBlankText(node, p, "key", ITEM_KEY);
+            if (!keys.add(key)) {
+                throw bad(p + ".key", "repeats item " + key);
+            }
+            out.add(new SiteArchive.AcceptedItem(key, nonBlankText(node, p, "reason", REASON),
+                    instant(node, p, "createdAt")));
+        }
+        return out;
+    }
+
+    private static SiteArchive.RiskInputs riskInputs(JsonNode node) {
+        String p = "riskInputs";
+        JsonNode lines = node.get("lineCount");
+        return new SiteArchive.RiskInputs(choice(node, p, "flashDensitySource", FlashDensitySource.class),
+                optionalPositive(node, p, "flashDensity"), optionalPositive(node, p, "thunderstormDays"),
+                node.hasNonNull("locationFactor") ? choice(node, p, "locationFactor", LocationFactor.class) : null,
+                choice(node, p, "surfaceType", SurfaceType.class), choice(node, p, "fireRisk", FireRisk.class),
+                choice(node, p, "fireProvisions", FireProvisions.class),
+                choice(node, p, "specialHazard", SpecialHazard.class),
+                choice(node, p, "structureUse", StructureUse.class),
+                choice(node, p, "touchStep", TouchStepProtection.class), nonNegative(node, p, "personsInZone"),
+                nonNegative(node, p, "personsTotal"), nonNegative(node, p, "hoursPerYear"),
+                lines == null || lines.isNull() ? null : (int) whole(node, p, "lineCount", 0, 1000),
+                optionalPositive(node, p, "lineLength"), instant(node, p, "updatedAt"));
+    }
+
+    private static <E extends Enum<E>> String choice(JsonNode node, String path, String name, Class<E> choices) {
+        String value = text(node, path, name, 40);
+        try {
+            return Enum.valueOf(choices, value).name();
+        } catch (IllegalArgumentException e) {
+            throw bad(path + "." + name, "must be one of " + java.util.Arrays.toString(choices.getEnumConstants())
+                    + ", got \"" + value + "\"");
+        }
+    }
+
+    private static String optionalText(JsonNode node, String path, String name, int maxLength) {
+        JsonNode value = node.get(name);
+        return value == null || value.isNull() ? null : text(node, path, name, maxLength);
+    }
+
+    private static String level(JsonNode node, String path) {
+        String value = text(node, path, "level", 3);
+        try {
+            return ProtectionLevel.valueOf(value).name();
+        } catch (IllegalArgumentException e) {
+            throw bad(path + ".level", "must be one of I, II, III, IV, got \"" + value + "\"");
+        }
+    }
+}

@@ -1,0 +1,54 @@
+package org.lpzplanner.transfer;
+
+import org.lpzplanner.engine.io.SiteFormatException;
+import org.lpzplanner.sites.SiteFiles;
+import org.lpzplanner.sites.SiteNotFoundException;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+
+/**
+ * Exports a whole site as one file and imports such a file as a new site. An import is one
+ * transaction: a file that fails any check, or a failure half-way, stores nothing.
+ */
+@Service
+public class SiteTransferService {
+
+    /** A site export ready to download. */
+    public record ExportFile(String fileName, byte[] content) {
+    }
+
+    private final SiteArchiveRepository archives;
+
+    public SiteTransferService(SiteArchiveRepository archives) {
+        this.archives = archives;
+    }
+
+    /** @throws SiteNotFoundException when no site has this id */
+    @Transactional(readOnly = true)
+    public ExportFile export(long siteId) {
+        SiteArchive archive = archives.read(siteId).orElseThrow(() -> new SiteNotFoundException(siteId));
+        return new ExportFile(exportName(archive.site().fileName()), SiteArchiveCodec.write(archive));
+    }
+
+    /**
+     * Stores the site of an export file as a new site with all its earlier files, revisions and
+     * accepted items, and returns the new site's id.
+     *
+     * @throws InvalidInputException when the file is not a usable site export, naming the member
+     * @throws SiteFormatException   when the site file inside it is not a valid site
+     */
+    @Transactional
+    public long importSite(byte[] content) {
+        SiteArchive archive = SiteArchiveCodec.read(content);
+        SiteFiles.read(archive.site().fileText(), archive.site().fileName());
+        return archives.insert(archive);
+    }
+
+    /** "harbour.geojson" gives "harbour.site-export.json". */
+    static String exportName(String siteFileName) {
+        int dot = siteFileName.lastIndexOf('.');
+        String base = dot > 0 ? siteFileName.substring(0, dot) : siteFileName;
+        return base + ".site-export.json";
+    }
+}

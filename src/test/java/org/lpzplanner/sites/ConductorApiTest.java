@@ -1,0 +1,138 @@
+package org.lpzplanner.sites;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.model.Conductor;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.mock.web.MockMultipartFile;
+import org.springframework.test.web.servlet.MockMvc;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/** Adding and removing roof conductors and catenary wires through the JSON API. */
+@SpringBootTest
+@AutoConfigureMockMvc
+class ConductorApiTest {
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
+
+    @Autowired
+    MockMvc mvc;
+
+    @Autowired
+    SiteService sites;
+
+    private long upload(MockMultipartFile file) throws Exception {
+        String body = mvc.perform(multipart("/api/sites").file(file).param("level", "II"))
+                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
+        long id = JSON.readTree(body).path("id").asLong();
+        mvc.perform(post("/api/sites/" + id + "/analyses")).andExpect(status().isCreated());
+        return id;
+    }
+
+    private long warehouse() throws Exception {
+        return upload(SiteApiTest.sample("harbour-warehouse.geojson"));
+    }
+
+    private static String json(String text) {
+        return text.replace('\'', '"');
+    }
+
+    private JsonNode add(long id, String fields, int status) throws Exception {
+        String body = mvc.perform(post("/api/sites/" + id + "/conductors").contentType(MediaType.APPLICATION_JSON)
+                .content(json("{'version': " + sites.get(id).version() + ", " + fields + "}")))
+                .andExpect(status().is(status)).andReturn().getResponse().getContentAsString();
+        return JSON.readTree(body);
+    }
+
+    private List<Conductor> conductors(long id) {
+        return sites.document(sites.get(id)).site().conductors();
+    }
+
+    @Test
+    void aRoofConductorAlongTheMiddleOfTheWarehouseRoofNarrowsItsExposedArea() throws Exception {
+        long id = warehouse();
+        double before = add(id, "'points': [[20, 20], [60, 20]], 'heightAboveRoof': '0.5', 'name': 'Middle line'", 201)
+                .path("summary").path("exposedRoofArea").asDouble();
+        // the answer is after the change; compare with the site without it
+        JsonNode removed = JSON.readTree(mvc.perform(delete("/api/sites/" + id + "/conductors/conductor-1")
+                .param("version", Long.toString(sites.get(id).version()))).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsString());
+        double without = removed.path("summary").path("exposedRoofArea").asDouble();
+        assertThat(removed.path("before").path("name").asString()).isEqualTo("Middle line");
+        assertThat(removed.path("parts").path("conductors").size()).isZero();
+        assertThat(conductors(id)).isEmpty();
+        // a conductor 0.5 m above a flat roof keeps a 30 m sphere off a strip of half-width
+        // sqrt(2Rh - h^2) = sqrt(29.75) ~ 5.45 m on each side (circle geometry), so the exposed area shrinks
+        assertThat(before).isLessThan(without);
+    }
+
+    @Test
+    void aCatenaryWireKeepsItsElevationsAndIsListedWithThePartsAndInTheFile() throws Exception {
+        long id = warehouse();
+        JsonNode answer = add(id, "'points': [[-5, 20, 16], [85, 20, 16.5]], 'name': 'Wire'", 201);
+        assertThat(answer.path("conductorId").asString()).isEqualTo("conductor-1");
+        assertThat(answer.path("cautions").size()).isPositive();
+        JsonNode listed = answer.path("parts").path("conductors").get(0);
+        assertThat(listed.path("path").get(1).get(2).asDouble()).isEqualTo(16.5);
+        Conductor stored = conductors(id).get(0);
+        assertThat(stored.followsSurface()).isFalse();
+        assertThat(stored.path()).extracting(Coordinate::getZ).containsExactly(16.0, 16.5);
+        assertThat(stored.path().get(0).x).isCloseTo(-5, within(0.001));
+        assertThat(sites.fileVersions(id)).as("the file before is kept").hasSize(1);
+        // a second one gets the next id
+        assertThat(add(id, "'points': [[0, 0, 12], [0, 40, 12]]", 201).path("conductorId").asString())
+                .isEqualTo("conductor-2");
+    }
+
+    @Test
+    void unusablePointsOrHeightsAnswer400NamingTheFieldAndStoreNothing() throws Exception {
+        long id = warehouse();
+        long version = sites.get(id).version();
+        add(id, "'points': [[20, 20]], 'heightAboveRoof': 0.1", 400);
+        assertThat(add(id, "'points': [[20, 20], [30, 20, 12]], 'heightAboveRoof': 0.1", 400).path("field").asString())
+                .isEqualTo("points");
+        assertThat(add(id, "'points': [[20, 20], [30, 20]]", 400).path("field").asString()).isEqualTo("heightAboveRoof");
+        assertThat(add(id, "'points': [[20, 20], [30, 20]], 'heightAboveRoof': -1", 400).path("field").asString())
+                .isEqualTo("heightAboveRoof");
+        assertThat(add(id, "'points': [[20, 20, -2], [30, 20, 12]]", 400).path("error").asString()).contains("below the ground");
+        assertThat(add(id, "'points': [[20, 'a'], [30, 20]], 'heightAboveRoof': 0.1", 400).path("field").asString())
+                .isEqualTo("points");
+        assertThat(add(id, "'heightAboveRoof': 0.1", 400).path("field").asString()).isEqualTo("points");
+        assertThat(sites.get(id).version()).isEqualTo(version);
+        assertThat(conductors(id)).isEmpty();
+        assertThat(sites.fileVersions(id)).isEmpty();
+    }
+
+    @Test
+    void staleVersionsUnknownSitesAndUnknownConductorsAreRefused() throws Exception {
+        long id = warehouse();
+        mvc.perform(post("/api/sites/" + id + "/conductors").contentType(MediaType.APPLICATION_JSON)
+                .content(json("{'version': 999, 'points': [[0, 0, 12], [0, 40, 12]]}"))).andExpect(status().isConflict());
+        mvc.perform(post("/api/sites/987654/conductors").contentType(MediaType.APPLICATION_JSON)
+                .content(json("{'version': 1, 'points': [[0, 0, 12], [0, 40, 12]]}"))).andExpect(status().isNotFound());
+        mvc.perform(delete("/api/sites/" + id + "/conductors/no-such").param("version", Long.toString(sites.get(id).version())))
+                .andExpect(status().isNotFound()).andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("no-such")));
+        assertThat(conductors(id)).isEmpty();
+    }
+
+    @Test
+    void aWktSiteCannotHoldConductors() throws Exception {
+        long id = upload(new MockMultipartFile("file", "block.wkt", "text/plain",
+                "POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n".getBytes(StandardCharsets.UTF_8)));
+        assertThat(add(id, "'points': [[0, 0, 12], [0, 10, 12]]", 400).path("field").asString()).isEqualTo("file");
+    }
+}

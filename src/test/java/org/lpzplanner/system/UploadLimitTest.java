@@ -1,0 +1,71 @@
+package org.lpzplanner.system;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.ByteArrayOutputStream;
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.lpzplanner.sites.SiteService;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.test.web.server.LocalServerPort;
+
+/**
+ * Uploads over the size limit, through the real servlet container: the app answers 413 with the
+ * limit, as JSON for the API and as a page for the forms, and stores nothing.
+ */
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+class UploadLimitTest {
+
+    @LocalServerPort
+    int port;
+
+    @Autowired
+    SiteService sites;
+
+    private HttpResponse<String> post(String path, int megabytes) throws Exception {
+        String boundary = "lpz-limit";
+        ByteArrayOutputStream body = new ByteArrayOutputStream();
+        body.write(("--" + boundary + "\r\nContent-Disposition: form-data; name=\"file\"; filename=\"big.geojson\"\r\n"
+                + "Content-Type: application/geo+json\r\n\r\n").getBytes(StandardCharsets.UTF_8));
+        byte[] filler = new byte[megabytes * 1024 * 1024];
+        Arrays.fill(filler, (byte) ' ');
+        body.write(filler);
+        body.write(("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8));
+        return HttpClient.newHttpClient().send(HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + port + path))
+                .header("Content-Type", "multipart/form-data; boundary=" + boundary)
+                .POST(HttpRequest.BodyPublishers.ofByteArray(body.toByteArray())).build(),
+                HttpResponse.BodyHandlers.ofString());
+    }
+
+    @ParameterizedTest
+    @CsvSource({"/api/sites, 12", "/api/sites, 40", "/api/sites/import, 12"})
+    void apiUploadOverTheLimitAnswers413WithTheLimit(String path, int megabytes) throws Exception {
+        long before = sites.count();
+        HttpResponse<String> r = post(path, megabytes);
+
+        assertThat(r.statusCode()).isEqualTo(413);
+        assertThat(r.headers().firstValue("Content-Type")).hasValueSatisfying(t -> assertThat(t).contains("json"));
+        assertThat(r.body()).contains("\"field\":\"file\"", "larger than the upload limit of 10 MB",
+                "nothing was stored");
+        assertThat(sites.count()).isEqualTo(before);
+    }
+
+    @ParameterizedTest
+    @CsvSource({"/sites, 12", "/sites/import, 12"})
+    void formUploadOverTheLimitShowsAPageWithTheLimit(String path, int megabytes) throws Exception {
+        long before = sites.count();
+        HttpResponse<String> r = post(path, megabytes);
+
+        assertThat(r.statusCode()).isEqualTo(413);
+        assertThat(r.body()).contains("id=\"upload-refused\"", "larger than the upload limit of 10 MB")
+                .doesNotContain("Exception");
+        assertThat(sites.count()).isEqualTo(before);
+    }
+}

@@ -1,0 +1,190 @@
+package org.lpzplanner.transfer;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.header;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.sites.AirTerminationService;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.sites.StructureCorrection;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.jdbc.core.simple.JdbcClient;
+import org.springframework.mock.web.MockMultipartFile;
+import org.springframework.test.web.servlet.MockMvc;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ObjectNode;
+
+@SpringBootTest
+@AutoConfigureMockMvc
+class SiteTransferTest {
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
+
+    @Autowired
+    MockMvc mvc;
+    @Autowired
+    SiteService sites;
+    @Autowired
+    AnalysisService analyses;
+    @Autowired
+    AirTerminationService parts;
+    @Autowired
+    ReviewService reviews;
+    @Autowired
+    JdbcClient jdbc;
+
+    /** A site with an added rod, a corrected structure (two earlier files), two revisions and an accepted item. */
+    private long workedSite() throws Exception {
+        StoredSite site = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Quay shed \u00e9\u00df\"<x>", "III", null);
+        analyses.run(site.id(), null, null, "2");
+        parts.addRod(site.id(), sites.get(site.id()).version(),
+                new AirTerminationService.RodInput(null, "North rod", 3.0, 4.0, "2.5"));
+        sites.correctStructure(site.id(), sites.get(site.id()).version(),
+                new StructureCorrection(0, "9.5", null, null, null, null));
+        analyses.run(site.id(), null, null, "2");
+        String key = reviews.latest(site.id()).orElseThrow().items().get(0).key();
+        reviews.accept(site.id(), key, "covered by a natural component (steel gutter)");
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put("/api/sites/" + site.id()
+                        + "/risk").contentType(org.springframework.http.MediaType.APPLICATION_JSON)
+                        .content("{\"flashDensity\": \"4\", \"location\": \"surrounded_by_higher\", \"lineCount\": 2}"))
+                .andExpect(status().isOk());
+        return site.id();
+    }
+
+    private byte[] export(long id) throws Exception {
+        return mvc.perform(get("/api/sites/" + id + "/export")).andExpect(status().isOk())
+                .andExpect(header().string("Content-Disposition", org.hamcrest.Matchers.containsString(
+                        "harbour-warehouse.site-export.json")))
+                .andReturn().getResponse().getContentAsByteArray();
+    }
+
+    private long importFile(byte[] content) throws Exception {
+        String body = mvc.perform(multipart("/api/sites/import").file(new MockMultipartFile("file", "x.json",
+                        "application/json", content)))
+                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
+        return JSON.readTree(body).path("id").asLong();
+    }
+
+    private long rows() {
+        return jdbc.sql("SELECT (SELECT COUNT(*) FROM sites) + (SELECT COUNT(*) FROM site_file_versions)"
+                + " + (SELECT COUNT(*) FROM analysis_revisions) + (SELECT COUNT(*) FROM accepted_items)"
+                + " + (SELECT COUNT(*) FROM site_risk_inputs)")
+                .query(Long.class).single();
+    }
+
+    @Test
+    void exportedSiteImportsBackUnchanged() throws Exception {
+        long id = workedSite();
+        byte[] first = export(id);
+        JsonNode doc = JSON.readTree(first);
+        assertThat(doc.path("earlierFiles")).hasSize(2);
+        assertThat(doc.path("revisions")).hasSize(2);
+        assertThat(doc.path("revisions").get(1).path("accepted")).hasSize(1);
+        assertThat(doc.path("site").path("fileText").stringValue()).contains("North rod");
+        assertThat(doc.path("riskInputs").path("flashDensity").asDouble()).isEqualTo(4.0);
+        assertThat(doc.path("revisions").get(1).path("sourceText").stringValue()).contains("North rod");
+
+        long copy = importFile(first);
+        assertThat(copy).isNotEqualTo(id);
+        byte[] second = export(copy);
+        // byte-for-byte equal: the export holds no database ids, so the imported site is the same site
+        assertThat(new String(second, StandardCharsets.UTF_8)).isEqualTo(new String(first, StandardCharsets.UTF_8));
+        assertThat(sites.get(copy).sourceText()).isEqualTo(sites.get(id).sourceText());
+        assertThat(reviews.latest(copy).orElseThrow().acceptedCount()).isEqualTo(1);
+        mvc.perform(get("/api/sites/" + copy + "/file/versions/2")).andExpect(status().isOk());
+    }
+
+    @Test
+    void importFormOpensTheNewSiteAndTheListLinksTheExport() throws Exception {
+        long id = workedSite();
+        byte[] file = export(id);
+        String location = mvc.perform(multipart("/sites/import").file(new MockMultipartFile("file", "a.json",
+                        "application/json", file)))
+                .andExpect(status().is3xxRedirection()).andReturn().getResponse().getRedirectedUrl();
+        assertThat(location).matches("/sites/\\d+");
+        mvc.perform(get("/")).andExpect(status().isOk())
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
+                        .string(org.hamcrest.Matchers.containsString("/api/sites/" + id + "/export")));
+        mvc.perform(get("/sites/" + id)).andExpect(status().isOk())
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
+                        .string(org.hamcrest.Matchers.containsString("id=\"site-export\"")));
+    }
+
+    @Test
+    void badImportFilesAreRefusedByMemberAndStoreNothing() throws Exception {
+        long id = workedSite();
+        ObjectNode good = (ObjectNode) JSON.readTree(export(id));
+        long before = rows();
+
+        refused("{not json".getBytes(StandardCharsets.UTF_8), "file", "not valid JSON at line 1");
+        refused("[]".getBytes(StandardCharsets.UTF_8), "file", "JSON object");
+        ObjectNode wrongFormat = good.deepCopy();
+        wrongFormat.put("format", "something-else");
+        refused(bytes(wrongFormat), "format", "not a site export");
+        ObjectNode newer = good.deepCopy();
+        newer.put("formatVersion", 2);
+        refused(bytes(newer), "formatVersion", "reads version 1");
+        ObjectNode noText = good.deepCopy();
+        ((ObjectNode) noText.get("site")).remove("fileText");
+        refused(bytes(noText), "site.fileText", "is missing");
+        ObjectNode badLevel = good.deepCopy();
+        ((ObjectNode) badLevel.get("revisions").get(1)).put("level", "V");
+        refused(bytes(badLevel), "revisions[1].level", "one of I, II, III, IV");
+        ObjectNode repeated = good.deepCopy();
+        ((ObjectNode) repeated.get("revisions").get(1)).put("revision", 1);
+        refused(bytes(repeated), "revisions[1].revision", "repeats revision 1");
+        ObjectNode infinite = good.deepCopy();
+        ((ObjectNode) infinite.get("revisions").get(0)).put("sphereRadius", "Infinity");
+        refused(bytes(infinite), "revisions[0].sphereRadius", "finite number");
+        ObjectNode badTime = good.deepCopy();
+        ((ObjectNode) badTime.get("revisions").get(1).get("accepted").get(0)).put("createdAt", "yesterday");
+        refused(bytes(badTime), "revisions[1].accepted[0].createdAt", "UTC time");
+        ObjectNode badRisk = good.deepCopy();
+        ((ObjectNode) badRisk.get("riskInputs")).put("fireRisk", "EXTREME");
+        refused(bytes(badRisk), "riskInputs.fireRisk", "must be one of");
+
+        // the site file inside is checked like an upload: the engine's reader names the feature
+        ObjectNode badSiteFile = good.deepCopy();
+        ((ObjectNode) badSiteFile.get("site")).put("fileText",
+                good.get("site").get("fileText").stringValue().replaceFirst("\"height\"\\s*:\\s*[0-9.]+", "\"height\": -3"));
+        String answer = mvc.perform(multipart("/api/sites/import").file(new MockMultipartFile("file", "x.json",
+                        "application/json", bytes(badSiteFile))))
+                .andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("height"))
+                .andReturn().getResponse().getContentAsString();
+        assertThat(answer).contains("harbour-warehouse.geojson");
+
+        mvc.perform(multipart("/sites/import").file(new MockMultipartFile("file", "x.json", "application/json",
+                        bytes(repeated))))
+                .andExpect(status().isBadRequest())
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
+                        .string(org.hamcrest.Matchers.containsString("repeats revision 1")));
+        assertThat(rows()).isEqualTo(before);
+    }
+
+    private static byte[] bytes(JsonNode node) {
+        return JSON.writeValueAsBytes(node);
+    }
+
+    private void refused(byte[] content, String field, String message) throws Exception {
+        mvc.perform(multipart("/api/sites/import").file(new MockMultipartFile("file", "x.json", "application/json",
+                        content)))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.field").value(field))
+                .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString(message)))
+                .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("nothing was stored")));
+    }
+}
