@@ -107,6 +107,11 @@ function setUp(root) {
       const value = data.summary[cell.dataset.summary];
       cell.textContent = typeof value === 'number' && !Number.isInteger(value) ? formatNumber(value) : String(value);
     });
+    const printRevision = document.getElementById('print-revision');
+    if (printRevision && Number.isInteger(data.summary.revision)) {
+      printRevision.href = printRevision.href.replace(/\/revisions\/\d+\/report$/,
+        '/revisions/' + data.summary.revision + '/report');
+    }
     setParts(data.parts);
     bindDrawing();
     if (hadFocus && selectedId) {

@@ -21,6 +21,10 @@ final class PdfFonts {
     static final String FONT_RESOURCE = "/org/apache/pdfbox/resources/ttf/LiberationSans-Regular.ttf";
     static final char MISSING = '?';
 
+    /** Characters the font lacks with a near one it has: superscript and other minus signs. */
+    private static final Map<Integer, Integer> NEAREST = Map.of(0x207B, (int) '-', 0x2212, (int) '-',
+            0x2010, (int) '-', 0x2011, (int) '-');
+
     final PDType0Font font;
     private final Map<Integer, Boolean> hasGlyph = new HashMap<>();
     private final Map<Integer, Float> advance = new HashMap<>();
@@ -68,6 +72,8 @@ final class PdfFonts {
                 out.append(' ');
             } else if (hasGlyph.computeIfAbsent(cp, this::lookUp)) {
                 out.appendCodePoint(cp);
+            } else if (NEAREST.containsKey(cp) && hasGlyph.computeIfAbsent(NEAREST.get(cp), this::lookUp)) {
+                out.appendCodePoint(NEAREST.get(cp));
             } else {
                 out.append(MISSING);
             }

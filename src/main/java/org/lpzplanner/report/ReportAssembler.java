@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Locale;
 import org.lpzplanner.analysis.SiteSection;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.engine.envelope.EnvelopeField;
 import org.lpzplanner.engine.envelope.EnvelopeOp;
 import org.lpzplanner.engine.geom.SiteSurface;
@@ -31,6 +32,9 @@ public final class ReportAssembler {
     /** Standard and edition the method follows. */
     public static final String STANDARD = "IEC 62305-3:2010, rolling sphere method (5.2.2, Table 2, Annex A)";
 
+    /** Heading of the sections that do not belong to the revision. */
+    public static final String APPENDIX = "Appendix: as at printing";
+
     private static final DateTimeFormatter DATE = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
 
@@ -49,6 +53,14 @@ public final class ReportAssembler {
      *              has it (the command line, right after analysing), or null to compute it
      */
     public static ReportContent assemble(ReportSource source, EnvelopeField field) {
+        return assemble(source, field, List.of());
+    }
+
+    /**
+     * Assembles a report with sections other features supply as plain tables (for example the risk
+     * estimate), printed after the schedules.
+     */
+    public static ReportContent assemble(ReportSource source, EnvelopeField field, List<ReportSection> more) {
         Site site = SiteFiles.read(source.sourceText(), source.sourceName()).site();
         SiteSurface surface = SiteSurfaceBuilder.build(site);
         EnvelopeField envelope = field != null ? field
@@ -63,6 +75,16 @@ public final class ReportAssembler {
         blocks.add(new ReportBlock.Heading("Schedules", 1));
         for (ReportPart part : ReportParts.SCHEDULES) {
             blocks.addAll(part.blocks(facts));
+        }
+        if (!more.isEmpty()) {
+            blocks.add(new ReportBlock.Heading(APPENDIX, 1));
+            blocks.add(new ReportBlock.Paragraph("What follows comes from the site's data as it stands at printing,"
+                    + " not from the analysis revision: it can differ when the same revision is printed again after"
+                    + " those data changed."));
+        }
+        for (ReportSection section : more) {
+            blocks.add(new Schedule(section.title(), section.columns(),
+                    section.columns().stream().map(c -> 1.0).toList(), section.rows(), section.notes()));
         }
         blocks.add(new ReportBlock.Heading("Review and approval", 1));
         blocks.add(reviewBlock());

@@ -3,9 +3,11 @@ package org.lpzplanner.report;
 import java.util.List;
 
 /**
- * The schedules and sections printed after the drawings, in order. A new schedule (for example the
- * bill of quantities) or section (for example the risk estimate) is one more entry here: a
- * {@link ReportPart} that reads the {@link ReportFacts} and returns its {@link Schedule}s.
+ * The schedules and sections printed after the drawings, in order. A new schedule built from the
+ * revision (for example the bill of quantities) is one more entry here: a {@link ReportPart} that
+ * reads the {@link ReportFacts} and returns its {@link Schedule}s. Sections built from other stored
+ * data (the risk estimate) come in as {@link org.lpzplanner.common.ReportSection}s through
+ * {@link ReportService#pdf}.
  */
 public final class ReportParts {
 
@@ -14,7 +16,7 @@ public final class ReportParts {
             ExposedItemSchedule::blocks,
             DownConductorSchedule::blocks,
             SeparationSchedule::blocks
-            // bill of quantities and risk estimate: add their ReportPart here, e.g. BillOfQuantities::blocks
+            // bill of quantities: add its ReportPart here, e.g. BillOfQuantities::blocks
     );
 
     private ReportParts() {

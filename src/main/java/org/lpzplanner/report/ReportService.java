@@ -1,6 +1,7 @@
 package org.lpzplanner.report;
 
 import java.util.List;
+import java.util.Locale;
 import org.lpzplanner.analysis.AcceptedItemRepository;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.analysis.AnalysisRevision;
@@ -10,6 +11,7 @@ import org.lpzplanner.sites.SiteFileVersion;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.engine.model.SphereSpec;
+import org.lpzplanner.risk.RiskService;
 import org.springframework.stereotype.Service;
 
 /**
@@ -24,11 +26,14 @@ public class ReportService {
     private final SiteService sites;
     private final AnalysisRepository analyses;
     private final AcceptedItemRepository accepted;
+    private final RiskService risk;
 
-    public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted) {
+    public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted,
+            RiskService risk) {
         this.sites = sites;
         this.analyses = analyses;
         this.accepted = accepted;
+        this.risk = risk;
     }
 
     /**
@@ -50,9 +55,14 @@ public class ReportService {
                 accepted.reasons(revision.id()), List.of());
     }
 
-    /** The PDF of a revision. Same exceptions as {@link #source}. */
+    /**
+     * The PDF of a revision, with the site's risk estimate as it stands when printed (its inputs
+     * belong to the site, not to the revision). Same exceptions as {@link #source}.
+     */
     public byte[] pdf(long siteId, int revisionNumber) {
-        return PdfReportRenderer.render(ReportAssembler.assemble(source(siteId, revisionNumber)));
+        ReportSource source = source(siteId, revisionNumber);
+        return PdfReportRenderer.render(ReportAssembler.assemble(source, null,
+                List.of(risk.reportSection(siteId, Locale.ENGLISH))));
     }
 
     private RevisionInputs recovered(StoredSite site, AnalysisRevision revision) {

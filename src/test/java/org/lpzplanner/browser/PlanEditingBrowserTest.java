@@ -82,6 +82,9 @@ class PlanEditingBrowserTest extends BrowserTestBase {
         waitUpTo(20).until(b -> !exposedRoof().equals(before));
         assertThat(Double.parseDouble(exposedRoof())).isLessThan(Double.parseDouble(before));
         assertThat(browser.executeScript("return window.pageMark;")).isEqualTo("same page");
+        // The revision shown is now the second one, and so is the one its print link asks for.
+        assertThat(browser.findElement(By.id("print-revision")).getAttribute("href"))
+                .endsWith("/api/sites/" + site.id() + "/revisions/2/report");
         assertThat(storedRods(site.id())).singleElement().satisfies(rod -> {
             assertThat(rod.height()).isEqualTo(3.0);
             assertThat(rod.x()).isCloseTo(40, within(0.5));

@@ -171,6 +171,13 @@ class ReportPdfTest {
     }
 
     @Test
+    void aSuperscriptMinusTheFontLacksPrintsAsAHyphen() throws Exception {
+        ReportContent content = new ReportContent("T", "Footer", Cautions.lines(),
+                List.of(new ReportBlock.Paragraph("R1 = 1.94 \u00d7 10\u207b\u2075 per year")));
+        assertThat(flat(String.join(" ", pages(PdfReportRenderer.render(content))))).contains("10-\u2075 per year");
+    }
+
+    @Test
     void longSchedulesContinueOnTheNextPageWithTheirHeadings() throws Exception {
         List<List<String>> rows = new ArrayList<>();
         for (int i = 1; i <= 150; i++) {
