@@ -31,6 +31,17 @@ function setUp(form) {
     return msg[key] || stage;
   }
 
+  // the session's CSRF token, which every state-changing request must carry
+  function csrfHeaders() {
+    const headers = {Accept: 'application/json'};
+    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
+    const csrfToken = document.querySelector('meta[name="csrf-token"]');
+    if (csrfHeader && csrfToken) {
+      headers[csrfHeader.content] = csrfToken.content;
+    }
+    return headers;
+  }
+
   async function follow() {
     const response = await fetch(jobUrl, {headers: {Accept: 'application/json'}});
     const job = await response.json();
@@ -59,9 +70,10 @@ function setUp(form) {
   form.addEventListener('submit', async (event) => {
     event.preventDefault();
     const params = new URLSearchParams(new FormData(form));
+    params.delete('_csrf'); // sent as a header, not in the address
     params.set('async', 'true');
     const response = await fetch('/api/sites/' + encodeURIComponent(form.dataset.siteId) + '/analyses?' + params,
-      {method: 'POST', headers: {Accept: 'application/json'}});
+      {method: 'POST', headers: csrfHeaders()});
     const body = await response.json();
     if (response.status === 429) {
       show(0, format(msg.msgBusy, response.headers.get('Retry-After') || body.retryAfterSeconds), false);
@@ -79,7 +91,7 @@ function setUp(form) {
   cancel.addEventListener('click', async () => {
     if (jobUrl) {
       cancel.disabled = true;
-      await fetch(jobUrl, {method: 'DELETE', headers: {Accept: 'application/json'}});
+      await fetch(jobUrl, {method: 'DELETE', headers: csrfHeaders()});
       cancel.disabled = false;
     }
   });

@@ -34,9 +34,16 @@ if (section) {
   }
 
   async function call(method, url, body) {
+    const headers = body ? { 'Content-Type': 'application/json', Accept: 'application/json' } : { Accept: 'application/json' };
+    // the session's CSRF token, which every state-changing request must carry
+    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
+    const csrfToken = document.querySelector('meta[name="csrf-token"]');
+    if (csrfHeader && csrfToken) {
+      headers[csrfHeader.content] = csrfToken.content;
+    }
     const response = await fetch(url, {
       method,
-      headers: body ? { 'Content-Type': 'application/json', Accept: 'application/json' } : { Accept: 'application/json' },
+      headers,
       body: body ? JSON.stringify(body) : undefined,
     });
     const data = await response.json().catch(() => ({}));

@@ -9,6 +9,7 @@ import io.swagger.v3.oas.annotations.tags.Tag;
 import org.lpzplanner.system.ApiError;
 import java.util.List;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.sites.SiteService;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.ResponseEntity;
 import org.springframework.web.bind.annotation.DeleteMapping;
@@ -39,7 +40,10 @@ public class AnalysisApiController {
     private final AnalysisService analyses;
     private final AnalysisJobs jobs;
 
-    public AnalysisApiController(AnalysisService analyses, AnalysisJobs jobs) {
+    private final SiteService sites;
+
+    public AnalysisApiController(AnalysisService analyses, AnalysisJobs jobs, SiteService sites) {
+        this.sites = sites;
         this.analyses = analyses;
         this.jobs = jobs;
     }
@@ -86,6 +90,7 @@ public class AnalysisApiController {
     @ApiResponse(responseCode = "404", description = "No such job for this site", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/jobs/{jobId}")
     public AnalysisJob.Snapshot job(@PathVariable long siteId, @PathVariable String jobId) {
+        sites.get(siteId); // another team's site (and so its jobs) is not found
         return jobs.find(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
     }
 
@@ -95,6 +100,7 @@ public class AnalysisApiController {
     @ApiResponse(responseCode = "404", description = "No such job for this site", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/jobs/{jobId}")
     public AnalysisJob.Snapshot cancel(@PathVariable long siteId, @PathVariable String jobId) {
+        sites.get(siteId); // another team's site (and so its jobs) is not found
         return jobs.cancel(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
     }
 

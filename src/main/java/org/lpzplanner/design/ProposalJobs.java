@@ -7,6 +7,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.atomic.AtomicBoolean;
 import jakarta.annotation.PreDestroy;
+import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.engine.design.proposal.AirTerminationProposer;
 import org.lpzplanner.engine.design.proposal.Proposal;
 import org.lpzplanner.engine.design.proposal.ProposalCancelledException;
@@ -79,11 +80,16 @@ public class ProposalJobs {
             jobs.values().stream().filter(j -> j.state != State.RUNNING).findFirst().ifPresent(j -> jobs.remove(j.id));
         }
         jobs.put(job.id, job);
-        worker.submit(() -> run(job));
+        // the worker acts for the person who started the proposal, like every background task
+        worker.submit(CurrentAccount.carry(() -> run(job)));
         return job;
     }
 
-    /** The job, or null when there is none with this id for this site. */
+    /**
+     * The job, or null when there is none with this id for this site. Callers first read the site
+     * through SiteService, which answers 404 for another team's site, so a job is only found by
+     * its own team.
+     */
     public Job get(long siteId, String jobId) {
         Job job = jobs.get(jobId);
         return job != null && job.siteId == siteId ? job : null;

@@ -59,14 +59,17 @@ class SiteArchiveRepository {
                 .list();
     }
 
-    /** Stores the archive as a new site and returns its id; the caller holds the transaction. */
-    long insert(SiteArchive archive) {
+    /**
+     * Stores the archive as a new site of the given team and returns its id; the caller holds the
+     * transaction.
+     */
+    long insert(SiteArchive archive, long teamId) {
         SiteArchive.Site s = archive.site();
         KeyHolder siteKey = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO sites (name, protection_level, custom_radius, source_name, source_text, created_at,"
-                        + " updated_at, version) VALUES (?, ?, ?, ?, ?, ?, ?, ?)")
+                        + " updated_at, version, team_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")
                 .params(s.name(), s.level(), s.customRadius(), s.fileName(), s.fileText(),
-                        Timestamp.from(s.createdAt()), Timestamp.from(s.updatedAt()), s.version())
+                        Timestamp.from(s.createdAt()), Timestamp.from(s.updatedAt()), s.version(), teamId)
                 .update(siteKey, "id");
         long siteId = siteKey.getKeyAs(Number.class).longValue();
         for (SiteArchive.EarlierFile f : archive.earlierFiles()) {

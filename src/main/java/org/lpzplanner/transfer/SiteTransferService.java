@@ -1,7 +1,10 @@
 package org.lpzplanner.transfer;
 
 import org.lpzplanner.engine.io.SiteFormatException;
+import org.lpzplanner.accounts.CurrentAccount;
+import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.sites.SiteFiles;
+import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.stereotype.Service;
@@ -20,13 +23,19 @@ public class SiteTransferService {
 
     private final SiteArchiveRepository archives;
 
-    public SiteTransferService(SiteArchiveRepository archives) {
+    private final SiteService sites;
+    private final AuditTrail audit;
+
+    public SiteTransferService(SiteArchiveRepository archives, SiteService sites, AuditTrail audit) {
         this.archives = archives;
+        this.sites = sites;
+        this.audit = audit;
     }
 
-    /** @throws SiteNotFoundException when no site has this id */
+    /** @throws SiteNotFoundException when no site of the caller's team has this id */
     @Transactional(readOnly = true)
     public ExportFile export(long siteId) {
+        sites.get(siteId); // another team's site is not found, as everywhere
         SiteArchive archive = archives.read(siteId).orElseThrow(() -> new SiteNotFoundException(siteId));
         return new ExportFile(exportName(archive.site().fileName()), SiteArchiveCodec.write(archive));
     }
@@ -42,7 +51,9 @@ public class SiteTransferService {
     public long importSite(byte[] content) {
         SiteArchive archive = SiteArchiveCodec.read(content);
         SiteFiles.read(archive.site().fileText(), archive.site().fileName());
-        return archives.insert(archive);
+        long id = archives.insert(archive, CurrentAccount.teamId());
+        audit.record(id, "import", "imported \"" + archive.site().name() + "\" from a site export");
+        return id;
     }
 
     /** "harbour.geojson" gives "harbour.site-export.json". */

@@ -133,6 +133,62 @@ class RoleAccessTest {
 
     @Test
     @SignedIn(role = Role.REVIEWER)
+    void reviewerGets403OnDesignConductorsBackgroundAnalysesAndImport() throws Exception {
+        StoredSite before = sites.get(siteId);
+        int siteCount = sites.list().size();
+        int auditCount = audit.forSite(siteId, 500).size();
+        String v = String.valueOf(before.version());
+        String installations = mvc.perform(get("/api/sites/{id}/metal-installations", siteId))
+                .andExpect(status().isOk()).andReturn().getResponse().getContentAsString();
+        MockMultipartFile export = new MockMultipartFile("file", "campus.site-export.json", null, "{}".getBytes());
+        RequestBuilder[] changes = {
+            post("/api/sites/{id}/proposals", siteId).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"rodHeights\": [1]}"),
+            post("/api/sites/{id}/proposals/any/accept", siteId).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"version\": " + v + "}"),
+            post("/api/sites/{id}/proposals/any/cancel", siteId),
+            put("/api/sites/{id}/down-conductors/structure-1", siteId).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"positions\": [[0, 0], [10, 0]]}"),
+            delete("/api/sites/{id}/down-conductors/structure-1", siteId),
+            post("/api/sites/{id}/metal-installations", siteId).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"name\": \"Pipe\", \"x\": 1, \"y\": 1, \"z\": 2, \"material\": \"AIR\"}"),
+            delete("/api/sites/{id}/metal-installations/1", siteId),
+            post("/sites/{id}/design/down-conductors/structure-1", siteId).param("positions", "0 0\n10 0"),
+            post("/sites/{id}/design/installations", siteId).param("name", "Pipe").param("x", "1").param("y", "1")
+                    .param("z", "2").param("material", "AIR"),
+            post("/sites/{id}/design/installations/1/delete", siteId),
+            post("/api/sites/{id}/conductors", siteId).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"version\": " + v + ", \"points\": [[0, 0], [10, 0]], \"heightAboveRoof\": \"0.5\"}"),
+            delete("/api/sites/{id}/conductors/conductor-1", siteId).param("version", v),
+            post("/api/sites/{id}/analyses", siteId).param("async", "true"),
+            delete("/api/sites/{id}/analyses/jobs/any", siteId),
+            multipart("/api/sites/import").file(export),
+            multipart("/sites/import").file(export),
+            put("/api/sites/{id}/risk", siteId).contentType(MediaType.APPLICATION_JSON).content("{}"),
+            post("/sites/{id}/risk", siteId),
+            post("/sites/{id}/risk/level", siteId),
+        };
+        for (RequestBuilder change : changes) {
+            mvc.perform(change).andExpect(status().isForbidden());
+        }
+
+        StoredSite after = sites.get(siteId);
+        assertThat(after.version()).isEqualTo(before.version());
+        assertThat(after.sourceText()).isEqualTo(before.sourceText());
+        assertThat(sites.list()).hasSize(siteCount);
+        assertThat(audit.forSite(siteId, 500)).hasSize(auditCount);
+        assertThat(mvc.perform(get("/api/sites/{id}/metal-installations", siteId)).andReturn().getResponse()
+                .getContentAsString()).isEqualTo(installations);
+        // the design page shows a reviewer the checks but none of the editing forms
+        String page = mvc.perform(get("/sites/{id}/design", siteId)).andExpect(status().isOk()).andReturn()
+                .getResponse().getContentAsString();
+        assertThat(page).contains("id=\"separation\"")
+                .doesNotContain("id=\"propose-form\"", "id=\"installation-form\"", "/design/down-conductors/",
+                        "/design/installations/");
+    }
+
+    @Test
+    @SignedIn(role = Role.REVIEWER)
     void reviewerReadsCommentsAndMarksTheRevisionReviewed() throws Exception {
         mvc.perform(get("/")).andExpect(status().isOk());
         String plan = mvc.perform(get("/sites/{id}", siteId)).andExpect(status().isOk()).andReturn().getResponse()

@@ -9,9 +9,14 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.analysis.AnalysisJob;
+import org.lpzplanner.analysis.AnalysisJobs;
 import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.ProposalJobs;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -38,6 +43,12 @@ class TeamIsolationTest {
 
     @Autowired
     AccountService accounts;
+
+    @Autowired
+    DesignService design;
+
+    @Autowired
+    AnalysisJobs analysisJobs;
 
     long foreignId;
 
@@ -85,5 +96,41 @@ class TeamIsolationTest {
         assertThat(CurrentAccount.asSystem("test", accounts.teams().stream()
                 .filter(t -> t.name().equals("Northfield office")).findFirst().orElseThrow().id(),
                 () -> sites.get(foreignId)).name()).isEqualTo("Secret campus of Northfield");
+    }
+    @Test
+    void anotherTeamsBackgroundJobsAndDesignAnswer404() throws Exception {
+        long otherTeam = accounts.teams().stream().filter(t -> t.name().equals("Northfield office")).findFirst()
+                .orElseThrow().id();
+        long id = foreignId;
+        ProposalJobs.Job proposal = CurrentAccount.asSystem("test", otherTeam,
+                () -> design.propose(id, new DesignService.ProposeRequest(List.of(1.0), List.of(), List.of())));
+        AnalysisJob analysis = CurrentAccount.asSystem("test", otherTeam,
+                () -> analysisJobs.submit(id, null, null, "2"));
+        RequestBuilder[] requests = {
+            get("/api/sites/{id}/proposals/{job}", id, proposal.id()),
+            post("/api/sites/{id}/proposals/{job}/cancel", id, proposal.id()),
+            post("/api/sites/{id}/proposals/{job}/accept", id, proposal.id()).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"version\": 0}"),
+            post("/api/sites/{id}/proposals", id).contentType(MediaType.APPLICATION_JSON)
+                    .content("{\"rodHeights\": [1]}"),
+            get("/api/sites/{id}/analyses/jobs/{job}", id, analysis.id()),
+            delete("/api/sites/{id}/analyses/jobs/{job}", id, analysis.id()),
+            post("/api/sites/{id}/analyses", id).param("async", "true"),
+            get("/sites/{id}/design", id), get("/api/sites/{id}/method-checks", id),
+            get("/api/sites/{id}/down-conductors", id), get("/api/sites/{id}/separation-distances", id),
+            get("/api/sites/{id}/metal-installations", id), get("/api/sites/{id}/quantities", id),
+            get("/api/sites/{id}/quantities.csv", id), get("/api/sites/{id}/export", id),
+            get("/api/sites/{id}/risk", id), get("/sites/{id}/risk", id),
+        };
+        for (RequestBuilder request : requests) {
+            String body = mvc.perform(request).andExpect(status().isNotFound()).andReturn().getResponse()
+                    .getContentAsString();
+            assertThat(body).doesNotContain("Secret campus", "Larch rod");
+        }
+        // the other team's proposal was not cancelled by the refused request
+        assertThat(proposal.state()).isNotEqualTo(ProposalJobs.State.CANCELLED);
+        // the owners stop both, so that they do not hold workers other tests need
+        CurrentAccount.asSystem("test", otherTeam, () -> design.cancel(id, proposal.id()));
+        analysisJobs.cancel(id, analysis.id());
     }
 }

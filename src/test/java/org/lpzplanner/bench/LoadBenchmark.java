@@ -30,7 +30,12 @@ import tools.jackson.databind.json.JsonMapper;
  * throughput, p50/p99 latency per step, the answers by status, and the server's peak resident memory
  * when its process id is given.
  *
- * <pre>scripts/load [--url http://127.0.0.1:8080] [--users 50] [--seconds 60] [--max-requests 100000] [--pid N]</pre>
+ * <pre>scripts/load [--url http://127.0.0.1:8080] [--users 50] [--seconds 60] [--max-requests 100000] [--pid N]
+ *             (--token lpz_… | --email E [--password P])</pre>
+ *
+ * Every request carries {@code Authorization: Bearer} with a designer's or administrator's API
+ * token: given with {@code --token} (or {@code LPZ_API_TOKEN}), or created by signing in with
+ * {@code --email} and the password ({@code --password} or {@code LPZ_LOAD_PASSWORD}).
  */
 public final class LoadBenchmark {
 
@@ -43,8 +48,11 @@ public final class LoadBenchmark {
     private final Map<String, AtomicLong> statuses = new ConcurrentHashMap<>();
     private final AtomicLong requests = new AtomicLong();
 
-    private LoadBenchmark(URI base) {
+    private final String token;
+
+    private LoadBenchmark(URI base, String token) {
         this.base = base;
+        this.token = token;
         for (String step : STEPS) {
             latencies.put(step, java.util.Collections.synchronizedList(new ArrayList<>()));
         }
@@ -53,6 +61,9 @@ public final class LoadBenchmark {
     public static void main(String[] args) throws Exception {
         Map<String, String> options = new TreeMap<>(Map.of("url", "http://127.0.0.1:8080", "users", "50",
                 "seconds", "60", "max-requests", "100000", "pid", ""));
+        options.put("token", System.getenv().getOrDefault("LPZ_API_TOKEN", ""));
+        options.put("email", "");
+        options.put("password", System.getenv().getOrDefault("LPZ_LOAD_PASSWORD", ""));
         for (int i = 0; i + 1 < args.length; i += 2) {
             options.put(args[i].replaceFirst("^--", ""), args[i + 1]);
         }
@@ -63,7 +74,15 @@ public final class LoadBenchmark {
         int users = Integer.parseInt(options.get("users"));
         int seconds = Math.min(600, Integer.parseInt(options.get("seconds")));
         long maxRequests = Long.parseLong(options.get("max-requests"));
-        new LoadBenchmark(base).run(users, seconds, maxRequests, options.get("pid"));
+        String token = options.get("token");
+        if (token.isBlank()) {
+            if (options.get("email").isBlank()) {
+                throw new IllegalArgumentException("give --token lpz_… (or LPZ_API_TOKEN), or --email and the password"
+                        + " (--password or LPZ_LOAD_PASSWORD) of a designer or administrator");
+            }
+            token = ApiTokenOverHttp.create(base, options.get("email"), options.get("password"), "load script");
+        }
+        new LoadBenchmark(base, token).run(users, seconds, maxRequests, options.get("pid"));
     }
 
     private void run(int users, int seconds, long maxRequests, String pid) throws Exception {
@@ -125,7 +144,8 @@ public final class LoadBenchmark {
     }
 
     private HttpResponse<String> send(HttpRequest.Builder request, String step) throws IOException, InterruptedException {
-        HttpResponse<String> response = http.send(request.timeout(Duration.ofSeconds(120)).build(),
+        HttpResponse<String> response = http.send(request.header("Authorization", "Bearer " + token)
+                        .timeout(Duration.ofSeconds(120)).build(),
                 HttpResponse.BodyHandlers.ofString());
         if (step != null) {
             statuses.computeIfAbsent(step + " " + response.statusCode(), k -> new AtomicLong()).incrementAndGet();

@@ -11,6 +11,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -25,6 +26,7 @@ import tools.jackson.databind.json.JsonMapper;
 /** The design API: propose, poll, accept; down-conductors, separation distances, quantities; error paths. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class DesignApiTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -12,6 +12,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -23,6 +24,7 @@ import org.springframework.test.web.servlet.MockMvc;
 /** The design page shows every section with the cautions; its forms refuse bad input with a message. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@SignedIn
 class DesignPagesTest {
 
     @Autowired

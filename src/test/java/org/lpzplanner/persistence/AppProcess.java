@@ -13,15 +13,22 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.stream.Collectors;
+import org.lpzplanner.bench.ApiTokenOverHttp;
 
 /**
  * The app in a JVM of its own, on the data folder given, with the main configuration (the test
  * classes and their in-memory settings are left off the class path). {@link #kill()} sends SIGKILL.
+ * The first start creates an administrator from the environment (as an unattended install does);
+ * every start signs in as them and keeps a fresh API token for the requests, see {@link #request}.
  */
 final class AppProcess implements AutoCloseable {
 
+    static final String ADMIN_EMAIL = "durability@kiln-yard.test";
+    static final String ADMIN_PASSWORD = "kiln-yard-durability";
+
     private final Process process;
     final int port;
+    private String token;
 
     private AppProcess(Process process, int port) {
         this.process = process;
@@ -42,15 +49,29 @@ final class AppProcess implements AutoCloseable {
                 "-Xmx384m", "-XX:TieredStopAtLevel=1", "-cp", mainOnly, "org.lpzplanner.LpzPlannerApplication",
                 "--server.port=" + port, "--server.address=127.0.0.1", "--lpz.data-dir=" + dataDir.toAbsolutePath(),
                 "--lpz.demo-data=false", "--spring.main.banner-mode=off"));
-        Process process = new ProcessBuilder(command).redirectErrorStream(true)
-                .redirectOutput(ProcessBuilder.Redirect.appendTo(log.toFile())).start();
-        AppProcess app = new AppProcess(process, port);
+        ProcessBuilder builder = new ProcessBuilder(command).redirectErrorStream(true)
+                .redirectOutput(ProcessBuilder.Redirect.appendTo(log.toFile()));
+        // ignored by the app once the administrator exists, i.e. after the first start
+        builder.environment().put("LPZ_ADMIN_EMAIL", ADMIN_EMAIL);
+        builder.environment().put("LPZ_ADMIN_PASSWORD", ADMIN_PASSWORD);
+        AppProcess app = new AppProcess(builder.start(), port);
         app.awaitReady(Duration.ofSeconds(120));
+        try {
+            app.token = ApiTokenOverHttp.create(app.uri("/"), ADMIN_EMAIL, ADMIN_PASSWORD, "durability test");
+        } catch (Exception | Error e) {
+            app.kill();
+            throw e;
+        }
         return app;
     }
 
     URI uri(String path) {
         return URI.create("http://127.0.0.1:" + port + path);
+    }
+
+    /** A request to the app's path, signed in with this start's API token. */
+    HttpRequest.Builder request(String path) {
+        return HttpRequest.newBuilder(uri(path)).header("Authorization", "Bearer " + token);
     }
 
     private void awaitReady(Duration timeout) throws Exception {

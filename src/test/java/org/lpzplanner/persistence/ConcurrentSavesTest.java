@@ -2,6 +2,7 @@ package org.lpzplanner.persistence;
 
 import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.securityContext;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 
 import java.util.ArrayList;
@@ -14,6 +15,8 @@ import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.jdbc.core.simple.JdbcClient;
+import org.springframework.security.core.context.SecurityContext;
+import org.springframework.security.core.context.SecurityContextHolder;
 import org.springframework.test.web.servlet.MockMvc;
 
 /**
@@ -36,6 +39,8 @@ class ConcurrentSavesTest {
     void racingAnalysesAreStoredOrToldConflictNeverFail() throws Exception {
         long id = sites.create("yard.wkt", "POLYGON ((0 0, 12 0, 12 8, 0 8, 0 0)) 6".getBytes(), "Race yard", null,
                 null).id();
+        // the racing requests come from threads of their own, which do not inherit the test's sign-in
+        SecurityContext signedIn = SecurityContextHolder.getContext();
         int threads = 4;
         CountDownLatch go = new CountDownLatch(1);
         ConcurrentLinkedQueue<Integer> statuses = new ConcurrentLinkedQueue<>();
@@ -45,7 +50,8 @@ class ConcurrentSavesTest {
                 try {
                     go.await();
                     for (int i = 0; i < 5; i++) {
-                        statuses.add(mvc.perform(post("/api/sites/" + id + "/analyses").param("resolution", "1"))
+                        statuses.add(mvc.perform(post("/api/sites/" + id + "/analyses").param("resolution", "1")
+                                        .with(securityContext(signedIn)))
                                 .andReturn().getResponse().getStatus());
                     }
                 } catch (Exception e) {

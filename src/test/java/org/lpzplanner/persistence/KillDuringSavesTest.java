@@ -32,7 +32,8 @@ import tools.jackson.databind.json.JsonMapper;
  * Durability of the file database: the app runs in its own JVM while clients keep saving (moving a
  * rod, which rewrites the site file, keeps the earlier file and stores a new analysis revision; and
  * plain analyses). The JVM is killed with SIGKILL in the middle of this, twice, and restarted. Every
- * save a client was told succeeded must be there, whole, and no save may be there in part.
+ * save a client was told succeeded must be there, whole, and no save may be there in part. The
+ * clients send an API token of the administrator the app creates at its first start.
  */
 class KillDuringSavesTest {
 
@@ -125,7 +126,7 @@ class KillDuringSavesTest {
                 int step = track.step + 1;
                 double x = 20 + step * 0.05;
                 String body = "{\"version\": " + track.version + ", \"x\": " + x + ", \"y\": 4, \"height\": \"3\"}";
-                HttpResponse<String> moved = http.send(HttpRequest.newBuilder(app.uri("/api/sites/" + track.id + "/rods/r1"))
+                HttpResponse<String> moved = http.send(app.request("/api/sites/" + track.id + "/rods/r1")
                         .header("Content-Type", "application/json").PUT(HttpRequest.BodyPublishers.ofString(body))
                         .timeout(Duration.ofSeconds(60)).build(), HttpResponse.BodyHandlers.ofString());
                 assertThat(moved.statusCode()).as(moved.body()).isEqualTo(200);
@@ -136,8 +137,8 @@ class KillDuringSavesTest {
                 track.revisions.add(answer.path("summary").path("revision").asInt());
                 acknowledged.incrementAndGet();
                 if (step % 3 == 0) {
-                    HttpResponse<String> analysed = http.send(HttpRequest.newBuilder(
-                                    app.uri("/api/sites/" + track.id + "/analyses?resolution=0.5"))
+                    HttpResponse<String> analysed = http.send(app.request(
+                                    "/api/sites/" + track.id + "/analyses?resolution=0.5")
                             .POST(HttpRequest.BodyPublishers.noBody()).timeout(Duration.ofSeconds(60)).build(),
                             HttpResponse.BodyHandlers.ofString());
                     assertThat(analysed.statusCode()).as(analysed.body()).isEqualTo(201);
@@ -200,7 +201,7 @@ class KillDuringSavesTest {
         String boundary = "lpz" + System.nanoTime();
         String body = "--" + boundary + "\r\nContent-Disposition: form-data; name=\"file\"; filename=\"" + fileName
                 + "\"\r\nContent-Type: application/geo+json\r\n\r\n" + SITE + "\r\n--" + boundary + "--\r\n";
-        HttpResponse<String> r = http.send(HttpRequest.newBuilder(app.uri("/api/sites"))
+        HttpResponse<String> r = http.send(app.request("/api/sites")
                 .header("Content-Type", "multipart/form-data; boundary=" + boundary)
                 .POST(HttpRequest.BodyPublishers.ofString(body, StandardCharsets.UTF_8)).build(),
                 HttpResponse.BodyHandlers.ofString());
@@ -209,7 +210,7 @@ class KillDuringSavesTest {
     }
 
     private JsonNode get(AppProcess app, String path) throws Exception {
-        HttpResponse<String> r = http.send(HttpRequest.newBuilder(app.uri(path)).build(),
+        HttpResponse<String> r = http.send(app.request(path).build(),
                 HttpResponse.BodyHandlers.ofString());
         assertThat(r.statusCode()).as(path + ": " + r.body()).isEqualTo(200);
         return JSON.readTree(r.body());

@@ -6,6 +6,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.accounts.SignedIn;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.health.registry.HealthContributorRegistry;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -31,6 +32,7 @@ class HealthEndpointTest {
     }
 
     @Test
+    @SignedIn // signed in, so that a refusal cannot hide an endpoint that is there
     void noOtherEndpointIsPublished() throws Exception {
         for (String path : new String[] {"/actuator/env", "/actuator/beans", "/actuator/configprops",
                 "/actuator/heapdump", "/actuator/metrics", "/actuator/loggers"}) {

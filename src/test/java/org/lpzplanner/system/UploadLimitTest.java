@@ -12,6 +12,8 @@ import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.lpzplanner.accounts.ApiTokenService;
+import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -19,7 +21,8 @@ import org.springframework.boot.test.web.server.LocalServerPort;
 
 /**
  * Uploads over the size limit, through the real servlet container: the app answers 413 with the
- * limit, as JSON for the API and as a page for the forms, and stores nothing.
+ * limit, as JSON for the API and as a page for the forms, and stores nothing. The requests come
+ * from outside the test's thread, so they carry an API token of the test's signed-in designer.
  */
 @SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
 @SignedIn
@@ -31,6 +34,9 @@ class UploadLimitTest {
     @Autowired
     SiteService sites;
 
+    @Autowired
+    ApiTokenService tokens;
+
     private HttpResponse<String> post(String path, int megabytes) throws Exception {
         String boundary = "lpz-limit";
         ByteArrayOutputStream body = new ByteArrayOutputStream();
@@ -40,7 +46,9 @@ class UploadLimitTest {
         Arrays.fill(filler, (byte) ' ');
         body.write(filler);
         body.write(("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8));
+        String token = tokens.create(CurrentAccount.signedIn().orElseThrow().accountId(), "upload limit test");
         return HttpClient.newHttpClient().send(HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + port + path))
+                .header("Authorization", "Bearer " + token)
                 .header("Content-Type", "multipart/form-data; boundary=" + boundary)
                 .POST(HttpRequest.BodyPublishers.ofByteArray(body.toByteArray())).build(),
                 HttpResponse.BodyHandlers.ofString());

@@ -144,7 +144,7 @@ public final class AirTerminationProposer {
             AnalysisResult beforeResult = current;
             for (int c : picked) {
                 chosen.add(c);
-                parts.add(part(candidates.get(c), parts.size() + 1));
+                addOrRaise(parts, candidates.get(c));
             }
             proposed = withParts(site, parts);
             monitor.progress("checking the proposal with the full analysis (round " + rounds + ")",
@@ -240,6 +240,28 @@ public final class AirTerminationProposer {
             }
         }
         return site.withAirTermination(rods, conductors);
+    }
+
+    /**
+     * Adds the candidate as a new part, except a rod or mast where one is already proposed (a later
+     * round may pick another height at the same spot): one spot holds one rod, the taller of the
+     * two: it contains the shorter one, so every sphere position it leaves open the shorter one left
+     * open too, and it protects at least what the shorter one did.
+     */
+    private static void addOrRaise(List<ProposedPart> parts, Candidate c) {
+        ProposedPart part = part(c, parts.size() + 1);
+        if (part.rod() != null) {
+            for (int i = 0; i < parts.size(); i++) {
+                Rod there = parts.get(i).rod();
+                if (there != null && there.x() == part.rod().x() && there.y() == part.rod().y()) {
+                    if (part.rod().height() > there.height()) {
+                        parts.set(i, part(c, i + 1));
+                    }
+                    return;
+                }
+            }
+        }
+        parts.add(part);
     }
 
     private static ProposedPart part(Candidate c, int number) {
