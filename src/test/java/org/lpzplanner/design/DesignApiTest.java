@@ -25,6 +25,7 @@ import tools.jackson.databind.json.JsonMapper;
 /** The design API: propose, poll, accept; down-conductors, separation distances, quantities; error paths. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@org.lpzplanner.accounts.SignedIn
 class DesignApiTest {
 
     private static final JsonMapper JSON = JsonMapper.builder().build();

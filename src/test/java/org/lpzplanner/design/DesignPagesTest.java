@@ -23,6 +23,7 @@ import org.springframework.test.web.servlet.MockMvc;
 /** The design page shows every section with the cautions; its forms refuse bad input with a message. */
 @SpringBootTest
 @AutoConfigureMockMvc
+@org.lpzplanner.accounts.SignedIn
 class DesignPagesTest {
 
     @Autowired
