@@ -79,7 +79,7 @@ public final class ReportAssembler {
         ReportFacts facts = ReportFacts.of(source, site, surface, envelope, StoredResult.read(source.resultGeoJson()),
                 design);
         List<ReportBlock> blocks = new ArrayList<>();
-        cover(facts, blocks);
+        cover(facts, blocks, !more.isEmpty());
         method(facts, blocks);
         blocks.add(new ReportBlock.Heading("Plan", 1));
         blocks.add(new ReportBlock.Plan(PlanDrawings.of(facts)));
@@ -111,7 +111,7 @@ public final class ReportAssembler {
         return new ReportContent("Lightning-protection assessment", footer, Cautions.lines(), blocks);
     }
 
-    private static void cover(ReportFacts facts, List<ReportBlock> blocks) {
+    private static void cover(ReportFacts facts, List<ReportBlock> blocks, boolean appendix) {
         ReportSource s = facts.source();
         int remaining = facts.items().size() - facts.acceptedCount();
         boolean roofs = !facts.stored().roofAreas().isEmpty();
@@ -159,7 +159,7 @@ public final class ReportAssembler {
                                 + facts.downConductors().size() + " structures")))));
         blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
                 + " air-termination parts, exposed items, down-conductors and separation distances; bill of"
-                + " quantities; risk estimate (appendix); review and approval."));
+                + " quantities;" + (appendix ? " appendix (risk estimate);" : "") + " review and approval."));
     }
 
     private static void method(ReportFacts facts, List<ReportBlock> blocks) {
