@@ -104,25 +104,11 @@ public class AirTerminationService {
             throw new InvalidInputException(input.x() == null ? "x" : "y", "x and y (local metres) are required");
         }
         BigDecimal height = height(input.height() == null ? "1" : input.height());
-        if (input.name() != null && input.name().strip().length() > SiteService.MAX_NAME_LENGTH) {
-            throw new InvalidInputException("name", "name must be at most " + SiteService.MAX_NAME_LENGTH + " characters");
-        }
+        checkName(input.name());
         SiteDocument document = sites.document(site);
         Set<String> used = usedIds(document.site());
-        String id;
-        if (input.id() != null && !input.id().isBlank()) {
-            id = input.id().strip();
-            if (used.contains(id)) {
-                throw new InvalidInputException("id", "the id \"" + id + "\" is already used in this site");
-            }
-        } else {
-            int n = 1;
-            while (used.contains("rod-" + n)) {
-                n++;
-            }
-            id = "rod-" + n;
-        }
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
+        String id = newId(used, input.id(), "rod");
+        PartFileEditor editor = editor(site, document);
         editor.add(id, input.name(), input.x(), input.y(), height);
         store(site, editor.text());
         audit.record(siteId, "rod-added", "rod " + id + (input.name() == null || input.name().isBlank() ? ""
@@ -146,18 +132,13 @@ public class AirTerminationService {
         }
         SiteDocument document = sites.document(site);
         Set<String> used = usedIds(document.site());
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(),
-                document.projection());
+        PartFileEditor editor = editor(site, document);
         List<String> ids = new ArrayList<>();
-        int n = 1;
         for (RodInput input : inputs) {
             if (input.x() == null || input.y() == null) {
                 throw new InvalidInputException("x", "x and y (local metres) are required for every rod");
             }
-            while (used.contains("rod-" + n)) {
-                n++;
-            }
-            String id = "rod-" + n;
+            String id = newId(used, null, "rod");
             used.add(id);
             editor.add(id, input.name(), input.x(), input.y(), height(input.height()));
             ids.add(id);
@@ -185,7 +166,7 @@ public class AirTerminationService {
         SiteDocument document = sites.document(site);
         int index = rodIndex(site, document.site(), rodId);
         RodView before = view(document.site().rods().get(index), document.projection());
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
+        PartFileEditor editor = editor(site, document);
         editor.change(index, input.x(), input.y(), height);
         store(site, editor.text());
         audit.record(siteId, "rod-changed", "rod " + rodId + (input.x() == null ? "" : " moved from x " + before.x()
@@ -206,7 +187,7 @@ public class AirTerminationService {
         SiteDocument document = sites.document(site);
         int index = rodIndex(site, document.site(), rodId);
         RodView before = view(document.site().rods().get(index), document.projection());
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(), document.projection());
+        PartFileEditor editor = editor(site, document);
         editor.remove(index);
         store(site, editor.text());
         audit.record(siteId, "rod-removed", "rod " + rodId + " at x " + before.x() + " m, y " + before.y() + " m");
@@ -259,26 +240,11 @@ public class AirTerminationService {
             }
             heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
         }
-        if (input.name() != null && input.name().strip().length() > SiteService.MAX_NAME_LENGTH) {
-            throw new InvalidInputException("name", "name must be at most " + SiteService.MAX_NAME_LENGTH + " characters");
-        }
+        checkName(input.name());
         SiteDocument document = sites.document(site);
         Set<String> used = usedIds(document.site());
-        String id;
-        if (input.id() != null && !input.id().isBlank()) {
-            id = input.id().strip();
-            if (used.contains(id)) {
-                throw new InvalidInputException("id", "the id \"" + id + "\" is already used in this site");
-            }
-        } else {
-            int n = 1;
-            while (used.contains("conductor-" + n)) {
-                n++;
-            }
-            id = "conductor-" + n;
-        }
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(),
-                document.projection());
+        String id = newId(used, input.id(), "conductor");
+        PartFileEditor editor = editor(site, document);
         editor.addConductor(id, input.name(), points, heightAboveRoof);
         store(site, editor.text());
         return id;
@@ -391,5 +357,33 @@ public class AirTerminationService {
     /** To the millimetre. */
     private static double round(double value) {
         return Math.round(value * 1000) / 1000.0;
+    }
+
+    /** An editor of the stored file's rods and conductors. */
+    private static PartFileEditor editor(StoredSite site, SiteDocument document) {
+        return new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(),
+                document.projection());
+    }
+
+    private static void checkName(String name) {
+        if (name != null && name.strip().length() > SiteService.MAX_NAME_LENGTH) {
+            throw new InvalidInputException("name", "name must be at most " + SiteService.MAX_NAME_LENGTH + " characters");
+        }
+    }
+
+    /** The requested id when it is free, else the first free "prefix-n". */
+    private static String newId(Set<String> used, String requested, String prefix) {
+        if (requested != null && !requested.isBlank()) {
+            String id = requested.strip();
+            if (used.contains(id)) {
+                throw new InvalidInputException("id", "the id \"" + id + "\" is already used in this site");
+            }
+            return id;
+        }
+        int n = 1;
+        while (used.contains(prefix + "-" + n)) {
+            n++;
+        }
+        return prefix + "-" + n;
     }
 }

@@ -23,7 +23,7 @@ import org.lpzplanner.engine.model.SphereSpec;
  * Proposal time and part counts on every sample site at every level, rods of 0.5, 1, 1.5, 2 and
  * 3 m, against the regular layout; where walls rise above the sphere radius, also with those facade
  * bands accepted (no roof part can cover them). A plain main (run with {@code scripts/benchmark proposal});
- * prints a Markdown table. Arguments: optional sample file names to restrict the run.
+ * prints a Markdown table. Arguments: optional sample file names and levels (I to IV) to restrict the run.
  */
 public final class ProposalBenchmark {
 
@@ -39,9 +39,14 @@ public final class ProposalBenchmark {
         try (Stream<Path> s = Files.list(Path.of("sample-sites"))) {
             files = s.filter(f -> !f.toString().endsWith(".md")).sorted().toList();
         }
-        List<String> only = List.of(args);
-        List<String> levels = System.getProperty("levels") == null ? List.of("I", "II", "III", "IV")
-                : List.of(System.getProperty("levels").split(","));
+        List<String> only = new ArrayList<>();
+        List<String> levels = new ArrayList<>();
+        for (String a : args) {
+            (a.matches("I{1,3}|IV") ? levels : only).add(a);
+        }
+        if (levels.isEmpty()) {
+            levels = List.of("I", "II", "III", "IV");
+        }
         System.out.println("| site | level | proposed parts | regular layout | share | complete | left (points) | beyond reach | rounds | candidates | seconds |");
         System.out.println("|---|---|---|---|---|---|---|---|---|---|---|");
         for (Path f : files) {

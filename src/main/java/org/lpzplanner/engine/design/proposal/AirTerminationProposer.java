@@ -105,8 +105,12 @@ public final class AirTerminationProposer {
                     rounds == 1 ? FreeSpheres.RINGS : 3 * FreeSpheres.RINGS);
             List<CoverageTarget> targets = new ArrayList<>(points.size());
             List<ExposedPoints.Point> guiding = new ArrayList<>(points.size());
+            double cell = finalCheck ? finest : guide.resolution();
             for (ExposedPoints.Point p : points) {
                 double[] free = spheres.at(p);
+                if (free == null && p.rise() > 0) {
+                    free = raisedSpheres(spheres, p, cell);
+                }
                 if (free != null) {
                     targets.add(new CoverageTarget(p.x(), p.y(), p.z(), p.ownerId(), free));
                     guiding.add(p);
@@ -179,6 +183,26 @@ public final class AirTerminationProposer {
         monitor.progress("done", 1.0);
         return new Proposal(parts, left.isEmpty(), current, byKind, beyondReach, regular, rounds, candidates.size(),
                 (System.nanoTime() - start) / 1_000_000);
+    }
+
+    /**
+     * Free spheres of a point on a sloped face or edge that none touch at its own height: the
+     * analysis decides a cell (or edge piece) by the highest point of the surface in it, so the
+     * exposure it reports may lie up to rise·h above the point, anywhere in the cell. The point
+     * raised by that much, at itself and at the cell's corners (or the piece's ends), stands in for it.
+     */
+    private static double[] raisedSpheres(FreeSpheres spheres, ExposedPoints.Point p, double cell) {
+        double half = cell / 2;
+        double[][] offsets = p.dx() != 0 || p.dy() != 0
+                ? new double[][] {{0, 0}, {half * p.dx(), half * p.dy()}, {-half * p.dx(), -half * p.dy()}}
+                : new double[][] {{0, 0}, {half, half}, {half, -half}, {-half, half}, {-half, -half}};
+        for (double[] o : offsets) {
+            double[] free = spheres.at(p.raised(cell, o[0], o[1]));
+            if (free != null) {
+                return free;
+            }
+        }
+        return null;
     }
 
     /** Passes progress on only when it rises (coverage is reported from several threads). */

@@ -30,9 +30,19 @@ final class ExposedPoints {
     /**
      * A sampled exposed point and what it lies on ("edge", "roof", "corner", "facade"). For points
      * on lines, (dx, dy) is the line's plan direction (unit); for roof points, (a, b) the slope of
-     * the roof plane z = a·x + b·y + e; zero where it does not apply.
+     * the roof plane z = a·x + b·y + e; zero where it does not apply. {@code rise} is how much the
+     * surface climbs per metre of plan within a grid cell round the point (|a| + |b| on a roof face,
+     * the slope of a sloped edge, 0 elsewhere): the analysis decides a cell or edge piece by its
+     * highest point, so a point may be reported exposed for a spot up to rise·h above it.
      */
-    record Point(double x, double y, double z, String ownerId, String what, double dx, double dy, double a, double b) {}
+    record Point(double x, double y, double z, String ownerId, String what, double dx, double dy, double a, double b,
+            double rise) {
+
+        /** The point raised to the highest the surface reaches in a cell of size h containing it. */
+        Point raised(double h, double ox, double oy) {
+            return new Point(x + ox, y + oy, z + rise * h, ownerId, what, dx, dy, a, b, rise);
+        }
+    }
 
     private final STRtree acceptedIndex = new STRtree();
     private final boolean anyAccepted;
@@ -74,13 +84,15 @@ final class ExposedPoints {
                 for (double x = x0; x <= e.getMaxX(); x += ROOF_SPACING) {
                     for (double y = y0; y <= e.getMaxY(); y += ROOF_SPACING) {
                         if (inside.locate(new Coordinate(x, y)) != org.locationtech.jts.geom.Location.EXTERIOR) {
-                            add(out, new Point(x, y, plane.z(x, y), r.ownerId(), "roof", 0, 0, plane.a(), plane.b()));
+                            add(out, new Point(x, y, plane.z(x, y), r.ownerId(), "roof", 0, 0, plane.a(), plane.b(),
+                                    Math.abs(plane.a()) + Math.abs(plane.b())));
                         }
                     }
                 }
                 Coordinate c = piece.getInteriorPoint().getCoordinate();
                 if (c != null) {
-                    add(out, new Point(c.x, c.y, plane.z(c.x, c.y), r.ownerId(), "roof", 0, 0, plane.a(), plane.b()));
+                    add(out, new Point(c.x, c.y, plane.z(c.x, c.y), r.ownerId(), "roof", 0, 0, plane.a(), plane.b(),
+                                    Math.abs(plane.a()) + Math.abs(plane.b())));
                 }
             }
         }
@@ -88,7 +100,7 @@ final class ExposedPoints {
             alongLine(out, e.line(), e.ownerId(), "edge", null);
         }
         for (CornerExposure c : result.corners()) {
-            add(out, new Point(c.point().x, c.point().y, c.point().getZ(), c.ownerId(), "corner", 0, 0, 0, 0));
+            add(out, new Point(c.point().x, c.point().y, c.point().getZ(), c.ownerId(), "corner", 0, 0, 0, 0, 0));
         }
         for (FacadeBand b : result.facades()) {
             alongLine(out, b.line(), b.ownerId(), "facade", b.bottom() + (b.top() - b.bottom()) / 4);
@@ -106,11 +118,12 @@ final class ExposedPoints {
                 continue;
             }
             double dx = (b.x - a.x) / len, dy = (b.y - a.y) / len;
+            double rise = fixedZ != null ? 0 : Math.abs(z(b) - z(a)) / len;
             int steps = Math.max(1, (int) Math.ceil(len / LINE_SPACING));
             for (int k = (i == 1 ? 0 : 1); k <= steps; k++) {
                 double t = (double) k / steps;
                 double z = fixedZ != null ? fixedZ : z(a) + t * (z(b) - z(a));
-                add(out, new Point(a.x + t * (b.x - a.x), a.y + t * (b.y - a.y), z, owner, what, dx, dy, 0, 0));
+                add(out, new Point(a.x + t * (b.x - a.x), a.y + t * (b.y - a.y), z, owner, what, dx, dy, 0, 0, rise));
             }
         }
     }

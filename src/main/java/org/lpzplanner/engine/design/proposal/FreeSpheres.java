@@ -23,6 +23,9 @@ final class FreeSpheres {
 
     static final int RINGS = 10;
 
+    /** Finest step of the search for a free sphere between the samples, metres. */
+    static final double SEARCH_STEP = 0.01;
+
     /**
      * A sphere within this much of being free counts as free, metres: the analysis counts a point
      * within its 1 mm margin (plus the 1 mm tolerance of exact queries) of the envelope as exposed.
@@ -89,9 +92,82 @@ final class FreeSpheres {
             }
         }
         if (n == 0) {
-            return null;
+            return nearestFree(x, y, z);
         }
         return java.util.Arrays.copyOf(out, 3 * n);
+    }
+
+    /**
+     * When no sample is free, the free spheres (if any) fill a sliver between the samples, as at the
+     * rim of an exposed piece of roof or at the foot of a higher wall. The sphere touching p that
+     * enters the solid least, f(c) = D(c) − (z + √(R² − d²)) over centres c within R of p, is sought
+     * from the best ring sample by a compass search (step R/rings halved down to
+     * {@value #SEARCH_STEP} m); when it is free, it and the free centres round it are returned.
+     */
+    private double[] nearestFree(double x, double y, double z) {
+        double bestX = x, bestY = y;
+        double best = depth(x, y, z, x, y);
+        for (int k = 1; k <= rings; k++) {
+            double d = radius * (k == rings ? 0.995 : (double) k / rings);
+            int count = Math.max(6, (int) Math.ceil(2 * Math.PI * k));
+            for (int a = 0; a < count; a++) {
+                double angle = 2 * Math.PI * (a + 0.5 * (k % 2)) / count;
+                double cx = x + d * Math.cos(angle), cy = y + d * Math.sin(angle);
+                double f = depth(x, y, z, cx, cy);
+                if (f < best) {
+                    best = f;
+                    bestX = cx;
+                    bestY = cy;
+                }
+            }
+        }
+        double step = radius / rings;
+        while (step >= SEARCH_STEP && best > FREE_SLACK) {
+            boolean moved = false;
+            for (int a = 0; a < 8; a++) {
+                double angle = Math.PI / 4 * a;
+                double cx = bestX + step * Math.cos(angle), cy = bestY + step * Math.sin(angle);
+                double f = depth(x, y, z, cx, cy);
+                if (f < best) {
+                    best = f;
+                    bestX = cx;
+                    bestY = cy;
+                    moved = true;
+                }
+            }
+            if (!moved) {
+                step /= 2;
+            }
+        }
+        if (best > FREE_SLACK) {
+            return null;
+        }
+        double[] out = new double[3 * 9];
+        int n = 0;
+        out = put(out, n++, bestX, bestY, z + lift(x, y, bestX, bestY));
+        for (int a = 0; a < 8; a++) {
+            double angle = Math.PI / 4 * a;
+            double cx = bestX + SEARCH_STEP * Math.cos(angle), cy = bestY + SEARCH_STEP * Math.sin(angle);
+            if (Math.hypot(cx - x, cy - y) < radius && depth(x, y, z, cx, cy) <= FREE_SLACK) {
+                out = put(out, n++, cx, cy, z + lift(x, y, cx, cy));
+            }
+        }
+        return java.util.Arrays.copyOf(out, 3 * n);
+    }
+
+    /** How far the sphere centred over (cx, cy) and touching (x, y, z) enters the solid; ≤ 0 when free. */
+    private double depth(double x, double y, double z, double cx, double cy) {
+        double d2 = (cx - x) * (cx - x) + (cy - y) * (cy - y);
+        if (d2 >= radius * radius * 0.995 * 0.995) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double cz = z + Math.sqrt(radius * radius - d2);
+        double lower = lowestCentre(cx, cy) - cz;
+        return lower > FREE_SLACK ? lower : Math.max(lower, exact.centreHeight(cx, cy) - cz);
+    }
+
+    private double lift(double x, double y, double cx, double cy) {
+        return Math.sqrt(radius * radius - (cx - x) * (cx - x) - (cy - y) * (cy - y));
     }
 
     private boolean isFree(double cx, double cy, double cz) {
