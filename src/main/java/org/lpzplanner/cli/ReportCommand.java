@@ -21,6 +21,8 @@ import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.report.PdfReportRenderer;
 import org.lpzplanner.report.ReportAssembler;
 import org.lpzplanner.report.ReportSource;
+import org.lpzplanner.report.StoredDesign;
+import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.sites.SiteFiles;
 
 /**
@@ -31,6 +33,17 @@ final class ReportCommand implements Command {
 
     static final String OUT = "--out";
     static final String PARTS = "--parts";
+
+    /**
+     * The risk estimate needs the site's stored risk inputs (flash density, use, occupancy, lines);
+     * printing it with default inputs would state a risk nobody assessed, so the command line leaves
+     * it out and says so.
+     */
+    static final ReportSection RISK_LEFT_OUT = new ReportSection("Risk estimate (IEC 62305-2)", List.of(), List.of(),
+            List.of("Not included: a report printed on the command line has no stored risk inputs (ground flash"
+                    + " density, location, use, occupancy, service lines), and an estimate from default inputs"
+                    + " would state a risk nobody assessed. Enter the inputs on the site's risk page in the web app"
+                    + " and print the report there to include the risk estimate."));
 
     @Override
     public String name() {
@@ -70,7 +83,8 @@ final class ReportCommand implements Command {
         ReportSource source = new ReportSource(document.site().name(), siteName, text, settings.sphere(),
                 result.resolution(), result.tolerance(), 0, Instant.now().truncatedTo(ChronoUnit.SECONDS),
                 AnalysisService.sha256(text), ResultGeoJson.write(document.site(), result), Map.of(), List.of());
-        byte[] pdf = PdfReportRenderer.render(ReportAssembler.assemble(source, result.envelope()));
+        byte[] pdf = PdfReportRenderer.render(ReportAssembler.assemble(source, result.envelope(), StoredDesign.NONE,
+                List.of(RISK_LEFT_OUT)));
         try {
             Files.write(outFile, pdf);
         } catch (IOException e) {

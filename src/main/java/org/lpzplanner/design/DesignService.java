@@ -25,7 +25,6 @@ import org.lpzplanner.engine.design.quantities.BillOfQuantities;
 import org.lpzplanner.engine.design.quantities.QuantityTable;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.AnalysisResult;
-import org.lpzplanner.engine.exposure.CornerExposure;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
@@ -240,14 +239,11 @@ public class DesignService {
 
     private List<DownConductors> downConductors(Site site, StoredSite stored, Map<String, List<double[]>> edited) {
         double spacing = stored.sphere().level().downConductorSpacing();
-        List<Coordinate> exposedCorners = new ArrayList<>();
-        for (CornerExposure c : ExposureAnalysis.analyze(site.withAirTermination(List.of(), List.of()),
-                AnalysisOptions.of(stored.sphere()).withResolution(1.0)).corners()) {
-            exposedCorners.add(c.point());
-        }
+        List<DownConductorLayout> plans = DownConductorPlan.planSite(site, stored.sphere());
         List<DownConductors> out = new ArrayList<>();
-        for (Structure s : site.structures()) {
-            DownConductorLayout planned = DownConductorPlan.plan(s, spacing, exposedCorners);
+        for (int i = 0; i < site.structures().size(); i++) {
+            Structure s = site.structures().get(i);
+            DownConductorLayout planned = plans.get(i);
             int required = Math.max(2, (int) Math.ceil(planned.perimeter() / spacing - 1e-9));
             List<double[]> positions = new ArrayList<>();
             boolean isEdited = edited.containsKey(s.id());

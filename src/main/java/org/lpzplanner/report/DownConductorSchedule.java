@@ -9,9 +9,9 @@ import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.model.Structure;
 
 /**
- * Down-conductors per structure from {@link org.lpzplanner.engine.design.DownConductorPlan} at the
- * level's typical spacing, exposed corners first, and their positions numbered D1, D2, … as on the
- * plan.
+ * Down-conductors per structure: the designer's edited positions where the site stores them, else
+ * {@link org.lpzplanner.engine.design.DownConductorPlan} at the level's typical spacing, exposed
+ * corners first; their positions numbered D1, D2, … as on the plan.
  */
 final class DownConductorSchedule {
 
@@ -25,23 +25,35 @@ final class DownConductorSchedule {
         List<List<String>> summary = new ArrayList<>();
         List<List<String>> positions = new ArrayList<>();
         int number = 0;
+        boolean anyEdited = false;
         for (int i = 0; i < facts.downConductors().size(); i++) {
             Structure s = facts.site().structures().get(i);
             DownConductorLayout layout = facts.downConductors().get(i);
-            summary.add(List.of(s.name(), metres(layout.perimeter()), metres(layout.typicalSpacing()),
-                    String.valueOf(layout.count()), metres(layout.meanSpacing()), metres(layout.largestSpacing())
+            boolean edited = facts.edited(i);
+            anyEdited |= edited;
+            int required = Math.max(2, (int) Math.ceil(layout.perimeter() / layout.typicalSpacing() - 1e-9));
+            summary.add(List.of(s.name(), edited ? "edited" : "planned", metres(layout.perimeter()),
+                    metres(layout.typicalSpacing()), layout.count()
+                            + (layout.count() < required ? " (fewer than " + required + ": check)" : ""),
+                    metres(layout.meanSpacing()), metres(layout.largestSpacing())
                             + (layout.exceedsTypicalSpacing() ? " (over typical: check)" : "")));
             for (Coordinate c : layout.positions()) {
                 number++;
                 positions.add(List.of("D" + number, s.name(), metres(c.x), metres(c.y)));
             }
         }
+        List<String> notes = new ArrayList<>();
+        notes.add("At least two per structure, no further apart than the typical spacing of the level"
+                + " (IEC 62305-3:2010 5.3 and Table 4). Planned: outside corners the sphere reaches on the bare"
+                + " structures first. Courtyards get none here; routes, access and fixings are for the designer.");
+        if (anyEdited) {
+            notes.add("Edited: the designer's positions, " + facts.design().asStored() + "; they belong to the"
+                    + " site, not to this revision, and print as they stand whenever the revision is printed.");
+        }
         return List.of(
-                new Schedule(TITLE, List.of("Structure", "Perimeter (m)", "Typical spacing (m)", "Count",
-                        "Mean spacing (m)", "Largest gap (m)"), List.of(2.2, 1.0, 1.1, 0.6, 1.0, 1.6), summary,
-                        List.of("At least two per structure, no further apart than the typical spacing of the level"
-                                + " (IEC 62305-3:2010 5.3 and Table 4), outside corners first. Courtyards get none"
-                                + " here; routes, access and fixings are for the designer.")),
+                new Schedule(TITLE, List.of("Structure", "Positions", "Perimeter (m)", "Typical spacing (m)",
+                        "Count", "Mean spacing (m)", "Largest gap (m)"), List.of(2.0, 0.8, 1.0, 1.0, 1.0, 1.0, 1.4),
+                        summary, notes),
                 new Schedule(POSITIONS_TITLE, List.of("No.", "Structure", "x (m)", "y (m)"),
                         List.of(0.6, 2.6, 1.0, 1.0), positions, List.of()));
     }

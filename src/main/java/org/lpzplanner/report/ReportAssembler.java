@@ -61,13 +61,25 @@ public final class ReportAssembler {
      * estimate), printed after the schedules.
      */
     public static ReportContent assemble(ReportSource source, EnvelopeField field, List<ReportSection> more) {
+        return assemble(source, field, StoredDesign.NONE, more);
+    }
+
+    /**
+     * Assembles a report with the site's stored design data (edited down-conductors, metal
+     * installations: they enter the schedules, marked "as stored … when printed") and sections other
+     * features supply, printed in an appendix after the schedules. A section without columns prints
+     * as its title and notes only (for example a section left out, saying why).
+     */
+    public static ReportContent assemble(ReportSource source, EnvelopeField field, StoredDesign design,
+            List<ReportSection> more) {
         Site site = SiteFiles.read(source.sourceText(), source.sourceName()).site();
         SiteSurface surface = SiteSurfaceBuilder.build(site);
         EnvelopeField envelope = field != null ? field
                 : EnvelopeOp.compute(surface, source.sphere().radius(), source.resolution());
-        ReportFacts facts = ReportFacts.of(source, site, surface, envelope, StoredResult.read(source.resultGeoJson()));
+        ReportFacts facts = ReportFacts.of(source, site, surface, envelope, StoredResult.read(source.resultGeoJson()),
+                design);
         List<ReportBlock> blocks = new ArrayList<>();
-        cover(facts, blocks);
+        cover(facts, blocks, !more.isEmpty());
         method(facts, blocks);
         blocks.add(new ReportBlock.Heading("Plan", 1));
         blocks.add(new ReportBlock.Plan(PlanDrawings.of(facts)));
@@ -78,11 +90,18 @@ public final class ReportAssembler {
         }
         if (!more.isEmpty()) {
             blocks.add(new ReportBlock.Heading(APPENDIX, 1));
-            blocks.add(new ReportBlock.Paragraph("What follows comes from the site's data as it stands at printing,"
-                    + " not from the analysis revision: it can differ when the same revision is printed again after"
-                    + " those data changed."));
+            if (design.readAt() != null) {
+                blocks.add(new ReportBlock.Paragraph("What follows comes from the site's data " + design.asStored()
+                        + ", not from the analysis revision: it can differ when the same revision is printed again"
+                        + " after those data changed."));
+            }
         }
         for (ReportSection section : more) {
+            if (section.columns().isEmpty()) {
+                blocks.add(new ReportBlock.Heading(section.title(), 2));
+                section.notes().forEach(n -> blocks.add(new ReportBlock.Paragraph(n)));
+                continue;
+            }
             blocks.add(new Schedule(section.title(), section.columns(),
                     section.columns().stream().map(c -> 1.0).toList(), section.rows(), section.notes()));
         }
@@ -92,7 +111,7 @@ public final class ReportAssembler {
         return new ReportContent("Lightning-protection assessment", footer, Cautions.lines(), blocks);
     }
 
-    private static void cover(ReportFacts facts, List<ReportBlock> blocks) {
+    private static void cover(ReportFacts facts, List<ReportBlock> blocks, boolean appendix) {
         ReportSource s = facts.source();
         int remaining = facts.items().size() - facts.acceptedCount();
         boolean roofs = !facts.stored().roofAreas().isEmpty();
@@ -125,6 +144,8 @@ public final class ReportAssembler {
         long bands = facts.items().stream().filter(i -> i.kind().equals("facade-band")).count();
         double roofArea = facts.stored().roofAreas().values().stream().mapToDouble(Double::doubleValue).sum();
         int downConductors = facts.downConductors().stream().mapToInt(d -> d.count()).sum();
+        long editedStructures = java.util.stream.IntStream.range(0, facts.downConductors().size())
+                .filter(facts::edited).count();
         blocks.add(new ReportBlock.Facts(List.of(
                 new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
                 new ReportBlock.Fact("Exposed roof area", metres(roofArea) + " m² (plan)"),
@@ -132,10 +153,13 @@ public final class ReportAssembler {
                         + " facade bands; " + facts.acceptedCount() + " accepted"),
                 new ReportBlock.Fact("Air-termination parts", facts.partNumbers().size() + " ("
                         + facts.stored().intercepting().size() + " intercepting)"),
-                new ReportBlock.Fact("Down-conductors planned", downConductors + " at the level's typical spacing"))));
+                new ReportBlock.Fact("Down-conductors", downConductors + (editedStructures == 0
+                        ? " planned at the level's typical spacing"
+                        : ", placed by the designer on " + editedStructures + " of "
+                                + facts.downConductors().size() + " structures")))));
         blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
-                + " air-termination parts, exposed items, down-conductors and separation distances; review and"
-                + " approval."));
+                + " air-termination parts, exposed items, down-conductors and separation distances; bill of"
+                + " quantities;" + (appendix ? " appendix (risk estimate);" : "") + " review and approval."));
     }
 
     private static void method(ReportFacts facts, List<ReportBlock> blocks) {

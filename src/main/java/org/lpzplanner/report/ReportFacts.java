@@ -29,11 +29,13 @@ import org.lpzplanner.engine.model.Structure;
  * @param field           the protection envelope at the revision's sphere and resolution
  * @param items           the review items of the stored result, numbered as the review list numbers them
  * @param partNumbers     "A1", "A2", … by part id: rods in file order, then conductors
- * @param downConductors  the planned down-conductors of each structure, in structure order
+ * @param downConductors  the down-conductors of each structure, in structure order: the designer's
+ *                        edited positions where the site stores them, else the planned layout
+ * @param design          the site's stored design data (edited down-conductors, metal installations)
  */
 public record ReportFacts(ReportSource source, Site site, SiteSurface surface, EnvelopeField field,
         StoredResult stored, List<ReviewItems.Item> items, Map<String, String> partNumbers,
-        List<DownConductorLayout> downConductors) {
+        List<DownConductorLayout> downConductors, StoredDesign design) {
 
     private static final GeometryFactory GEOMETRY = new GeometryFactory();
 
@@ -44,7 +46,7 @@ public record ReportFacts(ReportSource source, Site site, SiteSurface surface, E
     }
 
     static ReportFacts of(ReportSource source, Site site, SiteSurface surface, EnvelopeField field,
-            StoredResult stored) {
+            StoredResult stored, StoredDesign design) {
         Map<String, String> numbers = new LinkedHashMap<>();
         for (Rod r : site.rods()) {
             numbers.put(r.id(), "A" + (numbers.size() + 1));
@@ -52,17 +54,21 @@ public record ReportFacts(ReportSource source, Site site, SiteSurface surface, E
         for (Conductor c : site.conductors()) {
             numbers.put(c.id(), "A" + (numbers.size() + 1));
         }
-        List<DownConductorLayout> layouts = new ArrayList<>();
-        for (Structure s : site.structures()) {
-            List<Coordinate> near = new ArrayList<>();
-            for (StoredResult.Marked corner : stored.corners()) {
-                if (s.name().equals(corner.owner())) {
-                    near.add(new Coordinate(corner.x(), corner.y()));
-                }
+        // planned as the design page plans them, so the report and the page show the same positions
+        List<DownConductorLayout> layouts = new ArrayList<>(DownConductorPlan.planSite(site, source.sphere()));
+        for (int i = 0; i < layouts.size(); i++) {
+            Structure s = site.structures().get(i);
+            List<Coordinate> edited = design.downConductors().get(s.id());
+            if (edited != null && !edited.isEmpty()) {
+                layouts.set(i, DownConductorPlan.edited(s, layouts.get(i).typicalSpacing(), edited));
             }
-            layouts.add(DownConductorPlan.plan(s, source.sphere().level().downConductorSpacing(), near));
         }
-        return new ReportFacts(source, site, surface, field, stored, stored.items(), numbers, layouts);
+        return new ReportFacts(source, site, surface, field, stored, stored.items(), numbers, layouts, design);
+    }
+
+    /** True when the designer's edited positions stand for the structure at this index. */
+    public boolean edited(int structure) {
+        return design.downConductors().containsKey(site.structures().get(structure).id());
     }
 
     /** The number of items a designer accepted. */

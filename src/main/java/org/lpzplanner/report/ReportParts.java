@@ -4,7 +4,7 @@ import java.util.List;
 
 /**
  * The schedules and sections printed after the drawings, in order. A new schedule built from the
- * revision (for example the bill of quantities) is one more entry here: a {@link ReportPart} that
+ * revision is one more entry here: a {@link ReportPart} that
  * reads the {@link ReportFacts} and returns its {@link Schedule}s. Sections built from other stored
  * data (the risk estimate) come in as {@link org.lpzplanner.common.ReportSection}s through
  * {@link ReportService#pdf}.
@@ -15,8 +15,8 @@ public final class ReportParts {
             AirTerminationSchedule::blocks,
             ExposedItemSchedule::blocks,
             DownConductorSchedule::blocks,
-            SeparationSchedule::blocks
-            // bill of quantities: add its ReportPart here, e.g. BillOfQuantities::blocks
+            SeparationSchedule::blocks,
+            QuantitySchedule::blocks
     );
 
     private ReportParts() {

@@ -1,7 +1,13 @@
 package org.lpzplanner.report;
 
+import java.time.Clock;
+import java.time.temporal.ChronoUnit;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.design.DesignRepository;
 import org.lpzplanner.analysis.AcceptedItemRepository;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.analysis.AnalysisRevision;
@@ -27,13 +33,17 @@ public class ReportService {
     private final AnalysisRepository analyses;
     private final AcceptedItemRepository accepted;
     private final RiskService risk;
+    private final DesignRepository design;
+    private final Clock clock;
 
     public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted,
-            RiskService risk) {
+            RiskService risk, DesignRepository design, Clock clock) {
         this.sites = sites;
         this.analyses = analyses;
         this.accepted = accepted;
         this.risk = risk;
+        this.design = design;
+        this.clock = clock;
     }
 
     /**
@@ -56,13 +66,24 @@ public class ReportService {
     }
 
     /**
-     * The PDF of a revision, with the site's risk estimate as it stands when printed (its inputs
-     * belong to the site, not to the revision). Same exceptions as {@link #source}.
+     * The PDF of a revision, with the site's edited down-conductors, metal installations and risk
+     * estimate as they stand when printed (they belong to the site, not to the revision; the report
+     * says so and when they were read). Same exceptions as {@link #source}.
      */
     public byte[] pdf(long siteId, int revisionNumber) {
         ReportSource source = source(siteId, revisionNumber);
-        return PdfReportRenderer.render(ReportAssembler.assemble(source, null,
+        return PdfReportRenderer.render(ReportAssembler.assemble(source, null, storedDesign(siteId),
                 List.of(risk.reportSection(siteId, Locale.ENGLISH))));
+    }
+
+    /** The site's design data as stored now. */
+    StoredDesign storedDesign(long siteId) {
+        Map<String, List<Coordinate>> downs = new LinkedHashMap<>();
+        design.downConductors(siteId).forEach((structure, positions) -> downs.put(structure,
+                positions.stream().map(p -> new Coordinate(p[0], p[1])).toList()));
+        List<StoredDesign.Installation> metals = design.installations(siteId).stream()
+                .map(i -> new StoredDesign.Installation(i.name(), i.x(), i.y(), i.z(), i.material())).toList();
+        return new StoredDesign(downs, metals, clock.instant().truncatedTo(ChronoUnit.SECONDS));
     }
 
     private RevisionInputs recovered(StoredSite site, AnalysisRevision revision) {

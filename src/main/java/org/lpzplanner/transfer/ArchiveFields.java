@@ -106,6 +106,15 @@ final class ArchiveFields {
         return node;
     }
 
+    /** An array that exports written before the member existed leave out: absent or null reads as empty. */
+    static JsonNode optionalArray(JsonNode parent, String path, String name) {
+        JsonNode node = parent.get(name);
+        if (node == null || node.isNull()) {
+            return tools.jackson.databind.node.JsonNodeFactory.instance.arrayNode();
+        }
+        return array(parent, path, name);
+    }
+
     static JsonNode object(JsonNode node, String path) {
         if (!node.isObject()) {
             throw bad(path, "must be an object");

@@ -6,10 +6,22 @@ import java.util.List;
 /**
  * Everything stored for one site, as a site export holds it: the site and its current file, the
  * earlier files corrections replaced, every analysis revision with what it read and the items
- * accepted on it, and the site's risk inputs (null until first saved).
- * Database ids are left out; numbers that users see (file numbers, revisions) are kept.
+ * accepted on it and the reviewed marks, the site's risk inputs (null until first saved), the
+ * designer's edited down-conductors and marked metal installations, the comments, and the audit
+ * trail. The audit trail is carried for reading only: an import does not write it back (the new
+ * site's trail starts with one "import" event). Database ids are left out; numbers that users see
+ * (file numbers, revisions) are kept.
  */
-public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revision> revisions, RiskInputs riskInputs) {
+public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revision> revisions, RiskInputs riskInputs,
+        List<DownConductorEdit> downConductors, List<MetalInstallation> metalInstallations, List<Comment> comments,
+        List<AuditEntry> auditTrail) {
+
+    public SiteArchive {
+        downConductors = List.copyOf(downConductors);
+        metalInstallations = List.copyOf(metalInstallations);
+        comments = List.copyOf(comments);
+        auditTrail = List.copyOf(auditTrail);
+    }
 
     /** The site row; {@code fileText} is the site file byte for byte (air-termination parts included). */
     public record Site(String name, String level, Double customRadius, String fileName, String fileText,
@@ -23,7 +35,26 @@ public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revisi
             double exposedRoofArea, double exposedEdgeLength, int exposedCorners, int facadeBands,
             double protectedGroundArea, boolean fullyProtected, String resultGeoJson, long engineMillis,
             Instant createdAt, List<AcceptedItem> accepted, String siteName, String sourceName, String sourceText,
-            Double tolerance) {
+            Double tolerance, List<Review> reviews) {
+    }
+
+    /** A "reviewed" mark on a revision. */
+    public record Review(String reviewer, Instant reviewedAt) {
+    }
+
+    /** One structure's edited down-conductor positions, [x, y] in local metres. */
+    public record DownConductorEdit(String structureId, List<List<Double>> positions, Instant updatedAt) {
+    }
+
+    /** A metal installation marked for the separation distance check; material AIR or CONCRETE_OR_BRICK. */
+    public record MetalInstallation(String name, double x, double y, double z, String material, Instant createdAt) {
+    }
+
+    public record Comment(String author, String body, Instant createdAt) {
+    }
+
+    /** One event of the site's audit trail, oldest first in the archive. */
+    public record AuditEntry(String actor, String action, String detail, Instant createdAt) {
     }
 
     /** The row of {@code site_risk_inputs}; choices by their names. */

@@ -9,6 +9,7 @@ import static org.lpzplanner.transfer.ArchiveFields.nonBlankText;
 import static org.lpzplanner.transfer.ArchiveFields.nonNegative;
 import static org.lpzplanner.transfer.ArchiveFields.number;
 import static org.lpzplanner.transfer.ArchiveFields.object;
+import static org.lpzplanner.transfer.ArchiveFields.optionalArray;
 import static org.lpzplanner.transfer.ArchiveFields.optionalPositive;
 import static org.lpzplanner.transfer.ArchiveFields.text;
 import static org.lpzplanner.transfer.ArchiveFields.whole;
@@ -24,6 +25,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
+import org.lpzplanner.engine.design.SeparationDistance;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.risk.FireProvisions;
 import org.lpzplanner.engine.risk.FireRisk;
@@ -57,6 +59,10 @@ final class SiteArchiveCodec {
     private static final int ITEM_KEY = 80;
     private static final int REASON = 500;
     private static final int LONG_TEXT = 50_000_000;
+    private static final int ACCOUNT = 254;
+    private static final int COMMENT = 4000;
+    private static final int DETAIL = 1000;
+    private static final int ACTION = 40;
 
     private SiteArchiveCodec() {}
 
@@ -68,6 +74,10 @@ final class SiteArchiveCodec {
         document.put("earlierFiles", archive.earlierFiles());
         document.put("revisions", archive.revisions());
         document.put("riskInputs", archive.riskInputs());
+        document.put("downConductors", archive.downConductors());
+        document.put("metalInstallations", archive.metalInstallations());
+        document.put("comments", archive.comments());
+        document.put("auditTrail", archive.auditTrail());
         return JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
     }
 
@@ -106,7 +116,88 @@ final class SiteArchiveCodec {
         JsonNode risk = root.get("riskInputs");
         return new SiteArchive(site, earlierFiles(array(root, "", "earlierFiles")),
                 revisions(array(root, "", "revisions")),
-                risk == null || risk.isNull() ? null : riskInputs(object(risk, "riskInputs")));
+                risk == null || risk.isNull() ? null : riskInputs(object(risk, "riskInputs")),
+                downConductors(optionalArray(root, "", "downConductors")),
+                metalInstallations(optionalArray(root, "", "metalInstallations")),
+                comments(optionalArray(root, "", "comments")), auditTrail(optionalArray(root, "", "auditTrail")));
+    }
+
+    private static List<SiteArchive.DownConductorEdit> downConductors(JsonNode array) {
+        List<SiteArchive.DownConductorEdit> out = new ArrayList<>();
+        Set<String> structures = new HashSet<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "downConductors[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            String structure = nonBlankText(node, p, "structureId", NAME);
+            if (!structures.add(structure)) {
+                throw bad(p + ".structureId", "repeats structure " + structure);
+            }
+            JsonNode positions = array(node, p, "positions");
+            if (positions.size() < 2 || positions.size() > 500) {
+                throw bad(p + ".positions", "must hold 2 to 500 positions [x, y], got " + positions.size());
+            }
+            List<List<Double>> xy = new ArrayList<>();
+            for (int k = 0; k < positions.size(); k++) {
+                JsonNode pair = positions.get(k);
+                if (!pair.isArray() || pair.size() != 2 || !pair.get(0).isNumber() || !pair.get(1).isNumber()
+                        || !Double.isFinite(pair.get(0).asDouble()) || !Double.isFinite(pair.get(1).asDouble())) {
+                    throw bad(p + ".positions[" + k + "]", "must be [x, y] in local metres");
+                }
+                xy.add(List.of(pair.get(0).asDouble(), pair.get(1).asDouble()));
+            }
+            out.add(new SiteArchive.DownConductorEdit(structure, xy, instant(node, p, "updatedAt")));
+        }
+        return out;
+    }
+
+    private static List<SiteArchive.MetalInstallation> metalInstallations(JsonNode array) {
+        List<SiteArchive.MetalInstallation> out = new ArrayList<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "metalInstallations[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            out.add(new SiteArchive.MetalInstallation(nonBlankText(node, p, "name", NAME), number(node, p, "x"),
+                    number(node, p, "y"), nonNegative(node, p, "z"),
+                    choice(node, p, "material", SeparationDistance.Material.class), instant(node, p, "createdAt")));
+        }
+        return out;
+    }
+
+    private static List<SiteArchive.Comment> comments(JsonNode array) {
+        List<SiteArchive.Comment> out = new ArrayList<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "comments[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            out.add(new SiteArchive.Comment(nonBlankText(node, p, "author", ACCOUNT),
+                    nonBlankText(node, p, "body", COMMENT), instant(node, p, "createdAt")));
+        }
+        return out;
+    }
+
+    private static List<SiteArchive.AuditEntry> auditTrail(JsonNode array) {
+        List<SiteArchive.AuditEntry> out = new ArrayList<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "auditTrail[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            out.add(new SiteArchive.AuditEntry(nonBlankText(node, p, "actor", ACCOUNT),
+                    nonBlankText(node, p, "action", ACTION), text(node, p, "detail", DETAIL),
+                    instant(node, p, "createdAt")));
+        }
+        return out;
+    }
+
+    private static List<SiteArchive.Review> reviews(JsonNode array, String path) {
+        List<SiteArchive.Review> out = new ArrayList<>();
+        Set<String> reviewers = new HashSet<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = path + "[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            String reviewer = nonBlankText(node, p, "reviewer", ACCOUNT);
+            if (!reviewers.add(reviewer)) {
+                throw bad(p + ".reviewer", "repeats reviewer " + reviewer);
+            }
+            out.add(new SiteArchive.Review(reviewer, instant(node, p, "reviewedAt")));
+        }
+        return out;
     }
 
     private static SiteArchive.Site site(JsonNode node) {
@@ -161,7 +252,7 @@ final class SiteArchiveCodec {
                     whole(node, p, "engineMillis", 0, Long.MAX_VALUE), instant(node, p, "createdAt"),
                     accepted(array(node, p, "accepted"), p + ".accepted"), optionalText(node, p, "siteName", NAME),
                     optionalText(node, p, "sourceName", FILE_NAME), optionalText(node, p, "sourceText", LONG_TEXT),
-                    optionalPositive(node, p, "tolerance")));
+                    optionalPositive(node, p, "tolerance"), reviews(optionalArray(node, p, "reviews"), p + ".reviews")));
         }
         return out;
     }

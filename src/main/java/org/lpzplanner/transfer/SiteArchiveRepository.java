@@ -3,16 +3,21 @@ package org.lpzplanner.transfer;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Timestamp;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.jdbc.support.GeneratedKeyHolder;
 import org.springframework.jdbc.support.KeyHolder;
 import org.springframework.stereotype.Repository;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 
 /** Reads a whole site out of the database and writes one back as a new site, row by row. */
 @Repository
 class SiteArchiveRepository {
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private final JdbcClient jdbc;
 
@@ -20,10 +25,11 @@ class SiteArchiveRepository {
         this.jdbc = jdbc;
     }
 
-    Optional<SiteArchive> read(long siteId) {
+    /** The site if the team owns it. */
+    Optional<SiteArchive> read(long siteId, long teamId) {
         Optional<SiteArchive.Site> site = jdbc.sql("SELECT name, protection_level, custom_radius, source_name,"
-                        + " source_text, created_at, updated_at, version FROM sites WHERE id = ?")
-                .param(siteId).query(SiteArchiveRepository::siteRow).optional();
+                        + " source_text, created_at, updated_at, version FROM sites WHERE id = ? AND team_id = ?")
+                .params(siteId, teamId).query(SiteArchiveRepository::siteRow).optional();
         if (site.isEmpty()) {
             return Optional.empty();
         }
@@ -38,7 +44,8 @@ class SiteArchiveRepository {
                         + " facade_bands, protected_ground_area, fully_protected, result_geojson, engine_millis,"
                         + " created_at, site_name, source_name, source_text, tolerance FROM analysis_revisions"
                         + " WHERE site_id = ? ORDER BY revision")
-                .param(siteId).query((rs, n) -> revisionRow(rs, accepted(rs.getLong("id")))).list();
+                .param(siteId).query((rs, n) -> revisionRow(rs, accepted(rs.getLong("id")), reviews(rs.getLong("id"))))
+                .list();
         SiteArchive.RiskInputs risk = jdbc.sql("SELECT * FROM site_risk_inputs WHERE site_id = ?").param(siteId)
                 .query((rs, n) -> new SiteArchive.RiskInputs(rs.getString("flash_density_source"),
                         nullable(rs, "flash_density"), nullable(rs, "thunderstorm_days"), rs.getString("location_factor"),
@@ -48,7 +55,43 @@ class SiteArchiveRepository {
                         nullableInt(rs, "line_count"), nullable(rs, "line_length"),
                         rs.getTimestamp("updated_at").toInstant()))
                 .optional().orElse(null);
-        return Optional.of(new SiteArchive(site.get(), files, revisions, risk));
+        List<SiteArchive.DownConductorEdit> downs = jdbc.sql("SELECT structure_id, positions, updated_at"
+                        + " FROM down_conductor_positions WHERE site_id = ? ORDER BY structure_id")
+                .param(siteId).query((rs, n) -> new SiteArchive.DownConductorEdit(rs.getString("structure_id"),
+                        positions(rs.getString("positions")), rs.getTimestamp("updated_at").toInstant()))
+                .list();
+        List<SiteArchive.MetalInstallation> metals = jdbc.sql("SELECT name, x, y, z, material, created_at"
+                        + " FROM metal_installations WHERE site_id = ? ORDER BY id")
+                .param(siteId).query((rs, n) -> new SiteArchive.MetalInstallation(rs.getString("name"),
+                        rs.getDouble("x"), rs.getDouble("y"), rs.getDouble("z"), rs.getString("material"),
+                        rs.getTimestamp("created_at").toInstant()))
+                .list();
+        List<SiteArchive.Comment> comments = jdbc.sql("SELECT author, body, created_at FROM site_comments"
+                        + " WHERE site_id = ? ORDER BY created_at, id")
+                .param(siteId).query((rs, n) -> new SiteArchive.Comment(rs.getString("author"), rs.getString("body"),
+                        rs.getTimestamp("created_at").toInstant()))
+                .list();
+        List<SiteArchive.AuditEntry> trail = jdbc.sql("SELECT actor, action, detail, created_at FROM audit_events"
+                        + " WHERE site_id = ? ORDER BY created_at, id")
+                .param(siteId).query((rs, n) -> new SiteArchive.AuditEntry(rs.getString("actor"),
+                        rs.getString("action"), rs.getString("detail"), rs.getTimestamp("created_at").toInstant()))
+                .list();
+        return Optional.of(new SiteArchive(site.get(), files, revisions, risk, downs, metals, comments, trail));
+    }
+
+    private List<SiteArchive.Review> reviews(long revisionId) {
+        return jdbc.sql("SELECT reviewer, reviewed_at FROM revision_reviews WHERE revision_id = ? ORDER BY reviewed_at, id")
+                .param(revisionId)
+                .query((rs, n) -> new SiteArchive.Review(rs.getString("reviewer"), rs.getTimestamp("reviewed_at").toInstant()))
+                .list();
+    }
+
+    private static List<List<Double>> positions(String json) {
+        List<List<Double>> out = new ArrayList<>();
+        for (JsonNode p : JSON.readTree(json)) {
+            out.add(List.of(p.get(0).asDouble(), p.get(1).asDouble()));
+        }
+        return out;
     }
 
     private List<SiteArchive.AcceptedItem> accepted(long revisionId) {
@@ -60,8 +103,8 @@ class SiteArchiveRepository {
     }
 
     /**
-     * Stores the archive as a new site of the given team and returns its id; the caller holds the
-     * transaction.
+     * Stores the archive as a new site of the team and returns its id; the caller holds the
+     * transaction. The archive's audit trail is not written (see {@link SiteArchive}).
      */
     long insert(SiteArchive archive, long teamId) {
         SiteArchive.Site s = archive.site();
@@ -95,6 +138,27 @@ class SiteArchiveRepository {
                 jdbc.sql("INSERT INTO accepted_items (revision_id, item_key, reason, created_at) VALUES (?, ?, ?, ?)")
                         .params(revisionId, a.key(), a.reason(), Timestamp.from(a.createdAt())).update();
             }
+            for (SiteArchive.Review v : r.reviews()) {
+                jdbc.sql("INSERT INTO revision_reviews (revision_id, reviewer, reviewed_at) VALUES (?, ?, ?)")
+                        .params(revisionId, v.reviewer(), Timestamp.from(v.reviewedAt())).update();
+            }
+        }
+        for (SiteArchive.DownConductorEdit d : archive.downConductors()) {
+            jdbc.sql("INSERT INTO down_conductor_positions (site_id, structure_id, positions, updated_at)"
+                            + " VALUES (?, ?, ?, ?)")
+                    .params(siteId, d.structureId(), JSON.writeValueAsString(d.positions()),
+                            Timestamp.from(d.updatedAt()))
+                    .update();
+        }
+        for (SiteArchive.MetalInstallation m : archive.metalInstallations()) {
+            jdbc.sql("INSERT INTO metal_installations (site_id, name, x, y, z, material, created_at)"
+                            + " VALUES (?, ?, ?, ?, ?, ?, ?)")
+                    .params(siteId, m.name(), m.x(), m.y(), m.z(), m.material(), Timestamp.from(m.createdAt()))
+                    .update();
+        }
+        for (SiteArchive.Comment c : archive.comments()) {
+            jdbc.sql("INSERT INTO site_comments (site_id, author, body, created_at) VALUES (?, ?, ?, ?)")
+                    .params(siteId, c.author(), c.body(), Timestamp.from(c.createdAt())).update();
         }
         SiteArchive.RiskInputs k = archive.riskInputs();
         if (k != null) {
@@ -129,14 +193,14 @@ class SiteArchiveRepository {
                 rs.getTimestamp("updated_at").toInstant(), rs.getLong("version"));
     }
 
-    private static SiteArchive.Revision revisionRow(ResultSet rs, List<SiteArchive.AcceptedItem> accepted)
-            throws SQLException {
+    private static SiteArchive.Revision revisionRow(ResultSet rs, List<SiteArchive.AcceptedItem> accepted,
+            List<SiteArchive.Review> reviews) throws SQLException {
         return new SiteArchive.Revision(rs.getInt("revision"), rs.getString("protection_level"),
                 rs.getDouble("sphere_radius"), rs.getDouble("resolution"), rs.getString("inputs_sha256"),
                 rs.getDouble("exposed_roof_area"), rs.getDouble("exposed_edge_length"), rs.getInt("exposed_corners"),
                 rs.getInt("facade_bands"), rs.getDouble("protected_ground_area"), rs.getBoolean("fully_protected"),
                 rs.getString("result_geojson"), rs.getLong("engine_millis"), rs.getTimestamp("created_at").toInstant(),
                 accepted, rs.getString("site_name"), rs.getString("source_name"), rs.getString("source_text"),
-                nullable(rs, "tolerance"));
+                nullable(rs, "tolerance"), reviews);
     }
 }

@@ -1,10 +1,9 @@
 package org.lpzplanner.transfer;
 
-import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.sites.SiteFiles;
-import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.stereotype.Service;
@@ -22,27 +21,26 @@ public class SiteTransferService {
     }
 
     private final SiteArchiveRepository archives;
-
-    private final SiteService sites;
     private final AuditTrail audit;
 
-    public SiteTransferService(SiteArchiveRepository archives, SiteService sites, AuditTrail audit) {
+    public SiteTransferService(SiteArchiveRepository archives, AuditTrail audit) {
         this.archives = archives;
-        this.sites = sites;
         this.audit = audit;
     }
 
-    /** @throws SiteNotFoundException when no site of the caller's team has this id */
+    /** @throws SiteNotFoundException when the caller's team has no site with this id */
     @Transactional(readOnly = true)
     public ExportFile export(long siteId) {
-        sites.get(siteId); // another team's site is not found, as everywhere
-        SiteArchive archive = archives.read(siteId).orElseThrow(() -> new SiteNotFoundException(siteId));
+        SiteArchive archive = archives.read(siteId, CurrentAccount.teamId())
+                .orElseThrow(() -> new SiteNotFoundException(siteId));
         return new ExportFile(exportName(archive.site().fileName()), SiteArchiveCodec.write(archive));
     }
 
     /**
-     * Stores the site of an export file as a new site with all its earlier files, revisions and
-     * accepted items, and returns the new site's id.
+     * Stores the site of an export file as a new site of the caller's team with all its earlier
+     * files, revisions, accepted items, reviewed marks, risk inputs, design edits and comments, and
+     * returns the new site's id. The exported audit trail is not replayed: the new site's trail
+     * starts with one "import" event by the caller (the trail records what happened here).
      *
      * @throws InvalidInputException when the file is not a usable site export, naming the member
      * @throws SiteFormatException   when the site file inside it is not a valid site
@@ -51,9 +49,11 @@ public class SiteTransferService {
     public long importSite(byte[] content) {
         SiteArchive archive = SiteArchiveCodec.read(content);
         SiteFiles.read(archive.site().fileText(), archive.site().fileName());
-        long id = archives.insert(archive, CurrentAccount.teamId());
-        audit.record(id, "import", "imported \"" + archive.site().name() + "\" from a site export");
-        return id;
+        long siteId = archives.insert(archive, CurrentAccount.teamId());
+        audit.record(siteId, "import", "imported \"" + archive.site().name() + "\" from a site export ("
+                + archive.revisions().size() + " revision(s), " + archive.auditTrail().size()
+                + " earlier audit event(s) kept in the file only)");
+        return siteId;
     }
 
     /** "harbour.geojson" gives "harbour.site-export.json". */

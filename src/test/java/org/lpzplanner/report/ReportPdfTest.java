@@ -122,6 +122,10 @@ class ReportPdfTest {
             assertThat(all).contains(s.name());
         }
         assertThat(all).contains("D" + downConductors + " ");
+        // the bill of quantities counts one test joint and one earth termination per down-conductor
+        // (common practice) and each air-termination part
+        assertThat(all).contains("Bill of quantities").contains("Test joint pcs " + downConductors + " ")
+                .contains("Earth termination pcs " + downConductors + " ");
         // Separation distances with an assumed length never pass (IEC 62305-3 6.3: l must be known).
         assertThat(all).contains("Schedule of separation distances").containsPattern("\\d not confirmed")
                 .doesNotContainPattern("\\d passes");
@@ -138,6 +142,18 @@ class ReportPdfTest {
         String all = flat(String.join(" ", pages(PdfReportRenderer.render(ReportAssembler.assemble(reviewed)))));
         assertThat(all).contains("accepted: covered by a steel gutter");
         assertThat(all).contains("Accepted by the designer: 1. Remaining: " + (items.size() - 1) + ".");
+    }
+
+    @Test
+    void aSectionWithoutColumnsPrintsItsTitleAndNotes() throws Exception {
+        var leftOut = new org.lpzplanner.common.ReportSection("Risk estimate (IEC 62305-2)", List.of(), List.of(),
+                List.of("Not included: no stored risk inputs."));
+        String text = Files.readString(Path.of("sample-sites/harbour-warehouse.geojson"));
+        ReportSource source = source(text, "harbour-warehouse.geojson", ProtectionLevel.III, Map.of());
+        String all = flat(String.join(" ", pages(PdfReportRenderer.render(ReportAssembler.assemble(source, null,
+                StoredDesign.NONE, List.of(leftOut))))));
+        assertThat(all).contains(ReportAssembler.APPENDIX + " Risk estimate (IEC 62305-2) Not included: no stored"
+                + " risk inputs.").doesNotContain("as stored for the site");
     }
 
     @Test

@@ -14,6 +14,8 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.comments.CommentService;
+import org.lpzplanner.design.DesignService;
 import org.lpzplanner.sites.AirTerminationService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -47,6 +49,10 @@ class SiteTransferTest {
     ReviewService reviews;
     @Autowired
     JdbcClient jdbc;
+    @Autowired
+    DesignService design;
+    @Autowired
+    CommentService comments;
 
     /** A site with an added rod, a corrected structure (two earlier files), two revisions and an accepted item. */
     private long workedSite() throws Exception {
@@ -64,6 +70,14 @@ class SiteTransferTest {
                         + "/risk").contentType(org.springframework.http.MediaType.APPLICATION_JSON)
                         .content("{\"flashDensity\": \"4\", \"location\": \"surrounded_by_higher\", \"lineCount\": 2}"))
                 .andExpect(status().isOk());
+        // design edits: one structure's down-conductors moved, one metal installation marked
+        DesignService.DownConductors planned = design.downConductors(site.id()).get(0);
+        java.util.List<double[]> moved = new java.util.ArrayList<>(planned.positions());
+        moved.set(0, new double[] {moved.get(0)[0] + 0.5, moved.get(0)[1]});
+        design.saveDownConductors(site.id(), planned.structureId(), moved);
+        design.addInstallation(site.id(), "Vent pipe \u00e9", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
+        comments.comment(site.id(), "Check the gutter bonding \u2013 \"north\" side");
+        comments.markReviewed(site.id());
         return site.id();
     }
 
@@ -84,7 +98,9 @@ class SiteTransferTest {
     private long rows() {
         return jdbc.sql("SELECT (SELECT COUNT(*) FROM sites) + (SELECT COUNT(*) FROM site_file_versions)"
                 + " + (SELECT COUNT(*) FROM analysis_revisions) + (SELECT COUNT(*) FROM accepted_items)"
-                + " + (SELECT COUNT(*) FROM site_risk_inputs)")
+                + " + (SELECT COUNT(*) FROM site_risk_inputs) + (SELECT COUNT(*) FROM down_conductor_positions)"
+                + " + (SELECT COUNT(*) FROM metal_installations) + (SELECT COUNT(*) FROM site_comments)"
+                + " + (SELECT COUNT(*) FROM revision_reviews) + (SELECT COUNT(*) FROM audit_events)")
                 .query(Long.class).single();
     }
 
@@ -99,15 +115,43 @@ class SiteTransferTest {
         assertThat(doc.path("site").path("fileText").stringValue()).contains("North rod");
         assertThat(doc.path("riskInputs").path("flashDensity").asDouble()).isEqualTo(4.0);
         assertThat(doc.path("revisions").get(1).path("sourceText").stringValue()).contains("North rod");
+        assertThat(doc.path("revisions").get(1).path("reviews")).hasSize(1);
+        assertThat(doc.path("downConductors")).hasSize(1);
+        assertThat(doc.path("metalInstallations").get(0).path("material").stringValue()).isEqualTo("CONCRETE_OR_BRICK");
+        assertThat(doc.path("comments").get(0).path("body").stringValue()).contains("gutter bonding");
+        JsonNode trail = doc.path("auditTrail");
+        assertThat(trail.size()).isGreaterThanOrEqualTo(4);
+        assertThat(trail.get(0).path("action").stringValue()).isEqualTo("upload");
 
         long copy = importFile(first);
         assertThat(copy).isNotEqualTo(id);
         byte[] second = export(copy);
-        // byte-for-byte equal: the export holds no database ids, so the imported site is the same site
-        assertThat(new String(second, StandardCharsets.UTF_8)).isEqualTo(new String(first, StandardCharsets.UTF_8));
+        // byte-for-byte equal but for the audit trail: the export holds no database ids, so the
+        // imported site is the same site; its trail starts anew with the import
+        JsonNode newTrail = JSON.readTree(second).path("auditTrail");
+        assertThat(newTrail).hasSize(1);
+        assertThat(newTrail.get(0).path("action").stringValue()).isEqualTo("import");
+        assertThat(newTrail.get(0).path("detail").stringValue()).contains(trail.size() + " earlier audit event(s)");
+        assertThat(beforeTrail(second)).isEqualTo(beforeTrail(first));
         assertThat(sites.get(copy).sourceText()).isEqualTo(sites.get(id).sourceText());
         assertThat(reviews.latest(copy).orElseThrow().acceptedCount()).isEqualTo(1);
+        assertThat(design.downConductors(copy).get(0).edited()).isTrue();
+        assertThat(design.downConductors(copy).get(0).positions().get(0))
+                .containsExactly(design.downConductors(id).get(0).positions().get(0));
+        assertThat(design.separations(copy)).hasSameSizeAs(design.separations(id));
+        assertThat(comments.comments(copy)).hasSize(1);
+        assertThat(comments.reviews(copy)).hasSize(1);
         mvc.perform(get("/api/sites/" + copy + "/file/versions/2")).andExpect(status().isOk());
+    }
+
+    @Test
+    void anotherTeamsSiteIsNotExported() throws Exception {
+        long id = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Other shed", "III", null).id();
+        jdbc.sql("INSERT INTO teams (name, created_at) VALUES ('Export elsewhere', CURRENT_TIMESTAMP)").update();
+        jdbc.sql("UPDATE sites SET team_id = (SELECT id FROM teams WHERE name = 'Export elsewhere') WHERE id = ?")
+                .param(id).update();
+        mvc.perform(get("/api/sites/" + id + "/export")).andExpect(status().isNotFound());
     }
 
     @Test
@@ -158,6 +202,20 @@ class SiteTransferTest {
         ObjectNode badRisk = good.deepCopy();
         ((ObjectNode) badRisk.get("riskInputs")).put("fireRisk", "EXTREME");
         refused(bytes(badRisk), "riskInputs.fireRisk", "must be one of");
+        ObjectNode badMetal = good.deepCopy();
+        ((ObjectNode) badMetal.get("metalInstallations").get(0)).put("material", "WOOD");
+        refused(bytes(badMetal), "metalInstallations[0].material", "must be one of");
+        ObjectNode badPosition = good.deepCopy();
+        ((tools.jackson.databind.node.ArrayNode) badPosition.get("downConductors").get(0).get("positions")).set(1,
+                JSON.getNodeFactory().stringNode("north"));
+        refused(bytes(badPosition), "downConductors[0].positions[1]", "[x, y]");
+        ObjectNode twiceReviewed = good.deepCopy();
+        var marks = (tools.jackson.databind.node.ArrayNode) twiceReviewed.get("revisions").get(1).get("reviews");
+        marks.add(marks.get(0).deepCopy());
+        refused(bytes(twiceReviewed), "revisions[1].reviews[1].reviewer", "repeats reviewer");
+        ObjectNode blankComment = good.deepCopy();
+        ((ObjectNode) blankComment.get("comments").get(0)).put("body", " ");
+        refused(bytes(blankComment), "comments[0].body", "");
 
         // the site file inside is checked like an upload: the engine's reader names the feature
         ObjectNode badSiteFile = good.deepCopy();
@@ -175,6 +233,13 @@ class SiteTransferTest {
                 .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
                         .string(org.hamcrest.Matchers.containsString("repeats revision 1")));
         assertThat(rows()).isEqualTo(before);
+    }
+
+    /** The export's text up to the audit trail (the trail is the last member). */
+    private static String beforeTrail(byte[] export) {
+        String text = new String(export, StandardCharsets.UTF_8);
+        assertThat(text).contains("\"auditTrail\"");
+        return text.substring(0, text.indexOf("\"auditTrail\""));
     }
 
     private static byte[] bytes(JsonNode node) {

@@ -7,7 +7,12 @@ import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.algorithm.Orientation;
+import org.lpzplanner.engine.exposure.AnalysisOptions;
+import org.lpzplanner.engine.exposure.CornerExposure;
+import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.engine.model.Structure;
 
 /**
@@ -72,6 +77,69 @@ public final class DownConductorPlan {
         return new DownConductorLayout(structure.id(), perimeter, typicalSpacing, positions, largest);
     }
 
+    /**
+     * Layouts of every structure of a site at the level's typical spacing, preferring the outside
+     * corners the sphere reaches on the bare structures (air-termination left out, 1 m grid): where
+     * down-conductors go does not move when parts are added. The design page and the printed report
+     * both plan this way, so they show the same positions.
+     */
+    public static List<DownConductorLayout> planSite(Site site, SphereSpec sphere) {
+        List<Coordinate> exposedCorners = new ArrayList<>();
+        for (CornerExposure c : ExposureAnalysis.analyze(site.withAirTermination(List.of(), List.of()),
+                AnalysisOptions.of(sphere).withResolution(1.0)).corners()) {
+            exposedCorners.add(c.point());
+        }
+        List<DownConductorLayout> out = new ArrayList<>();
+        for (Structure s : site.structures()) {
+            out.add(plan(s, sphere.level().downConductorSpacing(), exposedCorners));
+        }
+        return out;
+    }
+
+    /**
+     * The layout of positions a designer chose: perimeter as {@link #plan}, largest spacing measured
+     * along the outline between neighbouring positions (each position counts on the outer ring
+     * nearest to it; a ring with none counts its whole length as one gap).
+     */
+    public static DownConductorLayout edited(Structure structure, double typicalSpacing, List<Coordinate> positions) {
+        Geometry footprint = structure.footprint();
+        List<Ring> rings = new ArrayList<>();
+        List<List<Double>> stations = new ArrayList<>();
+        double perimeter = 0;
+        for (int k = 0; k < footprint.getNumGeometries(); k++) {
+            Ring ring = new Ring(((Polygon) footprint.getGeometryN(k)).getExteriorRing().getCoordinates());
+            rings.add(ring);
+            stations.add(new ArrayList<>());
+            perimeter += ring.length;
+        }
+        for (Coordinate p : positions) {
+            int best = 0;
+            double bestDistance = Double.POSITIVE_INFINITY;
+            for (int k = 0; k < rings.size(); k++) {
+                double d = rings.get(k).distanceTo(p);
+                if (d < bestDistance) {
+                    bestDistance = d;
+                    best = k;
+                }
+            }
+            stations.get(best).add(rings.get(best).stationOf(p));
+        }
+        double largest = 0;
+        for (int k = 0; k < rings.size(); k++) {
+            List<Double> at = stations.get(k);
+            at.sort(Double::compare);
+            if (at.size() < 2) {
+                largest = Math.max(largest, rings.get(k).length);
+                continue;
+            }
+            for (int i = 0; i < at.size(); i++) {
+                double next = i + 1 < at.size() ? at.get(i + 1) : at.get(0) + rings.get(k).length;
+                largest = Math.max(largest, next - at.get(i));
+            }
+        }
+        return new DownConductorLayout(structure.id(), perimeter, typicalSpacing, positions, largest);
+    }
+
     /** A closed ring, counter-clockwise, with the distance along it of each vertex. */
     private static final class Ring {
         final Coordinate[] cs;
@@ -93,6 +161,32 @@ public final class DownConductorPlan {
                 at[i] = at[i - 1] + c[i - 1].distance(c[i]);
             }
             length = at[c.length - 1];
+        }
+
+        /** Plan distance from p to the ring. */
+        double distanceTo(Coordinate p) {
+            double best = Double.POSITIVE_INFINITY;
+            for (int i = 1; i < cs.length; i++) {
+                best = Math.min(best, org.locationtech.jts.algorithm.Distance.pointToSegment(p, cs[i - 1], cs[i]));
+            }
+            return best;
+        }
+
+        /** Distance along the ring of the ring point nearest p. */
+        double stationOf(Coordinate p) {
+            double best = Double.POSITIVE_INFINITY;
+            double station = 0;
+            for (int i = 1; i < cs.length; i++) {
+                org.locationtech.jts.geom.LineSegment seg = new org.locationtech.jts.geom.LineSegment(cs[i - 1], cs[i]);
+                double f = seg.segmentFraction(p);
+                Coordinate q = seg.pointAlong(f);
+                double d = q.distance(p);
+                if (d < best) {
+                    best = d;
+                    station = at[i - 1] + f * seg.getLength();
+                }
+            }
+            return station;
         }
 
         /** Distances along the ring of the n positions, sorted. */

@@ -97,4 +97,22 @@ class DownConductorPlanTest {
                     .anyMatch(c -> Math.hypot(c.x - p[0], c.y - p[1]) < 1e-9);
         }
     }
+
+    @Test
+    void editedPositionsAreMeasuredAlongTheOutline() {
+        // 40 m × 20 m: perimeter 120 m; two opposite corners split it into 60 m and 60 m, two
+        // neighbouring corners into 40 m and 80 m (closed-form rectangle)
+        var opposite = DownConductorPlan.edited(HALL, 10, List.of(new Coordinate(0, 0), new Coordinate(40, 20)));
+        assertThat(opposite.perimeter()).isCloseTo(120, within(1e-9));
+        assertThat(opposite.largestSpacing()).isCloseTo(60, within(1e-9));
+        var neighbours = DownConductorPlan.edited(HALL, 10, List.of(new Coordinate(40, 0), new Coordinate(0, 0)));
+        assertThat(neighbours.largestSpacing()).isCloseTo(80, within(1e-9));
+        assertThat(neighbours.exceedsTypicalSpacing()).isTrue();
+        // a position 0.5 m outside the wall counts at its nearest point of the outline
+        var outside = DownConductorPlan.edited(HALL, 10, List.of(new Coordinate(20, -0.5), new Coordinate(20, 20.5)));
+        assertThat(outside.largestSpacing()).isCloseTo(60, within(1e-9));
+        // one position leaves the whole outline as one gap
+        assertThat(DownConductorPlan.edited(HALL, 10, List.of(new Coordinate(0, 0))).largestSpacing())
+                .isCloseTo(120, within(1e-9));
+    }
 }

@@ -1,0 +1,146 @@
+package org.lpzplanner.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.imageio.ImageIO;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.rendering.PDFRenderer;
+import org.junit.jupiter.api.Test;
+import org.lpzplanner.accounts.SignedIn;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.common.ReportSection;
+import org.lpzplanner.design.DesignService;
+import org.lpzplanner.risk.RiskService;
+import org.lpzplanner.sites.AirTerminationService;
+import org.lpzplanner.sites.SiteService;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+
+/**
+ * A printed revision carries the site's data kept beside its revisions: the risk estimate, the bill
+ * of quantities, the designer's edited down-conductors and marked metal installations. The PDF is
+ * read back and compared with what the risk and design features compute, and with closed-form values.
+ */
+@SpringBootTest
+@AutoConfigureMockMvc
+@SignedIn
+class ReportSiteDataTest {
+
+    @Autowired
+    MockMvc mvc;
+    @Autowired
+    SiteService sites;
+    @Autowired
+    AnalysisService analyses;
+    @Autowired
+    AirTerminationService parts;
+    @Autowired
+    DesignService design;
+    @Autowired
+    RiskService risk;
+    @Autowired
+    ReportService reports;
+
+    /** The 80 m × 40 m warehouse (wall 10 m, parapet 1 m) at level III with one 2.5 m rod at (3, 4). */
+    private long designedWarehouse() throws Exception {
+        long id = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Cold store", "III", null).id();
+        parts.addRod(id, sites.get(id).version(), new AirTerminationService.RodInput(null, "Corner rod", 3.0, 4.0, "2.5"));
+        analyses.run(id, null, null, null);
+        mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1}"))
+                .andExpect(status().isOk());
+        String structure = design.downConductors(id).get(0).structureId();
+        design.saveDownConductors(id, structure, List.of(new double[] {0, 0}, new double[] {80, 0},
+                new double[] {80, 40}, new double[] {0, 40}));
+        design.addInstallation(id, "Vent pipe", 5.0, 6.0, 12.0, "CONCRETE_OR_BRICK");
+        return id;
+    }
+
+    private static String text(byte[] pdf) throws Exception {
+        // the font has no superscript minus or minus sign: they print as a hyphen
+        return String.join(" ", ReportPdfTest.pages(pdf)).replaceAll("\\s+", " ").replace('\u207B', '-')
+                .replace('\u2212', '-');
+    }
+
+    private static String printable(String cell) {
+        return cell.replaceAll("\\s+", " ").replace('\u207B', '-').replace('\u2212', '-');
+    }
+
+    @Test
+    void riskEstimateAndBillOfQuantitiesPrintAsTheFeaturesComputeThem() throws Exception {
+        long id = designedWarehouse();
+        String text = text(reports.pdf(id, 1));
+
+        ReportSection riskSection = risk.reportSection(id, Locale.ENGLISH);
+        assertThat(riskSection.rows()).hasSize(5);
+        assertThat(text).contains(riskSection.title());
+        for (List<String> row : riskSection.rows()) {
+            // every option's row prints its figures in column order
+            assertThat(text).contains(printable(String.join(" ", row)));
+        }
+        assertThat(text).contains(printable(riskSection.notes().get(0)));
+        assertThat(text).containsPattern("from the site's data as stored for the site on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC"
+                + " when this report was printed");
+
+        ReportSection quantities = design.quantitiesSection(id, 1.0);
+        assertThat(text).contains("Bill of quantities");
+        for (List<String> row : quantities.rows()) {
+            assertThat(text).contains(row.get(0) + " " + row.get(1) + " " + row.get(2));
+        }
+        // closed form: four straight drops from the 10 m wall top (the bill counts from the wall top,
+        // not the parapet), one test joint and one earth termination each
+        assertThat(text).contains("Down-conductor m 40 ").contains("Test joint pcs 4 ")
+                .contains("Earth termination pcs 4 ");
+    }
+
+    @Test
+    void editedDownConductorsAndMetalInstallationsEnterTheSchedules() throws Exception {
+        long id = designedWarehouse();
+        byte[] pdf = reports.pdf(id, 1);
+        String text = text(pdf);
+
+        // four corners of the 80 m × 40 m rectangle: gaps of 80 m and 40 m along the outline;
+        // IEC 62305-3:2010 Table 4: 15 m typical spacing at level III, so ⌈240 / 15⌉ = 16 needed
+        assertThat(text).contains("Warehouse edited 240.00 15.00 4 (fewer than 16: check) 60.00 80.00 (over typical: check)");
+        assertThat(text).contains("D1 Warehouse 0.00 0.00").contains("D3 Warehouse 80.00 40.00").doesNotContain("D5 ");
+        assertThat(text).containsPattern("Edited: the designer's positions, as stored for the site on \\d{4}-");
+
+        // s = ki·(kc/km)·l [IEC 62305-3:2010 6.3]: ki = 0.04 at level III (Table 10), kc = 0.44 for four
+        // down-conductors (Table 12, simplified), km = 0.5 in concrete or brick (Table 11); l is the
+        // height of the rod tip, the installation at (5, 6, 12), the tip at (3, 4, l)
+        Matcher m = Pattern.compile("Metal installation: Vent pipe concrete or brick A1 4 ([0-9.]+) ([0-9.]+) ([0-9.]+)"
+                + " (fails|not confirmed)").matcher(text);
+        assertThat(m.find()).as(text).isTrue();
+        double l = Double.parseDouble(m.group(1));
+        assertThat(l).isGreaterThan(10).isLessThan(14);
+        assertThat(Double.parseDouble(m.group(2))).isCloseTo(0.04 * 0.44 / 0.5 * l, org.assertj.core.data.Offset.offset(0.006));
+        assertThat(Double.parseDouble(m.group(3))).isCloseTo(Math.sqrt(4 + 4 + (l - 12) * (l - 12)),
+                org.assertj.core.data.Offset.offset(0.006));
+        assertThat(text).contains("Metal installations: marked by the designer for the site, as stored for the site on");
+        assertThat(text).contains("Down-conductors 4, placed by the designer on 1 of 1 structures");
+
+        Path dir = Path.of("target/report-pages");
+        Files.createDirectories(dir);
+        try (PDDocument doc = Loader.loadPDF(pdf)) {
+            PDFRenderer renderer = new PDFRenderer(doc);
+            for (int i = Math.max(0, doc.getNumberOfPages() - 4); i < doc.getNumberOfPages(); i++) {
+                BufferedImage image = renderer.renderImageWithDPI(i, 70);
+                ImageIO.write(image, "png", dir.resolve("site-data-" + (i + 1) + ".png").toFile());
+            }
+        }
+    }
+}
