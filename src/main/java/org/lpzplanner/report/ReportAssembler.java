@@ -209,7 +209,8 @@ public final class ReportAssembler {
         for (ReportSource.Cut cut : facts.source().savedCuts()) {
             SiteSection section = SiteSection.cut(facts.surface(), facts.field(), cut.x1(), cut.y1(), cut.x2(),
                     cut.y2());
-            blocks.add(new ReportBlock.Section("Saved cut: " + cut.name(), cutText(cut), section));
+            blocks.add(new ReportBlock.Section("Saved cut: " + cut.name(), cutText(cut)
+                    + " Saved for the site; drawn as stored when this report was printed.", section));
         }
         List<AutomaticCuts.StructureCut> cuts = AutomaticCuts.of(facts);
         if (facts.source().savedCuts().isEmpty() && cuts.isEmpty()) {

@@ -14,6 +14,7 @@ import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.RevisionInputs;
 import org.lpzplanner.sites.SiteFileVersion;
+import org.lpzplanner.sites.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.engine.model.SphereSpec;
@@ -22,7 +23,8 @@ import org.springframework.stereotype.Service;
 
 /**
  * Prints a stored analysis revision. The report is made from what the revision kept: its site file
- * and name, sphere, resolution, tolerance and result, plus the acceptances of its review items.
+ * and name, sphere, resolution, tolerance and result, plus the acceptances of its review items, and
+ * the site's saved section cuts as stored when printed.
  * Revisions stored before inputs were kept find their file again by its SHA-256 among the site's
  * current and earlier files.
  */
@@ -34,15 +36,17 @@ public class ReportService {
     private final AcceptedItemRepository accepted;
     private final RiskService risk;
     private final DesignRepository design;
+    private final SiteCutService cuts;
     private final Clock clock;
 
     public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted,
-            RiskService risk, DesignRepository design, Clock clock) {
+            RiskService risk, DesignRepository design, SiteCutService cuts, Clock clock) {
         this.sites = sites;
         this.analyses = analyses;
         this.accepted = accepted;
         this.risk = risk;
         this.design = design;
+        this.cuts = cuts;
         this.clock = clock;
     }
 
@@ -62,7 +66,7 @@ public class ReportService {
         return new ReportSource(inputs.siteName(), inputs.sourceName(), inputs.sourceText(),
                 new SphereSpec(revision.level(), revision.sphereRadius()), revision.resolution(), inputs.tolerance(),
                 revision.revision(), revision.createdAt(), revision.inputsSha256(), revision.resultGeoJson(),
-                accepted.reasons(revision.id()), List.of());
+                accepted.reasons(revision.id()), savedCuts(siteId));
     }
 
     /**
@@ -74,6 +78,12 @@ public class ReportService {
         ReportSource source = source(siteId, revisionNumber);
         return PdfReportRenderer.render(ReportAssembler.assemble(source, null, storedDesign(siteId),
                 List.of(risk.reportSection(siteId, Locale.ENGLISH))));
+    }
+
+    /** The site's saved section cuts as stored now (they belong to the site, not to the revision). */
+    private List<ReportSource.Cut> savedCuts(long siteId) {
+        return cuts.cuts(siteId).stream()
+                .map(c -> new ReportSource.Cut(c.name(), c.x1(), c.y1(), c.x2(), c.y2())).toList();
     }
 
     /** The site's design data as stored now. */

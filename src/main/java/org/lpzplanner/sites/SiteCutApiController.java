@@ -1,0 +1,67 @@
+package org.lpzplanner.sites;
+
+import java.net.URI;
+import java.util.List;
+import org.lpzplanner.system.InvalidInputException;
+import org.springframework.http.HttpStatus;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
+import org.springframework.web.bind.annotation.DeleteMapping;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestMapping;
+import org.springframework.web.bind.annotation.RestController;
+import tools.jackson.databind.JsonNode;
+
+/**
+ * JSON API of saved section cuts: {@code GET|POST /api/sites/{id}/cuts} (JSON
+ * {@code {"name": "...", "x1": 0, "y1": 0, "x2": 10, "y2": 0}}, local metres) and
+ * {@code DELETE /api/sites/{id}/cuts/{cutId}}.
+ */
+@RestController
+@RequestMapping("/api/sites/{id}/cuts")
+public class SiteCutApiController {
+
+    private static final String[] ENDS = {"x1", "y1", "x2", "y2"};
+
+    private final SiteCutService cuts;
+
+    public SiteCutApiController(SiteCutService cuts) {
+        this.cuts = cuts;
+    }
+
+    @GetMapping
+    public List<SiteCut> list(@PathVariable long id) {
+        return cuts.cuts(id);
+    }
+
+    @PostMapping(consumes = MediaType.APPLICATION_JSON_VALUE)
+    public ResponseEntity<SiteCut> save(@PathVariable long id, @RequestBody JsonNode body) {
+        JsonNode name = body.path("name");
+        if (!name.isString()) {
+            throw new InvalidInputException("name", "send \"name\" as a string");
+        }
+        String[] ends = new String[4];
+        for (int i = 0; i < 4; i++) {
+            JsonNode n = body.path(ENDS[i]);
+            if (n.isMissingNode() || n.isNull()) {
+                ends[i] = null;
+            } else if (n.isNumber()) {
+                ends[i] = String.valueOf(n.asDouble());
+            } else {
+                throw new InvalidInputException(ENDS[i], ENDS[i] + " must be a number of metres, got " + n);
+            }
+        }
+        SiteCut cut = cuts.save(id, name.stringValue(), ends);
+        return ResponseEntity.status(HttpStatus.CREATED)
+                .location(URI.create("/api/sites/" + id + "/cuts/" + cut.id())).body(cut);
+    }
+
+    @DeleteMapping("/{cutId}")
+    public ResponseEntity<Void> delete(@PathVariable long id, @PathVariable long cutId) {
+        cuts.delete(id, cutId);
+        return ResponseEntity.noContent().build();
+    }
+}
