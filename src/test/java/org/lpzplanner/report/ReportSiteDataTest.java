@@ -22,6 +22,7 @@ import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.design.DesignService;
 import org.lpzplanner.risk.RiskService;
 import org.lpzplanner.sites.AirTerminationService;
+import org.lpzplanner.sites.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -53,6 +54,8 @@ class ReportSiteDataTest {
     RiskService risk;
     @Autowired
     ReportService reports;
+    @Autowired
+    SiteCutService cuts;
 
     /** The 80 m × 40 m warehouse (wall 10 m, parapet 1 m) at level III with one 2.5 m rod at (3, 4). */
     private long designedWarehouse() throws Exception {
@@ -142,5 +145,27 @@ class ReportSiteDataTest {
                 ImageIO.write(image, "png", dir.resolve("site-data-" + (i + 1) + ".png").toFile());
             }
         }
+    }
+
+    @Test
+    void savedCutsPrintAsSectionsNamedByTheirNamesAsStoredWhenPrinted() throws Exception {
+        long id = designedWarehouse();
+        // saved after the revision: saved cuts belong to the site and print as stored when printed
+        cuts.save(id, "Quay section", new String[] {"-10", "20", "90", "20"});
+        long gone = cuts.save(id, "Dropped cut", new String[] {"0", "0", "0", "30"}).id();
+        cuts.delete(id, gone);
+        String text = text(reports.pdf(id, 1));
+
+        int at = text.indexOf("Saved cut: Quay section");
+        assertThat(at).as(text).isPositive();
+        assertThat(text).doesNotContain("Dropped cut");
+        int next = text.indexOf("Section through", at);
+        String section = text.substring(at, next > at ? next : text.length());
+        assertThat(section).contains("from (-10.00, 20.00) to (90.00, 20.00), local metres.")
+                .contains("Saved for the site; drawn as stored when this report was printed.")
+                // the drawing's distance axis runs the cut's length: 90 - (-10) = 100 m (closed form)
+                .contains("m along the cut").containsPattern("\\b100\\b");
+        // drawn before the automatic cuts
+        assertThat(text.indexOf("Section through")).isGreaterThan(at);
     }
 }
