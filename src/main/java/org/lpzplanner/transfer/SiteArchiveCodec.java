@@ -61,6 +61,7 @@ final class SiteArchiveCodec {
     private static final int LONG_TEXT = 50_000_000;
     private static final int ACCOUNT = 254;
     private static final int COMMENT = 4000;
+    private static final int CUT_NAME = 100;
     private static final int DETAIL = 1000;
     private static final int ACTION = 40;
 
@@ -76,6 +77,7 @@ final class SiteArchiveCodec {
         document.put("riskInputs", archive.riskInputs());
         document.put("downConductors", archive.downConductors());
         document.put("metalInstallations", archive.metalInstallations());
+        document.put("savedCuts", archive.savedCuts());
         document.put("comments", archive.comments());
         document.put("auditTrail", archive.auditTrail());
         return JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
@@ -119,6 +121,7 @@ final class SiteArchiveCodec {
                 risk == null || risk.isNull() ? null : riskInputs(object(risk, "riskInputs")),
                 downConductors(optionalArray(root, "", "downConductors")),
                 metalInstallations(optionalArray(root, "", "metalInstallations")),
+                savedCuts(optionalArray(root, "", "savedCuts")),
                 comments(optionalArray(root, "", "comments")), auditTrail(optionalArray(root, "", "auditTrail")));
     }
 
@@ -146,6 +149,26 @@ final class SiteArchiveCodec {
                 xy.add(List.of(pair.get(0).asDouble(), pair.get(1).asDouble()));
             }
             out.add(new SiteArchive.DownConductorEdit(structure, xy, instant(node, p, "updatedAt")));
+        }
+        return out;
+    }
+
+    /** Cuts as the section page saves them: a name of at most 100 characters, ends 1 m to 2000 m apart. */
+    private static List<SiteArchive.SavedCut> savedCuts(JsonNode array) {
+        List<SiteArchive.SavedCut> out = new ArrayList<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "savedCuts[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            String name = nonBlankText(node, p, "name", CUT_NAME);
+            double x1 = number(node, p, "x1");
+            double y1 = number(node, p, "y1");
+            double x2 = number(node, p, "x2");
+            double y2 = number(node, p, "y2");
+            double length = Math.hypot(x2 - x1, y2 - y1);
+            if (!(length >= 1 && length <= 2000)) {
+                throw bad(p, "is " + length + " m long; a saved cut's ends must be 1 m to 2000 m apart");
+            }
+            out.add(new SiteArchive.SavedCut(name, x1, y1, x2, y2, instant(node, p, "createdAt")));
         }
         return out;
     }

@@ -66,6 +66,12 @@ class SiteArchiveRepository {
                         rs.getDouble("x"), rs.getDouble("y"), rs.getDouble("z"), rs.getString("material"),
                         rs.getTimestamp("created_at").toInstant()))
                 .list();
+        List<SiteArchive.SavedCut> cuts = jdbc.sql("SELECT name, x1, y1, x2, y2, created_at FROM site_cuts"
+                        + " WHERE site_id = ? ORDER BY created_at, id")
+                .param(siteId).query((rs, n) -> new SiteArchive.SavedCut(rs.getString("name"), rs.getDouble("x1"),
+                        rs.getDouble("y1"), rs.getDouble("x2"), rs.getDouble("y2"),
+                        rs.getTimestamp("created_at").toInstant()))
+                .list();
         List<SiteArchive.Comment> comments = jdbc.sql("SELECT author, body, created_at FROM site_comments"
                         + " WHERE site_id = ? ORDER BY created_at, id")
                 .param(siteId).query((rs, n) -> new SiteArchive.Comment(rs.getString("author"), rs.getString("body"),
@@ -76,7 +82,7 @@ class SiteArchiveRepository {
                 .param(siteId).query((rs, n) -> new SiteArchive.AuditEntry(rs.getString("actor"),
                         rs.getString("action"), rs.getString("detail"), rs.getTimestamp("created_at").toInstant()))
                 .list();
-        return Optional.of(new SiteArchive(site.get(), files, revisions, risk, downs, metals, comments, trail));
+        return Optional.of(new SiteArchive(site.get(), files, revisions, risk, downs, metals, cuts, comments, trail));
     }
 
     private List<SiteArchive.Review> reviews(long revisionId) {
@@ -154,6 +160,11 @@ class SiteArchiveRepository {
             jdbc.sql("INSERT INTO metal_installations (site_id, name, x, y, z, material, created_at)"
                             + " VALUES (?, ?, ?, ?, ?, ?, ?)")
                     .params(siteId, m.name(), m.x(), m.y(), m.z(), m.material(), Timestamp.from(m.createdAt()))
+                    .update();
+        }
+        for (SiteArchive.SavedCut c : archive.savedCuts()) {
+            jdbc.sql("INSERT INTO site_cuts (site_id, name, x1, y1, x2, y2, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)")
+                    .params(siteId, c.name(), c.x1(), c.y1(), c.x2(), c.y2(), Timestamp.from(c.createdAt()))
                     .update();
         }
         for (SiteArchive.Comment c : archive.comments()) {

@@ -17,6 +17,7 @@ import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.design.DesignService;
 import org.lpzplanner.sites.AirTerminationService;
+import org.lpzplanner.sites.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.sites.StructureCorrection;
@@ -53,6 +54,8 @@ class SiteTransferTest {
     DesignService design;
     @Autowired
     CommentService comments;
+    @Autowired
+    SiteCutService cuts;
 
     /** A site with an added rod, a corrected structure (two earlier files), two revisions and an accepted item. */
     private long workedSite() throws Exception {
@@ -76,6 +79,7 @@ class SiteTransferTest {
         moved.set(0, new double[] {moved.get(0)[0] + 0.5, moved.get(0)[1]});
         design.saveDownConductors(site.id(), planned.structureId(), moved);
         design.addInstallation(site.id(), "Vent pipe \u00e9", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
+        cuts.save(site.id(), "Quay \u00e9 section", new String[] {"-10", "20", "90.25", "20"});
         comments.comment(site.id(), "Check the gutter bonding \u2013 \"north\" side");
         comments.markReviewed(site.id());
         return site.id();
@@ -100,6 +104,7 @@ class SiteTransferTest {
                 + " + (SELECT COUNT(*) FROM analysis_revisions) + (SELECT COUNT(*) FROM accepted_items)"
                 + " + (SELECT COUNT(*) FROM site_risk_inputs) + (SELECT COUNT(*) FROM down_conductor_positions)"
                 + " + (SELECT COUNT(*) FROM metal_installations) + (SELECT COUNT(*) FROM site_comments)"
+                + " + (SELECT COUNT(*) FROM site_cuts)"
                 + " + (SELECT COUNT(*) FROM revision_reviews) + (SELECT COUNT(*) FROM audit_events)")
                 .query(Long.class).single();
     }
@@ -119,6 +124,8 @@ class SiteTransferTest {
         assertThat(doc.path("downConductors")).hasSize(1);
         assertThat(doc.path("metalInstallations").get(0).path("material").stringValue()).isEqualTo("CONCRETE_OR_BRICK");
         assertThat(doc.path("comments").get(0).path("body").stringValue()).contains("gutter bonding");
+        assertThat(doc.path("savedCuts")).hasSize(1);
+        assertThat(doc.path("savedCuts").get(0).path("x2").asDouble()).isEqualTo(90.25);
         JsonNode trail = doc.path("auditTrail");
         assertThat(trail.size()).isGreaterThanOrEqualTo(4);
         assertThat(trail.get(0).path("action").stringValue()).isEqualTo("upload");
@@ -140,6 +147,10 @@ class SiteTransferTest {
                 .containsExactly(design.downConductors(id).get(0).positions().get(0));
         assertThat(design.separations(copy)).hasSameSizeAs(design.separations(id));
         assertThat(comments.comments(copy)).hasSize(1);
+        assertThat(cuts.cuts(copy)).singleElement().satisfies(c -> {
+            assertThat(c.name()).isEqualTo("Quay \u00e9 section");
+            assertThat(new double[] {c.x1(), c.y1(), c.x2(), c.y2()}).containsExactly(-10, 20, 90.25, 20);
+        });
         assertThat(comments.reviews(copy)).hasSize(1);
         mvc.perform(get("/api/sites/" + copy + "/file/versions/2")).andExpect(status().isOk());
     }
@@ -205,6 +216,9 @@ class SiteTransferTest {
         ObjectNode badMetal = good.deepCopy();
         ((ObjectNode) badMetal.get("metalInstallations").get(0)).put("material", "WOOD");
         refused(bytes(badMetal), "metalInstallations[0].material", "must be one of");
+        ObjectNode shortCut = good.deepCopy();
+        ((ObjectNode) shortCut.get("savedCuts").get(0)).put("x2", -9.5).put("y2", 20);
+        refused(bytes(shortCut), "savedCuts[0]", "1 m to 2000 m apart");
         ObjectNode badPosition = good.deepCopy();
         ((tools.jackson.databind.node.ArrayNode) badPosition.get("downConductors").get(0).get("positions")).set(1,
                 JSON.getNodeFactory().stringNode("north"));
