@@ -1,7 +1,13 @@
 package org.lpzplanner.sites;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.media.Content;
+import io.swagger.v3.oas.annotations.media.Schema;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import java.net.URI;
 import java.util.List;
+import org.lpzplanner.system.ApiError;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
@@ -22,6 +28,7 @@ import tools.jackson.databind.JsonNode;
  */
 @RestController
 @RequestMapping("/api/sites/{id}/cuts")
+@Tag(name = "Sites")
 public class SiteCutApiController {
 
     private static final String[] ENDS = {"x1", "y1", "x2", "y2"};
@@ -32,11 +39,21 @@ public class SiteCutApiController {
         this.cuts = cuts;
     }
 
+    @Operation(summary = "List the site's saved section cuts", description = "Oldest first; ends in local metres")
+    @ApiResponse(responseCode = "200", description = "The saved cuts")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping
     public List<SiteCut> list(@PathVariable long id) {
         return cuts.cuts(id);
     }
 
+    @Operation(summary = "Save a section cut under a name",
+            description = "Name of at most 100 characters; ends x1, y1, x2, y2 in local metres, 1 m to 2000 m apart;"
+                    + " the printed report draws saved cuts. Designers and administrators only")
+    @ApiResponse(responseCode = "201", description = "Saved; Location names the cut")
+    @ApiResponse(responseCode = "400", description = "A number, the length or the name is unusable; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<SiteCut> save(@PathVariable long id, @RequestBody JsonNode body) {
         JsonNode name = body.path("name");
@@ -59,6 +76,10 @@ public class SiteCutApiController {
                 .location(URI.create("/api/sites/" + id + "/cuts/" + cut.id())).body(cut);
     }
 
+    @Operation(summary = "Delete a saved section cut", description = "Designers and administrators only")
+    @ApiResponse(responseCode = "204", description = "Deleted")
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such cut", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/{cutId}")
     public ResponseEntity<Void> delete(@PathVariable long id, @PathVariable long cutId) {
         cuts.delete(id, cutId);
