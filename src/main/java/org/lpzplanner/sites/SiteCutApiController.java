@@ -66,7 +66,8 @@ public class SiteCutApiController {
             if (n.isMissingNode() || n.isNull()) {
                 ends[i] = null;
             } else if (n.isNumber()) {
-                ends[i] = String.valueOf(n.asDouble());
+                // plain digits: the section page's number check reads no exponent
+                ends[i] = n.decimalValue().toPlainString();
             } else {
                 throw new InvalidInputException(ENDS[i], ENDS[i] + " must be a number of metres, got " + n);
             }
