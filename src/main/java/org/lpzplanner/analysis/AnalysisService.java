@@ -41,11 +41,13 @@ public class AnalysisService {
     private final AnalysisStateCache kept;
     private final AcceptedItemRepository accepted;
     private final AuditTrail audit;
+    private final AnalysisCapacity capacity;
 
     public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
             TransactionTemplate transactions, Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted,
-            AuditTrail audit) {
+            AuditTrail audit, AnalysisCapacity capacity) {
         this.audit = audit;
+        this.capacity = capacity;
         this.sites = sites;
         this.siteRows = siteRows;
         this.analyses = analyses;
@@ -76,8 +78,15 @@ public class AnalysisService {
      *
      * @throws org.lpzplanner.engine.exposure.AnalysisCancelledException when {@code progress} asked
      *         to stop; nothing is stored then
+     * @throws AnalysisBusyException when the instance is already running as many analyses as it may
+     *         and none finished within the wait (see {@link AnalysisCapacity})
      */
     public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText,
+            AnalysisProgress progress) {
+        return capacity.run(() -> runNow(siteId, levelText, radiusText, resolutionText, progress));
+    }
+
+    private AnalysisRevision runNow(long siteId, String levelText, String radiusText, String resolutionText,
             AnalysisProgress progress) {
         StoredSite site = sites.get(siteId);
         SphereSpec sphere = sphere(site, levelText, radiusText);

@@ -5,6 +5,8 @@ import org.lpzplanner.comments.CommentPageController;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.system.InvalidInputException;
 import org.lpzplanner.system.UploadLimit;
+import jakarta.servlet.http.HttpServletResponse;
+import org.lpzplanner.analysis.AnalysisBusyException;
 import org.springframework.http.HttpStatus;
 import org.springframework.web.bind.annotation.ControllerAdvice;
 import org.springframework.web.bind.annotation.ExceptionHandler;
@@ -51,6 +53,14 @@ public class SitePageErrors {
     @ExceptionHandler(ReviewItemNotFoundException.class)
     ModelAndView noItem(ReviewItemNotFoundException e) {
         ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.NOT_FOUND);
+        page.addObject("reason", e.getMessage());
+        return page;
+    }
+
+    @ExceptionHandler(AnalysisBusyException.class)
+    ModelAndView busy(AnalysisBusyException e, HttpServletResponse response) {
+        response.setHeader("Retry-After", Integer.toString(e.retryAfterSeconds()));
+        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.TOO_MANY_REQUESTS);
         page.addObject("reason", e.getMessage());
         return page;
     }
