@@ -33,56 +33,53 @@ public class SitePageErrors {
 
     @ExceptionHandler(SiteNotFoundException.class)
     ModelAndView notFound(SiteNotFoundException e) {
-        ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
-        page.addObject("siteId", String.valueOf(e.siteId()));
-        return page;
+        return notFoundPage(String.valueOf(e.siteId()));
     }
 
     @ExceptionHandler(MethodArgumentTypeMismatchException.class)
     ModelAndView badId(MethodArgumentTypeMismatchException e) {
         if (!"id".equals(e.getName())) {
-            ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
-            page.addObject("reason", e.getName() + " must be a whole number, got \"" + e.getValue() + "\"");
-            return page;
+            return reasonPage(HttpStatus.BAD_REQUEST, e.getName() + " must be a whole number, got \"" + e.getValue() + "\"");
         }
-        ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
-        page.addObject("siteId", String.valueOf(e.getValue()));
-        return page;
+        return notFoundPage(String.valueOf(e.getValue()));
     }
 
     @ExceptionHandler(ReviewItemNotFoundException.class)
     ModelAndView noItem(ReviewItemNotFoundException e) {
-        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.NOT_FOUND);
-        page.addObject("reason", e.getMessage());
-        return page;
+        return reasonPage(HttpStatus.NOT_FOUND, e.getMessage());
     }
 
     @ExceptionHandler(AnalysisBusyException.class)
     ModelAndView busy(AnalysisBusyException e, HttpServletResponse response) {
         response.setHeader("Retry-After", Integer.toString(e.retryAfterSeconds()));
-        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.TOO_MANY_REQUESTS);
-        page.addObject("reason", e.getMessage());
-        return page;
+        return reasonPage(HttpStatus.TOO_MANY_REQUESTS, e.getMessage());
     }
 
     @ExceptionHandler(AnalysisTooLargeException.class)
     ModelAndView tooLarge(AnalysisTooLargeException e) {
-        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
-        page.addObject("reason", e.getMessage());
-        return page;
+        return reasonPage(HttpStatus.BAD_REQUEST, e.getMessage());
     }
 
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     ModelAndView uploadTooLarge(MaxUploadSizeExceededException e) {
-        ModelAndView page = new ModelAndView("sites/upload-refused", HttpStatus.CONTENT_TOO_LARGE);
-        page.addObject("reason", uploadLimit.message());
-        return page;
+        return uploadLimit.refusedPage();
     }
 
     @ExceptionHandler(InvalidInputException.class)
     ModelAndView invalid(InvalidInputException e) {
-        ModelAndView page = new ModelAndView("sites/invalid", HttpStatus.BAD_REQUEST);
-        page.addObject("reason", e.getMessage());
+        return reasonPage(HttpStatus.BAD_REQUEST, e.getMessage());
+    }
+
+    private static ModelAndView notFoundPage(String siteId) {
+        ModelAndView page = new ModelAndView("sites/not-found", HttpStatus.NOT_FOUND);
+        page.addObject("siteId", siteId);
+        return page;
+    }
+
+    /** The page saying why a request could not be done. */
+    private static ModelAndView reasonPage(HttpStatus status, String reason) {
+        ModelAndView page = new ModelAndView("sites/invalid", status);
+        page.addObject("reason", reason);
         return page;
     }
 }

@@ -2,8 +2,10 @@ package org.lpzplanner.system;
 
 import java.util.Locale;
 import org.springframework.beans.factory.annotation.Value;
+import org.springframework.http.HttpStatus;
 import org.springframework.stereotype.Component;
 import org.springframework.util.unit.DataSize;
+import org.springframework.web.servlet.ModelAndView;
 
 /** The upload size limit ({@code spring.servlet.multipart.max-file-size}) and the words for going over it. */
 @Component
@@ -20,6 +22,13 @@ public class UploadLimit {
         return "the file is larger than the upload limit of " + megabytes(maxFileSize.toBytes())
                 + "; nothing was stored. Leave out what the assessment does not need, or split the site into"
                 + " several files";
+    }
+
+    /** The 413 page of a browser upload over the limit, saying the limit. */
+    public ModelAndView refusedPage() {
+        ModelAndView page = new ModelAndView("sites/upload-refused", HttpStatus.CONTENT_TOO_LARGE);
+        page.addObject("reason", message());
+        return page;
     }
 
     static String megabytes(long bytes) {

@@ -29,8 +29,6 @@ public class UploadLimitErrorView implements ErrorViewResolver {
         if (status != HttpStatus.CONTENT_TOO_LARGE) {
             return null;
         }
-        ModelAndView page = new ModelAndView("sites/upload-refused", HttpStatus.CONTENT_TOO_LARGE);
-        page.addObject("reason", uploadLimit.message());
-        return page;
+        return uploadLimit.refusedPage();
     }
 }

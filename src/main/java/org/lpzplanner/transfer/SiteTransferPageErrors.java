@@ -1,7 +1,6 @@
 package org.lpzplanner.transfer;
 
 import org.lpzplanner.system.UploadLimit;
-import org.springframework.http.HttpStatus;
 import org.springframework.web.bind.annotation.ControllerAdvice;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.multipart.MaxUploadSizeExceededException;
@@ -19,8 +18,6 @@ public class SiteTransferPageErrors {
 
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     ModelAndView tooLarge(MaxUploadSizeExceededException e) {
-        ModelAndView page = new ModelAndView("sites/upload-refused", HttpStatus.CONTENT_TOO_LARGE);
-        page.addObject("reason", uploadLimit.message());
-        return page;
+        return uploadLimit.refusedPage();
     }
 }
