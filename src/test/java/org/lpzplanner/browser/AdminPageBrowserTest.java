@@ -30,7 +30,7 @@ class AdminPageBrowserTest extends BrowserTestBase {
     void administratorAddsATeamAndAReviewer() throws Exception {
         browser.get("http://localhost:" + port + "/admin");
         browser.findElement(By.cssSelector("#new-team-form input[name=name]")).sendKeys("Harbour projects");
-        browser.findElement(By.cssSelector("#new-team-form button")).click();
+        clickAndAwaitNewPage(By.cssSelector("#new-team-form button"));
         assertThat(browser.findElement(By.id("team-list")).getText()).contains("Harbour projects");
 
         browser.findElement(By.cssSelector("#new-account-form input[name=email]")).sendKeys("rita.review@example.org");
@@ -39,7 +39,7 @@ class AdminPageBrowserTest extends BrowserTestBase {
         new Select(browser.findElement(By.cssSelector("#new-account-form select[name=role]"))).selectByValue("REVIEWER");
         new Select(browser.findElement(By.cssSelector("#new-account-form select[name=team]")))
                 .selectByVisibleText("Harbour projects");
-        browser.findElement(By.cssSelector("#new-account-form button")).click();
+        clickAndAwaitNewPage(By.cssSelector("#new-account-form button"));
 
         assertThat(browser.findElement(By.cssSelector("tr[data-email='rita.review@example.org']")).getText())
                 .contains("Rita Review");

@@ -4,9 +4,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import org.junit.jupiter.api.Assumptions;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * A real headless Chromium for browser tests, from the Debian packages {@code chromium} and
@@ -38,5 +42,15 @@ final class BrowserSupport {
         ChromeDriver driver = new ChromeDriver(service, options);
         driver.manage().timeouts().implicitlyWait(Duration.ofSeconds(5));
         return driver;
+    }
+
+    /**
+     * Clicks what submits a form or follows a link and waits until the browser has left the old
+     * page, so the next lookup reads the new page and not an element of the one being replaced.
+     */
+    static void clickAndAwaitNewPage(ChromeDriver browser, By target) {
+        WebElement oldPage = browser.findElement(By.tagName("html"));
+        browser.findElement(target).click();
+        new WebDriverWait(browser, Duration.ofSeconds(30)).until(ExpectedConditions.stalenessOf(oldPage));
     }
 }

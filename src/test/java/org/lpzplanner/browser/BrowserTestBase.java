@@ -43,6 +43,11 @@ abstract class BrowserTestBase {
         browser.findElement(By.id("account-link"));
     }
 
+    /** See {@link BrowserSupport#clickAndAwaitNewPage}. */
+    void clickAndAwaitNewPage(By target) {
+        BrowserSupport.clickAndAwaitNewPage(browser, target);
+    }
+
     @AfterEach
     void closeBrowser() {
         if (browser != null) {

@@ -54,18 +54,18 @@ class FirstStartBrowserTest {
         Path shots = Files.createDirectories(Path.of("target", "screenshots"));
         Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("setup-page.png"),
                 StandardCopyOption.REPLACE_EXISTING);
-        browser.findElement(By.cssSelector("#setup-form button[type=submit]")).click();
+        BrowserSupport.clickAndAwaitNewPage(browser, By.cssSelector("#setup-form button[type=submit]"));
 
         assertThat(browser.findElement(By.id("account-link")).getText()).contains("Ada Fielding", "administrator");
         assertThat(browser.findElement(By.tagName("body")).getText()).contains("Brookfield");
         Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("first-sites.png"),
                 StandardCopyOption.REPLACE_EXISTING);
 
-        browser.findElement(By.cssSelector("#sign-out-form input[type=submit]")).click();
+        BrowserSupport.clickAndAwaitNewPage(browser, By.cssSelector("#sign-out-form input[type=submit]"));
         assertThat(browser.findElement(By.id("signed-out")).isDisplayed()).isTrue();
         browser.findElement(By.name("email")).sendKeys("ada@example.org");
         browser.findElement(By.name("password")).sendKeys("a long enough password");
-        browser.findElement(By.cssSelector("#sign-in-form button[type=submit]")).click();
+        BrowserSupport.clickAndAwaitNewPage(browser, By.cssSelector("#sign-in-form button[type=submit]"));
         assertThat(browser.findElement(By.id("account-link")).getText()).contains("Ada Fielding");
         // the session is kept in the database (Spring Session JDBC), where every app instance finds it
         assertThat(jdbc.sql("SELECT COUNT(*) FROM SPRING_SESSION WHERE PRINCIPAL_NAME = 'ada@example.org'")

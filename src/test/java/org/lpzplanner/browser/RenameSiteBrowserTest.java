@@ -29,7 +29,7 @@ class RenameSiteBrowserTest extends BrowserTestBase {
         WebElement name = browser.findElement(By.cssSelector("#rename-form input[name=name]"));
         name.clear();
         name.sendKeys("Renamed <quay> shed");
-        browser.findElement(By.cssSelector("#rename-form button[type=submit]")).click();
+        clickAndAwaitNewPage(By.cssSelector("#rename-form button[type=submit]"));
 
         assertThat(browser.getCurrentUrl()).endsWith("/sites/" + site.id());
         assertThat(browser.findElement(By.tagName("h1")).getText()).isEqualTo("Renamed <quay> shed");

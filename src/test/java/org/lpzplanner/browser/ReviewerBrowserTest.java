@@ -43,11 +43,11 @@ class ReviewerBrowserTest extends BrowserTestBase {
         assertThat(browser.findElements(By.cssSelector(".accept-form"))).isEmpty();
 
         browser.findElement(By.cssSelector("#comment-form textarea")).sendKeys("Parapet height to be checked on site.");
-        browser.findElement(By.cssSelector("#comment-form button")).click();
+        clickAndAwaitNewPage(By.cssSelector("#comment-form button"));
         // each form reloads the page: wait for the new page before the next step
         new WebDriverWait(browser, Duration.ofSeconds(20)).until(
                 ExpectedConditions.presenceOfElementLocated(By.id("comment-list")));
-        browser.findElement(By.cssSelector("#reviewed-form button")).click();
+        clickAndAwaitNewPage(By.cssSelector("#reviewed-form button"));
         new WebDriverWait(browser, Duration.ofSeconds(20)).until(
                 ExpectedConditions.presenceOfElementLocated(By.id("reviewed-marks")));
 

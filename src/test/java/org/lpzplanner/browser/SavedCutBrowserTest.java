@@ -29,7 +29,7 @@ class SavedCutBrowserTest extends BrowserTestBase {
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Ferry shed", "III", null).id();
         browser.get("http://localhost:" + port + "/sites/" + id + "/section?x1=-10&y1=20&x2=90&y2=20");
         browser.findElement(By.cssSelector("#save-cut-form input[name=name]")).sendKeys("Across the quay");
-        browser.findElement(By.cssSelector("#save-cut-form button[type=submit]")).click();
+        clickAndAwaitNewPage(By.cssSelector("#save-cut-form button[type=submit]"));
 
         String list = browser.findElement(By.id("saved-cuts")).getText();
         assertThat(list).contains("Across the quay").contains("from (-10, 20) to (90, 20) m");
@@ -39,9 +39,9 @@ class SavedCutBrowserTest extends BrowserTestBase {
         Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("saved-cuts.png"),
                 StandardCopyOption.REPLACE_EXISTING);
 
-        browser.findElement(By.linkText("Open \"Across the quay\"")).click();
+        clickAndAwaitNewPage(By.linkText("Open \"Across the quay\""));
         assertThat(browser.findElement(By.id("section-cut")).getText()).contains("100");
-        browser.findElement(By.cssSelector("#saved-cuts form.inline button")).click();
+        clickAndAwaitNewPage(By.cssSelector("#saved-cuts form.inline button"));
         assertThat(browser.findElement(By.id("saved-cuts")).getText()).contains("No cuts saved yet");
         assertThat(cuts.cuts(id)).isEmpty();
     }

@@ -43,14 +43,14 @@ class SiteImportBrowserTest extends BrowserTestBase {
                 .isEqualTo("Export site");
         Files.write(shots.resolve("site-list-import.png"), browser.getScreenshotAs(OutputType.BYTES));
         browser.findElement(By.cssSelector("#import-form input[type=file]")).sendKeys(export.toAbsolutePath().toString());
-        browser.findElement(By.cssSelector("#import-form button[type=submit]")).click();
+        clickAndAwaitNewPage(By.cssSelector("#import-form button[type=submit]"));
 
         assertThat(browser.getCurrentUrl()).matches(".*/sites/\\d+$").doesNotEndWith("/sites/" + site.id());
         assertThat(browser.findElement(By.tagName("h1")).getText()).isEqualTo("Exported shed");
 
         browser.get("http://localhost:" + port + "/");
         browser.findElement(By.cssSelector("#import-form input[type=file]")).sendKeys(bad.toAbsolutePath().toString());
-        browser.findElement(By.cssSelector("#import-form button[type=submit]")).click();
+        clickAndAwaitNewPage(By.cssSelector("#import-form button[type=submit]"));
         assertThat(browser.findElement(By.id("import-error")).getText()).contains("format", "not a site export",
                 "nothing was stored");
         Files.write(shots.resolve("import-refused.png"), browser.getScreenshotAs(OutputType.BYTES));
