@@ -1,5 +1,6 @@
 package org.lpzplanner.engine.envelope;
 
+import java.util.Arrays;
 import java.util.stream.IntStream;
 
 /**
@@ -18,8 +19,11 @@ import java.util.stream.IntStream;
  * <li>else (the old minimum came from C and C rose there) u is eroded again from all sources.</li>
  * </ul>
  * Points farther than R from C keep their value. The comparisons keep a margin of
- * {@link #MARGIN}, far above rounding, so near ties are eroded again rather than guessed. Every term
- * is computed by the same formula as in {@link BallErosion}, so the result is the same.
+ * {@link #MARGIN}, far above rounding, so near ties are eroded again rather than guessed. Terms of
+ * B at or above out<sub>old</sub>(u) plus that margin change none of these cases and are skipped
+ * per chunk of columns (as {@link BallErosion} skips terms above an output's own value less R):
+ * near a rod on a roof only the few rows of the ball nearly straight above count. Every term is
+ * computed by the same formula as in {@link BallErosion}, so the result is the same bit for bit.
  */
 final class ErosionUpdate {
 
@@ -57,9 +61,17 @@ final class ErosionUpdate {
         int ti0 = Math.max(0, ci0 - reach), ti1 = Math.min(nx - 1, ci1 + reach);
         int tj0 = Math.max(0, cj0 - reach), tj1 = Math.min(ny - 1, cj1 + reach);
         int tw = ti1 - ti0 + 1, th = tj1 - tj0 + 1;
+        // Terms at or above the old value plus the margin change no case below (they are above the old
+        // minimum, so they neither lower it nor could have been it), so they need not be computed.
+        double[] ceiling = new double[tw * th];
+        for (int t = 0; t < th; t++) {
+            for (int i = ti0; i <= ti1; i++) {
+                ceiling[t * tw + (i - ti0)] = oldEroded[(tj0 + t) * nx + i] + MARGIN;
+            }
+        }
         double[][] fromChanged = IntStream.range(0, 2).parallel()
                 .mapToObj(k -> erodeTargets(k == 0 ? oldValues : newValues, nx, ny, h, radius, changed,
-                        ti0, tj0, ti1, tj1, null, null))
+                        ti0, tj0, ti1, tj1, null, null, ceiling))
                 .toArray(double[][]::new);
         double[] before = fromChanged[0], after = fromChanged[1];
         double[] out = oldEroded.clone();
@@ -84,7 +96,7 @@ final class ErosionUpdate {
             }
         }
         if (any) {
-            double[] again = erodeTargets(newValues, nx, ny, h, radius, null, ti0, tj0, ti1, tj1, againLo, againHi);
+            double[] again = erodeTargets(newValues, nx, ny, h, radius, null, ti0, tj0, ti1, tj1, againLo, againHi, null);
             for (int t = 0; t < th; t++) {
                 int row = (tj0 + t) * nx;
                 for (int i = againLo[t]; i <= againHi[t]; i++) {
@@ -95,23 +107,29 @@ final class ErosionUpdate {
         return out;
     }
 
+    /** Columns per chunk for deciding which outputs a source row can still lower. */
+    private static final int CHUNK = 32;
+
     /**
      * The erosion at the outputs of the rectangle [ti0, ti1] × [tj0, tj1] (only columns
      * rowLo[t]..rowHi[t] of its row t when those are given), from the sources marked in
-     * {@code sources} (all when null); +∞ where no source reaches. Returned row-major over the rectangle.
+     * {@code sources} (all when null); +∞ where no source reaches. Returned row-major over the
+     * rectangle. Terms at or above {@code ceiling} (row-major over the rectangle; when null, each
+     * output's own value less R, which it never exceeds) may be left out: outputs that only such
+     * terms would reach keep a higher value.
      */
     static double[] erodeTargets(double[] v, int nx, int ny, double h, double radius, boolean[] sources,
-            int ti0, int tj0, int ti1, int tj1, int[] rowLo, int[] rowHi) {
+            int ti0, int tj0, int ti1, int tj1, int[] rowLo, int[] rowHi, double[] ceiling) {
         int tw = ti1 - ti0 + 1, th = tj1 - tj0 + 1;
         int[] lo = rowLo, hi = rowHi;
         if (lo == null) {
             lo = new int[th];
             hi = new int[th];
-            java.util.Arrays.fill(lo, ti0);
-            java.util.Arrays.fill(hi, ti1);
+            Arrays.fill(lo, ti0);
+            Arrays.fill(hi, ti1);
         }
         double[] out = new double[tw * th];
-        java.util.Arrays.fill(out, Double.POSITIVE_INFINITY);
+        Arrays.fill(out, Double.POSITIVE_INFINITY);
         for (int t = 0; t < th; t++) {
             int row = (tj0 + t) * nx;
             for (int i = lo[t]; i <= hi[t]; i++) {
@@ -120,59 +138,99 @@ final class ErosionUpdate {
                 }
             }
         }
+        // per target row and chunk of columns, the highest term that can still matter
+        int c0 = ti0 / CHUNK, c1 = ti1 / CHUNK, chunks = c1 - c0 + 1;
+        double[] chunkCeiling = new double[th * chunks];
+        Arrays.fill(chunkCeiling, Double.NEGATIVE_INFINITY);
+        double topCeiling = Double.NEGATIVE_INFINITY;
+        for (int t = 0; t < th; t++) {
+            for (int i = lo[t]; i <= hi[t]; i++) {
+                double c = ceiling != null ? ceiling[t * tw + (i - ti0)] : v[(tj0 + t) * nx + i] - radius;
+                int k = t * chunks + (i / CHUNK - c0);
+                chunkCeiling[k] = Math.max(chunkCeiling[k], c);
+                topCeiling = Math.max(topCeiling, c);
+            }
+        }
         int maxDj = (int) Math.floor(radius / h);
+        int sourceChunks = (nx + CHUNK - 1) / CHUNK;
+        double[] chunkMin = new double[sourceChunks];
         BallErosion.RowEroder eroder = new BallErosion.RowEroder(nx);
         double[] tmp = new double[nx];
         for (int js = Math.max(0, tj0 - maxDj); js <= Math.min(ny - 1, tj1 + maxDj); js++) {
-            if (sources != null && !anySet(sources, js * nx, nx)) {
+            double rowMin = Double.POSITIVE_INFINITY;
+            for (int sc = 0; sc < sourceChunks; sc++) {
+                double m = Double.POSITIVE_INFINITY;
+                for (int i = sc * CHUNK; i < Math.min(nx, (sc + 1) * CHUNK); i++) {
+                    if (sources == null || sources[js * nx + i]) {
+                        m = Math.min(m, v[js * nx + i]);
+                    }
+                }
+                chunkMin[sc] = m;
+                rowMin = Math.min(rowMin, m);
+            }
+            if (rowMin == Double.POSITIVE_INFINITY) {
                 continue;
             }
             boolean loaded = false;
             for (int dj = 0; dj <= maxDj; dj++) {
                 int up = js + dj, down = js - dj;
-                boolean needUp = up >= tj0 && up <= tj1 && lo[up - tj0] <= hi[up - tj0];
-                boolean needDown = dj > 0 && down >= tj0 && down <= tj1 && lo[down - tj0] <= hi[down - tj0];
-                if (!needUp && !needDown) {
-                    if (up > tj1 && down < tj0) {
-                        break;
-                    }
-                    continue;
-                }
-                int from = nx, to = -1;
-                if (needUp) {
-                    from = lo[up - tj0];
-                    to = hi[up - tj0];
-                }
-                if (needDown) {
-                    from = Math.min(from, lo[down - tj0]);
-                    to = Math.max(to, hi[down - tj0]);
+                if (up > tj1 && down < tj0) {
+                    break;
                 }
                 // the same ρ as BallErosion, so every term is the same number
                 double dy = dj * h;
                 double rho = Math.sqrt(Math.max(0, radius * radius - dy * dy));
+                if (rowMin - rho >= topCeiling) {
+                    break; // ρ only shrinks from here
+                }
+                boolean rowUp = up >= tj0 && up <= tj1 && lo[up - tj0] <= hi[up - tj0];
+                boolean rowDown = dj > 0 && down >= tj0 && down <= tj1 && lo[down - tj0] <= hi[down - tj0];
+                if (!rowUp && !rowDown) {
+                    continue;
+                }
+                double r = rho / h;
+                int reachChunks = (int) Math.ceil(r / CHUNK) + 1;
+                int from = nx, to = -1;
+                boolean needUp = false, needDown = false;
+                for (int c = 0; c < chunks; c++) {
+                    double m = Double.POSITIVE_INFINITY;
+                    for (int sc = Math.max(0, c + c0 - reachChunks); sc <= Math.min(sourceChunks - 1, c + c0 + reachChunks); sc++) {
+                        m = Math.min(m, chunkMin[sc]);
+                    }
+                    m -= rho;
+                    boolean u = rowUp && m < chunkCeiling[(up - tj0) * chunks + c];
+                    boolean d = rowDown && m < chunkCeiling[(down - tj0) * chunks + c];
+                    if (u || d) {
+                        from = Math.min(from, (c + c0) * CHUNK);
+                        to = Math.max(to, (c + c0 + 1) * CHUNK - 1);
+                        needUp |= u;
+                        needDown |= d;
+                    }
+                }
+                if (to < from) {
+                    continue;
+                }
+                int upLo = needUp ? Math.max(from, lo[up - tj0]) : 0, upHi = needUp ? Math.min(to, hi[up - tj0]) : -1;
+                int downLo = needDown ? Math.max(from, lo[down - tj0]) : 0, downHi = needDown ? Math.min(to, hi[down - tj0]) : -1;
+                int eLo = Math.min(upHi >= upLo ? upLo : nx, downHi >= downLo ? downLo : nx);
+                int eHi = Math.max(upHi >= upLo ? upHi : -1, downHi >= downLo ? downHi : -1);
+                if (eHi < eLo) {
+                    continue;
+                }
                 if (!loaded) {
                     eroder.load(v, js * nx, h, sources, js * nx);
                     loaded = true;
                 }
-                eroder.erode(rho / h, tmp, from, to);
-                if (needUp) {
-                    minInto(out, (up - tj0) * tw - ti0, tmp, h, lo[up - tj0], hi[up - tj0]);
+                eroder.erode(r, tmp, eLo, eHi);
+                if (upHi >= upLo) {
+                    minInto(out, (up - tj0) * tw - ti0, tmp, h, upLo, upHi);
                 }
-                if (needDown) {
-                    minInto(out, (down - tj0) * tw - ti0, tmp, h, lo[down - tj0], hi[down - tj0]);
+                if (downHi >= downLo) {
+                    minInto(out, (down - tj0) * tw - ti0, tmp, h, downLo, downHi);
                 }
             }
         }
         return out;
-    }
-
-    private static boolean anySet(boolean[] mask, int offset, int n) {
-        for (int i = 0; i < n; i++) {
-            if (mask[offset + i]) {
-                return true;
-            }
-        }
-        return false;
     }
 
     private static void minInto(double[] out, int offset, double[] row, double h, int lo, int hi) {
