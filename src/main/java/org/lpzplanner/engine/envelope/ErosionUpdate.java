@@ -16,7 +16,8 @@ import java.util.stream.IntStream;
  * B<sub>new</sub>(u)) (this covers every point where the values only fell);</li>
  * <li>else if B<sub>new</sub>(u) &lt; out<sub>old</sub>(u) ≤ A(u), out<sub>new</sub>(u) =
  * B<sub>new</sub>(u);</li>
- * <li>else (the old minimum came from C and C rose there) u is eroded again from all sources.</li>
+ * <li>else (the old minimum came from C and C rose there) u is eroded again from all sources,
+ * leaving out terms at or above B<sub>new</sub>(u), which is then taken as the minimum if none is lower.</li>
  * </ul>
  * Points farther than R from C keep their value. The comparisons keep a margin of
  * {@link #MARGIN}, far above rounding, so near ties are eroded again rather than guessed. Terms of
@@ -96,11 +97,21 @@ final class ErosionUpdate {
             }
         }
         if (any) {
-            double[] again = erodeTargets(newValues, nx, ny, h, radius, null, ti0, tj0, ti1, tj1, againLo, againHi, null);
+            // terms at or above B_new (or the output's own value less R) cannot lower the minimum
             for (int t = 0; t < th; t++) {
                 int row = (tj0 + t) * nx;
                 for (int i = againLo[t]; i <= againHi[t]; i++) {
-                    out[row + i] = again[t * tw + (i - ti0)];
+                    int k = t * tw + (i - ti0);
+                    ceiling[k] = Math.min(newValues[row + i] - radius, after[k]);
+                }
+            }
+            double[] again = erodeTargets(newValues, nx, ny, h, radius, null, ti0, tj0, ti1, tj1, againLo, againHi,
+                    ceiling);
+            for (int t = 0; t < th; t++) {
+                int row = (tj0 + t) * nx;
+                for (int i = againLo[t]; i <= againHi[t]; i++) {
+                    int k = t * tw + (i - ti0);
+                    out[row + i] = Math.min(again[k], after[k]);
                 }
             }
         }
