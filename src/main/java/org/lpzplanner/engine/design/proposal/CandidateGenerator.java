@@ -176,7 +176,7 @@ final class CandidateGenerator {
         return new Candidate(kind, place, owner, List.of(foot, tip), h, List.of(new PointSupport(x, y, base + h, radius)), cost);
     }
 
-    /** A point {@value #INSET} m in from a footprint corner, on the roof; null when none is found. */
+    /** A point about {@value #INSET} m in from a footprint corner, on the roof or its parapet; null when none is found. */
     private static Coordinate insetCorner(SiteSurface surface, Coordinate corner) {
         Coordinate best = null;
         double bestBase = 0.01;
@@ -185,7 +185,10 @@ final class CandidateGenerator {
             double a = Math.PI / 4 * k + Math.PI / 8;
             double x = corner.x + d * 1.4 * Math.cos(a), y = corner.y + d * 1.4 * Math.sin(a);
             double base = surface.standHeight(x, y);
-            if (base > bestBase + 1e-6 && Math.abs(base - corner.getZ()) <= 1.0) {
+            // on the structure itself: a parapet's top also reaches a little past the wall, where a
+            // rod would hang off the outside of the corner
+            boolean onStructure = surface.topHeight(x, y) > 0.01;
+            if (onStructure && base > bestBase + 1e-6 && Math.abs(base - corner.getZ()) <= 1.0) {
                 bestBase = base;
                 best = new Coordinate(x, y);
             }
@@ -197,7 +200,10 @@ final class CandidateGenerator {
     private static Coordinate insetEdge(SiteSurface surface, double x, double y, double nx, double ny, double z) {
         double left = surface.standHeight(x + INSET * nx, y + INSET * ny);
         double right = surface.standHeight(x - INSET * nx, y - INSET * ny);
-        boolean useLeft = Math.abs(left - z) <= Math.abs(right - z);
+        boolean leftOn = surface.topHeight(x + INSET * nx, y + INSET * ny) > 0.01;
+        boolean rightOn = surface.topHeight(x - INSET * nx, y - INSET * ny) > 0.01;
+        // a parapet's top reaches past the wall too: take the side over the structure when only one is
+        boolean useLeft = leftOn != rightOn ? leftOn : Math.abs(left - z) <= Math.abs(right - z);
         double base = useLeft ? left : right;
         if (base <= 0.01 || Math.abs(base - z) > 1.0) {
             return null;
