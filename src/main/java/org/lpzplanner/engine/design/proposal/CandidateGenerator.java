@@ -37,6 +37,9 @@ import org.lpzplanner.engine.model.Structure;
 final class CandidateGenerator {
 
     static final double INSET = 0.2;
+
+    /** Objects at least this long on a side also get corner rods, metres. */
+    static final double MIN_OBJECT_FOR_CORNERS = 2.0;
     private static final double MAST_OFFSET = 2.0;
     private static final double OBJECT_CLEARANCE = 0.3;
 
@@ -125,6 +128,7 @@ final class CandidateGenerator {
                             radius, 1 + 0.02 * h));
                 }
             }
+            objectCornerRods(out, surface, options, keepOut, o);
         }
         if (!options.mastHeights().isEmpty() && !footprints.isEmpty()) {
             Geometry all = gf.buildGeometry(footprints).union();
@@ -146,6 +150,39 @@ final class CandidateGenerator {
             }
         }
         return out;
+    }
+
+    /**
+     * Rods on the corners of an object large enough for one rod in its middle to leave its corners
+     * open (a plant room or housing; not a chimney or a flue): inset {@value #INSET} m along the
+     * corner's bisector, on the object's top.
+     */
+    private void objectCornerRods(List<Candidate> out, SiteSurface surface, ProposalOptions options,
+            PreparedGeometry keepOut, RooftopObject o) {
+        var env = o.footprint().getEnvelopeInternal();
+        Coordinate[] ring = o.footprint().getExteriorRing().getCoordinates();
+        if (Math.max(env.getWidth(), env.getHeight()) < MIN_OBJECT_FOR_CORNERS || ring.length - 1 > 8) {
+            return;
+        }
+        var inside = new org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator(o.footprint());
+        for (int k = 0; k < ring.length - 1; k++) {
+            Coordinate c = ring[k], prev = ring[k == 0 ? ring.length - 2 : k - 1], next = ring[k + 1];
+            double ax = prev.x - c.x, ay = prev.y - c.y, bx = next.x - c.x, by = next.y - c.y;
+            double la = Math.hypot(ax, ay), lb = Math.hypot(bx, by);
+            double dx = ax / la + bx / lb, dy = ay / la + by / lb, ld = Math.hypot(dx, dy);
+            if (ld < 1e-9) {
+                continue;
+            }
+            Coordinate p = new Coordinate(c.x + INSET * dx / ld, c.y + INSET * dy / ld);
+            if (inside.locate(p) != org.locationtech.jts.geom.Location.INTERIOR || inside(keepOut, p)
+                    || Math.abs(surface.standHeight(p.x, p.y) - o.top()) > 0.01) {
+                continue;
+            }
+            for (double h : options.rodHeights()) {
+                out.add(rod(ProposedPart.Kind.ROD, ProposedPart.Place.OBJECT, o.id(), p.x, p.y, o.top(), h,
+                        options.sphere().radius(), 1 + 0.02 * h));
+            }
+        }
     }
 
     private void addRods(List<Candidate> out, Set<String> seen, SiteSurface surface, ProposalOptions options,
