@@ -113,6 +113,16 @@ if (section) {
     }
     const g = layer('proposal-layer');
     for (const part of parts) {
+      if (part.path !== undefined) {
+        const line = document.createElementNS(SVG_NS, 'polyline');
+        line.setAttribute('points', part.path.map(([x, y]) => { const p = toSvg(x, y); return p.x + ',' + p.y; }).join(' '));
+        line.setAttribute('class', 'proposed ' + part.kind);
+        const title = document.createElementNS(SVG_NS, 'title');
+        title.textContent = part.name;
+        line.appendChild(title);
+        g.appendChild(line);
+        continue;
+      }
       if (part.x === undefined) {
         continue;
       }
@@ -201,6 +211,8 @@ if (section) {
     result.hidden = true;
     clearTimeout(timer);
     const body = { rodHeights: numbers(document.getElementById('rod-heights').value) };
+    body.edgeConductors = document.getElementById('edge-conductors').checked;
+    body.ridgeConductors = document.getElementById('ridge-conductors').checked;
     const masts = numbers(document.getElementById('mast-heights').value);
     if (masts.length > 0) {
       body.mastHeights = masts;

@@ -71,22 +71,33 @@ public class DesignService {
         this.clock = clock;
     }
 
-    /** What a designer asks for: allowed rod heights, mast heights (may be empty), keep-out polygons in local metres. */
-    public record ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, List<List<double[]>> keepOut) {
+    /**
+     * What a designer asks for: allowed rod heights, mast heights (may be empty), whether roof-edge
+     * and ridge conductors may be proposed, keep-out polygons in local metres.
+     */
+    public record ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, boolean edgeConductors,
+            boolean ridgeConductors, List<List<double[]>> keepOut) {
+
+        public ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, List<List<double[]>> keepOut) {
+            this(rodHeights, mastHeights, false, false, keepOut);
+        }
     }
 
     public ProposalJobs.Job propose(long siteId, ProposeRequest request) {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        if (request.rodHeights() == null || request.rodHeights().isEmpty()) {
-            throw new InvalidInputException("rodHeights", "give at least one allowed rod height, e.g. [0.5, 1, 2]");
+        List<Double> rodHeights = request.rodHeights() == null ? List.of() : request.rodHeights();
+        List<Double> masts = request.mastHeights() == null ? List.of() : request.mastHeights();
+        boolean conductors = request.edgeConductors() || request.ridgeConductors();
+        if (rodHeights.isEmpty() && masts.isEmpty() && !conductors) {
+            throw new InvalidInputException("rodHeights", "give at least one allowed rod height, e.g. [0.5, 1, 2]"
+                    + " (or allow masts or conductors)");
         }
-        for (Double h : request.rodHeights()) {
+        for (Double h : rodHeights) {
             if (h == null || !(h >= 0.1 && h <= 10)) {
                 throw new InvalidInputException("rodHeights", "rod heights must be between 0.1 m and 10 m, got " + h);
             }
         }
-        List<Double> masts = request.mastHeights() == null ? List.of() : request.mastHeights();
         for (Double h : masts) {
             if (h == null || !(h >= 1 && h <= 60)) {
                 throw new InvalidInputException("mastHeights", "mast heights must be between 1 m and 60 m, got " + h);
@@ -96,8 +107,9 @@ public class DesignService {
         List<Geometry> accepted = reviews.latest(siteId)
                 .map(r -> ReviewItems.geometries(r.revision().resultGeoJson(), r.accepted().keySet()))
                 .orElse(List.of());
-        ProposalOptions options = new ProposalOptions(stored.sphere(), List.copyOf(new java.util.TreeSet<>(request.rodHeights())),
-                false, false, List.copyOf(new java.util.TreeSet<>(masts)), keepOut, accepted, null);
+        ProposalOptions options = new ProposalOptions(stored.sphere(), List.copyOf(new java.util.TreeSet<>(rodHeights)),
+                request.edgeConductors(), request.ridgeConductors(), List.copyOf(new java.util.TreeSet<>(masts)), keepOut,
+                accepted, null);
         return jobs.start(siteId, stored.version(), site, options);
     }
 
@@ -153,14 +165,19 @@ public class DesignService {
         return job;
     }
 
+    /** Ids of the parts an accepted proposal added to the site. */
+    public record Accepted(List<String> rodIds, List<String> conductorIds) {
+    }
+
     /**
-     * Writes the proposal's rods and masts into the site file as ordinary rods (one change), then
-     * analyses the site again.
+     * Writes the proposal's rods and masts (as ordinary rods) and its roof-edge and ridge conductors
+     * (with their elevations, as proposed) into the site file in one change, so one earlier file
+     * keeps the site as it was; records the change in the audit trail, then analyses the site again.
      *
-     * @throws InvalidInputException when the proposal is not finished
+     * @throws InvalidInputException when the proposal is not finished or proposes nothing
      * @throws OptimisticLockingFailureException when the site changed since the proposal started or since {@code version}
      */
-    public List<String> accept(long siteId, String jobId, long version) {
+    public Accepted accept(long siteId, String jobId, long version) {
         ProposalJobs.Job job = job(siteId, jobId);
         if (job.state() != ProposalJobs.State.DONE) {
             throw new InvalidInputException("proposal", "the proposal is " + job.state().name().toLowerCase(Locale.ROOT)
@@ -170,15 +187,32 @@ public class DesignService {
             throw new OptimisticLockingFailureException("the proposal was made for version " + job.siteVersion());
         }
         List<AirTerminationService.RodInput> rods = new ArrayList<>();
+        List<AirTerminationService.ConductorInput> conductors = new ArrayList<>();
+        int masts = 0;
+        double conductorLength = 0;
         for (ProposedPart p : job.result().parts()) {
             if (p.rod() != null) {
                 rods.add(new AirTerminationService.RodInput(null, p.rod().name(), p.rod().x(), p.rod().y(),
                         BillOfQuantities.metresText(p.rod().height())));
+                masts += p.kind() == ProposedPart.Kind.MAST ? 1 : 0;
+            } else {
+                List<double[]> points = new ArrayList<>();
+                for (Coordinate c : p.conductor().path()) {
+                    points.add(new double[] {c.x, c.y, c.getZ()});
+                }
+                conductors.add(new AirTerminationService.ConductorInput(null, p.conductor().name(), points, null));
+                conductorLength += p.conductorLength();
             }
         }
-        List<String> ids = parts.addRods(siteId, version, rods);
+        if (rods.isEmpty() && conductors.isEmpty()) {
+            throw new InvalidInputException("proposal", "the proposal adds no parts; there is nothing to accept");
+        }
+        String text = String.format(Locale.ROOT, "accepted proposal %s: %d rods, %d masts, %d conductors (%.1f m)%s",
+                job.id(), rods.size() - masts, masts, conductors.size(), conductorLength,
+                job.result().complete() ? "" : ", not complete");
+        AirTerminationService.AddedParts added = parts.addParts(siteId, version, rods, conductors, "proposal-accepted", text);
         analyses.run(siteId, null, null, null);
-        return ids;
+        return new Accepted(added.rodIds(), added.conductorIds());
     }
 
     /** One structure's cross-check of the rolling sphere against the angle and mesh methods. */
@@ -476,7 +510,8 @@ public class DesignService {
         Map<String, Integer> out = new LinkedHashMap<>();
         for (ProposedPart p : parts) {
             String key = p.rod() != null ? (p.kind() == ProposedPart.Kind.MAST ? "mast " : "rod ")
-                    + BillOfQuantities.metresText(p.rod().height()) + " m" : p.kind().name().toLowerCase(Locale.ROOT);
+                    + BillOfQuantities.metresText(p.rod().height()) + " m"
+                    : p.kind() == ProposedPart.Kind.RIDGE_CONDUCTOR ? "ridge conductor" : "roof-edge conductor";
             out.merge(key, 1, Integer::sum);
         }
         return out;
