@@ -497,7 +497,9 @@ public class DesignService {
     public org.lpzplanner.common.ReportSection quantitiesSection(long siteId, double fixingsPerMetre) {
         QuantityTable table = quantities(siteId, fixingsPerMetre);
         return new org.lpzplanner.common.ReportSection(table.title(), table.columns(), table.rows(), List.of(
-                "Down-conductor lengths are straight drops from the roof edge; the installed route may be longer.",
+                "Down-conductor lengths run from the air-termination level at the top of the wall (parapet, eaves or verge)"
+                        + " straight down to ground level; the installed route may be longer, and the connection to the"
+                        + " earth termination is not included.",
                 "Test joints and earth terminations: one per down-conductor (common practice)."));
     }
 
