@@ -104,9 +104,9 @@ class ReportSiteDataTest {
         for (List<String> row : quantities.rows()) {
             assertThat(text).contains(row.get(0) + " " + row.get(1) + " " + row.get(2));
         }
-        // closed form: four straight drops from the 10 m wall top (the bill counts from the wall top,
-        // not the parapet), one test joint and one earth termination each
-        assertThat(text).contains("Down-conductor m 40 ").contains("Test joint pcs 4 ")
+        // closed form: four down-conductors from the parapet's top, 10 m wall + 1 m parapet = 11 m,
+        // to ground; one test joint and one earth termination each (common practice)
+        assertThat(text).contains("Down-conductor m 44 ").contains("Test joint pcs 4 ")
                 .contains("Earth termination pcs 4 ");
     }
 
