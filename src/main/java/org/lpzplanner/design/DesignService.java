@@ -13,12 +13,14 @@ import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.engine.design.AngleCoverage;
+import org.lpzplanner.engine.design.BondingRoutes;
 import org.lpzplanner.engine.design.AngleMethodCheck;
 import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.design.DownConductorPlan;
 import org.lpzplanner.engine.design.MeshFaceResult;
 import org.lpzplanner.engine.design.MeshMethodCheck;
 import org.lpzplanner.engine.design.SeparationDistance;
+import org.lpzplanner.engine.design.SeparationSurvey;
 import org.lpzplanner.engine.design.proposal.ProposalOptions;
 import org.lpzplanner.engine.design.proposal.ProposedPart;
 import org.lpzplanner.engine.design.quantities.BillOfQuantities;
@@ -338,107 +340,74 @@ public class DesignService {
         return downConductors(siteId);
     }
 
-    /** One separation distance check. */
-    public record Separation(String kind, String name, double[] installation, double[] nearestLps, double actual,
-            double length, int downConductors, String material, double required, boolean passes, String note) {
+    /**
+     * One separation distance check. {@code length} is l, {@code route} says how it was found
+     * ({@code routeBasis}: drawn, assumed-links, grounded-part or none), {@code straightAcross} the
+     * metres of it assumed straight across the roof where no conductor is drawn.
+     */
+    public record Separation(String kind, String name, double[] installation, double[] nearestLps, String partId,
+            double actual, double length, String routeBasis, String route, double straightAcross, int downConductors,
+            String material, double required, boolean passes, String note) {
     }
+
+    /** Height of the equipotential bonding the separation distances run to: ground level (sites store no other). */
+    static final double BONDING_LEVEL = 0;
 
     public List<Separation> separations(long siteId) {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        SiteSurface surface = SiteSurfaceBuilder.build(site);
-        List<DownConductors> downs = downConductors(site, stored, store.downConductors(siteId));
-        List<double[]> segments = lpsSegments(surface);
-        List<Separation> out = new ArrayList<>();
-        if (segments.isEmpty()) {
-            return out;
-        }
-        for (RooftopObject o : site.rooftopObjects()) {
-            Coordinate best = null;
-            double[] bestLps = null;
-            double bestDistance = Double.POSITIVE_INFINITY;
-            Geometry ring = org.locationtech.jts.densify.Densifier.densify(o.footprint().getExteriorRing(), 0.5);
-            for (Coordinate c : ring.getCoordinates()) {
-                Coordinate p = new Coordinate(c.x, c.y, o.top());
-                double[] q = nearest(segments, p);
-                double d = p.distance3D(new Coordinate(q[0], q[1], q[2]));
-                if (d < bestDistance) {
-                    bestDistance = d;
-                    best = p;
-                    bestLps = q;
-                }
-            }
-            out.add(separation("rooftop object", o.name() == null ? o.id() : o.name(), best, bestLps, downs, stored,
-                    SeparationDistance.Material.AIR));
-        }
-        for (DesignRepository.Installation i : store.installations(siteId)) {
-            Coordinate p = new Coordinate(i.x(), i.y(), i.z());
-            double[] q = nearest(segments, p);
-            out.add(separation("metal installation #" + i.id(), i.name(), p, q, downs, stored,
+        List<DesignRepository.Installation> stores = store.installations(siteId);
+        List<SeparationSurvey.Installation> metals = new ArrayList<>();
+        for (DesignRepository.Installation i : stores) {
+            metals.add(new SeparationSurvey.Installation(i.name(), new Coordinate(i.x(), i.y(), i.z()),
                     SeparationDistance.Material.valueOf(i.material())));
         }
+        List<SeparationSurvey.Check> checks = SeparationSurvey.survey(site, SiteSurfaceBuilder.build(site),
+                stored.sphere().level(), bondingDownConductors(downConductors(site, stored, store.downConductors(siteId))),
+                metals, BONDING_LEVEL);
+        List<Separation> out = new ArrayList<>();
+        int metal = 0;
+        for (SeparationSurvey.Check c : checks) {
+            String kind = c.kind();
+            if (kind.equals("metal installation")) {
+                kind = "metal installation #" + stores.get(metal++).id();
+            }
+            out.add(separation(kind, c));
+        }
         return out;
     }
 
-    private static Separation separation(String kind, String name, Coordinate p, double[] lps, List<DownConductors> downs,
-            StoredSite stored, SeparationDistance.Material material) {
-        // l: down the shortest way from the LPS point: across the roof to the nearest down-conductor
-        // (√2 times the plan distance, as conductors run along edges and axes) and down to the ground
-        double nearestDown = Double.POSITIVE_INFINITY;
-        int count = 0;
+    /** Every down-conductor with its structure and that structure's count, as the l routes need them. */
+    static List<BondingRoutes.DownConductor> bondingDownConductors(List<DownConductors> downs) {
+        List<BondingRoutes.DownConductor> out = new ArrayList<>();
         for (DownConductors d : downs) {
-            for (double[] q : d.positions()) {
-                double dist = Math.hypot(q[0] - lps[0], q[1] - lps[1]);
-                if (dist < nearestDown) {
-                    nearestDown = dist;
-                    count = d.positions().size();
-                }
-            }
-        }
-        if (count == 0) {
-            count = 1;
-            nearestDown = 0;
-        }
-        double l = lps[2] + Math.sqrt(2) * nearestDown;
-        SeparationDistance.Result r = SeparationDistance.check(stored.sphere().level(), count, material, p,
-                new Coordinate(lps[0], lps[1], lps[2]), l);
-        return new Separation(kind, name, new double[] {round(p.x), round(p.y), round(p.getZ())},
-                new double[] {round(lps[0]), round(lps[1]), round(lps[2])}, round(r.actual()), round(r.length()), count,
-                material.name(), Math.round(r.required() * 1000) / 1000.0, r.passes(),
-                "l estimated: height of the nearest LPS point plus √2 × its plan distance to the nearest down-conductor;"
-                        + " measure the real route before relying on a pass");
-    }
-
-    /** Air-termination as 3D segments: rods from foot to tip, conductor legs. */
-    private static List<double[]> lpsSegments(SiteSurface surface) {
-        List<double[]> out = new ArrayList<>();
-        for (SiteSurface.PlacedRod r : surface.rods()) {
-            out.add(new double[] {r.tip().x, r.tip().y, r.base(), r.tip().x, r.tip().y, r.tip().getZ()});
-        }
-        for (SiteSurface.PlacedConductor c : surface.conductors()) {
-            for (int i = 1; i < c.path().size(); i++) {
-                Coordinate a = c.path().get(i - 1), b = c.path().get(i);
-                out.add(new double[] {a.x, a.y, a.getZ(), b.x, b.y, b.getZ()});
+            for (double[] p : d.positions()) {
+                out.add(new BondingRoutes.DownConductor(d.structureId(), new Coordinate(p[0], p[1]), d.positions().size()));
             }
         }
         return out;
     }
 
-    private static double[] nearest(List<double[]> segments, Coordinate p) {
-        double[] best = null;
-        double bestD = Double.POSITIVE_INFINITY;
-        for (double[] s : segments) {
-            double vx = s[3] - s[0], vy = s[4] - s[1], vz = s[5] - s[2];
-            double len2 = vx * vx + vy * vy + vz * vz;
-            double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s[0]) * vx + (p.y - s[1]) * vy + (p.getZ() - s[2]) * vz) / len2));
-            double[] q = {s[0] + t * vx, s[1] + t * vy, s[2] + t * vz};
-            double d = Math.sqrt((q[0] - p.x) * (q[0] - p.x) + (q[1] - p.y) * (q[1] - p.y) + (q[2] - p.getZ()) * (q[2] - p.getZ()));
-            if (d < bestD) {
-                bestD = d;
-                best = q;
-            }
+    private static Separation separation(String kind, SeparationSurvey.Check c) {
+        BondingRoutes.Route route = c.route();
+        String note;
+        if (c.connected()) {
+            note = "a part touches it: it is connected to the air-termination, so it must be fit to carry lightning"
+                    + " current; no clearance to check";
+        } else if (route.basis() == BondingRoutes.Basis.ASSUMED_LINKS) {
+            note = "part of l is assumed straight across the roof where no conductor is drawn; a longer installed"
+                    + " route raises s";
+        } else if (route.basis() == BondingRoutes.Basis.NONE) {
+            note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
+        } else {
+            note = "l along the drawn air-termination and down the down-conductor";
         }
-        return best;
+        Coordinate p = c.installation(), q = c.lpsPoint();
+        return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
+                new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), round(c.result().actual()),
+                round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
+                route.describe(), round(route.assumedStraight()), route.downConductors(), c.material().name(),
+                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), note);
     }
 
     public DesignRepository.Installation addInstallation(long siteId, String name, Double x, Double y, Double z,
