@@ -343,11 +343,13 @@ public class DesignService {
     /**
      * One separation distance check. {@code length} is l, {@code route} says how it was found
      * ({@code routeBasis}: drawn, assumed-links, grounded-part or none), {@code straightAcross} the
-     * metres of it assumed straight across the roof where no conductor is drawn.
+     * metres of it assumed straight across the roof where no conductor is drawn; {@code status} is
+     * "passes", "fails", "not confirmed" (no down-conductor reached, l only a lower bound) or
+     * "connected" (a part touches the object).
      */
     public record Separation(String kind, String name, double[] installation, double[] nearestLps, String partId,
             double actual, double length, String routeBasis, String route, double straightAcross, int downConductors,
-            String material, double required, boolean passes, String note) {
+            String material, double required, boolean passes, String status, String note) {
     }
 
     /** Height of the equipotential bonding the separation distances run to: ground level (sites store no other). */
@@ -402,12 +404,14 @@ public class DesignService {
         } else {
             note = "l along the drawn air-termination and down the down-conductor";
         }
+        String status = c.connected() ? "connected" : c.passes() ? "passes"
+                : c.result().actual() < c.result().required() ? "fails" : "not confirmed";
         Coordinate p = c.installation(), q = c.lpsPoint();
         return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
                 new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), round(c.result().actual()),
                 round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
                 route.describe(), round(route.assumedStraight()), route.downConductors(), c.material().name(),
-                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), note);
+                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status, note);
     }
 
     public DesignRepository.Installation addInstallation(long siteId, String name, Double x, Double y, Double z,
