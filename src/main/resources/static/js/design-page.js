@@ -243,11 +243,35 @@ if (section) {
     }
   });
 
-  document.getElementById('accept-proposal').addEventListener('click', async () => {
+  const acceptedActions = document.getElementById('accepted-actions');
+  const acceptButton = document.getElementById('accept-proposal');
+  let acceptedVersion = null;
+  let acceptedJob = null;
+
+  acceptButton.addEventListener('click', async () => {
+    errorLine.hidden = true;
     try {
       const answer = await call('POST', '/api/sites/' + siteId + '/proposals/' + jobId + '/accept', { version });
-      status.textContent = section.dataset.msgAccepted;
-      window.location.assign(answer.plan);
+      acceptedVersion = answer.version;
+      acceptedJob = jobId;
+      acceptButton.disabled = true;
+      form.querySelector('#propose').disabled = true;
+      document.getElementById('accepted-summary').textContent =
+        fmt(section.dataset.msgAccepted, answer.rodIds.length, answer.conductorIds.length);
+      acceptedActions.hidden = false;
+      status.textContent = '';
+    } catch (e) {
+      showError(e.message);
+    }
+  });
+
+  document.getElementById('undo-accept').addEventListener('click', async () => {
+    errorLine.hidden = true;
+    try {
+      await call('POST', '/api/sites/' + siteId + '/proposals/' + acceptedJob + '/undo', { version: acceptedVersion });
+      document.getElementById('accepted-summary').textContent = section.dataset.msgUndone;
+      document.getElementById('undo-accept').disabled = true;
+      window.location.reload();
     } catch (e) {
       showError(e.message);
     }

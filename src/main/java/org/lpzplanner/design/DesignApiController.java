@@ -34,7 +34,8 @@ import tools.jackson.databind.JsonNode;
  *     optional {@code keepOut}: polygons as lists of [x, y]); 202 with the job.</li>
  * <li>{@code GET /api/sites/{id}/proposals/{job}}: state, stage, fraction and, when done, the parts
  *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version} writes the rods,
- *     masts and conductors into the site in one change.</li>
+ *     masts and conductors into the site in one change; {@code POST …/undo} with the {@code version}
+ *     accepting answered removes them again in one change.</li>
  * <li>{@code GET /api/sites/{id}/method-checks}: angle and mesh methods against the rolling sphere per structure.</li>
  * <li>{@code GET /api/sites/{id}/down-conductors}; {@code PUT …/down-conductors/{structure}} with
  *     {@code positions}; {@code DELETE} returns to the planned layout.</li>
@@ -91,6 +92,19 @@ public class DesignApiController {
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("rodIds", accepted.rodIds());
         out.put("conductorIds", accepted.conductorIds());
+        out.put("version", accepted.version());
+        out.put("plan", "/sites/" + id);
+        return out;
+    }
+
+    @PostMapping(value = "/proposals/{jobId}/undo", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public Map<String, Object> undoAccept(@PathVariable long id, @PathVariable String jobId, @RequestBody JsonNode body) {
+        JsonNode version = body.path("version");
+        if (!version.isIntegralNumber()) {
+            throw new InvalidInputException("version", "version is required: the site's version the accept answered");
+        }
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("version", design.undoAccept(id, jobId, version.longValue()));
         out.put("plan", "/sites/" + id);
         return out;
     }

@@ -167,8 +167,8 @@ public class DesignService {
         return job;
     }
 
-    /** Ids of the parts an accepted proposal added to the site. */
-    public record Accepted(List<String> rodIds, List<String> conductorIds) {
+    /** Ids of the parts an accepted proposal added to the site, and the site's version after accepting. */
+    public record Accepted(List<String> rodIds, List<String> conductorIds, long version) {
     }
 
     /**
@@ -214,7 +214,38 @@ public class DesignService {
                 job.result().complete() ? "" : ", not complete");
         AirTerminationService.AddedParts added = parts.addParts(siteId, version, rods, conductors, "proposal-accepted", text);
         analyses.run(siteId, null, null, null);
-        return new Accepted(added.rodIds(), added.conductorIds());
+        Accepted accepted = new Accepted(added.rodIds(), added.conductorIds(), sites.get(siteId).version());
+        job.accepted = accepted;
+        return accepted;
+    }
+
+    /**
+     * Takes an accepted proposal back: removes exactly the parts accepting added, in one change
+     * (the file before it is kept as an earlier file), records it in the audit trail and analyses
+     * the site again. Only while nothing else changed the site since ({@code version} is the version
+     * accepting answered).
+     *
+     * @return the site's version afterwards
+     * @throws InvalidInputException when the proposal was not accepted (or was already taken back)
+     * @throws OptimisticLockingFailureException when the site changed since
+     */
+    public long undoAccept(long siteId, String jobId, long version) {
+        ProposalJobs.Job job = job(siteId, jobId);
+        Accepted accepted = job.accepted();
+        if (accepted == null) {
+            throw new InvalidInputException("proposal", "the proposal has not been accepted (or was already taken back);"
+                    + " there is nothing to undo");
+        }
+        if (accepted.version() != version || sites.get(siteId).version() != version) {
+            throw new OptimisticLockingFailureException("the site changed after the proposal was accepted; remove the"
+                    + " parts on the plan instead");
+        }
+        parts.removeParts(siteId, version, accepted.rodIds(), accepted.conductorIds(), "proposal-accept-undone",
+                String.format(Locale.ROOT, "took back proposal %s: removed %d rods or masts and %d conductors", job.id(),
+                        accepted.rodIds().size(), accepted.conductorIds().size()));
+        job.accepted = null;
+        analyses.run(siteId, null, null, null);
+        return sites.get(siteId).version();
     }
 
     /** One structure's cross-check of the rolling sphere against the angle and mesh methods. */

@@ -184,6 +184,46 @@ public class AirTerminationService {
     }
 
     /**
+     * Removes the given rods and conductors in one change of the file (one earlier file kept, one new
+     * version), e.g. to take back an accepted proposal; every id must still be in the site, else
+     * nothing is removed. When {@code auditEvent} is given, the change is recorded once.
+     *
+     * @throws SiteNotFoundException when a part is no longer in the site
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public void removeParts(long siteId, long expectedVersion, List<String> rodIds, List<String> conductorIds,
+            String auditEvent, String auditText) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        List<Integer> rodIndexes = new ArrayList<>();
+        for (String id : rodIds) {
+            rodIndexes.add(rodIndex(site, document.site(), id));
+        }
+        List<Integer> conductorIndexes = new ArrayList<>();
+        for (String id : conductorIds) {
+            int index = -1;
+            for (int i = 0; i < document.site().conductors().size(); i++) {
+                if (document.site().conductors().get(i).id().equals(id)) {
+                    index = i;
+                }
+            }
+            if (index < 0) {
+                throw new SiteNotFoundException(site.id(), "site " + site.id() + " has no conductor \"" + id + "\"");
+            }
+            conductorIndexes.add(index);
+        }
+        PartFileEditor editor = editor(site, document);
+        // from the last to the first, so that the indexes still to remove stay valid
+        rodIndexes.stream().distinct().sorted(java.util.Comparator.reverseOrder()).forEach(editor::remove);
+        conductorIndexes.stream().distinct().sorted(java.util.Comparator.reverseOrder()).forEach(editor::removeConductor);
+        store(site, editor.text());
+        if (auditEvent != null) {
+            audit.record(siteId, auditEvent, auditText);
+        }
+    }
+
+    /**
      * Moves a rod to (x, y) local metres and/or changes its height.
      *
      * @return the rod as it was before the change

@@ -73,6 +73,11 @@ class DesignConductorProposalBrowserTest extends BrowserTestBase {
         Files.write(shots.resolve("design-conductor-proposal.png"), browser.getScreenshotAs(OutputType.BYTES));
 
         browser.findElement(By.id("accept-proposal")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(60)).until(b -> b.findElement(By.id("accepted-actions")).isDisplayed());
+        assertThat(browser.findElement(By.id("accepted-summary")).getText())
+                .contains(circles + " rods or masts and " + lines + " conductors");
+        Files.write(shots.resolve("design-accepted.png"), browser.getScreenshotAs(OutputType.BYTES));
+        browser.findElement(By.id("open-plan")).click();
         new WebDriverWait(browser, Duration.ofSeconds(60))
                 .until(b -> b.getCurrentUrl().endsWith("/sites/" + site.id()));
         Site stored = sites.document(sites.get(site.id())).site();

@@ -131,6 +131,23 @@ class ProposalAcceptTest {
         assertThat(fresh.totalExposedRoofArea()).isCloseTo(verification.totalExposedRoofArea(), within(1e-6));
         assertThat(fresh.totalExposedEdgeLength()).isCloseTo(verification.totalExposedEdgeLength(), within(1e-6));
         assertThat(proposal.complete()).isEqualTo(fresh.isFullyProtected());
+
+        // undo takes exactly those parts out again in one change, recorded once; only once
+        long acceptedVersion = accepted.path("version").asLong();
+        assertThat(acceptedVersion).isEqualTo(sites.get(id).version());
+        send(post("/api/sites/" + id + "/proposals/" + jobId + "/undo").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + (acceptedVersion - 1) + "}"), 409);
+        send(post("/api/sites/" + id + "/proposals/" + jobId + "/undo").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + acceptedVersion + "}"), 200);
+        Site undone = sites.document(sites.get(id)).site();
+        assertThat(undone.rods()).isEmpty();
+        assertThat(undone.conductors()).isEmpty();
+        assertThat(undone.structures()).hasSameSizeAs(site.structures());
+        assertThat(sites.fileVersions(id)).hasSize(2);
+        assertThat(audit.forSite(id, 100).stream().filter(e -> e.action().equals("proposal-accept-undone"))).hasSize(1);
+        JsonNode again = send(post("/api/sites/" + id + "/proposals/" + jobId + "/undo")
+                .contentType(MediaType.APPLICATION_JSON).content("{\"version\": " + sites.get(id).version() + "}"), 400);
+        assertThat(again.path("field").asString()).isEqualTo("proposal");
     }
 
     private JsonNode send(RequestBuilder request, int status) throws Exception {
