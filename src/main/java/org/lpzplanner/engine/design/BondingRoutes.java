@@ -28,7 +28,9 @@ import org.lpzplanner.engine.geom.SiteSurface;
  * down-conductor are assumed to be connected by a straight conductor across the roof between
  * their nearest roof-level points (rod feet, roof conductor vertices, down-conductor tops) of
  * different connected groups. That is the shortest possible connection, so where a route uses it
- * the l it gives is a lower bound; {@link Route#assumedStraight()} says how much of l it is.
+ * the l it gives is a lower bound; {@link Route#assumedStraight()} says how much of l it is. An
+ * unconnected part is not used as a bridge straight back into the group the route came from (that
+ * would bypass the group's drawn conductors by two assumptions).
  *
  * <p>Immutable after construction and thread-safe. Cost: a Dijkstra search over the nodes from all
  * down-conductors at once, O(n²) in the roof-level nodes for the assumed links.
@@ -117,6 +119,9 @@ public final class BondingRoutes {
     private double[] dist;
     private double[] assumed;
     private int[] sinkOf;
+    /** The group a node's route was in before its last straight link (-1: none), so that no unconnected part bridges back. */
+    private int[] cameFrom;
+    private int[] group;
 
     /**
      * @param structureIds   the ids of the site's structures (whose walls carry down-conductors)
@@ -297,12 +302,14 @@ public final class BondingRoutes {
     /** Dijkstra from every sink at once; assumed straight links join roof-level nodes of different groups. */
     private void search() {
         int count = nodes.size();
-        int[] group = groups(count);
+        group = groups(count);
         dist = new double[count];
         assumed = new double[count];
         sinkOf = new int[count];
+        cameFrom = new int[count];
         Arrays.fill(dist, Double.POSITIVE_INFINITY);
         Arrays.fill(sinkOf, -1);
+        Arrays.fill(cameFrom, -1);
         boolean[] isRoof = new boolean[count];
         roofNodes.forEach(n -> isRoof[n] = true);
         int[] roof = roofNodes.stream().distinct().mapToInt(Integer::intValue).toArray();
@@ -326,7 +333,7 @@ public final class BondingRoutes {
             if (isRoof[u]) {
                 Coordinate p = nodes.get(u);
                 for (int v : roof) {
-                    if (group[v] != group[u] && !done[v]) {
+                    if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v]) {
                         relax(queue, u, v, p.distance3D(nodes.get(v)), true);
                     }
                 }
@@ -340,6 +347,7 @@ public final class BondingRoutes {
             dist[v] = d;
             assumed[v] = assumed[u] + (straight ? length : 0);
             sinkOf[v] = sinkOf[u];
+            cameFrom[v] = straight ? group[u] : cameFrom[u];
             queue.add(new double[] {d, v});
         }
     }

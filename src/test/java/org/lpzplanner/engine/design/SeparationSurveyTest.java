@@ -155,4 +155,25 @@ class SeparationSurveyTest {
         assertThat(c.result().required()).isCloseTo(0.06 * 0.44 * (7 + Math.sqrt(125)), within(1e-9));
         assertThat(c.passes()).isTrue();
     }
+
+    @Test
+    void anUnconnectedRodIsNotABridgeAroundADrawnConductor() {
+        // a conductor from the corner (0, 0) round the north side to a 2 m rod at (19, 1), clamped to it
+        // 0.15 m above the roof; the only down-conductor at (0, 0). A lone 1 m rod at (10, 1) lies
+        // between: using it to jump back to the corner would take two assumed links. Route from the
+        // rod's tip: 1.85 m down to the clamp, √82 m to (20, 10), 20 m, 10 m, 6.15 m down:
+        // l = 1.85 + √82 + 36.15 m
+        Conductor round = new Conductor("round", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(0, 10, 6.15),
+                new Coordinate(20, 10, 6.15), new Coordinate(19, 1, 6.15)), null);
+        Site site = site(List.of(), List.of(new Rod("r1", null, 19, 1, 2), new Rod("r2", null, 10, 1, 1)), List.of(round));
+        List<BondingRoutes.DownConductor> one = List.of(new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 1));
+        SeparationSurvey.Check c = one(site, one, pipe(17, 1, 8, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.partId()).isEqualTo("r1");
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.DRAWN);
+        assertThat(c.route().length()).isCloseTo(1.85 + Math.sqrt(82) + 36.15, within(1e-9));
+        // class III, one down-conductor: s = 0.04 · 1 · 47.055 = 1.882 m < 2 m actual
+        assertThat(c.result().required()).isCloseTo(0.04 * (1.85 + Math.sqrt(82) + 36.15), within(1e-9));
+        assertThat(c.passes()).isTrue();
+    }
 }
