@@ -50,6 +50,7 @@ final class SeparationSchedule {
                 facts.source().sphere().level(), downs, installations, 0);
         List<List<String>> rows = new ArrayList<>();
         boolean assumed = false;
+        boolean unusual = false;
         for (SeparationSurvey.Check c : checks) {
             String name = c.kind().equals("metal installation") ? "Metal installation: " + c.name() : c.name();
             String insulation = c.material() == SeparationDistance.Material.AIR ? "air" : "concrete or brick";
@@ -57,6 +58,7 @@ final class SeparationSchedule {
             String verdict = c.connected() ? "connected" : c.passes() ? "passes"
                     : c.result().actual() < c.result().required() ? "fails" : "not confirmed";
             assumed |= c.route().basis() == BondingRoutes.Basis.ASSUMED_LINKS;
+            unusual |= verdict.equals("connected") || verdict.equals("not confirmed");
             rows.add(List.of(name, insulation, number, String.valueOf(c.route().downConductors()),
                     metres(c.result().length()), c.route().describe(), metres(c.result().required()),
                     metres(c.result().actual()), verdict));
@@ -72,8 +74,10 @@ final class SeparationSchedule {
                     + " shortest possible: a longer installed route raises s, so those rows hold only for the route"
                     + " stated.");
         }
-        notes.add("\"connected\": a part touches the object, which must then be fit to carry lightning current;"
-                + " \"not confirmed\": no down-conductor was reached, so l is a lower bound.");
+        if (unusual) {
+            notes.add("\"connected\": a part touches the object, which must then be fit to carry lightning current;"
+                    + " \"not confirmed\": no down-conductor was reached, so l is a lower bound.");
+        }
         if (!metals.isEmpty()) {
             notes.add("Metal installations: marked by the designer for the site, " + facts.design().asStored()
                     + "; they are not part of this revision.");
