@@ -84,6 +84,6 @@ final class SeparationSchedule {
         }
         return List.of(new Schedule(TITLE, List.of("Object", "Insulation", "Nearest part", "Down-conductors",
                 "l (m)", "Route of l", "s required (m)", "Distance (m)", "Result"),
-                List.of(1.6, 0.8, 0.7, 0.9, 0.5, 2.6, 0.8, 0.7, 0.8), rows, notes));
+                List.of(1.5, 0.8, 0.7, 1.25, 0.5, 2.45, 0.8, 0.7, 0.8), rows, notes));
     }
 }
