@@ -118,33 +118,109 @@ public class AirTerminationService {
     }
 
     /**
-     * Adds several rods in one change of the file (one earlier file kept, one new version), e.g. an
-     * accepted proposal. Each gets the next free id {@code rod-N}; names and heights as given.
+     * Adds several rods in one change of the file (one earlier file kept, one new version). Each gets
+     * the next free id {@code rod-N}; names and heights as given.
      *
      * @return the new rods' ids, in order
      * @throws InvalidInputException when a value is unusable (nothing is stored then)
      */
     @Transactional
     public List<String> addRods(long siteId, long expectedVersion, List<RodInput> inputs) {
-        StoredSite site = editable(siteId, expectedVersion);
         if (inputs.isEmpty()) {
             throw new InvalidInputException("rods", "there are no rods to add");
+        }
+        return addParts(siteId, expectedVersion, inputs, List.of(), null, null).rodIds();
+    }
+
+    /** Ids of the parts one change added, in the order given. */
+    public record AddedParts(List<String> rodIds, List<String> conductorIds) {
+    }
+
+    /**
+     * Adds rods and conductors in one change of the file (one earlier file kept, one new version),
+     * e.g. an accepted proposal: either all of them are stored or, when one value is unusable,
+     * none. Rods get the next free ids {@code rod-N}, conductors {@code conductor-N}. When
+     * {@code auditEvent} is given, the change is recorded in the site's audit trail once, with
+     * {@code auditText}.
+     *
+     * @throws InvalidInputException when there is nothing to add or a value is unusable
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public AddedParts addParts(long siteId, long expectedVersion, List<RodInput> rods, List<ConductorInput> conductors,
+            String auditEvent, String auditText) {
+        StoredSite site = editable(siteId, expectedVersion);
+        if (rods.isEmpty() && conductors.isEmpty()) {
+            throw new InvalidInputException("parts", "there are no parts to add");
         }
         SiteDocument document = sites.document(site);
         Set<String> used = usedIds(document.site());
         PartFileEditor editor = editor(site, document);
-        List<String> ids = new ArrayList<>();
-        for (RodInput input : inputs) {
+        List<String> rodIds = new ArrayList<>();
+        for (int k = 0; k < rods.size(); k++) {
+            RodInput input = rods.get(k);
             if (input.x() == null || input.y() == null) {
-                throw new InvalidInputException("x", "x and y (local metres) are required for every rod");
+                throw new InvalidInputException("rods[" + k + "]", "x and y (local metres) are required for every rod");
             }
+            checkName(input.name());
             String id = newId(used, null, "rod");
             used.add(id);
-            editor.add(id, input.name(), input.x(), input.y(), height(input.height()));
-            ids.add(id);
+            editor.add(id, input.name(), input.x(), input.y(), height(input.height() == null ? "1" : input.height()));
+            rodIds.add(id);
+        }
+        List<String> conductorIds = new ArrayList<>();
+        for (ConductorInput input : conductors) {
+            BigDecimal heightAboveRoof = checkedConductor(input);
+            String id = newId(used, null, "conductor");
+            used.add(id);
+            editor.addConductor(id, input.name(), input.points(), heightAboveRoof);
+            conductorIds.add(id);
         }
         store(site, editor.text());
-        return ids;
+        if (auditEvent != null) {
+            audit.record(siteId, auditEvent, auditText);
+        }
+        return new AddedParts(rodIds, conductorIds);
+    }
+
+    /**
+     * Removes the given rods and conductors in one change of the file (one earlier file kept, one new
+     * version), e.g. to take back an accepted proposal; every id must still be in the site, else
+     * nothing is removed. When {@code auditEvent} is given, the change is recorded once.
+     *
+     * @throws SiteNotFoundException when a part is no longer in the site
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public void removeParts(long siteId, long expectedVersion, List<String> rodIds, List<String> conductorIds,
+            String auditEvent, String auditText) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        List<Integer> rodIndexes = new ArrayList<>();
+        for (String id : rodIds) {
+            rodIndexes.add(rodIndex(site, document.site(), id));
+        }
+        List<Integer> conductorIndexes = new ArrayList<>();
+        for (String id : conductorIds) {
+            int index = -1;
+            for (int i = 0; i < document.site().conductors().size(); i++) {
+                if (document.site().conductors().get(i).id().equals(id)) {
+                    index = i;
+                }
+            }
+            if (index < 0) {
+                throw new SiteNotFoundException(site.id(), "site " + site.id() + " has no conductor \"" + id + "\"");
+            }
+            conductorIndexes.add(index);
+        }
+        PartFileEditor editor = editor(site, document);
+        // from the last to the first, so that the indexes still to remove stay valid
+        rodIndexes.stream().distinct().sorted(java.util.Comparator.reverseOrder()).forEach(editor::remove);
+        conductorIndexes.stream().distinct().sorted(java.util.Comparator.reverseOrder()).forEach(editor::removeConductor);
+        store(site, editor.text());
+        if (auditEvent != null) {
+            audit.record(siteId, auditEvent, auditText);
+        }
     }
 
     /**
@@ -213,6 +289,21 @@ public class AirTerminationService {
     @Transactional
     public String addConductor(long siteId, long expectedVersion, ConductorInput input) {
         StoredSite site = editable(siteId, expectedVersion);
+        BigDecimal heightAboveRoof = checkedConductor(input);
+        SiteDocument document = sites.document(site);
+        Set<String> used = usedIds(document.site());
+        String id = newId(used, input.id(), "conductor");
+        PartFileEditor editor = editor(site, document);
+        editor.addConductor(id, input.name(), input.points(), heightAboveRoof);
+        store(site, editor.text());
+        return id;
+    }
+
+    /**
+     * Checks a new conductor's points and height; returns its height above the surface below, or
+     * null when the points carry elevations.
+     */
+    private static BigDecimal checkedConductor(ConductorInput input) {
         List<double[]> points = input.points();
         if (points == null || points.size() < 2) {
             throw new InvalidInputException("points", "a conductor needs at least two points");
@@ -241,13 +332,7 @@ public class AirTerminationService {
             heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
         }
         checkName(input.name());
-        SiteDocument document = sites.document(site);
-        Set<String> used = usedIds(document.site());
-        String id = newId(used, input.id(), "conductor");
-        PartFileEditor editor = editor(site, document);
-        editor.addConductor(id, input.name(), points, heightAboveRoof);
-        store(site, editor.text());
-        return id;
+        return heightAboveRoof;
     }
 
     /**
