@@ -428,8 +428,8 @@ public class DesignService {
             note = "a part touches it: it is connected to the air-termination, so it must be fit to carry lightning"
                     + " current; no clearance to check";
         } else if (route.basis() == BondingRoutes.Basis.ASSUMED_LINKS) {
-            note = "part of l is assumed straight across the roof where no conductor is drawn; a longer installed"
-                    + " route raises s";
+            note = "part of l is assumed straight across the roof where no conductor is drawn, the shortest a"
+                    + " route can be: l is a lower bound, so the check can fail but not pass until the route is drawn";
         } else if (route.basis() == BondingRoutes.Basis.NONE) {
             note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
         } else {

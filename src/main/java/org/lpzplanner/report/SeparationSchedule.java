@@ -71,12 +71,13 @@ final class SeparationSchedule {
                 + " meet, to the down-conductor of the schedule above and down it to bonding at ground level.");
         if (assumed) {
             notes.add("Where no conductor is drawn, the route assumes a straight connection across the roof, the"
-                    + " shortest possible: a longer installed route raises s, so those rows hold only for the route"
-                    + " stated.");
+                    + " shortest possible: l and s are then lower bounds, so such a row can fail but not pass (\"not"
+                    + " confirmed\" when the distance clears that lower bound); draw the installed route to confirm it.");
         }
         if (unusual) {
             notes.add("\"connected\": a part touches the object, which must then be fit to carry lightning current;"
-                    + " \"not confirmed\": no down-conductor was reached, so l is a lower bound.");
+                    + " \"not confirmed\": l is a lower bound (a straight link assumed, or no down-conductor reached)"
+                    + " and the distance clears the s it gives.");
         }
         if (!metals.isEmpty()) {
             notes.add("Metal installations: marked by the designer for the site, " + facts.design().asStored()

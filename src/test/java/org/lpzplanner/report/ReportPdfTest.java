@@ -127,14 +127,19 @@ class ReportPdfTest {
         assertThat(all).contains("Bill of quantities").contains("Test joint pcs " + downConductors + " ")
                 .contains("Earth termination pcs " + downConductors + " ");
         // Separation distances: l along the route to a down-conductor and down it, the route stated;
-        // each row passes exactly when the distance is at least s (IEC 62305-3:2010 6.3)
+        // a row fails when the distance is below s (IEC 62305-3:2010 6.3); at or above it, it passes
+        // along a drawn route and is "not confirmed" where the route assumes a straight link (l, s lower bounds)
         assertThat(all).contains("Schedule of separation distances").contains("Route of l").contains(" m down it ");
-        var verdicts = java.util.regex.Pattern.compile("m down it (\\d+\\.\\d+) (\\d+\\.\\d+) (passes|fails)").matcher(all);
+        var verdicts = java.util.regex.Pattern.compile("m down it (\\d+\\.\\d+) (\\d+\\.\\d+) (passes|fails|not confirmed)").matcher(all);
         int rows = 0;
         while (verdicts.find()) {
             rows++;
             boolean clear = Double.parseDouble(verdicts.group(2)) >= Double.parseDouble(verdicts.group(1));
-            assertThat(verdicts.group(3)).isEqualTo(clear ? "passes" : "fails");
+            if (clear) {
+                assertThat(verdicts.group(3)).isIn("passes", "not confirmed");
+            } else {
+                assertThat(verdicts.group(3)).isEqualTo("fails");
+            }
         }
         assertThat(rows).as("separation rows of the campus's rooftop objects").isEqualTo(site.rooftopObjects().size());
         assertThat(all).contains("Section through");

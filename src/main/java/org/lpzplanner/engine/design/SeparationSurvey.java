@@ -22,8 +22,9 @@ import org.lpzplanner.engine.model.Site;
  * its wall is measured level with it. l runs from that point along the air-termination and down
  * the down-conductor to the bonding level ({@link BondingRoutes}); k<sub>c</sub> follows the number
  * of down-conductors of the structure that route takes. A check passes when the actual distance is
- * at least s and l was found along a route; without one (no down-conductor reached) l is a lower
- * bound and the check does not pass. An object that a part touches is connected to the
+ * at least s and l was found along drawn parts (or down a mast); where the route assumes a straight
+ * link across the roof, or reaches no down-conductor, l is a lower bound and the check can fail but
+ * not pass ("not confirmed" when the distance clears that lower bound). An object that a part touches is connected to the
  * air-termination: no clearance to check, and no pass either (it must be fit to carry the current).
  * Stateless and thread-safe.
  */
@@ -57,7 +58,10 @@ public final class SeparationSurvey {
             String partId, BondingRoutes.Route route, SeparationDistance.Result result, boolean connected) {
 
         public boolean passes() {
-            return !connected && route.basis() != BondingRoutes.Basis.NONE && result.passes();
+            // an assumed straight link across the roof is the shortest a route can be: with it, l and
+            // s are lower bounds, enough to fail a check but never to pass one
+            return !connected && (route.basis() == BondingRoutes.Basis.DRAWN
+                    || route.basis() == BondingRoutes.Basis.GROUNDED_PART) && result.passes();
         }
     }
 
