@@ -252,4 +252,28 @@ class ConductorApiTest {
         change(id, "conductor-1", "'points': [[10, 20], [70, 20]], 'heightAboveRoof': 0.3", 200);
         assertThat(conductors(id).get(0).heightAboveRoof()).isEqualTo(0.3);
     }
+
+    @Test
+    void onALonLatSiteTheNewPathIsWrittenInLonLatAndReadsBackInLocalMetres() throws Exception {
+        long id = upload(SiteApiTest.sample("millbrook-hall.geojson"));
+        add(id, "'points': [[0, 0, 15], [10, 0, 15]], 'name': 'Wire'", 201);
+        change(id, "conductor-1", "'points': [[0, 0, 15], [12.5, 3.25, 16]]", 200);
+        Conductor wire = conductors(id).stream().filter(c -> c.id().equals("conductor-1")).findFirst().orElseThrow();
+        // written to 1e-8 degree: within about a millimetre of the metres sent
+        assertThat(wire.path().get(1).x).isCloseTo(12.5, within(0.002));
+        assertThat(wire.path().get(1).y).isCloseTo(3.25, within(0.002));
+        assertThat(wire.path().get(1).getZ()).isEqualTo(16.0);
+        JsonNode feature = null;
+        for (JsonNode f : JSON.readTree(sites.get(id).sourceText()).path("features")) {
+            if ("conductor-1".equals(f.path("id").asString())) {
+                feature = f;
+            }
+        }
+        assertThat(feature).isNotNull();
+        JsonNode end = feature.path("geometry").path("coordinates").get(1);
+        // a longitude and a latitude (RFC 7946), not metres: the file keeps its own coordinates
+        assertThat(Math.abs(end.get(0).asDouble())).isLessThanOrEqualTo(180);
+        assertThat(Math.abs(end.get(1).asDouble())).isBetween(1.0, 90.0);
+        assertThat(end.get(2).asDouble()).isEqualTo(16.0);
+    }
 }
