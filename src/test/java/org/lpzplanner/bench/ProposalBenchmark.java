@@ -7,7 +7,6 @@ import java.util.List;
 import org.locationtech.jts.geom.Geometry;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
-import org.lpzplanner.engine.exposure.FacadeBand;
 import java.util.Locale;
 import java.util.stream.Stream;
 import org.lpzplanner.engine.design.proposal.AirTerminationProposer;
@@ -17,12 +16,14 @@ import org.lpzplanner.engine.design.proposal.ProposalOptions;
 import org.lpzplanner.engine.io.SiteReader;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.model.Structure;
 import org.lpzplanner.engine.model.SphereSpec;
 
 /**
  * Proposal time and part counts on every sample site at every level, rods of 0.5, 1, 1.5, 2 and
- * 3 m, against the regular layout; where walls rise above the sphere radius, also with those facade
- * bands accepted (no roof part can cover them). A plain main (run with {@code scripts/benchmark proposal});
+ * 3 m, against the regular layout; where walls rise above the sphere radius, also with the walls
+ * and rims of those structures accepted (no roof part can cover them), and, when that is still not
+ * complete, with roof-edge conductors allowed too. A plain main (run with {@code scripts/benchmark proposal});
  * prints a Markdown table. Arguments: optional sample file names and levels (I to IV) to restrict the run.
  */
 public final class ProposalBenchmark {
@@ -58,15 +59,23 @@ public final class ProposalBenchmark {
                 ProtectionLevel level = ProtectionLevel.parse(lv);
                 SphereSpec sphere = SphereSpec.of(level);
                 ProposalOptions options = ProposalOptions.rods(sphere, List.of(0.5, 1.0, 1.5, 2.0, 3.0));
+                // structures reached from the side above R need side air-termination whatever
+                // stands on their roofs: their walls and rims are accepted as a designer would
                 List<Geometry> high = new ArrayList<>();
-                for (FacadeBand b : ExposureAnalysis.analyze(site, AnalysisOptions.of(sphere)).facades()) {
-                    if (b.top() > sphere.radius()) {
-                        high.add(b.line());
+                var bare = ExposureAnalysis.analyze(site, AnalysisOptions.of(sphere));
+                for (Structure st : site.structures()) {
+                    if (bare.facades().stream().anyMatch(b -> b.ownerId().equals(st.id()) && b.top() > sphere.radius())) {
+                        high.add(st.footprint().getBoundary());
                     }
                 }
                 if (!high.isEmpty()) {
-                    row(f, level + " (walls above R accepted)", AirTerminationProposer.propose(site,
-                            options.withAccepted(high), ProposalMonitor.NONE));
+                    Proposal withRods = AirTerminationProposer.propose(site, options.withAccepted(high), ProposalMonitor.NONE);
+                    row(f, level + " (upper walls and rims above R accepted)", withRods);
+                    if (!withRods.complete()) {
+                        row(f, level + " (same, roof-edge conductors allowed)", AirTerminationProposer.propose(site,
+                                new ProposalOptions(sphere, options.rodHeights(), true, false, List.of(), List.of(), high,
+                                        null), ProposalMonitor.NONE));
+                    }
                 }
                 row(f, level.name(), AirTerminationProposer.propose(site, options, ProposalMonitor.NONE));
             }

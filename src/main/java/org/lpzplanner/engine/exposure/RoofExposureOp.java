@@ -19,7 +19,8 @@ import org.lpzplanner.engine.geom.RoofFace;
  * boundary is split into squares lying wholly in the face (down to an eighth of the cell) and
  * decided the same way; the sliver along the boundary that no such square covers is judged with
  * the edge it borders, so the cell is also exposed when an exposed edge of the same owner passes
- * through it. Keeping boundary lines out of the squares matters: on a wall of a structure taller
+ * through it (such a cell whose squares are all protected is exposed only at that edge, and says
+ * so). Keeping boundary lines out of the squares matters: on a wall of a structure taller
  * than R the envelope drops to the facade's exposure, which says nothing about the roof beside it.
  * The exposed part is the union of exposed cells clipped to the face's visible part (the face less
  * what higher solids of other owners cover).
@@ -32,8 +33,13 @@ final class RoofExposureOp {
     private RoofExposureOp() {
     }
 
-    /** Cell states of a face. */
-    static final byte OUTSIDE = 0, HIDDEN = 1, PROTECTED = 2, EXPOSED = 3;
+    /**
+     * Cell states of a face. {@code EXPOSED_AT_EDGE}: an exposed edge of the same owner crosses the
+     * cell and the cell counts as exposed, while every square of it lying wholly in the face is
+     * below the envelope, so the exposure is the edge's own (a designer who accepts the edge
+     * accepts it; a part that protects the edge settles it).
+     */
+    static final byte OUTSIDE = 0, HIDDEN = 1, PROTECTED = 2, EXPOSED = 3, EXPOSED_AT_EDGE = 4;
 
     /**
      * Every decision taken for one face: the state of each cell of its bounding cell range
@@ -112,14 +118,17 @@ final class RoofExposureOp {
         }
         boolean whole = poly.containsSquare(x, y, half);
         boolean isExposed;
+        boolean onlyAtEdge = false;
         if (whole) {
             isExposed = squareExposed(ctx, plane, x, y, half, i, j);
         } else if (roofMax(plane, x, y, half) + ExposureContext.MARGIN < ctx.field.cellLower(i, j)) {
             isExposed = false; // the whole cell, boundary line included, is below the envelope
         } else {
-            isExposed = edgeCells.contains(j * g.nx() + i) || boundaryExposed(ctx, poly, plane, x, y, half);
+            boolean inside = boundaryExposed(ctx, poly, plane, x, y, half);
+            onlyAtEdge = !inside && edgeCells.contains(j * g.nx() + i);
+            isExposed = inside || onlyAtEdge;
         }
-        cells.state()[c] = isExposed ? EXPOSED : PROTECTED;
+        cells.state()[c] = onlyAtEdge ? EXPOSED_AT_EDGE : isExposed ? EXPOSED : PROTECTED;
         if (!isExposed && whole) {
             cells.clearance()[c] = ctx.field.cellLower(i, j) - roofMax(plane, x, y, half);
         }
@@ -130,6 +139,7 @@ final class RoofExposureOp {
         RoofFace face = ctx.surface.faces().get(k);
         var g = ctx.grid;
         boolean[] exposed = new boolean[g.nx() * g.ny()];
+        boolean[] atEdge = null;
         int candidates = 0, exposedCount = 0, hidden = 0;
         double minClearance = Double.NaN;
         for (int j = cells.j0(); j <= cells.j1(); j++) {
@@ -138,10 +148,16 @@ final class RoofExposureOp {
                 byte s = cells.state()[c];
                 if (s == HIDDEN) {
                     hidden++;
-                } else if (s == EXPOSED) {
+                } else if (s == EXPOSED || s == EXPOSED_AT_EDGE) {
                     candidates++;
                     exposedCount++;
                     exposed[j * g.nx() + i] = true;
+                    if (s == EXPOSED_AT_EDGE) {
+                        if (atEdge == null) {
+                            atEdge = new boolean[exposed.length];
+                        }
+                        atEdge[j * g.nx() + i] = true;
+                    }
                 } else if (s == PROTECTED) {
                     candidates++;
                     double clearance = cells.clearance()[c];
@@ -164,8 +180,22 @@ final class RoofExposureOp {
         if (!Double.isNaN(minClearance)) {
             minClearance = Math.max(0, minClearance);
         }
+        Geometry alongEdges = atEdge == null ? ctx.gf.createPolygon()
+                : areasOf(ctx, new CellRegions(g, ctx.gf).union(atEdge, cells.i0(), cells.j0(), cells.i1(), cells.j1())
+                        .intersection(exposedArea));
         return new RoofExposure(face.ownerId(), face.ownerName(), face.kind(), face.index(), face.polygon(),
-                face.plane().slopeFactor(), exposedArea, visible.getArea(), exposedArea.getArea(), minClearance);
+                face.plane().slopeFactor(), exposedArea, visible.getArea(), exposedArea.getArea(), minClearance,
+                alongEdges);
+    }
+
+    /** The polygons of an overlay result, which may also hold the lines and points where areas touch. */
+    private static Geometry areasOf(ExposureContext ctx, Geometry g) {
+        if (g instanceof Polygon || g instanceof org.locationtech.jts.geom.MultiPolygon) {
+            return g;
+        }
+        List<Polygon> polygons = new ArrayList<>();
+        org.locationtech.jts.geom.util.PolygonExtracter.getPolygons(g, polygons);
+        return ctx.gf.createMultiPolygon(polygons.toArray(Polygon[]::new));
     }
 
     private static double roofMax(Plane plane, double x, double y, double half) {

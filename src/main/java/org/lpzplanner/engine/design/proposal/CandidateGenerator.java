@@ -37,6 +37,9 @@ import org.lpzplanner.engine.model.Structure;
 final class CandidateGenerator {
 
     static final double INSET = 0.2;
+
+    /** Objects at least this long on a side also get corner rods, metres. */
+    static final double MIN_OBJECT_FOR_CORNERS = 2.0;
     private static final double MAST_OFFSET = 2.0;
     private static final double OBJECT_CLEARANCE = 0.3;
 
@@ -125,6 +128,7 @@ final class CandidateGenerator {
                             radius, 1 + 0.02 * h));
                 }
             }
+            objectCornerRods(out, surface, options, keepOut, o);
         }
         if (!options.mastHeights().isEmpty() && !footprints.isEmpty()) {
             Geometry all = gf.buildGeometry(footprints).union();
@@ -146,6 +150,39 @@ final class CandidateGenerator {
             }
         }
         return out;
+    }
+
+    /**
+     * Rods on the corners of an object large enough for one rod in its middle to leave its corners
+     * open (a plant room or housing; not a chimney or a flue): inset {@value #INSET} m along the
+     * corner's bisector, on the object's top.
+     */
+    private void objectCornerRods(List<Candidate> out, SiteSurface surface, ProposalOptions options,
+            PreparedGeometry keepOut, RooftopObject o) {
+        var env = o.footprint().getEnvelopeInternal();
+        Coordinate[] ring = o.footprint().getExteriorRing().getCoordinates();
+        if (Math.max(env.getWidth(), env.getHeight()) < MIN_OBJECT_FOR_CORNERS || ring.length - 1 > 8) {
+            return;
+        }
+        var inside = new org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator(o.footprint());
+        for (int k = 0; k < ring.length - 1; k++) {
+            Coordinate c = ring[k], prev = ring[k == 0 ? ring.length - 2 : k - 1], next = ring[k + 1];
+            double ax = prev.x - c.x, ay = prev.y - c.y, bx = next.x - c.x, by = next.y - c.y;
+            double la = Math.hypot(ax, ay), lb = Math.hypot(bx, by);
+            double dx = ax / la + bx / lb, dy = ay / la + by / lb, ld = Math.hypot(dx, dy);
+            if (ld < 1e-9) {
+                continue;
+            }
+            Coordinate p = new Coordinate(c.x + INSET * dx / ld, c.y + INSET * dy / ld);
+            if (inside.locate(p) != org.locationtech.jts.geom.Location.INTERIOR || inside(keepOut, p)
+                    || Math.abs(surface.standHeight(p.x, p.y) - o.top()) > 0.01) {
+                continue;
+            }
+            for (double h : options.rodHeights()) {
+                out.add(rod(ProposedPart.Kind.ROD, ProposedPart.Place.OBJECT, o.id(), p.x, p.y, o.top(), h,
+                        options.sphere().radius(), 1 + 0.02 * h));
+            }
+        }
     }
 
     private void addRods(List<Candidate> out, Set<String> seen, SiteSurface surface, ProposalOptions options,
@@ -176,7 +213,7 @@ final class CandidateGenerator {
         return new Candidate(kind, place, owner, List.of(foot, tip), h, List.of(new PointSupport(x, y, base + h, radius)), cost);
     }
 
-    /** A point {@value #INSET} m in from a footprint corner, on the roof; null when none is found. */
+    /** A point about {@value #INSET} m in from a footprint corner, on the roof or its parapet; null when none is found. */
     private static Coordinate insetCorner(SiteSurface surface, Coordinate corner) {
         Coordinate best = null;
         double bestBase = 0.01;
@@ -185,7 +222,10 @@ final class CandidateGenerator {
             double a = Math.PI / 4 * k + Math.PI / 8;
             double x = corner.x + d * 1.4 * Math.cos(a), y = corner.y + d * 1.4 * Math.sin(a);
             double base = surface.standHeight(x, y);
-            if (base > bestBase + 1e-6 && Math.abs(base - corner.getZ()) <= 1.0) {
+            // on the structure itself: a parapet's top also reaches a little past the wall, where a
+            // rod would hang off the outside of the corner
+            boolean onStructure = surface.topHeight(x, y) > 0.01;
+            if (onStructure && base > bestBase + 1e-6 && Math.abs(base - corner.getZ()) <= 1.0) {
                 bestBase = base;
                 best = new Coordinate(x, y);
             }
@@ -197,7 +237,10 @@ final class CandidateGenerator {
     private static Coordinate insetEdge(SiteSurface surface, double x, double y, double nx, double ny, double z) {
         double left = surface.standHeight(x + INSET * nx, y + INSET * ny);
         double right = surface.standHeight(x - INSET * nx, y - INSET * ny);
-        boolean useLeft = Math.abs(left - z) <= Math.abs(right - z);
+        boolean leftOn = surface.topHeight(x + INSET * nx, y + INSET * ny) > 0.01;
+        boolean rightOn = surface.topHeight(x - INSET * nx, y - INSET * ny) > 0.01;
+        // a parapet's top reaches past the wall too: take the side over the structure when only one is
+        boolean useLeft = leftOn != rightOn ? leftOn : Math.abs(left - z) <= Math.abs(right - z);
         double base = useLeft ? left : right;
         if (base <= 0.01 || Math.abs(base - z) > 1.0) {
             return null;

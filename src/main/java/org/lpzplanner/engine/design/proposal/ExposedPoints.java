@@ -18,7 +18,7 @@ import org.lpzplanner.engine.geom.SiteSurface;
 
 /**
  * Points sampled on everything an analysis found exposed, less what the designer accepted: roof
- * areas on a {@value #ROOF_SPACING} m grid (and one inner point of every piece, however small),
+ * areas (less the cells exposed only at an exposed edge, which that edge's points stand for) on a {@value #ROOF_SPACING} m grid (and one inner point of every piece, however small),
  * edges every {@value #LINE_SPACING} m with both ends, corners, and facade bands along the wall a
  * quarter and half-way up (their tops are roof edges, sampled as such).
  */
@@ -70,7 +70,12 @@ final class ExposedPoints {
                 continue;
             }
             var plane = planes.get(r.ownerId() + "|" + r.kind() + "|" + r.faceIndex());
-            Geometry exposed = r.exposed();
+            // cells exposed only because an exposed edge crosses them are that edge's exposure,
+            // sampled with the edge: a part that protects the edge settles them, accepting it accepts them
+            Geometry atEdges = r.exposedAtEdges();
+            Geometry exposed = atEdges.isEmpty() ? r.exposed() : areas(r.exposed()).difference(atEdges);
+            org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator inAtEdges = atEdges.isEmpty() ? null
+                    : new org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator(atEdges);
             for (int k = 0; k < exposed.getNumGeometries(); k++) {
                 Geometry piece = exposed.getGeometryN(k);
                 if (piece.isEmpty()) {
@@ -83,14 +88,15 @@ final class ExposedPoints {
                 double y0 = Math.floor(e.getMinY() / ROOF_SPACING) * ROOF_SPACING + ROOF_SPACING / 2;
                 for (double x = x0; x <= e.getMaxX(); x += ROOF_SPACING) {
                     for (double y = y0; y <= e.getMaxY(); y += ROOF_SPACING) {
-                        if (inside.locate(new Coordinate(x, y)) != org.locationtech.jts.geom.Location.EXTERIOR) {
+                        if (inside.locate(new Coordinate(x, y)) != org.locationtech.jts.geom.Location.EXTERIOR
+                                && !strictlyIn(inAtEdges, x, y)) {
                             add(out, new Point(x, y, plane.z(x, y), r.ownerId(), "roof", 0, 0, plane.a(), plane.b(),
                                     Math.abs(plane.a()) + Math.abs(plane.b())));
                         }
                     }
                 }
                 Coordinate c = piece.getInteriorPoint().getCoordinate();
-                if (c != null) {
+                if (c != null && !strictlyIn(inAtEdges, c.x, c.y)) {
                     add(out, new Point(c.x, c.y, plane.z(c.x, c.y), r.ownerId(), "roof", 0, 0, plane.a(), plane.b(),
                                     Math.abs(plane.a()) + Math.abs(plane.b())));
                 }
@@ -126,6 +132,18 @@ final class ExposedPoints {
                 add(out, new Point(a.x + t * (b.x - a.x), a.y + t * (b.y - a.y), z, owner, what, dx, dy, 0, 0, rise));
             }
         }
+    }
+
+    /** The polygons of a geometry that may also hold lines or points where areas touch. */
+    private Geometry areas(Geometry g) {
+        List<org.locationtech.jts.geom.Polygon> polygons = new ArrayList<>();
+        org.locationtech.jts.geom.util.PolygonExtracter.getPolygons(g, polygons);
+        return gf.createMultiPolygon(polygons.toArray(org.locationtech.jts.geom.Polygon[]::new));
+    }
+
+    private static boolean strictlyIn(org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator area, double x,
+            double y) {
+        return area != null && area.locate(new Coordinate(x, y)) == org.locationtech.jts.geom.Location.INTERIOR;
     }
 
     private static double z(Coordinate c) {

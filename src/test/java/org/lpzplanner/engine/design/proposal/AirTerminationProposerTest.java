@@ -20,7 +20,6 @@ import org.locationtech.jts.geom.Polygon;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
-import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.io.SiteReader;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.RoofShape;
@@ -42,6 +41,7 @@ class AirTerminationProposerTest {
                 Arguments.of("brookfield-campus.geojson", ProtectionLevel.IV),
                 Arguments.of("harbour-warehouse.geojson", ProtectionLevel.II),
                 Arguments.of("meridian-tower.geojson", ProtectionLevel.III),
+                Arguments.of("meridian-tower.geojson", ProtectionLevel.I),
                 Arguments.of("millbrook-hall.geojson", ProtectionLevel.II),
                 Arguments.of("courtyard-block.wkt", ProtectionLevel.I));
     }
@@ -52,9 +52,10 @@ class AirTerminationProposerTest {
         Site site = SiteReader.read(Path.of("sample-sites", file)).site();
         SphereSpec sphere = SphereSpec.of(level);
         // Walls higher than the sphere radius are reached from the side whatever stands on the roof
-        // (closed form 4 of the sphere geometry: exposed from R up); a designer accepts those bands
-        // (side air-termination, natural components), so they are passed as accepted items.
-        List<Geometry> accepted = bandsAboveRadius(site, sphere);
+        // (closed form 4 of the sphere geometry: exposed from R up), and so are their top edges; a
+        // designer accepts those walls and rims (side air-termination, natural components), so they
+        // are passed as accepted items. The 95 m tower's antenna housing needs rods at its corners.
+        List<Geometry> accepted = rimsOfStructuresReachedAboveRadius(site, sphere);
         ProposalOptions options = ProposalOptions.rods(sphere, HEIGHTS).withAccepted(accepted);
 
         Proposal proposal = AirTerminationProposer.propose(site, options, ProposalMonitor.NONE);
@@ -74,6 +75,29 @@ class AirTerminationProposerTest {
         Proposal proposal = AirTerminationProposer.propose(site, ProposalOptions.rods(sphere, HEIGHTS), ProposalMonitor.NONE);
 
         ProposalChecks.assertFullyCovered(site, proposal, sphere, List.of());
+        assertThat(proposal.shareOfRegular()).isLessThanOrEqualTo(0.70);
+    }
+
+    // classes I and II: the 35 m tower (36 m with its parapet) is taller than R (20 and 30 m). Its
+    // walls are reached from the side from R up (closed form 4 of the sphere geometry), and so are
+    // their top edges, whatever stands on the roof: a designer gives the upper part of such a
+    // structure side air-termination and accepts its walls and rims here. Everything else, every
+    // roof included, must be covered. At class I a 19.2 m parapet top (the library) is touched by
+    // spheres resting on the ground at almost 20 m: only a conductor on the edge itself meets them,
+    // so roof-edge conductors are allowed there.
+    @ParameterizedTest(name = "class {0}")
+    @ValueSource(strings = {"I", "II"})
+    void campusAtTheHigherClassesIsCompleteOnceTheTowersUpperWallsAreAccepted(String level) {
+        Site site = SiteReader.read(Path.of("sample-sites", "brookfield-campus.geojson")).site();
+        SphereSpec sphere = SphereSpec.of(ProtectionLevel.parse(level));
+        List<Geometry> accepted = rimsOfStructuresReachedAboveRadius(site, sphere);
+        assertThat(accepted).as("only the tower is taller than R").hasSize(1);
+        ProposalOptions options = new ProposalOptions(sphere, HEIGHTS, level.equals("I"), false, List.of(), List.of(),
+                accepted, null);
+
+        Proposal proposal = AirTerminationProposer.propose(site, options, ProposalMonitor.NONE);
+
+        ProposalChecks.assertFullyCovered(site, proposal, sphere, accepted);
         assertThat(proposal.shareOfRegular()).isLessThanOrEqualTo(0.70);
     }
 
@@ -160,12 +184,15 @@ class AirTerminationProposerTest {
                 .hasMessageContaining("allow at least one");
     }
 
-    private static List<Geometry> bandsAboveRadius(Site site, SphereSpec sphere) {
+    /** The outlines (wall tops) of the structures with a facade band above R. */
+    private static List<Geometry> rimsOfStructuresReachedAboveRadius(Site site, SphereSpec sphere) {
         AnalysisResult bare = ExposureAnalysis.analyze(site, AnalysisOptions.of(sphere));
         List<Geometry> out = new ArrayList<>();
-        for (FacadeBand b : bare.facades()) {
-            if (b.top() > sphere.radius()) {
-                out.add(b.line());
+        for (Structure s : site.structures()) {
+            boolean reached = bare.facades().stream()
+                    .anyMatch(b -> b.ownerId().equals(s.id()) && b.top() > sphere.radius());
+            if (reached) {
+                out.add(s.footprint().getBoundary());
             }
         }
         return out;

@@ -51,9 +51,30 @@ final class ProposalChecks {
                 left.add("facade " + b.ownerId() + " " + b.line());
             }
         }
+        double cell = fresh.resolution();
         for (RoofExposure r : fresh.roofs()) {
-            if (r.isExposed() && !allowed.covers(r.exposed())) {
-                left.add("roof " + r.ownerId() + " " + r.exposed().difference(allowed).getArea() + " m²");
+            if (!r.isExposed()) {
+                continue;
+            }
+            List<org.locationtech.jts.geom.Polygon> areas = new ArrayList<>();
+            org.locationtech.jts.geom.util.PolygonExtracter.getPolygons(r.exposed(), areas);
+            Geometry own = GF.createMultiPolygon(areas.toArray(org.locationtech.jts.geom.Polygon[]::new))
+                    .difference(r.exposedAtEdges());
+            double outside = own.difference(allowed).getArea();
+            if (outside > 1e-6) {
+                left.add("roof " + r.ownerId() + " " + outside + " m²");
+            }
+            // cells exposed only at an edge must lie on an exposed edge or corner of the same
+            // structure, which the checks above require to be accepted
+            for (int k = 0; k < r.exposedAtEdges().getNumGeometries(); k++) {
+                Geometry piece = r.exposedAtEdges().getGeometryN(k);
+                boolean onEdge = fresh.edges().stream().anyMatch(e -> e.ownerId().equals(r.ownerId())
+                        && piece.isWithinDistance(flat(e.line()), 1e-9))
+                        || fresh.corners().stream().anyMatch(c -> c.ownerId().equals(r.ownerId())
+                                && piece.isWithinDistance(GF.createPoint(new Coordinate(c.point().x, c.point().y)), cell));
+                if (!onEdge) {
+                    left.add("roof " + r.ownerId() + " at no exposed edge: " + piece);
+                }
             }
         }
         assertThat(left).as("exposed after the proposal, outside accepted items").isEmpty();
