@@ -71,17 +71,7 @@ public class AirTerminationService {
         LocalProjection projection = document.projection();
         List<RodView> rods = document.site().rods().stream().map(r -> new RodView(r.id(), r.name(), round(r.x()),
                 round(r.y()), sitePosition(projection, r.x(), r.y()), r.height())).toList();
-        List<ConductorView> conductors = new ArrayList<>();
-        for (Conductor c : document.site().conductors()) {
-            List<double[]> path = new ArrayList<>();
-            List<double[]> sitePath = new ArrayList<>();
-            for (Coordinate p : c.path()) {
-                path.add(Double.isNaN(p.getZ()) || c.followsSurface() ? new double[] {round(p.x), round(p.y)}
-                        : new double[] {round(p.x), round(p.y), round(p.getZ())});
-                sitePath.add(sitePosition(projection, p.x, p.y));
-            }
-            conductors.add(new ConductorView(c.id(), c.name(), path, sitePath, c.heightAboveRoof()));
-        }
+        List<ConductorView> conductors = document.site().conductors().stream().map(c -> view(c, projection)).toList();
         return new Parts(site.id(), site.version(), projection == null ? "local-metres" : "lon-lat",
                 sites.isGeoJson(site), rods, conductors);
     }
@@ -290,13 +280,62 @@ public class AirTerminationService {
     public String addConductor(long siteId, long expectedVersion, ConductorInput input) {
         StoredSite site = editable(siteId, expectedVersion);
         BigDecimal heightAboveRoof = checkedConductor(input);
+        List<double[]> points = input.points();
         SiteDocument document = sites.document(site);
         Set<String> used = usedIds(document.site());
         String id = newId(used, input.id(), "conductor");
         PartFileEditor editor = editor(site, document);
-        editor.addConductor(id, input.name(), input.points(), heightAboveRoof);
+        editor.addConductor(id, input.name(), points, heightAboveRoof);
         store(site, editor.text());
+        audit.record(siteId, "conductor-added", "conductor " + id + named(input.name()) + " with "
+                + points.size() + " points " + (heightAboveRoof == null ? "at elevations above ground"
+                : heightAboveRoof.toPlainString() + " m above the surface"));
         return id;
+    }
+
+    /**
+     * Moves the vertices of a conductor, or the whole conductor: {@code points} replace its path.
+     * Points [x, y] keep a roof conductor's {@code heightAboveRoof} unless a new one is given (and
+     * need one when the conductor was a wire); points [x, y, elevation] make it hold those
+     * elevations above ground. A given {@code name} renames it. The conductor keeps its id and its
+     * place in the file.
+     *
+     * @return the conductor as it was before the change
+     * @throws SiteNotFoundException when no site has this id or the site no conductor with this id
+     * @throws InvalidInputException when points or heights are missing or unusable (nothing is stored)
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public ConductorView changeConductor(long siteId, long expectedVersion, String conductorId, ConductorInput input) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        int index = conductorIndex(site, document.site(), conductorId);
+        List<double[]> points = checkedPoints(input.points());
+        Conductor now = document.site().conductors().get(index);
+        BigDecimal heightAboveRoof = null;
+        if (points.get(0).length == 2) {
+            if (input.heightAboveRoof() != null && !input.heightAboveRoof().isBlank()) {
+                heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
+            } else if (now.followsSurface()) {
+                heightAboveRoof = BigDecimal.valueOf(now.heightAboveRoof());
+            } else {
+                throw new InvalidInputException("points", "conductor \"" + conductorId + "\" holds elevations above"
+                        + " ground: give every point as [x, y, elevation], or give heightAboveRoof to make it follow"
+                        + " the surface");
+            }
+        } else if (input.heightAboveRoof() != null && !input.heightAboveRoof().isBlank()) {
+            throw new InvalidInputException("heightAboveRoof", "give either heightAboveRoof with points [x, y], or"
+                    + " points [x, y, elevation above ground], not both");
+        }
+        checkName(input.name());
+        ConductorView before = view(now, document.projection());
+        PartFileEditor editor = editor(site, document);
+        editor.changeConductor(index, input.name(), points, heightAboveRoof);
+        store(site, editor.text());
+        audit.record(siteId, "conductor-changed", "conductor " + conductorId + " path from " + describe(before.path())
+                + " to " + describe(points) + (heightAboveRoof == null ? ", elevations above ground"
+                : ", " + heightAboveRoof.stripTrailingZeros().toPlainString() + " m above the surface"));
+        return before;
     }
 
     /**
@@ -304,7 +343,21 @@ public class AirTerminationService {
      * null when the points carry elevations.
      */
     private static BigDecimal checkedConductor(ConductorInput input) {
-        List<double[]> points = input.points();
+        List<double[]> points = checkedPoints(input.points());
+        BigDecimal heightAboveRoof = null;
+        if (points.get(0).length == 2) {
+            if (input.heightAboveRoof() == null || input.heightAboveRoof().isBlank()) {
+                throw new InvalidInputException("heightAboveRoof", "heightAboveRoof (metres above the surface below) is"
+                        + " required when the points have no elevations");
+            }
+            heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
+        }
+        checkName(input.name());
+        return heightAboveRoof;
+    }
+
+    /** The points checked for count, shape and elevations; the field named is {@code points}. */
+    private static List<double[]> checkedPoints(List<double[]> points) {
         if (points == null || points.size() < 2) {
             throw new InvalidInputException("points", "a conductor needs at least two points");
         }
@@ -322,17 +375,49 @@ public class AirTerminationService {
                 throw new InvalidInputException("points", "point " + (k + 1) + " lies below the ground (elevation "
                         + p[2] + " m)");
             }
-        }
-        BigDecimal heightAboveRoof = null;
-        if (!elevations) {
-            if (input.heightAboveRoof() == null || input.heightAboveRoof().isBlank()) {
-                throw new InvalidInputException("heightAboveRoof", "heightAboveRoof (metres above the surface below) is"
-                        + " required when the points have no elevations");
+            if (k > 0 && p[0] == points.get(k - 1)[0] && p[1] == points.get(k - 1)[1]) {
+                throw new InvalidInputException("points", "point " + (k + 1) + " repeats point " + k
+                        + " in plan; a conductor's consecutive points must differ");
             }
-            heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
         }
-        checkName(input.name());
-        return heightAboveRoof;
+        return points;
+    }
+
+    private static String describe(List<double[]> path) {
+        StringBuilder out = new StringBuilder();
+        for (double[] p : path) {
+            out.append(out.isEmpty() ? "" : " ").append('(').append(round(p[0])).append(", ").append(round(p[1]));
+            if (p.length > 2) {
+                out.append(", ").append(round(p[2]));
+            }
+            out.append(')');
+        }
+        return out.toString();
+    }
+
+    private static String named(String name) {
+        return name == null || name.isBlank() ? "" : " \"" + name.strip() + "\"";
+    }
+
+    private static int conductorIndex(StoredSite stored, Site site, String conductorId) {
+        for (int i = 0; i < site.conductors().size(); i++) {
+            if (site.conductors().get(i).id().equals(conductorId)) {
+                return i;
+            }
+        }
+        throw new SiteNotFoundException(stored.id(), "site " + stored.id() + " has no conductor \"" + conductorId
+                + "\"");
+    }
+
+    private static ConductorView view(Conductor c, LocalProjection projection) {
+        List<double[]> path = new ArrayList<>();
+        List<double[]> sitePath = new ArrayList<>();
+        for (Coordinate p : c.path()) {
+            path.add(Double.isNaN(p.getZ()) || c.followsSurface() ? new double[] {round(p.x), round(p.y)}
+                    : new double[] {round(p.x), round(p.y), round(p.getZ())});
+            sitePath.add(sitePosition(projection, p.x, p.y));
+        }
+        return new ConductorView(c.id(), c.name(), path, sitePath, c.heightAboveRoof());
     }
 
     /**
@@ -345,21 +430,13 @@ public class AirTerminationService {
     public ConductorView removeConductor(long siteId, long expectedVersion, String conductorId) {
         StoredSite site = editable(siteId, expectedVersion);
         SiteDocument document = sites.document(site);
-        List<Conductor> conductors = document.site().conductors();
-        int index = -1;
-        for (int i = 0; i < conductors.size(); i++) {
-            if (conductors.get(i).id().equals(conductorId)) {
-                index = i;
-            }
-        }
-        if (index < 0) {
-            throw new SiteNotFoundException(site.id(), "site " + site.id() + " has no conductor \"" + conductorId + "\"");
-        }
-        ConductorView before = parts(siteId).conductors().get(index);
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), conductors,
-                document.projection());
+        int index = conductorIndex(site, document.site(), conductorId);
+        ConductorView before = view(document.site().conductors().get(index), document.projection());
+        PartFileEditor editor = editor(site, document);
         editor.removeConductor(index);
         store(site, editor.text());
+        audit.record(siteId, "conductor-removed", "conductor " + conductorId + named(before.name()) + " along "
+                + describe(before.path()));
         return before;
     }
 
