@@ -113,6 +113,16 @@ if (section) {
     }
     const g = layer('proposal-layer');
     for (const part of parts) {
+      if (part.path !== undefined) {
+        const line = document.createElementNS(SVG_NS, 'polyline');
+        line.setAttribute('points', part.path.map(([x, y]) => { const p = toSvg(x, y); return p.x + ',' + p.y; }).join(' '));
+        line.setAttribute('class', 'proposed ' + part.kind);
+        const title = document.createElementNS(SVG_NS, 'title');
+        title.textContent = part.name;
+        line.appendChild(title);
+        g.appendChild(line);
+        continue;
+      }
       if (part.x === undefined) {
         continue;
       }
@@ -201,6 +211,8 @@ if (section) {
     result.hidden = true;
     clearTimeout(timer);
     const body = { rodHeights: numbers(document.getElementById('rod-heights').value) };
+    body.edgeConductors = document.getElementById('edge-conductors').checked;
+    body.ridgeConductors = document.getElementById('ridge-conductors').checked;
     const masts = numbers(document.getElementById('mast-heights').value);
     if (masts.length > 0) {
       body.mastHeights = masts;
@@ -231,11 +243,35 @@ if (section) {
     }
   });
 
-  document.getElementById('accept-proposal').addEventListener('click', async () => {
+  const acceptedActions = document.getElementById('accepted-actions');
+  const acceptButton = document.getElementById('accept-proposal');
+  let acceptedVersion = null;
+  let acceptedJob = null;
+
+  acceptButton.addEventListener('click', async () => {
+    errorLine.hidden = true;
     try {
       const answer = await call('POST', '/api/sites/' + siteId + '/proposals/' + jobId + '/accept', { version });
-      status.textContent = section.dataset.msgAccepted;
-      window.location.assign(answer.plan);
+      acceptedVersion = answer.version;
+      acceptedJob = jobId;
+      acceptButton.disabled = true;
+      form.querySelector('#propose').disabled = true;
+      document.getElementById('accepted-summary').textContent =
+        fmt(section.dataset.msgAccepted, answer.rodIds.length, answer.conductorIds.length);
+      acceptedActions.hidden = false;
+      status.textContent = '';
+    } catch (e) {
+      showError(e.message);
+    }
+  });
+
+  document.getElementById('undo-accept').addEventListener('click', async () => {
+    errorLine.hidden = true;
+    try {
+      await call('POST', '/api/sites/' + siteId + '/proposals/' + acceptedJob + '/undo', { version: acceptedVersion });
+      document.getElementById('accepted-summary').textContent = section.dataset.msgUndone;
+      document.getElementById('undo-accept').disabled = true;
+      window.location.reload();
     } catch (e) {
       showError(e.message);
     }

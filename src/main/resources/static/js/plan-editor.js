@@ -1,5 +1,6 @@
-// Plan editor: places, moves and removes air-termination rods on the plan page through the JSON
-// API, swapping in the new drawing and summary after each change. Without this module the page
+// Plan editor: places, moves and removes air-termination rods, and draws, reshapes, moves and
+// removes conductors, on the plan page through the JSON API, swapping in the new drawing and
+// summary after each change. Without this module the page
 // stays a read-only plan. All words come from data attributes the server renders from messages.
 
 const root = document.getElementById('plan-editor');
@@ -24,7 +25,12 @@ function setUp(root) {
   const conductorList = document.getElementById('conductor-form');
   const conductorSelect = conductorList.elements.conductor;
   const deleteConductor = document.getElementById('delete-conductor');
+  const vertexSelect = conductorList.elements.vertex;
+  const saveConductor = document.getElementById('save-conductor');
+  const heightLabel = document.getElementById('conductor-height-label');
   let conductors = [];
+  let conductorId = null;
+  let vertexIndex = 0;
   let drawingConductor = false;
   let conductorPoints = [];
 
@@ -119,6 +125,11 @@ function setUp(root) {
       if (circle) {
         circle.focus();
       }
+    } else if (hadFocus && conductorId) {
+      const handle = drawing.querySelector('circle.conductor-vertex[data-vertex="' + vertexIndex + '"]');
+      if (handle) {
+        handle.focus();
+      }
     }
   }
 
@@ -137,7 +148,9 @@ function setUp(root) {
       conductorSelect.add(new Option(text('RodOption').replace('{0}', c.name).replace('{1}', c.id), c.id));
     }
     conductorSelect.value = conductors.some((c) => c.id === chosen) ? chosen : '';
-    deleteConductor.disabled = conductorSelect.value === '';
+    if (!conductorById(conductorId)) {
+      conductorId = null;
+    }
     rods = parts.rods;
     const keep = rodSelect.options[0];
     rodSelect.replaceChildren(keep);
@@ -149,6 +162,7 @@ function setUp(root) {
       selectedId = null;
     }
     select(selectedId);
+    selectConductor(conductorId, vertexIndex);
   }
 
   // ---- the drawing's frame ----
@@ -189,6 +203,16 @@ function setUp(root) {
 
   function rodById(id) {
     return rods.find((rod) => rod.id === id) || null;
+  }
+
+  function conductorById(id) {
+    return conductors.find((c) => c.id === id) || null;
+  }
+
+  /** Plan position (SVG units) of a point in local metres. */
+  function toDrawing(x, y) {
+    const f = frame();
+    return { x: f.margin + (x - f.originX) * f.scale, y: f.margin + (f.originY - y) * f.scale };
   }
 
   // ---- selection and the side form ----
@@ -291,6 +315,29 @@ function setUp(root) {
       values.heightAboveRoof = c.heightAboveRoof;
       values.points = c.path.map((p) => [p[0], p[1]]);
     }
+    return values;
+  }
+
+  /** The body that gives a conductor the path in {@code values} (a copy of its points). */
+  function conductorBody(values) {
+    const body = { points: values.points.map((p) => p.slice()) };
+    if (values.heightAboveRoof !== null && values.heightAboveRoof !== undefined) {
+      body.heightAboveRoof = values.heightAboveRoof;
+    }
+    return body;
+  }
+
+  function changeConductorCommand(id, before, after) {
+    return {
+      forward: () => call('PUT', '/conductors/' + encodeURIComponent(id), conductorBody(after)),
+      backward: () => call('PUT', '/conductors/' + encodeURIComponent(id), conductorBody(before)),
+    };
+  }
+
+  /** A conductor's path (a copy) and height as a change sends them: [x, y] with heightAboveRoof, or [x, y, z]. */
+  function conductorShape(c) {
+    const values = conductorValues(c);
+    values.points = values.points.map((p) => p.slice());
     return values;
   }
 
@@ -437,12 +484,239 @@ function setUp(root) {
     perform(addConductorCommand(body));
   });
 
-  conductorSelect.addEventListener('change', () => {
-    deleteConductor.disabled = conductorSelect.value === '';
+  conductorSelect.addEventListener('change', () => selectConductor(conductorSelect.value || null, 0));
+  vertexSelect.addEventListener('change', () => selectConductor(conductorId, Number(vertexSelect.value)));
+
+  conductorList.addEventListener('submit', (event) => {
+    event.preventDefault();
+    const c = conductorById(conductorId);
+    if (!c) {
+      return;
+    }
+    const values = conductorList.elements;
+    const before = conductorShape(c);
+    const after = conductorShape(c);
+    after.points[vertexIndex][0] = number(values.x.value);
+    after.points[vertexIndex][1] = number(values.y.value);
+    if (after.heightAboveRoof !== null && after.heightAboveRoof !== undefined) {
+      after.heightAboveRoof = number(values.height.value);
+    } else {
+      after.points[vertexIndex][2] = number(values.height.value);
+    }
+    perform(changeConductorCommand(c.id, before, after));
   });
 
+  // ---- a selected conductor: its points as handles on the plan ----
+
+  /** Selects a conductor and one of its points: list, form, highlight and handles. */
+  function selectConductor(id, index) {
+    const c = conductorById(id);
+    conductorId = c ? c.id : null;
+    vertexIndex = c ? Math.min(Math.max(0, index || 0), c.path.length - 1) : 0;
+    conductorSelect.value = conductorId || '';
+    deleteConductor.disabled = !c;
+    saveConductor.disabled = !c;
+    vertexSelect.replaceChildren();
+    if (c) {
+      c.path.forEach((p, k) => vertexSelect.add(new Option(text('VertexOption').replace('{0}', String(k + 1)), String(k))));
+      vertexSelect.value = String(vertexIndex);
+    }
+    const values = conductorList.elements;
+    for (const name of ['vertex', 'x', 'y', 'height']) {
+      values[name].disabled = !c;
+    }
+    const roof = c && c.heightAboveRoof !== null && c.heightAboveRoof !== undefined;
+    heightLabel.textContent = roof ? heightLabel.dataset.roof : heightLabel.dataset.wire;
+    const p = c ? c.path[vertexIndex] : null;
+    values.x.value = p ? String(p[0]) : '';
+    values.y.value = p ? String(p[1]) : '';
+    values.height.value = !c ? '' : roof ? String(c.heightAboveRoof) : String(p[2]);
+    drawHandles();
+  }
+
+  /** Draws the selected conductor's highlight and one focusable handle per point. */
+  function drawHandles() {
+    const element = svg();
+    if (!element) {
+      return;
+    }
+    element.querySelectorAll('.conductor-handles').forEach((g) => g.remove());
+    element.querySelectorAll('path.conductor').forEach((path) => {
+      path.classList.toggle('selected', path.dataset.conductorId === conductorId);
+    });
+    const c = conductorById(conductorId);
+    if (!c) {
+      return;
+    }
+    const ns = 'http://www.w3.org/2000/svg';
+    const group = document.createElementNS(ns, 'g');
+    group.setAttribute('class', 'conductor-handles');
+    const line = document.createElementNS(ns, 'polyline');
+    line.setAttribute('class', 'conductor-outline');
+    line.dataset.conductorId = c.id;
+    line.setAttribute('points', c.path.map((p) => { const q = toDrawing(p[0], p[1]); return q.x + ',' + q.y; }).join(' '));
+    line.addEventListener('pointerdown', startConductorDrag);
+    group.appendChild(line);
+    c.path.forEach((p, k) => {
+      const q = toDrawing(p[0], p[1]);
+      const handle = document.createElementNS(ns, 'circle');
+      handle.setAttribute('class', 'conductor-vertex' + (k === vertexIndex ? ' selected' : ''));
+      handle.setAttribute('cx', String(q.x));
+      handle.setAttribute('cy', String(q.y));
+      handle.setAttribute('r', '6');
+      handle.setAttribute('tabindex', '0');
+      handle.setAttribute('role', 'button');
+      handle.setAttribute('aria-label', text('VertexLabel').replace('{0}', String(k + 1)).replace('{1}', c.name));
+      handle.dataset.conductorId = c.id;
+      handle.dataset.vertex = String(k);
+      handle.addEventListener('pointerdown', startVertexDrag);
+      handle.addEventListener('focus', () => markVertex(k));
+      handle.addEventListener('keydown', nudgeVertexByKey);
+      group.appendChild(handle);
+    });
+    element.appendChild(group);
+  }
+
+  /** Marks a point as the selected one without redrawing, so that focus stays on its handle. */
+  function markVertex(k) {
+    const c = conductorById(conductorId);
+    if (!c) {
+      return;
+    }
+    vertexIndex = k;
+    vertexSelect.value = String(k);
+    svg().querySelectorAll('circle.conductor-vertex').forEach((h) => {
+      h.classList.toggle('selected', Number(h.dataset.vertex) === k);
+    });
+    const values = conductorList.elements;
+    values.x.value = String(c.path[k][0]);
+    values.y.value = String(c.path[k][1]);
+    if (c.heightAboveRoof === null || c.heightAboveRoof === undefined) {
+      values.height.value = String(c.path[k][2]);
+    }
+  }
+
+  /** Moves the outline and handles to show {@code points} (local metres) while dragging. */
+  function showPath(points) {
+    const element = svg();
+    const line = element.querySelector('polyline.conductor-outline');
+    if (line) {
+      line.setAttribute('points', points.map((p) => { const q = toDrawing(p[0], p[1]); return q.x + ',' + q.y; }).join(' '));
+    }
+    element.querySelectorAll('circle.conductor-vertex').forEach((h) => {
+      const p = points[Number(h.dataset.vertex)];
+      const q = toDrawing(p[0], p[1]);
+      h.setAttribute('cx', String(q.x));
+      h.setAttribute('cy', String(q.y));
+    });
+  }
+
+  /** Follows a pointer from {@code event}; {@code moveTo} gets the plan offset in metres. */
+  function dragFrom(event, target, moveTo, done) {
+    event.preventDefault();
+    event.stopPropagation();
+    target.setPointerCapture(event.pointerId);
+    const start = toLocal(svgPoint(event));
+    const startX = event.clientX;
+    const startY = event.clientY;
+    let moved = false;
+    const offset = (e) => { const p = toLocal(svgPoint(e)); return [p.x - start.x, p.y - start.y]; };
+    const move = (e) => {
+      if (Math.abs(e.clientX - startX) + Math.abs(e.clientY - startY) > 3) {
+        moved = true;
+      }
+      moveTo(offset(e));
+    };
+    const end = (e) => {
+      target.removeEventListener('pointermove', move);
+      target.removeEventListener('pointerup', end);
+      target.removeEventListener('pointercancel', end);
+      done(moved && e.type !== 'pointercancel' ? offset(e) : null);
+    };
+    target.addEventListener('pointermove', move);
+    target.addEventListener('pointerup', end);
+    target.addEventListener('pointercancel', end);
+  }
+
+  /** The points moved by {@code offset} metres (only point {@code only} when given), to the centimetre. */
+  function shifted(points, offset, only) {
+    return points.map((p, k) => {
+      if (only !== undefined && k !== only) {
+        return p.slice();
+      }
+      const q = p.slice();
+      q[0] = round(p[0] + offset[0], 2);
+      q[1] = round(p[1] + offset[1], 2);
+      return q;
+    });
+  }
+
+  function startVertexDrag(event) {
+    const handle = event.currentTarget;
+    const c = conductorById(handle.dataset.conductorId);
+    const k = Number(handle.dataset.vertex);
+    if (!c || event.button !== 0 || placing || drawingConductor) {
+      return;
+    }
+    markVertex(k);
+    dragFrom(event, handle, (offset) => showPath(shifted(c.path, offset, k)), (offset) => {
+      if (!offset) {
+        handle.focus();
+        return;
+      }
+      const after = conductorShape(c);
+      after.points = shifted(after.points, offset, k);
+      perform(changeConductorCommand(c.id, conductorShape(c), after));
+    });
+  }
+
+  function startConductorDrag(event) {
+    const c = conductorById(event.currentTarget.dataset.conductorId);
+    if (!c || event.button !== 0 || placing || drawingConductor) {
+      return;
+    }
+    dragFrom(event, event.currentTarget, (offset) => showPath(shifted(c.path, offset)), (offset) => {
+      if (!offset) {
+        return;
+      }
+      const after = conductorShape(c);
+      after.points = shifted(after.points, offset);
+      perform(changeConductorCommand(c.id, conductorShape(c), after));
+    });
+  }
+
+  let vertexNudge = null;
+
+  /** Arrow keys move the selected point; the move is saved once the keys rest for a moment. */
+  function nudgeVertexByKey(event) {
+    const step = ARROWS[event.key];
+    const c = conductorById(conductorId);
+    if (!step || !c) {
+      return;
+    }
+    event.preventDefault();
+    const distance = event.shiftKey ? 1 : 0.1;
+    const k = Number(event.currentTarget.dataset.vertex);
+    if (!vertexNudge || vertexNudge.id !== c.id || vertexNudge.vertex !== k) {
+      vertexNudge = { id: c.id, vertex: k, before: conductorShape(c), offset: [0, 0], timer: null };
+    }
+    vertexNudge.offset = [round(vertexNudge.offset[0] + step[0] * distance, 3),
+      round(vertexNudge.offset[1] + step[1] * distance, 3)];
+    const points = shifted(vertexNudge.before.points, vertexNudge.offset, k);
+    showPath(points);
+    conductorList.elements.x.value = String(points[k][0]);
+    conductorList.elements.y.value = String(points[k][1]);
+    clearTimeout(vertexNudge.timer);
+    const pending = vertexNudge;
+    pending.timer = setTimeout(() => {
+      vertexNudge = null;
+      const after = Object.assign({}, pending.before, { points: shifted(pending.before.points, pending.offset, pending.vertex) });
+      perform(changeConductorCommand(pending.id, pending.before, after));
+    }, 600);
+  }
+
   deleteConductor.addEventListener('click', () => {
-    const c = conductors.find((item) => item.id === conductorSelect.value);
+    const c = conductorById(conductorId);
     if (c) {
       perform(removeConductorCommand(c));
     }
@@ -508,6 +782,11 @@ function setUp(root) {
         }
         return;
       }
+      const clicked = event.target.closest('path.conductor, polyline.conductor-hit');
+      if (!placing && clicked) {
+        selectConductor(clicked.dataset.conductorId, 0);
+        return;
+      }
       if (!placing || event.target.closest('circle.rod')) {
         return;
       }
@@ -532,7 +811,23 @@ function setUp(root) {
       circle.addEventListener('focus', () => select(circle.dataset.rodId));
       circle.addEventListener('keydown', nudgeByKey);
     });
+    addConductorHits(element);
     select(selectedId);
+    drawHandles();
+  }
+
+  /** A wide transparent line over each conductor, so that a thin dashed line is easy to click. */
+  function addConductorHits(element) {
+    const ns = 'http://www.w3.org/2000/svg';
+    element.querySelectorAll('polyline.conductor-hit').forEach((hit) => hit.remove());
+    const firstRod = element.querySelector('circle.rod');
+    for (const c of conductors) {
+      const hit = document.createElementNS(ns, 'polyline');
+      hit.setAttribute('class', 'conductor-hit');
+      hit.dataset.conductorId = c.id;
+      hit.setAttribute('points', c.path.map((p) => { const q = toDrawing(p[0], p[1]); return q.x + ',' + q.y; }).join(' '));
+      element.insertBefore(hit, firstRod);
+    }
   }
 
   function startDrag(event) {

@@ -26,7 +26,8 @@ import tools.jackson.databind.json.JsonMapper;
  * JSON API for analyses of a site:
  * {@code POST /api/sites/{id}/analyses} runs one (parameters {@code level}, {@code radius},
  * {@code resolution}, all optional) and {@code GET /api/sites/{id}/analyses/latest} returns the
- * latest. Both answer with the summary, the result GeoJSON and the cautions. With {@code async=true}
+ * latest. Both answer with the summary, the result GeoJSON (see {@link ResultGeoJson}: in the site
+ * file's coordinates) and the cautions. With {@code async=true}
  * the analysis runs in the background: {@code GET .../analyses/jobs/{jobId}} follows it and
  * {@code DELETE} cancels it.
  */
@@ -51,9 +52,8 @@ public class AnalysisApiController {
     /** An analysis with everything a client needs to show it responsibly. */
     public record AnalysisView(long siteId, AnalysisSummary summary, JsonNode result, List<String> cautions) {
 
-        static AnalysisView of(AnalysisRevision r) {
-            return new AnalysisView(r.siteId(), AnalysisSummary.of(r), JSON.readTree(r.resultGeoJson()),
-                    Cautions.lines());
+        static AnalysisView of(AnalysisRevision r, AnalysisService analyses) {
+            return new AnalysisView(r.siteId(), AnalysisSummary.of(r), analyses.publishedResult(r), Cautions.lines());
         }
     }
 
@@ -80,7 +80,7 @@ public class AnalysisApiController {
                     .body(job.snapshot());
         }
         AnalysisRevision revision = analyses.run(siteId, level, radius, resolution);
-        return ResponseEntity.status(HttpStatus.CREATED).body(AnalysisView.of(revision));
+        return ResponseEntity.status(HttpStatus.CREATED).body(AnalysisView.of(revision, analyses));
     }
 
     /** Where a background analysis is: state, stage, share done, and the revision once done. */
@@ -111,7 +111,7 @@ public class AnalysisApiController {
     @GetMapping("/latest")
     public ResponseEntity<?> latest(@PathVariable long siteId) {
         return analyses.latest(siteId)
-                .<ResponseEntity<?>>map(r -> ResponseEntity.ok(AnalysisView.of(r)))
+                .<ResponseEntity<?>>map(r -> ResponseEntity.ok(AnalysisView.of(r, analyses)))
                 .orElseGet(() -> ResponseEntity.status(HttpStatus.NOT_FOUND).body(
                         java.util.Map.of("error", "site " + siteId + " has not been analysed yet")));
     }

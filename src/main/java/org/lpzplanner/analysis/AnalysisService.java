@@ -104,7 +104,7 @@ public class AnalysisService {
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
         }
-        String geoJson = ResultGeoJson.write(document.site(), result);
+        String geoJson = ResultGeoJson.write(document, result);
         return transactions.execute(status -> {
             var now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
             Optional<AnalysisRevision> previous = analyses.latest(site.id());
@@ -123,6 +123,34 @@ public class AnalysisService {
                             : "exposed items remain"));
             return revision;
         });
+    }
+
+    /**
+     * The result of a revision as the API hands it out (see {@link ResultGeoJson#published}): in
+     * lon/lat when the site file it analysed was in lon/lat. Revisions stored before results kept
+     * the site's local origin take it from the site file stored with the revision; without one
+     * (or when that file no longer reads) the result stays in local metres, which it says.
+     */
+    public tools.jackson.databind.node.ObjectNode publishedResult(AnalysisRevision revision) {
+        tools.jackson.databind.node.ObjectNode stored = ResultGeoJson.published(revision.resultGeoJson());
+        if (stored.has("localOrigin") || !stored.has("coordinates")) {
+            return stored;
+        }
+        Optional<org.lpzplanner.engine.io.LocalProjection> projection = analyses.inputs(revision.id()).flatMap(in -> {
+            try {
+                return Optional.ofNullable(org.lpzplanner.sites.SiteFiles.read(in.sourceText(), in.sourceName())
+                        .projection());
+            } catch (RuntimeException unreadable) {
+                return Optional.empty();
+            }
+        });
+        if (projection.isEmpty()) {
+            return stored;
+        }
+        tools.jackson.databind.node.ObjectNode origin = stored.putObject("localOrigin");
+        origin.put("longitude", projection.get().centreLon());
+        origin.put("latitude", projection.get().centreLat());
+        return ResultGeoJson.published(stored.toString());
     }
 
     /**

@@ -18,7 +18,7 @@ import tools.jackson.databind.json.JsonMapper;
  * back into local metres: {@code x = originX + (svgX - margin) / scale} and, the y axis being
  * flipped, {@code y = originY - (svgY - margin) / scale} ({@code data-origin-x},
  * {@code data-origin-y}, {@code data-scale} in SVG units per metre, {@code data-margin},
- * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}. Exposed edges, corners and
+ * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}, conductors in {@code data-conductor-id}. Exposed edges, corners and
  * facade bands carry their {@link ReviewItems} key in {@code data-item-key}; those a designer
  * accepted also get the class {@code accepted} and a title with the reason (escaped).
  */
@@ -142,7 +142,10 @@ public final class PlanSvg {
                     .append(polygonPath(g, frame)).append("\"/>");
             case "facade-band" -> line(svg, "facade-band", g, frame, FACADE, 5, null);
             case "exposed-edge" -> line(svg, "exposed-edge", g, frame, EDGE, 2.5, null);
-            case "conductor" -> line(svg, "conductor", g, frame, PART, 2, "5 3");
+            case "conductor" -> {
+                line(svg, "conductor", g, frame, PART, 2, "5 3");
+                svg.insert(svg.length() - 2, " data-conductor-id=\"" + escape(text(f, "id")) + "\"");
+            }
             case "exposed-corner" -> svg.append(String.format(Locale.ROOT,
                     "<circle class=\"exposed-corner\" cx=\"%.1f\" cy=\"%.1f\" r=\"3.5\" fill=\"%s\"/>",
                     frame.x(g.path("coordinates").path(0).asDouble()), frame.y(g.path("coordinates").path(1).asDouble()),

@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.Set;
+import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.io.SiteDocument;
@@ -44,7 +45,7 @@ final class AnalyzeCommand implements Command {
         new SummaryPrinter(out).print(document, result);
         if (outFile != null) {
             write(outFile, JSON.writerWithDefaultPrettyPrinter()
-                    .writeValueAsString(ResultGeoJson.of(document, result)));
+                    .writeValueAsString(ResultGeoJson.published(ResultGeoJson.write(document, result))));
             out.println();
             out.println("Results written to " + outFile);
         }

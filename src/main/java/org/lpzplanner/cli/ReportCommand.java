@@ -82,7 +82,7 @@ final class ReportCommand implements Command {
         AnalysisResult result = ExposureAnalysis.analyze(document.site(), settings.analysisOptions());
         ReportSource source = new ReportSource(document.site().name(), siteName, text, settings.sphere(),
                 result.resolution(), result.tolerance(), 0, Instant.now().truncatedTo(ChronoUnit.SECONDS),
-                AnalysisService.sha256(text), ResultGeoJson.write(document.site(), result), Map.of(), List.of());
+                AnalysisService.sha256(text), ResultGeoJson.write(document, result), Map.of(), List.of());
         byte[] pdf = PdfReportRenderer.render(ReportAssembler.assemble(source, result.envelope(), StoredDesign.NONE,
                 List.of(RISK_LEFT_OUT)));
         try {

@@ -5,11 +5,9 @@ import org.lpzplanner.engine.io.LocalProjection;
 import org.lpzplanner.engine.io.SiteDocument;
 
 /**
- * The coordinates a site file was written in, and the conversions between them and the engine's
- * local metres: positions in files the user gives and in files written for the user are in the
- * site file's own coordinates (WGS84 lon/lat or local metres).
- *
- * <p>Written positions are rounded to 1e-7 degrees (about 1 cm) or to 1 mm; elevations to 1 mm.
+ * The coordinates a site file was written in, and the conversion from them to the engine's local
+ * metres: positions in files the user gives are in the site file's own coordinates (WGS84 lon/lat
+ * or local metres). Result files are written by {@link org.lpzplanner.analysis.ResultGeoJson}.
  */
 final class SiteFrame {
 
@@ -48,26 +46,5 @@ final class SiteFrame {
             throw new IllegalArgumentException("longitude must lie in [-180, 180] and latitude in [-90, 90]");
         }
         return projection.toLocal(x, y);
-    }
-
-    /** A local position as written: {x, y} or {x, y, z} in the site's coordinates, rounded. */
-    double[] written(Coordinate local, boolean withZ) {
-        double x;
-        double y;
-        if (projection == null) {
-            x = round(local.x, 1e3);
-            y = round(local.y, 1e3);
-        } else {
-            Coordinate lonLat = projection.toLonLat(local.x, local.y);
-            x = round(lonLat.x, 1e7);
-            y = round(lonLat.y, 1e7);
-        }
-        return withZ ? new double[] {x, y, round(local.getZ(), 1e3)} : new double[] {x, y};
-    }
-
-    /** A value rounded to 1/scale; scales are powers of ten so the result prints cleanly. */
-    static double round(double value, double scale) {
-        double r = Math.round(value * scale) / scale;
-        return r == 0 ? 0 : r; // no "-0.0" in output
     }
 }

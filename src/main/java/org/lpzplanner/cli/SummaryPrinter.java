@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.analysis.ResultGeoJson;
+import org.lpzplanner.analysis.ResultTotals;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.exposure.PartInterception;

@@ -30,10 +30,12 @@ import tools.jackson.databind.JsonNode;
  * JSON API of the design of a site (local metres throughout):
  * <ul>
  * <li>{@code POST /api/sites/{id}/proposals} starts a proposal ({@code rodHeights}, optional
- *     {@code mastHeights}, optional {@code keepOut}: polygons as lists of [x, y]); 202 with the job.</li>
+ *     {@code mastHeights}, optional {@code edgeConductors} and {@code ridgeConductors} (booleans),
+ *     optional {@code keepOut}: polygons as lists of [x, y]); 202 with the job.</li>
  * <li>{@code GET /api/sites/{id}/proposals/{job}}: state, stage, fraction and, when done, the parts
- *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version} writes the rods
- *     into the site.</li>
+ *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version} writes the rods,
+ *     masts and conductors into the site in one change; {@code POST …/undo} with the {@code version}
+ *     accepting answered removes them again in one change.</li>
  * <li>{@code GET /api/sites/{id}/method-checks}: angle and mesh methods against the rolling sphere per structure.</li>
  * <li>{@code GET /api/sites/{id}/down-conductors}; {@code PUT …/down-conductors/{structure}} with
  *     {@code positions}; {@code DELETE} returns to the planned layout.</li>
@@ -59,8 +61,12 @@ public class DesignApiController {
         if (!body.isObject()) {
             throw new InvalidInputException("body", "the body must be a JSON object with \"rodHeights\"");
         }
-        DesignService.ProposeRequest request = new DesignService.ProposeRequest(numbers(body, "rodHeights"),
-                body.has("mastHeights") ? numbers(body, "mastHeights") : List.of(), polygons(body.path("keepOut"), "keepOut"));
+        boolean edge = flag(body, "edgeConductors");
+        boolean ridge = flag(body, "ridgeConductors");
+        List<Double> rodHeights = body.has("rodHeights") || !(edge || ridge) ? numbers(body, "rodHeights") : List.of();
+        DesignService.ProposeRequest request = new DesignService.ProposeRequest(rodHeights,
+                body.has("mastHeights") ? numbers(body, "mastHeights") : List.of(), edge, ridge,
+                polygons(body.path("keepOut"), "keepOut"));
         ProposalJobs.Job job = design.propose(id, request);
         return ResponseEntity.status(HttpStatus.ACCEPTED)
                 .location(URI.create("/api/sites/" + id + "/proposals/" + job.id())).body(view(job));
@@ -82,9 +88,23 @@ public class DesignApiController {
         if (!version.isIntegralNumber()) {
             throw new InvalidInputException("version", "version is required: the site's version as last read");
         }
-        List<String> ids = design.accept(id, jobId, version.longValue());
+        DesignService.Accepted accepted = design.accept(id, jobId, version.longValue());
         Map<String, Object> out = new LinkedHashMap<>();
-        out.put("rodIds", ids);
+        out.put("rodIds", accepted.rodIds());
+        out.put("conductorIds", accepted.conductorIds());
+        out.put("version", accepted.version());
+        out.put("plan", "/sites/" + id);
+        return out;
+    }
+
+    @PostMapping(value = "/proposals/{jobId}/undo", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public Map<String, Object> undoAccept(@PathVariable long id, @PathVariable String jobId, @RequestBody JsonNode body) {
+        JsonNode version = body.path("version");
+        if (!version.isIntegralNumber()) {
+            throw new InvalidInputException("version", "version is required: the site's version the accept answered");
+        }
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("version", design.undoAccept(id, jobId, version.longValue()));
         out.put("plan", "/sites/" + id);
         return out;
     }
@@ -189,6 +209,12 @@ public class DesignApiController {
                     m.put("x", part.rod().x());
                     m.put("y", part.rod().y());
                     m.put("height", part.rod().height());
+                } else {
+                    m.put("name", part.conductor().name());
+                    List<double[]> path = new ArrayList<>();
+                    part.conductor().path().forEach(c -> path.add(new double[] {c.x, c.y, c.getZ()}));
+                    m.put("path", path);
+                    m.put("length", Math.round(part.conductorLength() * 100) / 100.0);
                 }
                 parts.add(m);
             }
@@ -230,6 +256,17 @@ public class DesignApiController {
             throw new InvalidInputException(field, field + " may hold at most 20 heights");
         }
         return out;
+    }
+
+    private static boolean flag(JsonNode body, String field) {
+        JsonNode n = body.path(field);
+        if (n.isMissingNode() || n.isNull()) {
+            return false;
+        }
+        if (!n.isBoolean()) {
+            throw new InvalidInputException(field, field + " must be true or false, got " + n);
+        }
+        return n.booleanValue();
     }
 
     private static JsonNode wrap(JsonNode ring) {

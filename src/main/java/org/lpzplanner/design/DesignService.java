@@ -13,12 +13,14 @@ import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.engine.design.AngleCoverage;
+import org.lpzplanner.engine.design.BondingRoutes;
 import org.lpzplanner.engine.design.AngleMethodCheck;
 import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.design.DownConductorPlan;
 import org.lpzplanner.engine.design.MeshFaceResult;
 import org.lpzplanner.engine.design.MeshMethodCheck;
 import org.lpzplanner.engine.design.SeparationDistance;
+import org.lpzplanner.engine.design.SeparationSurvey;
 import org.lpzplanner.engine.design.proposal.ProposalOptions;
 import org.lpzplanner.engine.design.proposal.ProposedPart;
 import org.lpzplanner.engine.design.quantities.BillOfQuantities;
@@ -71,22 +73,33 @@ public class DesignService {
         this.clock = clock;
     }
 
-    /** What a designer asks for: allowed rod heights, mast heights (may be empty), keep-out polygons in local metres. */
-    public record ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, List<List<double[]>> keepOut) {
+    /**
+     * What a designer asks for: allowed rod heights, mast heights (may be empty), whether roof-edge
+     * and ridge conductors may be proposed, keep-out polygons in local metres.
+     */
+    public record ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, boolean edgeConductors,
+            boolean ridgeConductors, List<List<double[]>> keepOut) {
+
+        public ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, List<List<double[]>> keepOut) {
+            this(rodHeights, mastHeights, false, false, keepOut);
+        }
     }
 
     public ProposalJobs.Job propose(long siteId, ProposeRequest request) {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        if (request.rodHeights() == null || request.rodHeights().isEmpty()) {
-            throw new InvalidInputException("rodHeights", "give at least one allowed rod height, e.g. [0.5, 1, 2]");
+        List<Double> rodHeights = request.rodHeights() == null ? List.of() : request.rodHeights();
+        List<Double> masts = request.mastHeights() == null ? List.of() : request.mastHeights();
+        boolean conductors = request.edgeConductors() || request.ridgeConductors();
+        if (rodHeights.isEmpty() && masts.isEmpty() && !conductors) {
+            throw new InvalidInputException("rodHeights", "give at least one allowed rod height, e.g. [0.5, 1, 2]"
+                    + " (or allow masts or conductors)");
         }
-        for (Double h : request.rodHeights()) {
+        for (Double h : rodHeights) {
             if (h == null || !(h >= 0.1 && h <= 10)) {
                 throw new InvalidInputException("rodHeights", "rod heights must be between 0.1 m and 10 m, got " + h);
             }
         }
-        List<Double> masts = request.mastHeights() == null ? List.of() : request.mastHeights();
         for (Double h : masts) {
             if (h == null || !(h >= 1 && h <= 60)) {
                 throw new InvalidInputException("mastHeights", "mast heights must be between 1 m and 60 m, got " + h);
@@ -96,8 +109,9 @@ public class DesignService {
         List<Geometry> accepted = reviews.latest(siteId)
                 .map(r -> ReviewItems.geometries(r.revision().resultGeoJson(), r.accepted().keySet()))
                 .orElse(List.of());
-        ProposalOptions options = new ProposalOptions(stored.sphere(), List.copyOf(new java.util.TreeSet<>(request.rodHeights())),
-                false, false, List.copyOf(new java.util.TreeSet<>(masts)), keepOut, accepted, null);
+        ProposalOptions options = new ProposalOptions(stored.sphere(), List.copyOf(new java.util.TreeSet<>(rodHeights)),
+                request.edgeConductors(), request.ridgeConductors(), List.copyOf(new java.util.TreeSet<>(masts)), keepOut,
+                accepted, null);
         return jobs.start(siteId, stored.version(), site, options);
     }
 
@@ -153,14 +167,19 @@ public class DesignService {
         return job;
     }
 
+    /** Ids of the parts an accepted proposal added to the site, and the site's version after accepting. */
+    public record Accepted(List<String> rodIds, List<String> conductorIds, long version) {
+    }
+
     /**
-     * Writes the proposal's rods and masts into the site file as ordinary rods (one change), then
-     * analyses the site again.
+     * Writes the proposal's rods and masts (as ordinary rods) and its roof-edge and ridge conductors
+     * (with their elevations, as proposed) into the site file in one change, so one earlier file
+     * keeps the site as it was; records the change in the audit trail, then analyses the site again.
      *
-     * @throws InvalidInputException when the proposal is not finished
+     * @throws InvalidInputException when the proposal is not finished or proposes nothing
      * @throws OptimisticLockingFailureException when the site changed since the proposal started or since {@code version}
      */
-    public List<String> accept(long siteId, String jobId, long version) {
+    public Accepted accept(long siteId, String jobId, long version) {
         ProposalJobs.Job job = job(siteId, jobId);
         if (job.state() != ProposalJobs.State.DONE) {
             throw new InvalidInputException("proposal", "the proposal is " + job.state().name().toLowerCase(Locale.ROOT)
@@ -170,15 +189,63 @@ public class DesignService {
             throw new OptimisticLockingFailureException("the proposal was made for version " + job.siteVersion());
         }
         List<AirTerminationService.RodInput> rods = new ArrayList<>();
+        List<AirTerminationService.ConductorInput> conductors = new ArrayList<>();
+        int masts = 0;
+        double conductorLength = 0;
         for (ProposedPart p : job.result().parts()) {
             if (p.rod() != null) {
                 rods.add(new AirTerminationService.RodInput(null, p.rod().name(), p.rod().x(), p.rod().y(),
                         BillOfQuantities.metresText(p.rod().height())));
+                masts += p.kind() == ProposedPart.Kind.MAST ? 1 : 0;
+            } else {
+                List<double[]> points = new ArrayList<>();
+                for (Coordinate c : p.conductor().path()) {
+                    points.add(new double[] {c.x, c.y, c.getZ()});
+                }
+                conductors.add(new AirTerminationService.ConductorInput(null, p.conductor().name(), points, null));
+                conductorLength += p.conductorLength();
             }
         }
-        List<String> ids = parts.addRods(siteId, version, rods);
+        if (rods.isEmpty() && conductors.isEmpty()) {
+            throw new InvalidInputException("proposal", "the proposal adds no parts; there is nothing to accept");
+        }
+        String text = String.format(Locale.ROOT, "accepted proposal %s: %d rods, %d masts, %d conductors (%.1f m)%s",
+                job.id(), rods.size() - masts, masts, conductors.size(), conductorLength,
+                job.result().complete() ? "" : ", not complete");
+        AirTerminationService.AddedParts added = parts.addParts(siteId, version, rods, conductors, "proposal-accepted", text);
         analyses.run(siteId, null, null, null);
-        return ids;
+        Accepted accepted = new Accepted(added.rodIds(), added.conductorIds(), sites.get(siteId).version());
+        job.accepted = accepted;
+        return accepted;
+    }
+
+    /**
+     * Takes an accepted proposal back: removes exactly the parts accepting added, in one change
+     * (the file before it is kept as an earlier file), records it in the audit trail and analyses
+     * the site again. Only while nothing else changed the site since ({@code version} is the version
+     * accepting answered).
+     *
+     * @return the site's version afterwards
+     * @throws InvalidInputException when the proposal was not accepted (or was already taken back)
+     * @throws OptimisticLockingFailureException when the site changed since
+     */
+    public long undoAccept(long siteId, String jobId, long version) {
+        ProposalJobs.Job job = job(siteId, jobId);
+        Accepted accepted = job.accepted();
+        if (accepted == null) {
+            throw new InvalidInputException("proposal", "the proposal has not been accepted (or was already taken back);"
+                    + " there is nothing to undo");
+        }
+        if (accepted.version() != version || sites.get(siteId).version() != version) {
+            throw new OptimisticLockingFailureException("the site changed after the proposal was accepted; remove the"
+                    + " parts on the plan instead");
+        }
+        parts.removeParts(siteId, version, accepted.rodIds(), accepted.conductorIds(), "proposal-accept-undone",
+                String.format(Locale.ROOT, "took back proposal %s: removed %d rods or masts and %d conductors", job.id(),
+                        accepted.rodIds().size(), accepted.conductorIds().size()));
+        job.accepted = null;
+        analyses.run(siteId, null, null, null);
+        return sites.get(siteId).version();
     }
 
     /** One structure's cross-check of the rolling sphere against the angle and mesh methods. */
@@ -304,107 +371,78 @@ public class DesignService {
         return downConductors(siteId);
     }
 
-    /** One separation distance check. */
-    public record Separation(String kind, String name, double[] installation, double[] nearestLps, double actual,
-            double length, int downConductors, String material, double required, boolean passes, String note) {
+    /**
+     * One separation distance check. {@code length} is l, {@code route} says how it was found
+     * ({@code routeBasis}: drawn, assumed-links, grounded-part or none), {@code straightAcross} the
+     * metres of it assumed straight across the roof where no conductor is drawn; {@code status} is
+     * "passes", "fails", "not confirmed" (no down-conductor reached, l only a lower bound) or
+     * "connected" (a part touches the object).
+     */
+    public record Separation(String kind, String name, double[] installation, double[] nearestLps, String partId,
+            double actual, double length, String routeBasis, String route, double straightAcross, int downConductors,
+            String material, double required, boolean passes, String status, String note) {
     }
+
+    /** Height of the equipotential bonding the separation distances run to: ground level (sites store no other). */
+    static final double BONDING_LEVEL = 0;
 
     public List<Separation> separations(long siteId) {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        SiteSurface surface = SiteSurfaceBuilder.build(site);
-        List<DownConductors> downs = downConductors(site, stored, store.downConductors(siteId));
-        List<double[]> segments = lpsSegments(surface);
-        List<Separation> out = new ArrayList<>();
-        if (segments.isEmpty()) {
-            return out;
-        }
-        for (RooftopObject o : site.rooftopObjects()) {
-            Coordinate best = null;
-            double[] bestLps = null;
-            double bestDistance = Double.POSITIVE_INFINITY;
-            Geometry ring = org.locationtech.jts.densify.Densifier.densify(o.footprint().getExteriorRing(), 0.5);
-            for (Coordinate c : ring.getCoordinates()) {
-                Coordinate p = new Coordinate(c.x, c.y, o.top());
-                double[] q = nearest(segments, p);
-                double d = p.distance3D(new Coordinate(q[0], q[1], q[2]));
-                if (d < bestDistance) {
-                    bestDistance = d;
-                    best = p;
-                    bestLps = q;
-                }
-            }
-            out.add(separation("rooftop object", o.name() == null ? o.id() : o.name(), best, bestLps, downs, stored,
-                    SeparationDistance.Material.AIR));
-        }
-        for (DesignRepository.Installation i : store.installations(siteId)) {
-            Coordinate p = new Coordinate(i.x(), i.y(), i.z());
-            double[] q = nearest(segments, p);
-            out.add(separation("metal installation #" + i.id(), i.name(), p, q, downs, stored,
+        List<DesignRepository.Installation> stores = store.installations(siteId);
+        List<SeparationSurvey.Installation> metals = new ArrayList<>();
+        for (DesignRepository.Installation i : stores) {
+            metals.add(new SeparationSurvey.Installation(i.name(), new Coordinate(i.x(), i.y(), i.z()),
                     SeparationDistance.Material.valueOf(i.material())));
         }
+        List<SeparationSurvey.Check> checks = SeparationSurvey.survey(site, SiteSurfaceBuilder.build(site),
+                stored.sphere().level(), bondingDownConductors(downConductors(site, stored, store.downConductors(siteId))),
+                metals, BONDING_LEVEL);
+        List<Separation> out = new ArrayList<>();
+        int metal = 0;
+        for (SeparationSurvey.Check c : checks) {
+            String kind = c.kind();
+            if (kind.equals("metal installation")) {
+                kind = "metal installation #" + stores.get(metal++).id();
+            }
+            out.add(separation(kind, c));
+        }
         return out;
     }
 
-    private static Separation separation(String kind, String name, Coordinate p, double[] lps, List<DownConductors> downs,
-            StoredSite stored, SeparationDistance.Material material) {
-        // l: down the shortest way from the LPS point: across the roof to the nearest down-conductor
-        // (√2 times the plan distance, as conductors run along edges and axes) and down to the ground
-        double nearestDown = Double.POSITIVE_INFINITY;
-        int count = 0;
+    /** Every down-conductor with its structure and that structure's count, as the l routes need them. */
+    static List<BondingRoutes.DownConductor> bondingDownConductors(List<DownConductors> downs) {
+        List<BondingRoutes.DownConductor> out = new ArrayList<>();
         for (DownConductors d : downs) {
-            for (double[] q : d.positions()) {
-                double dist = Math.hypot(q[0] - lps[0], q[1] - lps[1]);
-                if (dist < nearestDown) {
-                    nearestDown = dist;
-                    count = d.positions().size();
-                }
-            }
-        }
-        if (count == 0) {
-            count = 1;
-            nearestDown = 0;
-        }
-        double l = lps[2] + Math.sqrt(2) * nearestDown;
-        SeparationDistance.Result r = SeparationDistance.check(stored.sphere().level(), count, material, p,
-                new Coordinate(lps[0], lps[1], lps[2]), l);
-        return new Separation(kind, name, new double[] {round(p.x), round(p.y), round(p.getZ())},
-                new double[] {round(lps[0]), round(lps[1]), round(lps[2])}, round(r.actual()), round(r.length()), count,
-                material.name(), Math.round(r.required() * 1000) / 1000.0, r.passes(),
-                "l estimated: height of the nearest LPS point plus √2 × its plan distance to the nearest down-conductor;"
-                        + " measure the real route before relying on a pass");
-    }
-
-    /** Air-termination as 3D segments: rods from foot to tip, conductor legs. */
-    private static List<double[]> lpsSegments(SiteSurface surface) {
-        List<double[]> out = new ArrayList<>();
-        for (SiteSurface.PlacedRod r : surface.rods()) {
-            out.add(new double[] {r.tip().x, r.tip().y, r.base(), r.tip().x, r.tip().y, r.tip().getZ()});
-        }
-        for (SiteSurface.PlacedConductor c : surface.conductors()) {
-            for (int i = 1; i < c.path().size(); i++) {
-                Coordinate a = c.path().get(i - 1), b = c.path().get(i);
-                out.add(new double[] {a.x, a.y, a.getZ(), b.x, b.y, b.getZ()});
+            for (double[] p : d.positions()) {
+                out.add(new BondingRoutes.DownConductor(d.structureId(), new Coordinate(p[0], p[1]), d.positions().size()));
             }
         }
         return out;
     }
 
-    private static double[] nearest(List<double[]> segments, Coordinate p) {
-        double[] best = null;
-        double bestD = Double.POSITIVE_INFINITY;
-        for (double[] s : segments) {
-            double vx = s[3] - s[0], vy = s[4] - s[1], vz = s[5] - s[2];
-            double len2 = vx * vx + vy * vy + vz * vz;
-            double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s[0]) * vx + (p.y - s[1]) * vy + (p.getZ() - s[2]) * vz) / len2));
-            double[] q = {s[0] + t * vx, s[1] + t * vy, s[2] + t * vz};
-            double d = Math.sqrt((q[0] - p.x) * (q[0] - p.x) + (q[1] - p.y) * (q[1] - p.y) + (q[2] - p.getZ()) * (q[2] - p.getZ()));
-            if (d < bestD) {
-                bestD = d;
-                best = q;
-            }
+    private static Separation separation(String kind, SeparationSurvey.Check c) {
+        BondingRoutes.Route route = c.route();
+        String note;
+        if (c.connected()) {
+            note = "a part touches it: it is connected to the air-termination, so it must be fit to carry lightning"
+                    + " current; no clearance to check";
+        } else if (route.basis() == BondingRoutes.Basis.ASSUMED_LINKS) {
+            note = "part of l is assumed straight across the roof where no conductor is drawn, the shortest a"
+                    + " route can be: l is a lower bound, so the check can fail but not pass until the route is drawn";
+        } else if (route.basis() == BondingRoutes.Basis.NONE) {
+            note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
+        } else {
+            note = "l along the drawn air-termination and down the down-conductor";
         }
-        return best;
+        String status = c.connected() ? "connected" : c.passes() ? "passes"
+                : c.result().actual() < c.result().required() ? "fails" : "not confirmed";
+        Coordinate p = c.installation(), q = c.lpsPoint();
+        return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
+                new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), round(c.result().actual()),
+                round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
+                route.describe(), round(route.assumedStraight()), route.downConductors(), c.material().name(),
+                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status, note);
     }
 
     public DesignRepository.Installation addInstallation(long siteId, String name, Double x, Double y, Double z,
@@ -463,7 +501,9 @@ public class DesignService {
     public org.lpzplanner.common.ReportSection quantitiesSection(long siteId, double fixingsPerMetre) {
         QuantityTable table = quantities(siteId, fixingsPerMetre);
         return new org.lpzplanner.common.ReportSection(table.title(), table.columns(), table.rows(), List.of(
-                "Down-conductor lengths are straight drops from the roof edge; the installed route may be longer.",
+                "Down-conductor lengths run from the air-termination level at the top of the wall (parapet, eaves or verge)"
+                        + " straight down to ground level; the installed route may be longer, and the connection to the"
+                        + " earth termination is not included.",
                 "Test joints and earth terminations: one per down-conductor (common practice)."));
     }
 
@@ -476,7 +516,8 @@ public class DesignService {
         Map<String, Integer> out = new LinkedHashMap<>();
         for (ProposedPart p : parts) {
             String key = p.rod() != null ? (p.kind() == ProposedPart.Kind.MAST ? "mast " : "rod ")
-                    + BillOfQuantities.metresText(p.rod().height()) + " m" : p.kind().name().toLowerCase(Locale.ROOT);
+                    + BillOfQuantities.metresText(p.rod().height()) + " m"
+                    : p.kind() == ProposedPart.Kind.RIDGE_CONDUCTOR ? "ridge conductor" : "roof-edge conductor";
             out.merge(key, 1, Integer::sum);
         }
         return out;

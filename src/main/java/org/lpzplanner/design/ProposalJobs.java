@@ -46,6 +46,8 @@ public class ProposalJobs {
         volatile double fraction;
         volatile Proposal result;
         volatile String error;
+        /** What accepting it added, and the site's version after that; null until accepted or after an undo. */
+        volatile DesignService.Accepted accepted;
 
         Job(String id, long siteId, long siteVersion, Site site, ProposalOptions options) {
             this.id = id;
@@ -63,6 +65,7 @@ public class ProposalJobs {
         public double fraction() { return fraction; }
         public Proposal result() { return result; }
         public String error() { return error; }
+        public DesignService.Accepted accepted() { return accepted; }
         public Site site() { return site; }
         public ProposalOptions options() { return options; }
     }

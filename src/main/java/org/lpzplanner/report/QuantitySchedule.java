@@ -30,7 +30,9 @@ final class QuantitySchedule {
         List<String> notes = new ArrayList<>();
         notes.add("Counted from the parts of the site file of this revision and the down-conductors of the schedule"
                 + " above (D1…), at " + ReportFacts.oneDecimal(FIXINGS_PER_METRE) + " fixing per metre.");
-        notes.add("Down-conductor lengths are straight drops from the roof edge; the installed route may be longer.");
+        notes.add("Down-conductor lengths run from the air-termination level at the top of the wall (parapet, eaves or"
+                + " verge) straight down to ground level; the installed route may be longer, and the connection to the"
+                + " earth termination is not included.");
         notes.add("Test joints and earth terminations: one per down-conductor (common practice).");
         if (hasEdited(facts)) {
             notes.add("Down-conductors include the designer's edited positions, " + facts.design().asStored() + ".");

@@ -39,8 +39,9 @@ import tools.jackson.databind.JsonNode;
  * {@code height}; {@code DELETE /api/sites/{id}/rods/{rodId}?version=N} removes it. Each change
  * rewrites the stored file, analyses the site again and answers with the new summary, plan drawing,
  * method, level, radius and cautions. {@code POST /api/sites/{id}/conductors} adds a roof conductor
- * or catenary wire and {@code DELETE /api/sites/{id}/conductors/{conductorId}?version=N} removes
- * one, answering the same way. A stale {@code version} answers 409.
+ * or catenary wire, {@code PUT /api/sites/{id}/conductors/{conductorId}} gives it a new path
+ * ({@code points}, optional {@code heightAboveRoof} and {@code name}) and
+ * {@code DELETE /api/sites/{id}/conductors/{conductorId}?version=N} removes one, answering the same way. A stale {@code version} answers 409.
  */
 @RestController
 @Tag(name = "Air-termination", description = "Rods and conductors of a site; each change rewrites the site file and analyses again")
@@ -148,6 +149,22 @@ public class AirTerminationApiController {
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/sites/" + id + "/conductors/" + conductorId))
                 .body(conductorChange(conductorId, null, change));
+    }
+
+    @Operation(summary = "Move or reshape a roof conductor or catenary wire",
+            description = "JSON object with version and points, the conductor's whole new path: [[x, y], ...] in local metres (a roof conductor keeps its heightAboveRoof unless one is given) or [[x, y, elevation above ground], ...]; optional heightAboveRoof and name. The conductor keeps its id.")
+    @ApiResponse(responseCode = "200", description = "Changed; the conductor as it was (before), the new analysis and parts")
+    @ApiResponse(responseCode = "400", description = "Points or heights cannot be used; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or conductor", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @PutMapping(value = "/conductors/{conductorId}", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public ConductorChange changeConductor(@PathVariable long id, @PathVariable String conductorId,
+            @RequestBody JsonNode body, Locale locale) {
+        long start = System.nanoTime();
+        AirTerminationService.ConductorView before = parts.changeConductor(id, version(body), conductorId,
+                new AirTerminationService.ConductorInput(null, text(body, "name"), points(body),
+                        number(body, "heightAboveRoof")));
+        return conductorChange(conductorId, before, answer(id, null, null, start, locale));
     }
 
     @Operation(summary = "Delete a conductor", description = "Parameter version is required.")

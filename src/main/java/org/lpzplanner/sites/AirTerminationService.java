@@ -71,17 +71,7 @@ public class AirTerminationService {
         LocalProjection projection = document.projection();
         List<RodView> rods = document.site().rods().stream().map(r -> new RodView(r.id(), r.name(), round(r.x()),
                 round(r.y()), sitePosition(projection, r.x(), r.y()), r.height())).toList();
-        List<ConductorView> conductors = new ArrayList<>();
-        for (Conductor c : document.site().conductors()) {
-            List<double[]> path = new ArrayList<>();
-            List<double[]> sitePath = new ArrayList<>();
-            for (Coordinate p : c.path()) {
-                path.add(Double.isNaN(p.getZ()) || c.followsSurface() ? new double[] {round(p.x), round(p.y)}
-                        : new double[] {round(p.x), round(p.y), round(p.getZ())});
-                sitePath.add(sitePosition(projection, p.x, p.y));
-            }
-            conductors.add(new ConductorView(c.id(), c.name(), path, sitePath, c.heightAboveRoof()));
-        }
+        List<ConductorView> conductors = document.site().conductors().stream().map(c -> view(c, projection)).toList();
         return new Parts(site.id(), site.version(), projection == null ? "local-metres" : "lon-lat",
                 sites.isGeoJson(site), rods, conductors);
     }
@@ -118,33 +108,109 @@ public class AirTerminationService {
     }
 
     /**
-     * Adds several rods in one change of the file (one earlier file kept, one new version), e.g. an
-     * accepted proposal. Each gets the next free id {@code rod-N}; names and heights as given.
+     * Adds several rods in one change of the file (one earlier file kept, one new version). Each gets
+     * the next free id {@code rod-N}; names and heights as given.
      *
      * @return the new rods' ids, in order
      * @throws InvalidInputException when a value is unusable (nothing is stored then)
      */
     @Transactional
     public List<String> addRods(long siteId, long expectedVersion, List<RodInput> inputs) {
-        StoredSite site = editable(siteId, expectedVersion);
         if (inputs.isEmpty()) {
             throw new InvalidInputException("rods", "there are no rods to add");
+        }
+        return addParts(siteId, expectedVersion, inputs, List.of(), null, null).rodIds();
+    }
+
+    /** Ids of the parts one change added, in the order given. */
+    public record AddedParts(List<String> rodIds, List<String> conductorIds) {
+    }
+
+    /**
+     * Adds rods and conductors in one change of the file (one earlier file kept, one new version),
+     * e.g. an accepted proposal: either all of them are stored or, when one value is unusable,
+     * none. Rods get the next free ids {@code rod-N}, conductors {@code conductor-N}. When
+     * {@code auditEvent} is given, the change is recorded in the site's audit trail once, with
+     * {@code auditText}.
+     *
+     * @throws InvalidInputException when there is nothing to add or a value is unusable
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public AddedParts addParts(long siteId, long expectedVersion, List<RodInput> rods, List<ConductorInput> conductors,
+            String auditEvent, String auditText) {
+        StoredSite site = editable(siteId, expectedVersion);
+        if (rods.isEmpty() && conductors.isEmpty()) {
+            throw new InvalidInputException("parts", "there are no parts to add");
         }
         SiteDocument document = sites.document(site);
         Set<String> used = usedIds(document.site());
         PartFileEditor editor = editor(site, document);
-        List<String> ids = new ArrayList<>();
-        for (RodInput input : inputs) {
+        List<String> rodIds = new ArrayList<>();
+        for (int k = 0; k < rods.size(); k++) {
+            RodInput input = rods.get(k);
             if (input.x() == null || input.y() == null) {
-                throw new InvalidInputException("x", "x and y (local metres) are required for every rod");
+                throw new InvalidInputException("rods[" + k + "]", "x and y (local metres) are required for every rod");
             }
+            checkName(input.name());
             String id = newId(used, null, "rod");
             used.add(id);
-            editor.add(id, input.name(), input.x(), input.y(), height(input.height()));
-            ids.add(id);
+            editor.add(id, input.name(), input.x(), input.y(), height(input.height() == null ? "1" : input.height()));
+            rodIds.add(id);
+        }
+        List<String> conductorIds = new ArrayList<>();
+        for (ConductorInput input : conductors) {
+            BigDecimal heightAboveRoof = checkedConductor(input);
+            String id = newId(used, null, "conductor");
+            used.add(id);
+            editor.addConductor(id, input.name(), input.points(), heightAboveRoof);
+            conductorIds.add(id);
         }
         store(site, editor.text());
-        return ids;
+        if (auditEvent != null) {
+            audit.record(siteId, auditEvent, auditText);
+        }
+        return new AddedParts(rodIds, conductorIds);
+    }
+
+    /**
+     * Removes the given rods and conductors in one change of the file (one earlier file kept, one new
+     * version), e.g. to take back an accepted proposal; every id must still be in the site, else
+     * nothing is removed. When {@code auditEvent} is given, the change is recorded once.
+     *
+     * @throws SiteNotFoundException when a part is no longer in the site
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public void removeParts(long siteId, long expectedVersion, List<String> rodIds, List<String> conductorIds,
+            String auditEvent, String auditText) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        List<Integer> rodIndexes = new ArrayList<>();
+        for (String id : rodIds) {
+            rodIndexes.add(rodIndex(site, document.site(), id));
+        }
+        List<Integer> conductorIndexes = new ArrayList<>();
+        for (String id : conductorIds) {
+            int index = -1;
+            for (int i = 0; i < document.site().conductors().size(); i++) {
+                if (document.site().conductors().get(i).id().equals(id)) {
+                    index = i;
+                }
+            }
+            if (index < 0) {
+                throw new SiteNotFoundException(site.id(), "site " + site.id() + " has no conductor \"" + id + "\"");
+            }
+            conductorIndexes.add(index);
+        }
+        PartFileEditor editor = editor(site, document);
+        // from the last to the first, so that the indexes still to remove stay valid
+        rodIndexes.stream().distinct().sorted(java.util.Comparator.reverseOrder()).forEach(editor::remove);
+        conductorIndexes.stream().distinct().sorted(java.util.Comparator.reverseOrder()).forEach(editor::removeConductor);
+        store(site, editor.text());
+        if (auditEvent != null) {
+            audit.record(siteId, auditEvent, auditText);
+        }
     }
 
     /**
@@ -213,7 +279,85 @@ public class AirTerminationService {
     @Transactional
     public String addConductor(long siteId, long expectedVersion, ConductorInput input) {
         StoredSite site = editable(siteId, expectedVersion);
+        BigDecimal heightAboveRoof = checkedConductor(input);
         List<double[]> points = input.points();
+        SiteDocument document = sites.document(site);
+        Set<String> used = usedIds(document.site());
+        String id = newId(used, input.id(), "conductor");
+        PartFileEditor editor = editor(site, document);
+        editor.addConductor(id, input.name(), points, heightAboveRoof);
+        store(site, editor.text());
+        audit.record(siteId, "conductor-added", "conductor " + id + named(input.name()) + " with "
+                + points.size() + " points " + (heightAboveRoof == null ? "at elevations above ground"
+                : heightAboveRoof.toPlainString() + " m above the surface"));
+        return id;
+    }
+
+    /**
+     * Moves the vertices of a conductor, or the whole conductor: {@code points} replace its path.
+     * Points [x, y] keep a roof conductor's {@code heightAboveRoof} unless a new one is given (and
+     * need one when the conductor was a wire); points [x, y, elevation] make it hold those
+     * elevations above ground. A given {@code name} renames it. The conductor keeps its id and its
+     * place in the file.
+     *
+     * @return the conductor as it was before the change
+     * @throws SiteNotFoundException when no site has this id or the site no conductor with this id
+     * @throws InvalidInputException when points or heights are missing or unusable (nothing is stored)
+     * @throws OptimisticLockingFailureException when the site is no longer at {@code expectedVersion}
+     */
+    @Transactional
+    public ConductorView changeConductor(long siteId, long expectedVersion, String conductorId, ConductorInput input) {
+        StoredSite site = editable(siteId, expectedVersion);
+        SiteDocument document = sites.document(site);
+        int index = conductorIndex(site, document.site(), conductorId);
+        List<double[]> points = checkedPoints(input.points());
+        Conductor now = document.site().conductors().get(index);
+        BigDecimal heightAboveRoof = null;
+        if (points.get(0).length == 2) {
+            if (input.heightAboveRoof() != null && !input.heightAboveRoof().isBlank()) {
+                heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
+            } else if (now.followsSurface()) {
+                heightAboveRoof = BigDecimal.valueOf(now.heightAboveRoof());
+            } else {
+                throw new InvalidInputException("points", "conductor \"" + conductorId + "\" holds elevations above"
+                        + " ground: give every point as [x, y, elevation], or give heightAboveRoof to make it follow"
+                        + " the surface");
+            }
+        } else if (input.heightAboveRoof() != null && !input.heightAboveRoof().isBlank()) {
+            throw new InvalidInputException("heightAboveRoof", "give either heightAboveRoof with points [x, y], or"
+                    + " points [x, y, elevation above ground], not both");
+        }
+        checkName(input.name());
+        ConductorView before = view(now, document.projection());
+        PartFileEditor editor = editor(site, document);
+        editor.changeConductor(index, input.name(), points, heightAboveRoof);
+        store(site, editor.text());
+        audit.record(siteId, "conductor-changed", "conductor " + conductorId + " path from " + describe(before.path())
+                + " to " + describe(points) + (heightAboveRoof == null ? ", elevations above ground"
+                : ", " + heightAboveRoof.stripTrailingZeros().toPlainString() + " m above the surface"));
+        return before;
+    }
+
+    /**
+     * Checks a new conductor's points and height; returns its height above the surface below, or
+     * null when the points carry elevations.
+     */
+    private static BigDecimal checkedConductor(ConductorInput input) {
+        List<double[]> points = checkedPoints(input.points());
+        BigDecimal heightAboveRoof = null;
+        if (points.get(0).length == 2) {
+            if (input.heightAboveRoof() == null || input.heightAboveRoof().isBlank()) {
+                throw new InvalidInputException("heightAboveRoof", "heightAboveRoof (metres above the surface below) is"
+                        + " required when the points have no elevations");
+            }
+            heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
+        }
+        checkName(input.name());
+        return heightAboveRoof;
+    }
+
+    /** The points checked for count, shape and elevations; the field named is {@code points}. */
+    private static List<double[]> checkedPoints(List<double[]> points) {
         if (points == null || points.size() < 2) {
             throw new InvalidInputException("points", "a conductor needs at least two points");
         }
@@ -231,23 +375,49 @@ public class AirTerminationService {
                 throw new InvalidInputException("points", "point " + (k + 1) + " lies below the ground (elevation "
                         + p[2] + " m)");
             }
-        }
-        BigDecimal heightAboveRoof = null;
-        if (!elevations) {
-            if (input.heightAboveRoof() == null || input.heightAboveRoof().isBlank()) {
-                throw new InvalidInputException("heightAboveRoof", "heightAboveRoof (metres above the surface below) is"
-                        + " required when the points have no elevations");
+            if (k > 0 && p[0] == points.get(k - 1)[0] && p[1] == points.get(k - 1)[1]) {
+                throw new InvalidInputException("points", "point " + (k + 1) + " repeats point " + k
+                        + " in plan; a conductor's consecutive points must differ");
             }
-            heightAboveRoof = heightAboveSurface(input.heightAboveRoof());
         }
-        checkName(input.name());
-        SiteDocument document = sites.document(site);
-        Set<String> used = usedIds(document.site());
-        String id = newId(used, input.id(), "conductor");
-        PartFileEditor editor = editor(site, document);
-        editor.addConductor(id, input.name(), points, heightAboveRoof);
-        store(site, editor.text());
-        return id;
+        return points;
+    }
+
+    private static String describe(List<double[]> path) {
+        StringBuilder out = new StringBuilder();
+        for (double[] p : path) {
+            out.append(out.isEmpty() ? "" : " ").append('(').append(round(p[0])).append(", ").append(round(p[1]));
+            if (p.length > 2) {
+                out.append(", ").append(round(p[2]));
+            }
+            out.append(')');
+        }
+        return out.toString();
+    }
+
+    private static String named(String name) {
+        return name == null || name.isBlank() ? "" : " \"" + name.strip() + "\"";
+    }
+
+    private static int conductorIndex(StoredSite stored, Site site, String conductorId) {
+        for (int i = 0; i < site.conductors().size(); i++) {
+            if (site.conductors().get(i).id().equals(conductorId)) {
+                return i;
+            }
+        }
+        throw new SiteNotFoundException(stored.id(), "site " + stored.id() + " has no conductor \"" + conductorId
+                + "\"");
+    }
+
+    private static ConductorView view(Conductor c, LocalProjection projection) {
+        List<double[]> path = new ArrayList<>();
+        List<double[]> sitePath = new ArrayList<>();
+        for (Coordinate p : c.path()) {
+            path.add(Double.isNaN(p.getZ()) || c.followsSurface() ? new double[] {round(p.x), round(p.y)}
+                    : new double[] {round(p.x), round(p.y), round(p.getZ())});
+            sitePath.add(sitePosition(projection, p.x, p.y));
+        }
+        return new ConductorView(c.id(), c.name(), path, sitePath, c.heightAboveRoof());
     }
 
     /**
@@ -260,21 +430,13 @@ public class AirTerminationService {
     public ConductorView removeConductor(long siteId, long expectedVersion, String conductorId) {
         StoredSite site = editable(siteId, expectedVersion);
         SiteDocument document = sites.document(site);
-        List<Conductor> conductors = document.site().conductors();
-        int index = -1;
-        for (int i = 0; i < conductors.size(); i++) {
-            if (conductors.get(i).id().equals(conductorId)) {
-                index = i;
-            }
-        }
-        if (index < 0) {
-            throw new SiteNotFoundException(site.id(), "site " + site.id() + " has no conductor \"" + conductorId + "\"");
-        }
-        ConductorView before = parts(siteId).conductors().get(index);
-        PartFileEditor editor = new PartFileEditor(site.sourceText(), document.site().rods(), conductors,
-                document.projection());
+        int index = conductorIndex(site, document.site(), conductorId);
+        ConductorView before = view(document.site().conductors().get(index), document.projection());
+        PartFileEditor editor = editor(site, document);
         editor.removeConductor(index);
         store(site, editor.text());
+        audit.record(siteId, "conductor-removed", "conductor " + conductorId + named(before.name()) + " along "
+                + describe(before.path()));
         return before;
     }
 

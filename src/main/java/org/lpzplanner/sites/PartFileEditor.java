@@ -16,7 +16,7 @@ import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
- * Adds, moves and removes rods, and adds and removes conductors, in a stored GeoJSON site file.
+ * Adds, moves and removes rods, and adds, reshapes and removes conductors, in a stored GeoJSON site file.
  * Positions come in local metres and
  * are written in the file's own coordinates: local metres (to the millimetre) as they are, lon/lat
  * (to 10⁻⁸ degree, about a millimetre) through the site's {@link LocalProjection}; conductor
@@ -87,16 +87,50 @@ final class PartFileEditor {
         if (heightAboveRoof != null) {
             properties.put("heightAboveRoof", heightAboveRoof);
         }
-        ObjectNode geometry = feature.putObject("geometry");
+        feature.set("geometry", lineString(points, heightAboveRoof == null));
+    }
+
+    /**
+     * Gives the conductor at this index among the file's conductors a new path (as for
+     * {@link #addConductor}) and, when {@code name} is not blank, a new name. With
+     * {@code heightAboveRoof} it follows the surface; without, the points' elevations hold.
+     */
+    void changeConductor(int conductorIndex, String name, List<double[]> points, BigDecimal heightAboveRoof) {
+        ObjectNode feature = conductorFeature(conductorIndex);
+        ObjectNode properties = feature.path("properties") instanceof ObjectNode p ? p : feature.putObject("properties");
+        if (name != null && !name.isBlank()) {
+            properties.put("name", name.strip());
+        }
+        if (heightAboveRoof != null) {
+            properties.put("heightAboveRoof", heightAboveRoof);
+        } else {
+            properties.remove("heightAboveRoof");
+        }
+        feature.set("geometry", lineString(points, heightAboveRoof == null));
+    }
+
+    private ObjectNode lineString(List<double[]> points, boolean elevations) {
+        ObjectNode geometry = JSON.createObjectNode();
         geometry.put("type", "LineString");
         ArrayNode coordinates = geometry.putArray("coordinates");
         for (double[] p : points) {
             ArrayNode position = (ArrayNode) point(p[0], p[1]).get("coordinates");
-            if (heightAboveRoof == null) {
+            if (elevations) {
                 position.add(round(p[2], 3));
             }
             coordinates.add(position);
         }
+        return geometry;
+    }
+
+    private ObjectNode conductorFeature(int conductorIndex) {
+        int seen = -1;
+        for (JsonNode feature : features) {
+            if (isConductor(feature) && ++seen == conductorIndex) {
+                return (ObjectNode) feature;
+            }
+        }
+        throw new IllegalArgumentException("no conductor number " + conductorIndex);
     }
 
     /** Removes the conductor at this index among the file's conductors. */

@@ -75,6 +75,21 @@ class PlanSvgTest {
         assertThat(y).isCloseTo(20, org.assertj.core.api.Assertions.within(0.1 / scale + 1e-9));
     }
 
+    @Test
+    void conductorsCarryTheirIdsForTheEditor() {
+        String geoJson = "{\"type\":\"FeatureCollection\",\"coordinates\":\"local-metres\",\"features\":[{\"type\":\"Feature\","
+                + "\"properties\":{\"kind\":\"structure\",\"height\":6},"
+                + "\"geometry\":{\"type\":\"Polygon\",\"coordinates\":[[[0,0],[10,0],[10,10],[0,10],[0,0]]]}},"
+                + "{\"type\":\"Feature\",\"id\":\"ridge \\\"line\\\"\",\"properties\":{\"kind\":\"conductor\",\"heightAboveRoof\":0.2},"
+                + "\"geometry\":{\"type\":\"LineString\",\"coordinates\":[[1,5],[9,5]]}}]}";
+        Site site = SiteFiles.read(geoJson, "x.geojson").site();
+        var result = ExposureAnalysis.analyze(site, AnalysisOptions.of(SphereSpec.of(ProtectionLevel.II)));
+
+        String svg = PlanSvg.render(ResultGeoJson.write(site, result), KEYS);
+
+        assertThat(svg).contains("class=\"conductor\"").contains("data-conductor-id=\"ridge &quot;line&quot;\"");
+    }
+
     private static double attribute(String svg, String name) {
         int start = svg.indexOf(name + "=\"") + name.length() + 2;
         return Double.parseDouble(svg.substring(start, svg.indexOf('"', start)));

@@ -51,6 +51,19 @@ final class BrowserSupport {
     static void clickAndAwaitNewPage(ChromeDriver browser, By target) {
         WebElement oldPage = browser.findElement(By.tagName("html"));
         browser.findElement(target).click();
-        new WebDriverWait(browser, Duration.ofSeconds(30)).until(ExpectedConditions.stalenessOf(oldPage));
+        WebDriverWait wait = new WebDriverWait(browser, Duration.ofSeconds(30));
+        wait.until(ExpectedConditions.stalenessOf(oldPage));
+        wait.until(b -> "complete".equals(((org.openqa.selenium.JavascriptExecutor) b)
+                .executeScript("return document.readyState")));
+    }
+
+    /**
+     * The text of an element, looked up again if the page replaced it between finding and reading
+     * (a navigation that was still settling).
+     */
+    static String textOf(ChromeDriver browser, By target) {
+        return new WebDriverWait(browser, Duration.ofSeconds(10))
+                .ignoring(org.openqa.selenium.StaleElementReferenceException.class)
+                .until(b -> b.findElement(target).getText());
     }
 }

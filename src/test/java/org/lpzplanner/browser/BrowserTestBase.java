@@ -48,6 +48,11 @@ abstract class BrowserTestBase {
         BrowserSupport.clickAndAwaitNewPage(browser, target);
     }
 
+    /** See {@link BrowserSupport#textOf}. */
+    String textOf(By target) {
+        return BrowserSupport.textOf(browser, target);
+    }
+
     @AfterEach
     void closeBrowser() {
         if (browser != null) {

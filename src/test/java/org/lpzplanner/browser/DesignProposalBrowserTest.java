@@ -53,6 +53,8 @@ class DesignProposalBrowserTest extends BrowserTestBase {
         Files.write(shots.resolve("design-proposal.png"), browser.getScreenshotAs(OutputType.BYTES));
 
         browser.findElement(By.id("accept-proposal")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(60)).until(b -> b.findElement(By.id("accepted-actions")).isDisplayed());
+        browser.findElement(By.id("open-plan")).click();
         new WebDriverWait(browser, Duration.ofSeconds(60))
                 .until(b -> b.getCurrentUrl().endsWith("/sites/" + site.id()));
         assertThat(sites.document(sites.get(site.id())).site().rods()).hasSize(drawn);

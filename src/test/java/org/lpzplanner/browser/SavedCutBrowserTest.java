@@ -31,7 +31,7 @@ class SavedCutBrowserTest extends BrowserTestBase {
         browser.findElement(By.cssSelector("#save-cut-form input[name=name]")).sendKeys("Across the quay");
         clickAndAwaitNewPage(By.cssSelector("#save-cut-form button[type=submit]"));
 
-        String list = browser.findElement(By.id("saved-cuts")).getText();
+        String list = textOf(By.id("saved-cuts"));
         assertThat(list).contains("Across the quay").contains("from (-10, 20) to (90, 20) m");
         assertThat(cuts.cuts(id)).singleElement().satisfies(c -> assertThat(c.x2()).isEqualTo(90));
         Path shots = Files.createDirectories(Path.of("target", "screenshots"));
@@ -40,9 +40,9 @@ class SavedCutBrowserTest extends BrowserTestBase {
                 StandardCopyOption.REPLACE_EXISTING);
 
         clickAndAwaitNewPage(By.linkText("Open \"Across the quay\""));
-        assertThat(browser.findElement(By.id("section-cut")).getText()).contains("100");
+        assertThat(textOf(By.id("section-cut"))).contains("100");
         clickAndAwaitNewPage(By.cssSelector("#saved-cuts form.inline button"));
-        assertThat(browser.findElement(By.id("saved-cuts")).getText()).contains("No cuts saved yet");
+        assertThat(textOf(By.id("saved-cuts"))).contains("No cuts saved yet");
         assertThat(cuts.cuts(id)).isEmpty();
     }
 }

@@ -105,10 +105,10 @@ class AnalyzeCommandTest {
         int roofFeatures = 0;
         for (JsonNode f : written.get("features")) {
             JsonNode p = f.get("properties");
-            if (p.get("result").asString().equals("exposed-roof")) {
+            if (p.get("layer").asString().equals("exposed-roof")) {
                 roofFeatures++;
                 if (p.get("owner").asString().equals("Warehouse")) {
-                    exposed += p.get("exposedArea").asDouble();
+                    exposed += p.get("area").asDouble();
                 }
             }
         }

@@ -43,8 +43,8 @@ class ResultGeoJsonTest {
         double roof = 0;
         for (JsonNode f : result.get("features")) {
             JsonNode p = f.get("properties");
-            if (p.get("result").asString().equals("exposed-roof")) {
-                exposed += p.get("exposedArea").asDouble();
+            if (p.get("layer").asString().equals("exposed-roof")) {
+                exposed += p.get("area").asDouble();
                 roof += p.get("roofArea").asDouble();
             }
         }
@@ -77,10 +77,10 @@ class ResultGeoJsonTest {
         // ground touches it within R of any support); 30 m is under 0.0005° of latitude and, at
         // 54° N, under 0.0005° of longitude. Everything else lies on the parts themselves.
         double groundSlack = 0.0005;
-        double partSlack = 1e-6; // positions are rounded to 1e-7°
+        double partSlack = 1e-6; // positions keep centimetres, under 1e-7°
         int[] positions = {0};
         for (JsonNode f : result.get("features")) {
-            boolean ground = f.get("properties").get("result").asString().equals("protected-ground");
+            boolean ground = f.get("properties").get("layer").asString().equals("protected-ground");
             double slack = ground ? groundSlack : partSlack;
             forEachPosition(f.get("geometry").get("coordinates"), p -> {
                 positions[0]++;

@@ -126,9 +126,22 @@ class ReportPdfTest {
         // (common practice) and each air-termination part
         assertThat(all).contains("Bill of quantities").contains("Test joint pcs " + downConductors + " ")
                 .contains("Earth termination pcs " + downConductors + " ");
-        // Separation distances with an assumed length never pass (IEC 62305-3 6.3: l must be known).
-        assertThat(all).contains("Schedule of separation distances").containsPattern("\\d not confirmed")
-                .doesNotContainPattern("\\d passes");
+        // Separation distances: l along the route to a down-conductor and down it, the route stated;
+        // a row fails when the distance is below s (IEC 62305-3:2010 6.3); at or above it, it passes
+        // along a drawn route and is "not confirmed" where the route assumes a straight link (l, s lower bounds)
+        assertThat(all).contains("Schedule of separation distances").contains("Route of l").contains(" m down it ");
+        var verdicts = java.util.regex.Pattern.compile("m down it (\\d+\\.\\d+) (\\d+\\.\\d+) (passes|fails|not confirmed)").matcher(all);
+        int rows = 0;
+        while (verdicts.find()) {
+            rows++;
+            boolean clear = Double.parseDouble(verdicts.group(2)) >= Double.parseDouble(verdicts.group(1));
+            if (clear) {
+                assertThat(verdicts.group(3)).isIn("passes", "not confirmed");
+            } else {
+                assertThat(verdicts.group(3)).isEqualTo("fails");
+            }
+        }
+        assertThat(rows).as("separation rows of the campus's rooftop objects").isEqualTo(site.rooftopObjects().size());
         assertThat(all).contains("Section through");
     }
 

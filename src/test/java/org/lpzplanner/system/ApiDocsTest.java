@@ -65,6 +65,7 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "delete", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{id}/conductors", "post", List.of("201", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}/conductors/{conductorId}", "delete", List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}/conductors/{conductorId}", "put", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}", "get", List.of("200", "400", "404"));
         hasResponses(doc, "/api/sites/{id}", "patch", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}", "delete", List.of("204", "404", "409"));

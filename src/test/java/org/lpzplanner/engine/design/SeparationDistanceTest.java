@@ -5,6 +5,8 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.locationtech.jts.geom.Coordinate;
 import org.lpzplanner.engine.design.SeparationDistance.Material;
 import org.lpzplanner.engine.model.ProtectionLevel;
@@ -61,6 +63,25 @@ class SeparationDistanceTest {
         assertThat(r.lengthAssumed()).isFalse();
         assertThat(r.required()).isCloseTo(1.32, within(1e-12));
         assertThat(r.passes()).isFalse();
+    }
+
+    /**
+     * s for l = 10 m at every level, one / two / three or more down-conductors, in air and in brick.
+     * ki 0.08 / 0.06 / 0.04 / 0.04 [IEC 62305-3:2010 Table 10], kc 1 / 0.66 / 0.44 [Table 12, Annex C,
+     * simplified], km 1 / 0.5 [Table 11]; expected values multiplied out by hand.
+     */
+    @ParameterizedTest(name = "level {0}, {1} down-conductors, {2}: s = {3} m")
+    @CsvSource({
+            "I, 1, AIR, 0.8", "I, 1, CONCRETE_OR_BRICK, 1.6", "I, 2, AIR, 0.528", "I, 2, CONCRETE_OR_BRICK, 1.056",
+            "I, 3, AIR, 0.352", "I, 3, CONCRETE_OR_BRICK, 0.704",
+            "II, 1, AIR, 0.6", "II, 1, CONCRETE_OR_BRICK, 1.2", "II, 2, AIR, 0.396", "II, 2, CONCRETE_OR_BRICK, 0.792",
+            "II, 3, AIR, 0.264", "II, 3, CONCRETE_OR_BRICK, 0.528",
+            "III, 1, AIR, 0.4", "III, 1, CONCRETE_OR_BRICK, 0.8", "III, 2, AIR, 0.264", "III, 2, CONCRETE_OR_BRICK, 0.528",
+            "III, 4, AIR, 0.176", "III, 4, CONCRETE_OR_BRICK, 0.352",
+            "IV, 1, AIR, 0.4", "IV, 1, CONCRETE_OR_BRICK, 0.8", "IV, 2, AIR, 0.264", "IV, 2, CONCRETE_OR_BRICK, 0.528",
+            "IV, 6, AIR, 0.176", "IV, 6, CONCRETE_OR_BRICK, 0.352"})
+    void tableValuesForTenMetres(ProtectionLevel level, int downConductors, Material material, double expected) {
+        assertThat(SeparationDistance.required(level, downConductors, material, 10)).isCloseTo(expected, within(1e-12));
     }
 
     @Test

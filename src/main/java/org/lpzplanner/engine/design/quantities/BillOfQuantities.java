@@ -1,11 +1,14 @@
 package org.lpzplanner.engine.design.quantities;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.design.DownConductorTops;
 import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.RoofEdge;
 import org.lpzplanner.engine.geom.SiteSurface;
@@ -20,8 +23,10 @@ import org.lpzplanner.engine.model.Site;
  * <li>Conductor lengths (3D, metres) by kind: a leg up to {@value #ROOF_RISE} m above the surface under
  *     both its ends is a roof conductor, or a ridge conductor when it runs within
  *     {@value #RIDGE_REACH} m of a ridge or hip in plan; higher legs are catenary wires.</li>
- * <li>Down-conductors: one per planned position, as long as the wall-top height there (the straight
- *     drop; the designer's route may be longer).</li>
+ * <li>Down-conductors: one per position, from the air-termination level at the top of the wall there
+ *     ({@link DownConductorTops}: the parapet's top, the eaves, the verge of a gable end at that point,
+ *     or a roof conductor passing there) straight down to ground level. The connection from ground
+ *     level to the earth termination and any detour of the installed route are not included.</li>
  * <li>Fixings: the rate per metre times the roof, ridge and down-conductor lengths, rounded up
  *     (catenary wires hang between their supports and get none).</li>
  * <li>One test joint and one earth termination per down-conductor (common practice).</li>
@@ -30,7 +35,7 @@ import org.lpzplanner.engine.model.Site;
  */
 public final class BillOfQuantities {
 
-    public static final double ROOF_RISE = 1.5;
+    public static final double ROOF_RISE = DownConductorTops.ROOF_CONDUCTOR_RISE;
     public static final double RIDGE_REACH = 0.5;
 
     private BillOfQuantities() {
@@ -62,8 +67,7 @@ public final class BillOfQuantities {
             for (int i = 1; i < p.size(); i++) {
                 Coordinate a = p.get(i - 1), b = p.get(i);
                 double length = a.distance3D(b);
-                boolean low = a.getZ() - surface.standHeight(a.x, a.y) <= ROOF_RISE
-                        && b.getZ() - surface.standHeight(b.x, b.y) <= ROOF_RISE;
+                boolean low = DownConductorTops.isRoofLeg(surface, a, b);
                 if (!low) {
                     catenary += length;
                 } else if (alongRidge(surface, a, b)) {
@@ -73,9 +77,12 @@ public final class BillOfQuantities {
                 }
             }
         }
+        Set<String> structures = new HashSet<>();
+        site.structures().forEach(st -> structures.add(st.id()));
         double down = 0;
         for (Coordinate c : downConductorPositions) {
-            down += wallTopNear(surface, c);
+            Coordinate top = DownConductorTops.top(surface, structures, c);
+            down += top == null ? 0 : top.getZ();
         }
         int n = downConductorPositions.size();
         int fixings = (int) Math.ceil((roof + ridge + down) * fixingsPerMetre - 1e-9);
@@ -93,7 +100,8 @@ public final class BillOfQuantities {
         rows.add(List.of("Ridge conductor", "m", metres(q.ridgeConductor()), "3D length of legs along ridges and hips"));
         rows.add(List.of("Catenary wire", "m", metres(q.catenary()), "legs higher than " + metres(ROOF_RISE) + " m above the surface"));
         rows.add(List.of("Down-conductor", "m", metres(q.downConductor()),
-                q.downConductors() + " down-conductors, straight drop from the wall top"));
+                q.downConductors() + " down-conductors, from the air-termination at the wall top (parapet, eaves or"
+                        + " verge) straight down to ground level; connection to the earth termination not included"));
         rows.add(List.of("Conductor fixing", "pcs", String.valueOf(q.fixings()),
                 metres(q.fixingsPerMetre()) + " per metre of roof, ridge and down-conductor"));
         rows.add(List.of("Test joint", "pcs", String.valueOf(q.testJoints()), "one per down-conductor"));
@@ -115,16 +123,6 @@ public final class BillOfQuantities {
         double vx = t.x - s.x, vy = t.y - s.y, len2 = vx * vx + vy * vy;
         double k = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x - s.x) * vx + (p.y - s.y) * vy) / len2));
         return Math.hypot(p.x - (s.x + k * vx), p.y - (s.y + k * vy)) <= RIDGE_REACH;
-    }
-
-    /** The highest wall top within 0.5 m of a plan point on the outline (the stand height just inside). */
-    private static double wallTopNear(SiteSurface surface, Coordinate c) {
-        double top = 0;
-        for (int k = 0; k < 8; k++) {
-            double a = Math.PI / 4 * k;
-            top = Math.max(top, surface.topHeight(c.x + 0.1 * Math.cos(a), c.y + 0.1 * Math.sin(a)));
-        }
-        return top;
     }
 
     /** A length or height in metres as short text: 2 decimals at most, no trailing zeros. */

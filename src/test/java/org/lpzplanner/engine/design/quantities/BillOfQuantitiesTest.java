@@ -47,12 +47,55 @@ class BillOfQuantitiesTest {
         assertThat(q.ridgeConductor()).isZero();
         // plan 4 × 3 m at the same height: 5 m (3-4-5 triangle)
         assertThat(q.catenary()).isCloseTo(5, within(1e-9));
-        // four drops of the 6 m wall
-        assertThat(q.downConductor()).isCloseTo(24, within(1e-9));
-        // ⌈1.5 · (20 + 24)⌉ = 66
-        assertThat(q.fixings()).isEqualTo(66);
+        // four drops of the 6 m wall; the two on the south corners start at the roof conductor 0.1 m
+        // above the roof that passes 0.1 m from them: 6.1 + 6.1 + 6 + 6
+        assertThat(q.downConductor()).isCloseTo(24.2, within(1e-9));
+        // ⌈1.5 · (20 + 24.2)⌉ = ⌈66.3⌉ = 67
+        assertThat(q.fixings()).isEqualTo(67);
         assertThat(q.testJoints()).isEqualTo(4);
         assertThat(q.earthTerminations()).isEqualTo(4);
+    }
+
+    @Test
+    void downConductorsOfAFlatRoofWithAParapetRunFromTheParapetTop() {
+        // 20 × 10 m, walls 7 m, parapet 1 m (invented): the air-termination level at the wall is the
+        // parapet's top, 7 + 1 = 8 m above ground [closed form]
+        Structure block = new Structure("S1", "Block", rectangle(0, 0, 20, 10), 7, new RoofShape.Flat(1));
+        Site site = new Site("Block", List.of(block), List.of(), List.of(), List.of());
+        List<Coordinate> downs = List.of(new Coordinate(0, 0), new Coordinate(10, 0), new Coordinate(20, 0),
+                new Coordinate(20, 10), new Coordinate(10, 10), new Coordinate(0, 10));
+
+        BillOfQuantities.Quantities q = BillOfQuantities.compute(site, downs, 1);
+
+        // 6 × 8 m = 48 m (the wall top alone would give 6 × 7 = 42 m)
+        assertThat(q.downConductor()).isCloseTo(48, within(1e-9));
+        assertThat(q.fixings()).isEqualTo(48);
+    }
+
+    @Test
+    void downConductorsOfAGableBuildingFollowTheRoofHeightAtTheirPointOfThePerimeter() {
+        // 24 × 10 m, eaves 6 m, ridge 9 m running east-west along y = 5 (invented). On the long sides
+        // the wall top is the eaves, 6 m; on a gable end at distance d from the ridge line it is
+        // 9 − 3·d/5 [closed form: the roof planes fall 3 m over the 5 m half-span]
+        Structure hall = new Structure("S1", "Hall", rectangle(0, 0, 24, 10), 6, new RoofShape.Gable(9, 90));
+        Site site = new Site("Hall", List.of(hall), List.of(), List.of(), List.of());
+        List<Coordinate> downs = List.of(
+                new Coordinate(0, 0),      // corner: eaves, 6
+                new Coordinate(12, 0),     // south eaves, 6
+                new Coordinate(24, 5),     // east gable under the ridge, 9
+                new Coordinate(0, 2.5),    // west gable 2.5 m from the ridge line: 9 − 1.5 = 7.5
+                new Coordinate(12, 10.4)); // 0.4 m outside the north eaves: projected onto them, 6
+
+        BillOfQuantities.Quantities q = BillOfQuantities.compute(site, downs, 0);
+
+        // 6 + 6 + 9 + 7.5 + 6 = 34.5 m
+        assertThat(q.downConductor()).isCloseTo(34.5, within(1e-9));
+        assertThat(q.downConductors()).isEqualTo(5);
+    }
+
+    private static org.locationtech.jts.geom.Polygon rectangle(double x0, double y0, double x1, double y1) {
+        return GF.createPolygon(new Coordinate[] {new Coordinate(x0, y0), new Coordinate(x1, y0), new Coordinate(x1, y1),
+                new Coordinate(x0, y1), new Coordinate(x0, y0)});
     }
 
     @Test

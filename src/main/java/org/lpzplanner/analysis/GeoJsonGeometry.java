@@ -1,4 +1,4 @@
-package org.lpzplanner.cli;
+package org.lpzplanner.analysis;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -14,19 +14,14 @@ import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
- * RFC 7946 geometry objects for engine geometry in local metres, written in the site's
- * coordinates. Outer rings are written counter-clockwise and holes clockwise, as RFC 7946 asks;
- * the local plane is conformal, so orientation taken in local metres holds in lon/lat too.
+ * RFC 7946 geometry objects for engine geometry in local metres, positions rounded to the
+ * centimetre. Outer rings are written counter-clockwise and holes clockwise, as RFC 7946 asks; the
+ * local plane is conformal, so the orientation holds when positions are later turned into lon/lat
+ * (see {@link ResultGeoJson#published}). A third value is the elevation above ground in metres.
  */
 final class GeoJsonGeometry {
 
-    private final SiteFrame frame;
-    private final JsonNodeFactory nodes;
-
-    GeoJsonGeometry(SiteFrame frame, JsonNodeFactory nodes) {
-        this.frame = frame;
-        this.nodes = nodes;
-    }
+    private final JsonNodeFactory nodes = JsonNodeFactory.instance;
 
     /** A Point; with z, the elevation above ground is the third value. */
     ObjectNode point(Coordinate c, boolean withZ) {
@@ -50,29 +45,11 @@ final class GeoJsonGeometry {
         return lineString(List.of(line.getCoordinates()), withZ);
     }
 
-    /**
-     * The polygons of a geometry (anything else in it is dropped): a Polygon when there is exactly
-     * one, a MultiPolygon otherwise.
-     */
-    ObjectNode polygonal(Geometry geometry) {
-        List<Polygon> polygons = polygons(geometry);
-        if (polygons.size() == 1) {
-            ObjectNode g = geometry("Polygon");
-            g.set("coordinates", rings(polygons.get(0)));
-            return g;
-        }
-        return multiPolygon(polygons);
-    }
-
-    /** The polygons of a geometry as one MultiPolygon (possibly with no polygon). */
+    /** The polygons of a geometry (anything else in it is dropped) as one MultiPolygon. */
     ObjectNode multiPolygon(Geometry geometry) {
-        return multiPolygon(polygons(geometry));
-    }
-
-    private ObjectNode multiPolygon(List<Polygon> polygons) {
         ObjectNode g = geometry("MultiPolygon");
         ArrayNode coordinates = g.putArray("coordinates");
-        for (Polygon p : polygons) {
+        for (Polygon p : polygons(geometry)) {
             coordinates.add(rings(p));
         }
         return g;
@@ -100,7 +77,7 @@ final class GeoJsonGeometry {
 
     private ArrayNode ring(LinearRing ring, boolean counterClockwise) {
         Coordinate[] c = ring.getCoordinates();
-        boolean reverse = Orientation.isCCW(c) != counterClockwise;
+        boolean reverse = c.length >= 4 && Orientation.isCCW(c) != counterClockwise;
         ArrayNode out = nodes.arrayNode();
         for (int k = 0; k < c.length; k++) {
             out.add(position(c[reverse ? c.length - 1 - k : k], false));
@@ -110,8 +87,10 @@ final class GeoJsonGeometry {
 
     private ArrayNode position(Coordinate local, boolean withZ) {
         ArrayNode out = nodes.arrayNode();
-        for (double v : frame.written(local, withZ)) {
-            out.add(v);
+        out.add(ResultGeoJson.round(local.x));
+        out.add(ResultGeoJson.round(local.y));
+        if (withZ && !Double.isNaN(local.getZ())) {
+            out.add(ResultGeoJson.round(local.getZ()));
         }
         return out;
     }

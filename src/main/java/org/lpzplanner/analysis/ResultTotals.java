@@ -1,4 +1,4 @@
-package org.lpzplanner.cli;
+package org.lpzplanner.analysis;
 
 import java.util.ArrayList;
 import java.util.Collections;
@@ -15,8 +15,8 @@ import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SurfaceKind;
 
 /**
- * The totals of one analysis, computed once so that the printed summary and the written GeoJSON
- * always agree. Areas are plan areas in m², lengths in metres.
+ * The totals of one analysis, computed once so that the command line's printed summary and the
+ * result GeoJSON ({@link ResultGeoJson}) always agree. Areas are plan areas in m², lengths in metres.
  *
  * @param roofs          roof totals per owner (structure or rooftop object), in the engine's order
  * @param edgeLengths    exposed edge length per kind, only kinds with some exposure, in enum order
@@ -27,10 +27,10 @@ import org.lpzplanner.engine.geom.SurfaceKind;
  * @param interceptingParts parts a sphere can touch
  * @param protectedGround protected open ground
  */
-record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLengths, int corners, int facadeBands,
+public record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLengths, int corners, int facadeBands,
         double facadeLength, int parts, int interceptingParts, double protectedGround) {
 
-    ResultTotals {
+    public ResultTotals {
         roofs = List.copyOf(roofs);
         Map<EdgeKind, Double> ordered = new EnumMap<>(EdgeKind.class); // enum order whatever map is given
         ordered.putAll(edgeLengths);
@@ -43,15 +43,15 @@ record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLengths, in
      * @param roofArea    plan area of all its faces
      * @param exposedArea plan area of their exposed parts
      */
-    record OwnerRoof(String ownerId, String ownerName, SurfaceKind kind, double roofArea, double exposedArea) {
+    public record OwnerRoof(String ownerId, String ownerName, SurfaceKind kind, double roofArea, double exposedArea) {
 
         /** Exposed share in percent, 0 for an owner without roof area. */
-        double exposedPercent() {
+        public double exposedPercent() {
             return roofArea > 0 ? 100 * exposedArea / roofArea : 0;
         }
     }
 
-    static ResultTotals of(AnalysisResult result) {
+    public static ResultTotals of(AnalysisResult result) {
         Map<String, OwnerRoof> owners = new LinkedHashMap<>();
         for (RoofExposure r : result.roofs()) {
             // Keyed by kind and id: a structure and a rooftop object may share an id.
@@ -71,20 +71,20 @@ record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLengths, in
                 result.protectedGround().planArea());
     }
 
-    double roofArea() {
+    public double roofArea() {
         return roofs.stream().mapToDouble(OwnerRoof::roofArea).sum();
     }
 
-    double exposedRoofArea() {
+    public double exposedRoofArea() {
         return roofs.stream().mapToDouble(OwnerRoof::exposedArea).sum();
     }
 
-    double edgeLength() {
+    public double edgeLength() {
         return edgeLengths.values().stream().mapToDouble(Double::doubleValue).sum();
     }
 
     /** A kind's name as written in files, e.g. "roof-edge" or "rooftop-object-edge". */
-    static String edgeKindName(EdgeKind kind) {
+    public static String edgeKindName(EdgeKind kind) {
         return kind.label().replace(' ', '-');
     }
 }

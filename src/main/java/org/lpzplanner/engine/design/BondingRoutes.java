@@ -1,0 +1,394 @@
+package org.lpzplanner.engine.design;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.PriorityQueue;
+import java.util.Set;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.geom.SiteSurface;
+
+/**
+ * The length l of the separation distance formula [IEC 62305-3:2010 6.3]: from a point of the
+ * air-termination along the air-termination and down a down-conductor to the equipotential bonding
+ * level, by the shortest such route.
+ *
+ * <p><b>The network.</b> Rods (foot to tip) and conductor legs are the drawn pieces. Pieces whose
+ * ends are shared, or a node of one lying within {@value #JOIN_REACH} m in plan and
+ * {@value #JOIN_RISE} m in height of another piece (a rod standing at an edge conductor, a conductor
+ * ending on another), are joined there *[ours: such parts are bonded where they meet]*. A
+ * down-conductor starts at its {@link DownConductorTops top} and joins the pieces that pass there;
+ * from the top it runs straight down to the bonding level (its length is the top's height above
+ * that level). A rod or conductor standing on the ground (a mast) is its own path to the ground.
+ *
+ * <p><b>Where no conductor is drawn.</b> Parts that the drawn pieces do not connect to a
+ * down-conductor are assumed to be connected by a straight conductor across the roof between
+ * their nearest roof-level points (rod feet, roof conductor vertices, down-conductor tops) of
+ * different connected groups. That is the shortest possible connection, so where a route uses it
+ * the l it gives is a lower bound; {@link Route#assumedStraight()} says how much of l it is. An
+ * unconnected part is not used as a bridge straight back into the group the route came from (that
+ * would bypass the group's drawn conductors by two assumptions).
+ *
+ * <p>Immutable after construction and thread-safe. Cost: a Dijkstra search over the nodes from all
+ * down-conductors at once, O(n²) in the roof-level nodes for the assumed links.
+ */
+public final class BondingRoutes {
+
+    /** Plan reach within which a node joins another piece, metres. */
+    public static final double JOIN_REACH = 0.5;
+
+    /** Height difference within which a node joins another piece, metres. */
+    public static final double JOIN_RISE = 0.5;
+
+    /** A node this high above ground or lower stands on the ground, metres. */
+    static final double GROUNDED = 0.05;
+
+    /** How the route of l was found. */
+    public enum Basis {
+        /** Along drawn rods and conductors to a down-conductor, then down it. */
+        DRAWN,
+        /** Part of the route runs straight across the roof where no conductor is drawn (assumed). */
+        ASSUMED_LINKS,
+        /** Down a part that stands on the ground (a mast). */
+        GROUNDED_PART,
+        /** No down-conductor can be reached: l is the point's height above the bonding level, a lower bound. */
+        NONE
+    }
+
+    /**
+     * The route of l from one point.
+     *
+     * @param length              l, metres
+     * @param assumedStraight     of it, metres straight across the roof where no conductor is drawn
+     * @param downConductor       of it, metres down the down-conductor (top to bonding level)
+     * @param structureId         the structure whose down-conductor the route takes; null for a mast or none
+     * @param downConductorTop    the top of that down-conductor, or the foot of the mast; null for none
+     * @param downConductors      the number of down-conductors of that structure (1 for a mast or none), for k<sub>c</sub>
+     */
+    public record Route(double length, double assumedStraight, double downConductor, Basis basis, String structureId,
+            Coordinate downConductorTop, int downConductors) {
+
+        /** Metres along the air-termination (drawn pieces and their joints). */
+        public double alongAirTermination() {
+            return length - assumedStraight - downConductor;
+        }
+
+        /** One line saying how l was found. */
+        public String describe() {
+            return switch (basis) {
+                case DRAWN -> String.format(Locale.ROOT, "%.2f m along drawn air-termination to the down-conductor at"
+                        + " (%.1f, %.1f), %.2f m down it", alongAirTermination(), downConductorTop.x, downConductorTop.y,
+                        downConductor);
+                case ASSUMED_LINKS -> String.format(Locale.ROOT, "%.2f m along drawn air-termination and %.2f m straight"
+                        + " across the roof where no conductor is drawn (assumed) to the down-conductor at (%.1f, %.1f),"
+                        + " %.2f m down it", alongAirTermination(), assumedStraight, downConductorTop.x,
+                        downConductorTop.y, downConductor);
+                case GROUNDED_PART -> String.format(Locale.ROOT, "%.2f m down a part standing on the ground at"
+                        + " (%.1f, %.1f)", length, downConductorTop.x, downConductorTop.y);
+                case NONE -> "no down-conductor reached: l is the height above the bonding level (a lower bound, not"
+                        + " confirmed)";
+            };
+        }
+    }
+
+    /** A straight drawn piece of the air-termination: a rod from foot to tip, or a conductor leg. */
+    public record Piece(String partId, Coordinate a, Coordinate b) {
+    }
+
+    /** A down-conductor: its structure, plan position and the number of down-conductors of that structure. */
+    public record DownConductor(String structureId, Coordinate position, int count) {
+    }
+
+    private record Edge(int to, double length) {
+    }
+
+    private record Sink(double cost, String structureId, Coordinate top, int count, boolean grounded) {
+    }
+
+    private final double bondingLevel;
+    private final List<Piece> pieces = new ArrayList<>();
+    private final List<Coordinate> nodes = new ArrayList<>();
+    private final Map<String, Integer> nodeIndex = new HashMap<>();
+    private final List<List<Edge>> edges = new ArrayList<>();
+    private final List<List<double[]>> stops = new ArrayList<>();
+    private final Map<Integer, Sink> sinks = new HashMap<>();
+    private final List<Integer> roofNodes = new ArrayList<>();
+    private double[] dist;
+    private double[] assumed;
+    private int[] sinkOf;
+    /** The group a node's route was in before its last straight link (-1: none), so that no unconnected part bridges back. */
+    private int[] cameFrom;
+    private int[] group;
+
+    /**
+     * @param structureIds   the ids of the site's structures (whose walls carry down-conductors)
+     * @param downConductors every down-conductor of the site
+     * @param bondingLevel   height of the equipotential bonding above ground, metres (0: at ground level)
+     */
+    public BondingRoutes(SiteSurface surface, Set<String> structureIds, List<DownConductor> downConductors,
+            double bondingLevel) {
+        if (!(bondingLevel >= 0) || Double.isInfinite(bondingLevel)) {
+            throw new IllegalArgumentException("the bonding level must be 0 m or more above ground, got " + bondingLevel);
+        }
+        this.bondingLevel = bondingLevel;
+        for (SiteSurface.PlacedRod r : surface.rods()) {
+            Coordinate foot = new Coordinate(r.tip().x, r.tip().y, r.base());
+            addPiece(new Piece(r.rod().id(), foot, r.tip()), r.base() > GROUNDED, false);
+        }
+        for (SiteSurface.PlacedConductor c : surface.conductors()) {
+            for (int i = 1; i < c.path().size(); i++) {
+                Coordinate a = c.path().get(i - 1), b = c.path().get(i);
+                boolean roof = DownConductorTops.isRoofLeg(surface, a, b);
+                addPiece(new Piece(c.conductor().id(), a, b), roof, roof);
+            }
+        }
+        int drawnNodes = nodes.size();
+        List<Integer> tops = new ArrayList<>();
+        for (DownConductor d : downConductors) {
+            Coordinate top = DownConductorTops.top(surface, structureIds, d.position());
+            if (top == null) {
+                continue;
+            }
+            int n = newNode(top);
+            roofNodes.add(n);
+            tops.add(n);
+            sinks.put(n, new Sink(Math.max(0, top.getZ() - bondingLevel), d.structureId(), top, d.count(), false));
+        }
+        for (int n = 0; n < drawnNodes; n++) {
+            Coordinate p = nodes.get(n);
+            if (p.getZ() <= GROUNDED && !sinks.containsKey(n)) {
+                sinks.put(n, new Sink(0, null, p, 1, true));
+            }
+        }
+        List<Integer> joining = new ArrayList<>();
+        for (int n = 0; n < drawnNodes; n++) {
+            joining.add(n);
+        }
+        joining.addAll(tops);
+        join(joining);
+        for (int i = 0; i < pieces.size(); i++) {
+            List<double[]> s = stops.get(i);
+            s.sort((u, v) -> Double.compare(u[0], v[0]));
+            double length = pieces.get(i).a().distance3D(pieces.get(i).b());
+            for (int k = 1; k < s.size(); k++) {
+                link((int) s.get(k - 1)[1], (int) s.get(k)[1], length * (s.get(k)[0] - s.get(k - 1)[0]));
+            }
+        }
+        search();
+    }
+
+    /** The drawn pieces of the air-termination, for finding the point nearest an installation. */
+    public List<Piece> pieces() {
+        return List.copyOf(pieces);
+    }
+
+    /**
+     * The route of l from a point on a piece.
+     *
+     * @param piece index into {@link #pieces()}
+     * @param point a point on that piece (it is projected onto it)
+     */
+    public Route from(int piece, Coordinate point) {
+        Piece p = pieces.get(piece);
+        double length = p.a().distance3D(p.b());
+        double t = parameter(p.a(), p.b(), point);
+        List<double[]> s = stops.get(piece);
+        int below = 0;
+        for (int k = 0; k < s.size(); k++) {
+            if (s.get(k)[0] <= t) {
+                below = k;
+            }
+        }
+        int above = Math.min(below + 1, s.size() - 1);
+        double best = Double.POSITIVE_INFINITY;
+        int via = -1;
+        double offset = 0;
+        for (int k : new int[] {below, above}) {
+            int n = (int) s.get(k)[1];
+            double d = Math.abs(t - s.get(k)[0]) * length;
+            if (d + dist[n] < best) {
+                best = d + dist[n];
+                via = n;
+                offset = d;
+            }
+        }
+        if (via < 0 || best == Double.POSITIVE_INFINITY) {
+            Coordinate q = new Coordinate(p.a().x + t * (p.b().x - p.a().x), p.a().y + t * (p.b().y - p.a().y),
+                    p.a().getZ() + t * (p.b().getZ() - p.a().getZ()));
+            return new Route(Math.max(0, q.getZ() - bondingLevel), 0, 0, Basis.NONE, null, null, 1);
+        }
+        Sink sink = sinks.get(sinkOf[via]);
+        Basis basis = sink.grounded() ? Basis.GROUNDED_PART : assumed[via] > 1e-9 ? Basis.ASSUMED_LINKS : Basis.DRAWN;
+        double down = sink.grounded() ? 0 : sink.cost();
+        return new Route(offset + dist[via], assumed[via], down, basis, sink.structureId(), sink.top(), sink.count());
+    }
+
+    // ---- construction ----
+
+    private void addPiece(Piece piece, boolean footOnRoof, boolean bothOnRoof) {
+        int a = node(piece.a());
+        int b = node(piece.b());
+        if (footOnRoof) {
+            roofNodes.add(a);
+        }
+        if (bothOnRoof) {
+            roofNodes.add(b);
+        }
+        pieces.add(piece);
+        List<double[]> s = new ArrayList<>();
+        s.add(new double[] {0, a});
+        s.add(new double[] {1, b});
+        stops.add(s);
+    }
+
+    /** The node at this point (shared by pieces meeting within a millimetre). */
+    private int node(Coordinate p) {
+        String key = String.format(Locale.ROOT, "%.3f|%.3f|%.3f", p.x, p.y, p.getZ());
+        Integer n = nodeIndex.get(key);
+        if (n == null) {
+            n = newNode(p);
+            nodeIndex.put(key, n);
+        }
+        return n;
+    }
+
+    private int newNode(Coordinate p) {
+        nodes.add(new Coordinate(p.x, p.y, p.getZ()));
+        edges.add(new ArrayList<>());
+        return nodes.size() - 1;
+    }
+
+    private void link(int u, int v, double length) {
+        if (u == v) {
+            return;
+        }
+        edges.get(u).add(new Edge(v, length));
+        edges.get(v).add(new Edge(u, length));
+    }
+
+    /** Joins each node to the pieces passing near it, splitting them there. */
+    private void join(List<Integer> joining) {
+        for (int n : joining) {
+            Coordinate p = nodes.get(n);
+            for (int i = 0; i < pieces.size(); i++) {
+                Piece piece = pieces.get(i);
+                List<double[]> s = stops.get(i);
+                if ((int) s.get(0)[1] == n || (int) s.get(1)[1] == n) {
+                    continue;
+                }
+                double t = parameter(piece.a(), piece.b(), p);
+                Coordinate q = new Coordinate(piece.a().x + t * (piece.b().x - piece.a().x),
+                        piece.a().y + t * (piece.b().y - piece.a().y), piece.a().getZ() + t * (piece.b().getZ() - piece.a().getZ()));
+                if (Math.hypot(q.x - p.x, q.y - p.y) > JOIN_REACH || Math.abs(q.getZ() - p.getZ()) > JOIN_RISE) {
+                    continue;
+                }
+                int at;
+                if (q.distance3D(piece.a()) < 1e-3) {
+                    at = (int) s.get(0)[1];
+                } else if (q.distance3D(piece.b()) < 1e-3) {
+                    at = (int) s.get(1)[1];
+                } else {
+                    at = newNode(q);
+                    s.add(new double[] {t, at});
+                }
+                link(n, at, p.distance3D(q));
+            }
+        }
+    }
+
+    /** Dijkstra from every sink at once; assumed straight links join roof-level nodes of different groups. */
+    private void search() {
+        int count = nodes.size();
+        group = groups(count);
+        dist = new double[count];
+        assumed = new double[count];
+        sinkOf = new int[count];
+        cameFrom = new int[count];
+        Arrays.fill(dist, Double.POSITIVE_INFINITY);
+        Arrays.fill(sinkOf, -1);
+        Arrays.fill(cameFrom, -1);
+        boolean[] isRoof = new boolean[count];
+        roofNodes.forEach(n -> isRoof[n] = true);
+        int[] roof = roofNodes.stream().distinct().mapToInt(Integer::intValue).toArray();
+        PriorityQueue<double[]> queue = new PriorityQueue<>((u, v) -> Double.compare(u[0], v[0]));
+        sinks.forEach((n, s) -> {
+            dist[n] = s.cost();
+            sinkOf[n] = n;
+            queue.add(new double[] {s.cost(), n});
+        });
+        boolean[] done = new boolean[count];
+        while (!queue.isEmpty()) {
+            double[] top = queue.poll();
+            int u = (int) top[1];
+            if (done[u]) {
+                continue;
+            }
+            done[u] = true;
+            for (Edge e : edges.get(u)) {
+                relax(queue, u, e.to(), e.length(), false);
+            }
+            if (isRoof[u]) {
+                Coordinate p = nodes.get(u);
+                for (int v : roof) {
+                    if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v]) {
+                        relax(queue, u, v, p.distance3D(nodes.get(v)), true);
+                    }
+                }
+            }
+        }
+    }
+
+    private void relax(PriorityQueue<double[]> queue, int u, int v, double length, boolean straight) {
+        double d = dist[u] + length;
+        if (d < dist[v] - 1e-12) {
+            dist[v] = d;
+            assumed[v] = assumed[u] + (straight ? length : 0);
+            sinkOf[v] = sinkOf[u];
+            cameFrom[v] = straight ? group[u] : cameFrom[u];
+            queue.add(new double[] {d, v});
+        }
+    }
+
+    /** Connected groups of the drawn network (union-find over drawn edges). */
+    private int[] groups(int count) {
+        int[] parent = new int[count];
+        for (int i = 0; i < count; i++) {
+            parent[i] = i;
+        }
+        for (int u = 0; u < count; u++) {
+            for (Edge e : edges.get(u)) {
+                int a = find(parent, u), b = find(parent, e.to());
+                if (a != b) {
+                    parent[a] = b;
+                }
+            }
+        }
+        int[] out = new int[count];
+        for (int i = 0; i < count; i++) {
+            out[i] = find(parent, i);
+        }
+        return out;
+    }
+
+    private static int find(int[] parent, int i) {
+        while (parent[i] != i) {
+            parent[i] = parent[parent[i]];
+            i = parent[i];
+        }
+        return i;
+    }
+
+    /** Fraction along a→b (3D) of the point nearest p, in [0, 1]. */
+    static double parameter(Coordinate a, Coordinate b, Coordinate p) {
+        double vx = b.x - a.x, vy = b.y - a.y, vz = b.getZ() - a.getZ();
+        double len2 = vx * vx + vy * vy + vz * vz;
+        if (len2 == 0) {
+            return 0;
+        }
+        double t = ((p.x - a.x) * vx + (p.y - a.y) * vy + (p.getZ() - a.getZ()) * vz) / len2;
+        return Math.max(0, Math.min(1, t));
+    }
+}

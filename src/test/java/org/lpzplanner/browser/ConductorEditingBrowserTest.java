@@ -1,0 +1,160 @@
+package org.lpzplanner.browser;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.engine.model.Conductor;
+import org.lpzplanner.sites.AirTerminationService;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
+import org.openqa.selenium.By;
+import org.openqa.selenium.Keys;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.interactions.Actions;
+import org.openqa.selenium.support.ui.Select;
+import org.openqa.selenium.support.ui.WebDriverWait;
+import org.springframework.beans.factory.annotation.Autowired;
+
+/**
+ * In a real browser: select a roof conductor on the plan, drag one of its points, see the exposure
+ * change without a reload, undo it; nudge a point with the arrow keys, type exact values in the
+ * side form, and drag the whole conductor.
+ */
+class ConductorEditingBrowserTest extends BrowserTestBase {
+
+    @Autowired
+    SiteService sites;
+
+    @Autowired
+    AnalysisService analyses;
+
+    @Autowired
+    AirTerminationService parts;
+
+    private WebDriverWait waitUpTo(int seconds) {
+        return new WebDriverWait(browser, Duration.ofSeconds(seconds));
+    }
+
+    private String exposedRoof() {
+        return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
+    }
+
+    private List<Coordinate> path(long id) {
+        return sites.document(sites.get(id)).site().conductors().get(0).path();
+    }
+
+    /** Screen position (CSS pixels) of a point in local metres on the plan drawing. */
+    private double[] screen(double x, double y) {
+        @SuppressWarnings("unchecked")
+        List<Number> p = (List<Number>) browser.executeScript(
+                "const svg = document.querySelector('#plan-drawing svg'); const d = svg.dataset;"
+                        + "const p = svg.createSVGPoint();"
+                        + "p.x = Number(d.margin) + (arguments[0] - Number(d.originX)) * Number(d.scale);"
+                        + "p.y = Number(d.margin) + (Number(d.originY) - arguments[1]) * Number(d.scale);"
+                        + "const s = p.matrixTransform(svg.getScreenCTM()); return [s.x, s.y];", x, y);
+        return new double[] {p.get(0).doubleValue(), p.get(1).doubleValue()};
+    }
+
+    /** Drags from one plan point to another (local metres), in small steps as a hand would. */
+    private void drag(double fromX, double fromY, double toX, double toY) {
+        browser.executeScript("document.querySelector('#plan-drawing svg').scrollIntoView({block: 'center'});");
+        double[] a = screen(fromX, fromY);
+        double[] b = screen(toX, toY);
+        Actions actions = new Actions(browser).moveToLocation((int) Math.round(a[0]), (int) Math.round(a[1]))
+                .clickAndHold();
+        for (int step = 1; step <= 5; step++) {
+            actions.moveToLocation((int) Math.round(a[0] + (b[0] - a[0]) * step / 5),
+                    (int) Math.round(a[1] + (b[1] - a[1]) * step / 5));
+        }
+        actions.release().perform();
+    }
+
+    /** Waits until the page has applied the server's last answer. */
+    private void settled() {
+        waitUpTo(30).until(b -> b.findElement(By.id("plan-editor")).getAttribute("aria-busy") == null);
+    }
+
+    private WebElement vertex(int index) {
+        return browser.findElement(By.cssSelector("#plan-drawing circle.conductor-vertex[data-vertex='" + index + "']"));
+    }
+
+    @Test
+    void draggingAConductorPointChangesTheExposureAndUndoPutsItBack() throws Exception {
+        StoredSite site = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Reshaped shed", "II", null);
+        parts.addConductor(site.id(), sites.get(site.id()).version(), new AirTerminationService.ConductorInput(null,
+                "Middle line", List.of(new double[] {20, 20}, new double[] {60, 20}), "1"));
+        analyses.run(site.id(), null, null, null);
+        browser.get("http://localhost:" + port + "/sites/" + site.id());
+        waitUpTo(10).until(b -> b.findElement(By.id("plan-editor")).isDisplayed());
+        browser.executeScript("window.pageMark = 'same page';");
+        browser.executeScript("document.querySelector('#plan-drawing svg').scrollIntoView({block: 'center'});");
+        String before = exposedRoof();
+
+        // select the conductor with a click on it, then drag its east end 40 m south, off the roof
+        double[] middle = screen(40, 20);
+        new Actions(browser).moveToLocation((int) Math.round(middle[0]), (int) Math.round(middle[1])).click().perform();
+        waitUpTo(10).until(b -> b.findElements(By.cssSelector("#plan-drawing circle.conductor-vertex")).size() == 2);
+        assertThat(new Select(browser.findElement(By.cssSelector("#conductor-form select[name=conductor]")))
+                .getFirstSelectedOption().getAttribute("value")).isEqualTo("conductor-1");
+        drag(60, 20, 60, -20);
+        waitUpTo(30).until(b -> path(site.id()).get(1).y < 0 && !exposedRoof().equals(before));
+        assertThat(path(site.id()).get(1).y).isCloseTo(-20, within(1.0)); // a pixel is about 0.4 m here
+        assertThat(path(site.id()).get(0).y).isEqualTo(20.0); // the other point stays
+        // the conductor now crosses the roof on a slant and leaves it: it keeps the sphere off less
+        // of the roof than along the middle, so more roof is exposed (strip of half-width
+        // sqrt(2Rh - h^2) ~ 7.7 m for R = 30 m, h = 1 m, now partly over open ground)
+        assertThat(Double.parseDouble(exposedRoof())).isGreaterThan(Double.parseDouble(before));
+        Files.write(Files.createDirectories(Path.of("target", "screenshots")).resolve("conductor-point-dragged.png"),
+                browser.getScreenshotAs(OutputType.BYTES));
+
+        // undo puts the point back and the exposure with it
+        waitUpTo(10).until(b -> b.findElement(By.id("undo-change")).isEnabled());
+        browser.findElement(By.id("undo-change")).click();
+        waitUpTo(30).until(b -> path(site.id()).get(1).y == 20.0 && exposedRoof().equals(before));
+
+        // arrow keys move the focused point: three steps of 1 m north with Shift
+        waitUpTo(10).until(b -> b.findElements(By.cssSelector("#plan-drawing circle.conductor-vertex")).size() == 2);
+        vertex(0).click();
+        new Actions(browser).keyDown(Keys.SHIFT).sendKeys(Keys.ARROW_UP, Keys.ARROW_UP, Keys.ARROW_UP)
+                .keyUp(Keys.SHIFT).perform();
+        waitUpTo(30).until(b -> path(site.id()).get(0).y == 23.0);
+        assertThat(path(site.id()).get(0).x).isEqualTo(20.0);
+        settled();
+
+        // exact values in the side form: the second point to x 70, and the height above the roof
+        waitUpTo(10).until(b -> b.findElement(By.id("save-conductor")).isEnabled());
+        new Select(browser.findElement(By.cssSelector("#conductor-form select[name=vertex]"))).selectByValue("1");
+        WebElement x = browser.findElement(By.cssSelector("#conductor-form input[name=x]"));
+        x.clear();
+        x.sendKeys("70");
+        WebElement height = browser.findElement(By.cssSelector("#conductor-form input[name=height]"));
+        height.clear();
+        height.sendKeys("0.5");
+        browser.findElement(By.id("save-conductor")).click();
+        waitUpTo(30).until(b -> path(site.id()).get(1).x == 70.0);
+        settled();
+        Conductor typed = sites.document(sites.get(site.id())).site().conductors().get(0);
+        assertThat(typed.heightAboveRoof()).isEqualTo(0.5);
+        assertThat(typed.path().get(1).y).isEqualTo(20.0);
+
+        // the whole conductor dragged 10 m west: both points move by the same offset
+        waitUpTo(10).until(b -> b.findElements(By.cssSelector("#plan-drawing polyline.conductor-outline")).size() == 1);
+        drag(45, 21.5, 35, 21.5);
+        waitUpTo(30).until(b -> path(site.id()).get(1).x < 65);
+        assertThat(path(site.id()).get(0).x).isCloseTo(10, within(1.0));
+        assertThat(path(site.id()).get(1).x).isCloseTo(60, within(1.0));
+        assertThat(path(site.id()).get(1).x - path(site.id()).get(0).x).isCloseTo(50, within(0.02));
+        assertThat(browser.executeScript("return window.pageMark;")).isEqualTo("same page");
+        settled();
+        Files.write(Path.of("target", "screenshots", "conductor-moved.png"), browser.getScreenshotAs(OutputType.BYTES));
+    }
+}

@@ -1,0 +1,184 @@
+package org.lpzplanner.engine.design;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+import static org.lpzplanner.engine.design.DesignSites.rectangle;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.design.SeparationDistance.Material;
+import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
+import org.lpzplanner.engine.model.Conductor;
+import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.Rod;
+import org.lpzplanner.engine.model.RooftopObject;
+import org.lpzplanner.engine.model.RoofShape;
+import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.engine.model.Structure;
+
+/**
+ * Separation distances with l from the geometry, on a 20 × 10 m flat roof 6 m high (invented).
+ * Expected lengths are closed forms of the route; s = ki · (kc / km) · l [IEC 62305-3:2010 6.3] with
+ * ki from Table 10, kc simplified from Table 12 / Annex C, km from Table 11.
+ */
+class SeparationSurveyTest {
+
+    private static final Structure BLOCK = new Structure("S1", "Block", rectangle(0, 0, 20, 10), 6, new RoofShape.Flat(0));
+
+    private static final List<BondingRoutes.DownConductor> FOUR_CORNERS = List.of(
+            new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 4),
+            new BondingRoutes.DownConductor("S1", new Coordinate(20, 0), 4),
+            new BondingRoutes.DownConductor("S1", new Coordinate(20, 10), 4),
+            new BondingRoutes.DownConductor("S1", new Coordinate(0, 10), 4));
+
+    private static SeparationSurvey.Check one(Site site, List<BondingRoutes.DownConductor> downs,
+            SeparationSurvey.Installation installation, ProtectionLevel level, double bonding) {
+        List<SeparationSurvey.Check> checks = SeparationSurvey.survey(site, SiteSurfaceBuilder.build(site), level, downs,
+                installation == null ? List.of() : List.of(installation), bonding);
+        assertThat(checks).hasSize(1);
+        return checks.get(0);
+    }
+
+    private static Site site(List<RooftopObject> objects, List<Rod> rods, List<Conductor> conductors) {
+        return new Site("test", List.of(BLOCK), objects, rods, conductors);
+    }
+
+    private static SeparationSurvey.Installation pipe(double x, double y, double z, Material material) {
+        return new SeparationSurvey.Installation("Pipe", new Coordinate(x, y, z), material);
+    }
+
+    @Test
+    void aLoneRodIsAssumedConnectedStraightAcrossTheRoofAndTheCheckIsNotConfirmed() {
+        // rod 2 m at the roof centre (10, 5); pipe 2 m north of its tip. Route: tip to foot 2 m, straight
+        // to the nearest corner √(10² + 5²) = √125 m, down the 6 m wall: l = 8 + √125 = 19.1803 m
+        Site site = site(List.of(), List.of(new Rod("r1", null, 10, 5, 2)), List.of());
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(10, 7, 8, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.lpsPoint().getZ()).isCloseTo(8, within(1e-9));
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.ASSUMED_LINKS);
+        assertThat(c.route().length()).isCloseTo(8 + Math.sqrt(125), within(1e-9));
+        assertThat(c.route().assumedStraight()).isCloseTo(Math.sqrt(125), within(1e-9));
+        assertThat(c.route().downConductor()).isCloseTo(6, within(1e-9));
+        assertThat(c.route().downConductors()).isEqualTo(4);
+        // class III, four down-conductors, air: s = 0.04 · 0.44 / 1 · 19.1803 = 0.33757 m < 2 m actual
+        assertThat(c.result().required()).isCloseTo(0.04 * 0.44 * (8 + Math.sqrt(125)), within(1e-9));
+        assertThat(c.result().required()).isCloseTo(0.33757, within(1e-5));
+        assertThat(c.result().actual()).isCloseTo(2, within(1e-9));
+        // the straight link is the shortest route there can be: l and s are lower bounds, so the
+        // clearance is not confirmed until the route is drawn
+        assertThat(c.result().passes()).isTrue();
+        assertThat(c.passes()).isFalse();
+    }
+
+    @Test
+    void aPipeCloserThanSFails() {
+        // pipe 0.3 m from the rod at 7.5 m: l = 1.5 + √125 + 6 = 18.6803 m,
+        // s = 0.04 · 0.44 · 18.6803 = 0.32877 m > 0.3 m
+        Site site = site(List.of(), List.of(new Rod("r1", null, 10, 5, 2)), List.of());
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(10, 5.3, 7.5, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.route().length()).isCloseTo(7.5 + Math.sqrt(125), within(1e-9));
+        assertThat(c.result().required()).isCloseTo(0.32877, within(1e-5));
+        assertThat(c.result().actual()).isCloseTo(0.3, within(1e-9));
+        assertThat(c.passes()).isFalse();
+    }
+
+    @Test
+    void theRouteFollowsDrawnConductorsRatherThanTheStraightLine() {
+        // ring conductor 0.15 m above the roof edge, a spur from the rod (clamped to it 0.15 m above
+        // the roof) south to the edge; route from the tip: 1.85 m down the rod, 5 m south, 10 m along
+        // the edge to a corner, down from the conductor at 6.15 m: l = 1.85 + 5 + 10 + 6.15 = 23 m
+        // (straight to the corner would be 19.18 m; drawn conductors exist, so they are the route)
+        Conductor ring = new Conductor("ring", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(20, 0, 6.15),
+                new Coordinate(20, 10, 6.15), new Coordinate(0, 10, 6.15), new Coordinate(0, 0, 6.15)), null);
+        Conductor spur = new Conductor("spur", null, List.of(new Coordinate(10, 5, 6.15), new Coordinate(10, 0, 6.15)), null);
+        Site site = site(List.of(), List.of(new Rod("r1", null, 10, 5, 2)), List.of(ring, spur));
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(10, 7, 8, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.DRAWN);
+        assertThat(c.route().length()).isCloseTo(23.0, within(1e-9));
+        assertThat(c.route().downConductor()).isCloseTo(6.15, within(1e-9));
+        // s = 0.04 · 0.44 · 23 = 0.4048 m
+        assertThat(c.result().required()).isCloseTo(0.4048, within(1e-9));
+        assertThat(c.passes()).isTrue();
+
+        // with the bonding bar 2 m above ground the down-conductor part is 2 m shorter: 21 m
+        assertThat(one(site, FOUR_CORNERS, pipe(10, 7, 8, Material.AIR), ProtectionLevel.III, 2).route().length())
+                .isCloseTo(21.0, within(1e-9));
+    }
+
+    @Test
+    void twoDownConductorsThroughBrickPassAtOneAndAHalfMetresAndFailAtHalfAMetre() {
+        // edge conductor 0.15 m above the south edge, down-conductors at its ends; pipe in the wall
+        // beside its middle. l = 10 m along + 6.15 m down = 16.15 m; class III, two down-conductors,
+        // brick: s = 0.04 · 0.66 / 0.5 · 16.15 = 0.85272 m
+        Conductor edge = new Conductor("edge", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(20, 0, 6.15)), null);
+        Site site = site(List.of(), List.of(), List.of(edge));
+        List<BondingRoutes.DownConductor> two = List.of(new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 2),
+                new BondingRoutes.DownConductor("S1", new Coordinate(20, 0), 2));
+
+        SeparationSurvey.Check far = one(site, two, pipe(10, 1.5, 6.15, Material.CONCRETE_OR_BRICK), ProtectionLevel.III, 0);
+        assertThat(far.route().length()).isCloseTo(16.15, within(1e-9));
+        assertThat(far.route().downConductors()).isEqualTo(2);
+        assertThat(far.result().required()).isCloseTo(0.85272, within(1e-9));
+        assertThat(far.passes()).isTrue();
+
+        SeparationSurvey.Check near = one(site, two, pipe(10, 0.5, 6.15, Material.CONCRETE_OR_BRICK), ProtectionLevel.III, 0);
+        assertThat(near.result().actual()).isCloseTo(0.5, within(1e-9));
+        assertThat(near.passes()).isFalse();
+    }
+
+    @Test
+    void aMastIsItsOwnDownConductorWithTheWholeCurrent() {
+        // 10 m mast on the ground 10 m east of the block; pipe 1 m from its tip: l = 10 m down the mast,
+        // kc = 1 (one path): class I, air: s = 0.08 · 1 · 10 = 0.8 m < 1 m
+        Site site = site(List.of(), List.of(new Rod("m1", null, 30, 5, 10)), List.of());
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(31, 5, 10, Material.AIR), ProtectionLevel.I, 0);
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.GROUNDED_PART);
+        assertThat(c.route().length()).isCloseTo(10, within(1e-9));
+        assertThat(c.route().downConductors()).isEqualTo(1);
+        assertThat(c.result().required()).isCloseTo(0.8, within(1e-12));
+        assertThat(c.passes()).isTrue();
+    }
+
+    @Test
+    void aRooftopObjectBesideARodIsMeasuredLevelWithItsTopWhereTheRouteIsLongest() {
+        // box 1 × 1 m, top 7 m, its west face 2 m east of a 2 m rod at (10, 5): rod and face are equally
+        // near (2 m) from 6 to 7 m; the check takes the rod at 7 m, the longest route:
+        // l = 1 + √125 + 6 = 18.1803 m
+        RooftopObject box = new RooftopObject("o1", "Plant box", rectangle(12, 4.5, 13, 5.5), 7);
+        Site site = site(List.of(box), List.of(new Rod("r1", null, 10, 5, 2)), List.of());
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, null, ProtectionLevel.II, 0);
+        assertThat(c.kind()).isEqualTo("rooftop object");
+        assertThat(c.result().actual()).isCloseTo(2, within(1e-9));
+        assertThat(c.lpsPoint().getZ()).isCloseTo(7, within(1e-9));
+        assertThat(c.route().length()).isCloseTo(7 + Math.sqrt(125), within(1e-9));
+        // class II: s = 0.06 · 0.44 · 18.1803 = 0.47996 m
+        assertThat(c.result().required()).isCloseTo(0.06 * 0.44 * (7 + Math.sqrt(125)), within(1e-9));
+        // clears the lower-bound s, but the route is assumed: not a pass
+        assertThat(c.result().passes()).isTrue();
+        assertThat(c.passes()).isFalse();
+    }
+
+    @Test
+    void anUnconnectedRodIsNotABridgeAroundADrawnConductor() {
+        // a conductor from the corner (0, 0) round the north side to a 2 m rod at (19, 1), clamped to it
+        // 0.15 m above the roof; the only down-conductor at (0, 0). A lone 1 m rod at (10, 1) lies
+        // between: using it to jump back to the corner would take two assumed links. Route from the
+        // rod's tip: 1.85 m down to the clamp, √82 m to (20, 10), 20 m, 10 m, 6.15 m down:
+        // l = 1.85 + √82 + 36.15 m
+        Conductor round = new Conductor("round", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(0, 10, 6.15),
+                new Coordinate(20, 10, 6.15), new Coordinate(19, 1, 6.15)), null);
+        Site site = site(List.of(), List.of(new Rod("r1", null, 19, 1, 2), new Rod("r2", null, 10, 1, 1)), List.of(round));
+        List<BondingRoutes.DownConductor> one = List.of(new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 1));
+        SeparationSurvey.Check c = one(site, one, pipe(17, 1, 8, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.partId()).isEqualTo("r1");
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.DRAWN);
+        assertThat(c.route().length()).isCloseTo(1.85 + Math.sqrt(82) + 36.15, within(1e-9));
+        // class III, one down-conductor: s = 0.04 · 1 · 47.055 = 1.882 m < 2 m actual
+        assertThat(c.result().required()).isCloseTo(0.04 * (1.85 + Math.sqrt(82) + 36.15), within(1e-9));
+        assertThat(c.passes()).isTrue();
+    }
+}
