@@ -11,10 +11,19 @@ final class PlaneMapping {
 
     private PlaneMapping() {}
 
-    /** The projection centred on the lon/lat bounding box of all the features. */
+    /**
+     * The projection centred on the lon/lat bounding box of the structures (of all the features
+     * when there are none). Parts are left out on purpose: adding, moving or removing a rod,
+     * mast or conductor must not move the local origin, or every position held in local metres
+     * (the plan in the browser, undo steps, stored results) would shift with it.
+     */
     static LocalProjection centredOn(List<RawFeature> features) {
         Envelope bounds = new Envelope();
-        features.forEach(f -> bounds.expandToInclude(f.geometry().getEnvelopeInternal()));
+        features.stream().filter(f -> f.kind() == FeatureKind.STRUCTURE)
+                .forEach(f -> bounds.expandToInclude(f.geometry().getEnvelopeInternal()));
+        if (bounds.isNull()) {
+            features.forEach(f -> bounds.expandToInclude(f.geometry().getEnvelopeInternal()));
+        }
         return LocalProjection.centredOn(bounds);
     }
 

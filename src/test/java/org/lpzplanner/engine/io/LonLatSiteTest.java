@@ -5,6 +5,7 @@ import static org.lpzplanner.engine.io.SiteJson.SOURCE;
 import static org.lpzplanner.engine.io.SiteJson.feature;
 import static org.lpzplanner.engine.io.SiteJson.local;
 import static org.lpzplanner.engine.io.SiteJson.lonLat;
+import static org.lpzplanner.engine.io.SiteJson.point;
 import static org.lpzplanner.engine.io.SiteJson.polygon;
 import static org.lpzplanner.engine.io.SiteJson.rectangle;
 import static org.lpzplanner.engine.io.SiteJson.ring;
@@ -67,5 +68,25 @@ class LonLatSiteTest {
         assertThat(document.projection().centreLon()).isCloseTo(10.001, Offset.offset(1e-12));
         assertThat(document.projection().centreLat()).isCloseTo(lat + 0.0005, Offset.offset(1e-12));
         assertThat(document.site().structures().get(0).footprint().getCentroid().getX()).isCloseTo(0, Offset.offset(0.01));
+    }
+
+    @ParameterizedTest(name = "at latitude {0}")
+    @ValueSource(doubles = {0.2, 50.0})
+    void addingAPartFarFromTheStructuresDoesNotMoveTheLocalOrigin(double lat) {
+        // positions held in local metres (the plan, undo steps) must not shift when a mast or rod
+        // is placed outside the structures' extent: the origin follows the structures alone
+        String barn = feature("'kind':'structure','height':5",
+                polygon(ring(10.0, lat, 10.002, lat, 10.002, lat + 0.001, 10.0, lat + 0.001, 10.0, lat)));
+        String mast = feature("'kind':'rod','height':20", point(10.004, lat + 0.003));
+        SiteDocument without = SiteReader.readGeoJson(lonLat(barn), SOURCE);
+        SiteDocument with = SiteReader.readGeoJson(lonLat(barn, mast), SOURCE);
+
+        assertThat(with.projection().centreLon()).isEqualTo(without.projection().centreLon());
+        assertThat(with.projection().centreLat()).isEqualTo(without.projection().centreLat());
+        Coordinate[] a = without.site().structures().get(0).footprint().getCoordinates();
+        Coordinate[] b = with.site().structures().get(0).footprint().getCoordinates();
+        for (int i = 0; i < a.length; i++) {
+            assertThat(b[i].distance(a[i])).as("corner %d", i).isLessThan(1e-9);
+        }
     }
 }
