@@ -169,7 +169,6 @@ public final class BallErosion {
         private static final double NEAR = 1e-6;
         private final int n;
         private final double[] w;
-        private final int[] runOf;
         private final double[] bowlPos;
         private final double[] bowlVal;
         private int bowls;
@@ -179,7 +178,6 @@ public final class BallErosion {
         RowEroder(int n) {
             this.n = n;
             this.w = new double[n];
-            this.runOf = new int[n];
             this.bowlPos = new double[n];
             this.bowlVal = new double[n];
             this.stack = new int[n];
@@ -188,18 +186,28 @@ public final class BallErosion {
 
         /** Loads row values divided by h, and keeps only the end points of runs of equal values. */
         void load(double[] v, int offset, double h) {
+            load(v, offset, h, null, 0);
+        }
+
+        /**
+         * Loads row values divided by h, only where {@code sources} is set (every position when it is
+         * null; the others take no part), and keeps only the end points of runs of equal values.
+         */
+        void load(double[] v, int offset, double h, boolean[] sources, int sourceOffset) {
             bowls = 0;
-            int start = 0;
             for (int i = 0; i < n; i++) {
-                w[i] = v[offset + i] / h;
+                w[i] = sources == null || sources[sourceOffset + i] ? v[offset + i] / h : Double.POSITIVE_INFINITY;
             }
+            int start = 0;
             for (int i = 1; i <= n; i++) {
                 if (i == n || w[i] != w[start]) {
-                    bowlPos[bowls] = start;
-                    bowlVal[bowls++] = w[start];
-                    if (i - 1 > start) {
-                        bowlPos[bowls] = i - 1;
+                    if (w[start] != Double.POSITIVE_INFINITY) {
+                        bowlPos[bowls] = start;
                         bowlVal[bowls++] = w[start];
+                        if (i - 1 > start) {
+                            bowlPos[bowls] = i - 1;
+                            bowlVal[bowls++] = w[start];
+                        }
                     }
                     start = i;
                 }
@@ -211,14 +219,8 @@ public final class BallErosion {
          * that range can reach it.
          */
         void erode(double r, double[] out, int lo, int hi) {
-            int first = 0, last = bowls - 1;
             double reachLo = lo - r, reachHi = hi + r;
-            while (first < bowls && bowlPos[first] < reachLo) {
-                first++;
-            }
-            while (last >= first && bowlPos[last] > reachHi) {
-                last--;
-            }
+            int first = firstAtOrAbove(reachLo), last = firstAtOrAbove(Math.nextUp(reachHi)) - 1;
             int top = -1;
             for (int q = first; q <= last; q++) {
                 if (top < 0) {
@@ -263,6 +265,20 @@ public final class BallErosion {
                 double self = w[x] - r;
                 out[x] = self < best ? self : best;
             }
+        }
+
+        /** Index of the first bowl at or right of {@code x} (bowls are sorted by position). */
+        private int firstAtOrAbove(double x) {
+            int a = 0, b = bowls;
+            while (a < b) {
+                int m = (a + b) >>> 1;
+                if (bowlPos[m] < x) {
+                    a = m + 1;
+                } else {
+                    b = m;
+                }
+            }
+            return a;
         }
 
         private double bowl(int b, int x, double r2) {

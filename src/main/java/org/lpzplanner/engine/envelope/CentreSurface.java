@@ -16,12 +16,15 @@ public final class CentreSurface {
     private final double radius;
     private final double[] nodeHeight;
     private final double[] cellLower;
+    /** Per vertex of the lattice, the least lower bound of the cells around it (see {@link #vertexLowers}). */
+    private final double[] vertexLower;
 
-    private CentreSurface(Grid grid, double radius, double[] nodeHeight, double[] cellLower) {
+    private CentreSurface(Grid grid, double radius, double[] nodeHeight, double[] cellLower, double[] vertexLower) {
         this.grid = grid;
         this.radius = radius;
         this.nodeHeight = nodeHeight;
         this.cellLower = cellLower;
+        this.vertexLower = vertexLower;
     }
 
     public static CentreSurface compute(Grid grid, List<Support> supports, double radius) {
@@ -31,7 +34,9 @@ public final class CentreSurface {
         Arrays.fill(node, radius);
         Arrays.fill(low, radius);
         rasterize(grid, supports, radius, node, low, 0, 0, nx - 1, ny - 1);
-        return new CentreSurface(grid, radius, node, low);
+        double[] vertices = new double[(nx + 1) * (ny + 1)];
+        fillVertexLowers(grid, radius, low, vertices, 0, 0, nx, ny);
+        return new CentreSurface(grid, radius, node, low, vertices);
     }
 
     /**
@@ -52,7 +57,11 @@ public final class CentreSurface {
         }
         rasterize(grid, supports, radius, node, low, Math.max(0, i0), Math.max(0, j0),
                 Math.min(nx - 1, i1), Math.min(grid.ny() - 1, j1));
-        return new CentreSurface(grid, radius, node, low);
+        double[] vertices = vertexLower.clone();
+        // only the corners of recomputed cells can change
+        fillVertexLowers(grid, radius, low, vertices, Math.max(0, i0), Math.max(0, j0), Math.min(nx, i1 + 1),
+                Math.min(grid.ny(), j1 + 1));
+        return new CentreSurface(grid, radius, node, low, vertices);
     }
 
     /** Raises node and cell values in the window to every support's exact value and lower bound. */
@@ -103,12 +112,20 @@ public final class CentreSurface {
 
     double[] cellLowers() { return cellLower; }
 
-    /** Per vertex, the least lower bound of the (up to four) cells around it; outside cells are open ground. */
+    /**
+     * Per vertex, the least lower bound of the (up to four) cells around it; outside cells are open
+     * ground. Shared, not a copy: do not modify.
+     */
     double[] vertexLowers() {
+        return vertexLower;
+    }
+
+    /** Fills the vertex values of vertices [vi0, vi1] × [vj0, vj1]. */
+    private static void fillVertexLowers(Grid grid, double radius, double[] cellLower, double[] v, int vi0, int vj0,
+            int vi1, int vj1) {
         int nx = grid.nx(), ny = grid.ny();
-        double[] v = new double[(nx + 1) * (ny + 1)];
-        for (int j = 0; j <= ny; j++) {
-            for (int i = 0; i <= nx; i++) {
+        for (int j = vj0; j <= vj1; j++) {
+            for (int i = vi0; i <= vi1; i++) {
                 double m = Double.POSITIVE_INFINITY;
                 for (int dj = -1; dj <= 0; dj++) {
                     for (int di = -1; di <= 0; di++) {
@@ -120,6 +137,5 @@ public final class CentreSurface {
                 v[j * (nx + 1) + i] = m;
             }
         }
-        return v;
     }
 }

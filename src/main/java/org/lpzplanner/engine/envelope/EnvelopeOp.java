@@ -45,8 +45,9 @@ public final class EnvelopeOp {
     /**
      * The envelope after a change of air-termination (or anything else) confined to the plan box
      * [minX, maxX] × [minY, maxY] (cover both the old and the new place of what moved). D changes
-     * only within R of the box and E only within 2R, so only those windows are recomputed; the
-     * result equals {@link #compute} on the new surface. Falls back to a full computation when the
+     * only within R of the box, so only that window of the centre surface is recomputed, and the
+     * erosion only where the changed values can matter ({@link ErosionUpdate}); the result equals
+     * {@link #compute} on the new surface. Falls back to a full computation when the
      * new site reaches beyond the previous grid.
      */
     public static EnvelopeField update(EnvelopeField previous, SiteSurface surface, double minX, double minY,
@@ -63,23 +64,9 @@ public final class EnvelopeOp {
         int ci0 = grid.column(minX) - reach, ci1 = grid.column(maxX) + reach;
         int cj0 = grid.row(minY) - reach, cj1 = grid.row(maxY) + reach;
         CentreSurface centres = previous.centres().recompute(supports, ci0, cj0, ci1, cj1);
-        double[] vertexValues = centres.vertexLowers();
-        int vx = grid.nx() + 1, vy = grid.ny() + 1;
-        // vertices whose erosion may change, and the sources they can see
-        int ei0 = Math.max(0, ci0 - reach), ei1 = Math.min(vx - 1, ci1 + 1 + reach);
-        int ej0 = Math.max(0, cj0 - reach), ej1 = Math.min(vy - 1, cj1 + 1 + reach);
-        int si0 = Math.max(0, ei0 - reach), si1 = Math.min(vx - 1, ei1 + reach);
-        int sj0 = Math.max(0, ej0 - reach), sj1 = Math.min(vy - 1, ej1 + reach);
-        int sw = si1 - si0 + 1, sh = sj1 - sj0 + 1;
-        double[] window = new double[sw * sh];
-        for (int j = 0; j < sh; j++) {
-            System.arraycopy(vertexValues, (sj0 + j) * vx + si0, window, j * sw, sw);
-        }
-        double[] eroded = BallErosion.erode(window, sw, sh, h, radius);
-        double[] vertexLower = previous.vertexLowers().clone();
-        for (int j = ej0; j <= ej1; j++) {
-            System.arraycopy(eroded, (j - sj0) * sw + (ei0 - si0), vertexLower, j * vx + ei0, ei1 - ei0 + 1);
-        }
+        // vertex values change only at the corners of recomputed cells
+        double[] vertexLower = ErosionUpdate.erode(previous.centres().vertexLowers(), centres.vertexLowers(),
+                previous.vertexLowers(), grid.nx() + 1, grid.ny() + 1, h, radius, ci0, cj0, ci1 + 1, cj1 + 1);
         SupportIndex index = new SupportIndex(supports, grid, Math.max(4 * h, radius / 4));
         return new EnvelopeField(centres, new EnvelopeRefiner(centres, index), vertexLower);
     }

@@ -79,6 +79,7 @@ public final class ExposureAnalysis {
         double h = options.resolution() != null ? options.resolution() : ResolutionChoice.choose(surface, radius);
         AnalysisState base = reusable(previous, site, options, surface, radius, h);
         ChangeWindow window = ChangeWindow.ALL;
+        ChangeBound changeBound = null;
         EnvelopeField field;
         if (base == null) {
             field = EnvelopeOp.compute(surface, radius, h);
@@ -90,18 +91,22 @@ public final class ExposureAnalysis {
             } else {
                 window = ChangeWindow.around(box, radius, h);
                 field = EnvelopeOp.update(base.field, surface, box[0], box[1], box[2], box[3]);
+                changeBound = ChangeBound.of(base.field, field, box);
             }
         }
         long envelopeDone = System.nanoTime();
         stages.put("envelope", (envelopeDone - start) / 1_000_000);
         ExposureContext ctx = new ExposureContext(surface, field, options.tolerance());
         ChangeWindow w = window;
+        ChangeBound cb = changeBound;
 
         List<List<EdgeExposure>> edgesByEdge = timed(stages, 1, progress, () -> IntStream.range(0, surface.edges().size())
                 .parallel().mapToObj(k -> {
                     RoofEdge e = surface.edges().get(k);
-                    if (base != null && !w.intersects(Math.min(e.p0().x, e.p1().x), Math.min(e.p0().y, e.p1().y),
-                            Math.max(e.p0().x, e.p1().x), Math.max(e.p0().y, e.p1().y))) {
+                    double x0 = Math.min(e.p0().x, e.p1().x), y0 = Math.min(e.p0().y, e.p1().y);
+                    double x1 = Math.max(e.p0().x, e.p1().x), y1 = Math.max(e.p0().y, e.p1().y);
+                    if (base != null && (!w.intersects(x0, y0, x1, y1) || (cb != null && cb.cannotReach(x0, y0, x1, y1,
+                            Math.max(e.p0().getZ(), e.p1().getZ()) + ExposureContext.MARGIN)))) {
                         return base.edgesByEdge.get(k);
                     }
                     progress.checkCancelled();
@@ -116,7 +121,7 @@ public final class ExposureAnalysis {
                     Set<Integer> cells = edgeCells.getOrDefault(owner, Set.of());
                     if (base == null) {
                         progress.checkCancelled();
-                        return RoofExposureOp.face(ctx, k, cells, null, null, w);
+                        return RoofExposureOp.face(ctx, k, cells, null, null, w, null);
                     }
                     Set<Integer> before = base.exposedEdgeCells.getOrDefault(owner, Set.of());
                     var poly = surface.facePolygon(k);
@@ -125,7 +130,8 @@ public final class ExposureAnalysis {
                         return new RoofExposureOp.FaceResult(base.faceCells[k], base.roofs[k]);
                     }
                     progress.checkCancelled();
-                    return RoofExposureOp.face(ctx, k, cells, base.faceCells[k], before, w);
+                    return RoofExposureOp.face(ctx, k, cells,
+                            new RoofExposureOp.FaceResult(base.faceCells[k], base.roofs[k]), before, w, cb);
                 }).toList());
         RoofExposureOp.FaceCells[] faceCells = faces.stream().map(RoofExposureOp.FaceResult::cells)
                 .toArray(RoofExposureOp.FaceCells[]::new);
@@ -135,7 +141,9 @@ public final class ExposureAnalysis {
         CornerExposure[] cornerByIndex = timed(stages, 3, progress, () -> IntStream.range(0, cornerList.size())
                 .parallel().mapToObj(k -> {
                     SiteSurface.Corner c = cornerList.get(k);
-                    if (base != null && !w.intersects(c.point().x, c.point().y, c.point().x, c.point().y)) {
+                    double x = c.point().x, y = c.point().y;
+                    if (base != null && (!w.intersects(x, y, x, y)
+                            || (cb != null && cb.cannotReach(x, y, x, y, c.point().getZ() + ExposureContext.MARGIN)))) {
                         return base.cornerByIndex[k];
                     }
                     progress.checkCancelled();

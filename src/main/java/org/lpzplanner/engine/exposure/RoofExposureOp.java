@@ -1,6 +1,7 @@
 package org.lpzplanner.engine.exposure;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Set;
 import org.locationtech.jts.geom.Geometry;
@@ -59,12 +60,15 @@ final class RoofExposureOp {
     }
 
     /**
-     * Decides one face. With {@code previous} (the same face's decisions in the analysis before an
-     * edit), only the cells the change window touches, and the cells whose exposed-edge marks
-     * changed, are decided again; the rest are taken over.
+     * Decides one face. With {@code previous} (the same face's decisions and exposure in the analysis
+     * before an edit), only the cells the change window touches where the changed columns may bring
+     * the envelope down to the cell's threshold ({@link ChangeBound}), and the cells whose
+     * exposed-edge marks changed, are decided again; the rest are taken over, and so is the
+     * exposure when no decision changed.
      */
-    static FaceResult face(ExposureContext ctx, int k, Set<Integer> edgeCells, FaceCells previous,
-            Set<Integer> previousEdgeCells, ChangeWindow window) {
+    static FaceResult face(ExposureContext ctx, int k, Set<Integer> edgeCells, FaceResult previousResult,
+            Set<Integer> previousEdgeCells, ChangeWindow window, ChangeBound changeBound) {
+        FaceCells previous = previousResult == null ? null : previousResult.cells();
         RoofFace face = ctx.surface.faces().get(k);
         PlanPolygon poly = ctx.surface.facePolygon(k);
         Plane plane = face.plane();
@@ -84,21 +88,28 @@ final class RoofExposureOp {
         int w = i1 - i0 + 1;
         byte[] state = new byte[w * (j1 - j0 + 1)];
         double[] clearance = new double[state.length];
-        java.util.Arrays.fill(clearance, Double.NaN);
+        Arrays.fill(clearance, Double.NaN);
         FaceCells cells = new FaceCells(i0, j0, i1, j1, state, clearance, visible, partlyCovered);
         for (int j = j0; j <= j1; j++) {
             for (int i = i0; i <= i1; i++) {
                 int c = cells.index(i, j);
                 double x = g.nodeX(i), y = g.nodeY(j);
                 int gridIndex = j * g.nx() + i;
-                if (previous != null && !window.touchesCell(x, y, half)
-                        && edgeCells.contains(gridIndex) == previousEdgeCells.contains(gridIndex)) {
+                if (previous != null && edgeCells.contains(gridIndex) == previousEdgeCells.contains(gridIndex)
+                        && (!window.touchesCell(x, y, half) || (changeBound != null && changeBound.cannotReach(
+                                x - half, y - half, x + half, y + half, roofMax(plane, x, y, half) + ExposureContext.MARGIN)))) {
+                    // the edit cannot bring the envelope down to this cell's decision threshold
                     state[c] = previous.state()[c];
-                    clearance[c] = previous.clearance()[c];
+                    double before = previous.clearance()[c];
+                    // a protected whole cell keeps its clearance from the grid bound, which may have moved
+                    clearance[c] = Double.isNaN(before) ? before : ctx.field.cellLower(i, j) - roofMax(plane, x, y, half);
                     continue;
                 }
                 decideCell(ctx, poly, plane, edgeCells, cells, i, j);
             }
+        }
+        if (previous != null && Arrays.equals(state, previous.state()) && Arrays.equals(clearance, previous.clearance())) {
+            return previousResult; // the exposure is a function of the decisions alone
         }
         return new FaceResult(cells, exposure(ctx, k, cells));
     }
