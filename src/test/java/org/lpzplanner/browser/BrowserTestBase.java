@@ -1,5 +1,6 @@
 package org.lpzplanner.browser;
 
+import java.time.Duration;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.lpzplanner.accounts.SignedIn;
@@ -7,6 +8,7 @@ import org.lpzplanner.accounts.SignedInAccount;
 import org.lpzplanner.accounts.TestAccounts;
 import org.openqa.selenium.By;
 import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.support.ui.WebDriverWait;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
 import org.springframework.security.test.context.TestSecurityContextHolder;
@@ -46,6 +48,15 @@ abstract class BrowserTestBase {
     /** See {@link BrowserSupport#clickAndAwaitNewPage}. */
     void clickAndAwaitNewPage(By target) {
         BrowserSupport.clickAndAwaitNewPage(browser, target);
+    }
+
+    WebDriverWait waitUpTo(int seconds) {
+        return new WebDriverWait(browser, Duration.ofSeconds(seconds));
+    }
+
+    /** The exposed roof area as the plan page's summary shows it. */
+    String exposedRoof() {
+        return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
     }
 
     /** See {@link BrowserSupport#textOf}. */

@@ -31,14 +31,6 @@ class ConductorDrawingBrowserTest extends BrowserTestBase {
     @Autowired
     AnalysisService analyses;
 
-    private WebDriverWait waitUpTo(int seconds) {
-        return new WebDriverWait(browser, Duration.ofSeconds(seconds));
-    }
-
-    private String exposedRoof() {
-        return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
-    }
-
     private List<Conductor> stored(long id) {
         return sites.document(sites.get(id)).site().conductors();
     }

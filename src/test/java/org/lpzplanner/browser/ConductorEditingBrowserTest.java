@@ -39,14 +39,6 @@ class ConductorEditingBrowserTest extends BrowserTestBase {
     @Autowired
     AirTerminationService parts;
 
-    private WebDriverWait waitUpTo(int seconds) {
-        return new WebDriverWait(browser, Duration.ofSeconds(seconds));
-    }
-
-    private String exposedRoof() {
-        return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
-    }
-
     private List<Coordinate> path(long id) {
         return sites.document(sites.get(id)).site().conductors().get(0).path();
     }

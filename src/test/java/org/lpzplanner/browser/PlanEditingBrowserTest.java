@@ -32,16 +32,8 @@ class PlanEditingBrowserTest extends BrowserTestBase {
     @Autowired
     AnalysisService analyses;
 
-    private String exposedRoof() {
-        return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
-    }
-
     private List<Rod> storedRods(long id) {
         return sites.document(sites.get(id)).site().rods();
-    }
-
-    private WebDriverWait waitUpTo(int seconds) {
-        return new WebDriverWait(browser, Duration.ofSeconds(seconds));
     }
 
     /** Viewport position of a point given in the site's local metres, from the drawing's own frame. */

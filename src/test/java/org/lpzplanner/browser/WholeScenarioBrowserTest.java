@@ -31,14 +31,6 @@ class WholeScenarioBrowserTest extends BrowserTestBase {
     @Autowired
     SiteService sites;
 
-    private WebDriverWait waitUpTo(int seconds) {
-        return new WebDriverWait(browser, Duration.ofSeconds(seconds));
-    }
-
-    private String exposedRoof() {
-        return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
-    }
-
     private List<Rod> storedRods(long id) {
         return sites.document(sites.get(id)).site().rods();
     }
