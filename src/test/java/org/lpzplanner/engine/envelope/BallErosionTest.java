@@ -52,24 +52,33 @@ class BallErosionTest {
     private static void assertMatchesDefinition(double[] v, int nx, int ny, double radius) {
         double h = 0.5;
         double[] fast = BallErosion.erode(v, nx, ny, h, radius);
-        int reach = (int) Math.floor(radius / h);
         double worst = 0;
         for (int j = 0; j < ny; j++) {
             for (int i = 0; i < nx; i++) {
-                double best = Double.POSITIVE_INFINITY;
-                for (int dj = -reach; dj <= reach; dj++) {
-                    for (int di = -reach; di <= reach; di++) {
-                        int si = i + di, sj = j + dj;
-                        double d2 = (di * di + dj * dj) * h * h;
-                        if (si >= 0 && sj >= 0 && si < nx && sj < ny && d2 <= radius * radius) {
-                            best = Math.min(best, v[sj * nx + si] - Math.sqrt(radius * radius - d2));
-                        }
-                    }
-                }
+                double best = bruteErosionAt(v, nx, ny, h, radius, i, j);
                 worst = Math.max(worst, Math.abs(fast[j * nx + i] - best));
             }
         }
         // rounding only: the closed-form crossings of the circles are exact up to floating point
         assertThat(worst).isLessThan(1e-9);
+    }
+
+    /**
+     * The erosion at vertex (i, j) by brute force: the least v(s) − √(R² − |s − p|²) over every
+     * vertex s within R, the definition itself.
+     */
+    static double bruteErosionAt(double[] v, int nx, int ny, double h, double radius, int i, int j) {
+        int reach = (int) Math.floor(radius / h);
+        double best = Double.POSITIVE_INFINITY;
+        for (int dj = -reach; dj <= reach; dj++) {
+            for (int di = -reach; di <= reach; di++) {
+                int si = i + di, sj = j + dj;
+                double d2 = (di * di + dj * dj) * h * h;
+                if (si >= 0 && sj >= 0 && si < nx && sj < ny && d2 <= radius * radius) {
+                    best = Math.min(best, v[sj * nx + si] - Math.sqrt(radius * radius - d2));
+                }
+            }
+        }
+        return best;
     }
 }

@@ -77,16 +77,7 @@ class ErosionUpdateTest {
         double worst = 0;
         for (int j = Math.max(0, j0 - reach); j <= Math.min(ny - 1, j1 + reach); j += 3) {
             for (int i = Math.max(0, i0 - reach); i <= Math.min(nx - 1, i1 + reach); i += 3) {
-                double best = Double.POSITIVE_INFINITY;
-                for (int dj = -reach; dj <= reach; dj++) {
-                    for (int di = -reach; di <= reach; di++) {
-                        int si = i + di, sj = j + dj;
-                        double d2 = (di * di + dj * dj) * h * h;
-                        if (si >= 0 && sj >= 0 && si < nx && sj < ny && d2 <= radius * radius) {
-                            best = Math.min(best, v[sj * nx + si] - Math.sqrt(radius * radius - d2));
-                        }
-                    }
-                }
+                double best = BallErosionTest.bruteErosionAt(v, nx, ny, h, radius, i, j);
                 worst = Math.max(worst, Math.abs(out[j * nx + i] - best));
             }
         }
