@@ -49,12 +49,39 @@ final class BrowserSupport {
      * page, so the next lookup reads the new page and not an element of the one being replaced.
      */
     static void clickAndAwaitNewPage(ChromeDriver browser, By target) {
-        WebElement oldPage = browser.findElement(By.tagName("html"));
-        browser.findElement(target).click();
+        WebElement oldPage = null;
+        // the page may still be settling from the step before (the element found then belongs to a
+        // document already gone, and the click does not happen): look it up again and retry
+        for (int attempt = 1; oldPage == null; attempt++) {
+            try {
+                WebElement html = browser.findElement(By.tagName("html"));
+                browser.findElement(target).click();
+                oldPage = html;
+            } catch (org.openqa.selenium.StaleElementReferenceException e) {
+                retryOrThrow(attempt, e);
+            } catch (org.openqa.selenium.WebDriverException e) {
+                if (e.getMessage() == null || !e.getMessage().contains("does not belong to the document")) {
+                    throw e;
+                }
+                retryOrThrow(attempt, e);
+            }
+        }
         WebDriverWait wait = new WebDriverWait(browser, Duration.ofSeconds(30));
         wait.until(ExpectedConditions.stalenessOf(oldPage));
         wait.until(b -> "complete".equals(((org.openqa.selenium.JavascriptExecutor) b)
                 .executeScript("return document.readyState")));
+    }
+
+    private static void retryOrThrow(int attempt, RuntimeException e) {
+        if (attempt >= 5) {
+            throw e;
+        }
+        try {
+            Thread.sleep(200);
+        } catch (InterruptedException interrupted) {
+            Thread.currentThread().interrupt();
+            throw e;
+        }
     }
 
     /**
