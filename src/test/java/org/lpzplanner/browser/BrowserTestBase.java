@@ -1,6 +1,7 @@
 package org.lpzplanner.browser;
 
 import java.time.Duration;
+import java.util.List;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.lpzplanner.accounts.SignedIn;
@@ -57,6 +58,25 @@ abstract class BrowserTestBase {
     /** The exposed roof area as the plan page's summary shows it. */
     String exposedRoof() {
         return browser.findElement(By.cssSelector("#plan-summary td[data-summary=exposedRoofArea]")).getText();
+    }
+
+    /** Screen position (CSS pixels) of a point in local metres, from the plan drawing's own frame. */
+    double[] screenPoint(double x, double y) {
+        @SuppressWarnings("unchecked")
+        List<Number> p = (List<Number>) browser.executeScript(
+                "const svg = document.querySelector('#plan-drawing svg'); const d = svg.dataset;"
+                        + "const p = svg.createSVGPoint();"
+                        + "p.x = Number(d.margin) + (arguments[0] - Number(d.originX)) * Number(d.scale);"
+                        + "p.y = Number(d.margin) + (Number(d.originY) - arguments[1]) * Number(d.scale);"
+                        + "const s = p.matrixTransform(svg.getScreenCTM()); return [s.x, s.y];", x, y);
+        return new double[] {p.get(0).doubleValue(), p.get(1).doubleValue()};
+    }
+
+    /** The plan drawing scrolled to the middle of the window, and the point's position there, in whole pixels. */
+    long[] viewportPoint(double x, double y) {
+        browser.executeScript("document.querySelector('#plan-drawing svg').scrollIntoView({block: 'center'});");
+        double[] p = screenPoint(x, y);
+        return new long[] {Math.round(p[0]), Math.round(p[1])};
     }
 
     /** See {@link BrowserSupport#textOf}. */

@@ -34,16 +34,8 @@ class ConductorDrawingBrowserTest extends BrowserTestBase {
     }
 
     private void clickAt(double x, double y) {
-        browser.executeScript("document.querySelector('#plan-drawing svg').scrollIntoView({block: 'center'});");
-        @SuppressWarnings("unchecked")
-        List<Number> p = (List<Number>) browser.executeScript(
-                "const svg = document.querySelector('#plan-drawing svg'); const d = svg.dataset;"
-                        + "const p = svg.createSVGPoint();"
-                        + "p.x = Number(d.margin) + (arguments[0] - Number(d.originX)) * Number(d.scale);"
-                        + "p.y = Number(d.margin) + (Number(d.originY) - arguments[1]) * Number(d.scale);"
-                        + "const s = p.matrixTransform(svg.getScreenCTM()); return [s.x, s.y];", x, y);
-        new Actions(browser).moveToLocation((int) Math.round(p.get(0).doubleValue()),
-                (int) Math.round(p.get(1).doubleValue())).click().perform();
+        long[] p = viewportPoint(x, y);
+        new Actions(browser).moveToLocation((int) p[0], (int) p[1]).click().perform();
     }
 
     @Test

@@ -41,23 +41,11 @@ class ConductorEditingBrowserTest extends BrowserTestBase {
         return sites.document(sites.get(id)).site().conductors().get(0).path();
     }
 
-    /** Screen position (CSS pixels) of a point in local metres on the plan drawing. */
-    private double[] screen(double x, double y) {
-        @SuppressWarnings("unchecked")
-        List<Number> p = (List<Number>) browser.executeScript(
-                "const svg = document.querySelector('#plan-drawing svg'); const d = svg.dataset;"
-                        + "const p = svg.createSVGPoint();"
-                        + "p.x = Number(d.margin) + (arguments[0] - Number(d.originX)) * Number(d.scale);"
-                        + "p.y = Number(d.margin) + (Number(d.originY) - arguments[1]) * Number(d.scale);"
-                        + "const s = p.matrixTransform(svg.getScreenCTM()); return [s.x, s.y];", x, y);
-        return new double[] {p.get(0).doubleValue(), p.get(1).doubleValue()};
-    }
-
     /** Drags from one plan point to another (local metres), in small steps as a hand would. */
     private void drag(double fromX, double fromY, double toX, double toY) {
         browser.executeScript("document.querySelector('#plan-drawing svg').scrollIntoView({block: 'center'});");
-        double[] a = screen(fromX, fromY);
-        double[] b = screen(toX, toY);
+        double[] a = screenPoint(fromX, fromY);
+        double[] b = screenPoint(toX, toY);
         Actions actions = new Actions(browser).moveToLocation((int) Math.round(a[0]), (int) Math.round(a[1]))
                 .clickAndHold();
         for (int step = 1; step <= 5; step++) {
@@ -90,7 +78,7 @@ class ConductorEditingBrowserTest extends BrowserTestBase {
         String before = exposedRoof();
 
         // select the conductor with a click on it, then drag its east end 40 m south, off the roof
-        double[] middle = screen(40, 20);
+        double[] middle = screenPoint(40, 20);
         new Actions(browser).moveToLocation((int) Math.round(middle[0]), (int) Math.round(middle[1])).click().perform();
         waitUpTo(10).until(b -> b.findElements(By.cssSelector("#plan-drawing circle.conductor-vertex")).size() == 2);
         assertThat(new Select(browser.findElement(By.cssSelector("#conductor-form select[name=conductor]")))

@@ -34,19 +34,6 @@ class PlanEditingBrowserTest extends BrowserTestBase {
         return sites.document(sites.get(id)).site().rods();
     }
 
-    /** Viewport position of a point given in the site's local metres, from the drawing's own frame. */
-    private long[] viewportPoint(double x, double y) {
-        browser.executeScript("document.querySelector('#plan-drawing svg').scrollIntoView({block: 'center'});");
-        @SuppressWarnings("unchecked")
-        List<Number> point = (List<Number>) browser.executeScript(
-                "const svg = document.querySelector('#plan-drawing svg'); const d = svg.dataset;"
-                        + "const p = svg.createSVGPoint();"
-                        + "p.x = Number(d.margin) + (arguments[0] - Number(d.originX)) * Number(d.scale);"
-                        + "p.y = Number(d.margin) + (Number(d.originY) - arguments[1]) * Number(d.scale);"
-                        + "const s = p.matrixTransform(svg.getScreenCTM()); return [s.x, s.y];", x, y);
-        return new long[] {Math.round(point.get(0).doubleValue()), Math.round(point.get(1).doubleValue())};
-    }
-
     @Test
     void placingDraggingAndUndoingARodUpdatesThePlanWithoutReloadAndIsSaved() throws Exception {
         StoredSite site = sites.create("harbour-warehouse.geojson",
