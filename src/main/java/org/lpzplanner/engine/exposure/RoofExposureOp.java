@@ -8,6 +8,7 @@ import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
 import org.locationtech.jts.operation.union.UnaryUnionOp;
 import org.lpzplanner.engine.envelope.Target;
+import org.lpzplanner.engine.geom.Areas;
 import org.lpzplanner.engine.geom.PlanPolygon;
 import org.lpzplanner.engine.geom.Plane;
 import org.lpzplanner.engine.geom.RoofFace;
@@ -192,21 +193,11 @@ final class RoofExposureOp {
             minClearance = Math.max(0, minClearance);
         }
         Geometry alongEdges = atEdge == null ? ctx.gf.createPolygon()
-                : areasOf(ctx, new CellRegions(g, ctx.gf).union(atEdge, cells.i0(), cells.j0(), cells.i1(), cells.j1())
-                        .intersection(exposedArea));
+                : Areas.of(new CellRegions(g, ctx.gf).union(atEdge, cells.i0(), cells.j0(), cells.i1(), cells.j1())
+                        .intersection(exposedArea), ctx.gf);
         return new RoofExposure(face.ownerId(), face.ownerName(), face.kind(), face.index(), face.polygon(),
                 face.plane().slopeFactor(), exposedArea, visible.getArea(), exposedArea.getArea(), minClearance,
                 alongEdges);
-    }
-
-    /** The polygons of an overlay result, which may also hold the lines and points where areas touch. */
-    private static Geometry areasOf(ExposureContext ctx, Geometry g) {
-        if (g instanceof Polygon || g instanceof org.locationtech.jts.geom.MultiPolygon) {
-            return g;
-        }
-        List<Polygon> polygons = new ArrayList<>();
-        org.locationtech.jts.geom.util.PolygonExtracter.getPolygons(g, polygons);
-        return ctx.gf.createMultiPolygon(polygons.toArray(Polygon[]::new));
     }
 
     private static double roofMax(Plane plane, double x, double y, double half) {

@@ -14,6 +14,7 @@ import org.lpzplanner.engine.exposure.CornerExposure;
 import org.lpzplanner.engine.exposure.EdgeExposure;
 import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.geom.Areas;
 import org.lpzplanner.engine.geom.SiteSurface;
 
 /**
@@ -73,7 +74,7 @@ final class ExposedPoints {
             // cells exposed only because an exposed edge crosses them are that edge's exposure,
             // sampled with the edge: a part that protects the edge settles them, accepting it accepts them
             Geometry atEdges = r.exposedAtEdges();
-            Geometry exposed = atEdges.isEmpty() ? r.exposed() : areas(r.exposed()).difference(atEdges);
+            Geometry exposed = atEdges.isEmpty() ? r.exposed() : Areas.of(r.exposed(), gf).difference(atEdges);
             org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator inAtEdges = atEdges.isEmpty() ? null
                     : new org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator(atEdges);
             for (int k = 0; k < exposed.getNumGeometries(); k++) {
@@ -132,13 +133,6 @@ final class ExposedPoints {
                 add(out, new Point(a.x + t * (b.x - a.x), a.y + t * (b.y - a.y), z, owner, what, dx, dy, 0, 0, rise));
             }
         }
-    }
-
-    /** The polygons of a geometry that may also hold lines or points where areas touch. */
-    private Geometry areas(Geometry g) {
-        List<org.locationtech.jts.geom.Polygon> polygons = new ArrayList<>();
-        org.locationtech.jts.geom.util.PolygonExtracter.getPolygons(g, polygons);
-        return gf.createMultiPolygon(polygons.toArray(org.locationtech.jts.geom.Polygon[]::new));
     }
 
     private static boolean strictlyIn(org.locationtech.jts.algorithm.locate.IndexedPointInAreaLocator area, double x,

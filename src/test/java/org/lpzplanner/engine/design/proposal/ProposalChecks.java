@@ -14,6 +14,7 @@ import org.lpzplanner.engine.exposure.EdgeExposure;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.geom.Areas;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.SphereSpec;
 
@@ -56,10 +57,7 @@ final class ProposalChecks {
             if (!r.isExposed()) {
                 continue;
             }
-            List<org.locationtech.jts.geom.Polygon> areas = new ArrayList<>();
-            org.locationtech.jts.geom.util.PolygonExtracter.getPolygons(r.exposed(), areas);
-            Geometry own = GF.createMultiPolygon(areas.toArray(org.locationtech.jts.geom.Polygon[]::new))
-                    .difference(r.exposedAtEdges());
+            Geometry own = Areas.of(r.exposed(), GF).difference(r.exposedAtEdges());
             double outside = own.difference(allowed).getArea();
             if (outside > 1e-6) {
                 left.add("roof " + r.ownerId() + " " + outside + " m²");
