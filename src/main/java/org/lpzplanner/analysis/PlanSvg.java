@@ -37,6 +37,8 @@ public final class PlanSvg {
     static final String FACADE = "#7b4fa0";
     static final String EDGE = "#c8102e";
     static final String PART = "#1f5fbf";
+    /** Hatch of stored keep-out areas (our own: dark teal diagonal lines over what lies below). */
+    static final String KEEP_OUT = "#1b6e5a";
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
     private static final double WIDTH = 820;
@@ -58,11 +60,33 @@ public final class PlanSvg {
      * @param accepted the reason of each accepted item, by item key
      */
     public static String render(String resultGeoJson, Labels labels, Map<String, String> accepted) {
+        return render(resultGeoJson, labels, accepted, List.of());
+    }
+
+    /** A keep-out area the site stores: its name and outline in local metres (ring not closed). */
+    public record KeepOut(String name, List<double[]> corners) {
+    }
+
+    /**
+     * The SVG markup for one result with the accepted review items marked and the site's stored
+     * keep-out areas hatched on top (class {@code keep-out-area}, {@code data-keep-out-name}; they let
+     * clicks through to the plan) with a legend row when there are any.
+     */
+    public static String render(String resultGeoJson, Labels labels, Map<String, String> accepted,
+            List<KeepOut> keepOut) {
         JsonNode root = JSON.readTree(resultGeoJson);
         List<JsonNode> features = new ArrayList<>();
         root.path("features").forEach(features::add);
         Map<JsonNode, String> keys = ReviewItems.keys(features);
         double[] box = bounds(features);
+        for (KeepOut k : keepOut) {
+            for (double[] c : k.corners()) {
+                box[0] = Math.min(box[0], c[0]);
+                box[1] = Math.min(box[1], c[1]);
+                box[2] = Math.max(box[2], c[0]);
+                box[3] = Math.max(box[3], c[1]);
+            }
+        }
         double dx = Math.max(box[2] - box[0], 1);
         double dy = Math.max(box[3] - box[1], 1);
         double scale = Math.min((WIDTH - 2 * MARGIN) / dx, (DRAW_HEIGHT - 2 * MARGIN) / dy);
@@ -70,6 +94,10 @@ public final class PlanSvg {
         Frame frame = new Frame(box[0], box[3], scale);
         String[] legendKeys = {"plan.legend.structure", "plan.legend.object", "plan.legend.ground",
             "plan.legend.roof", "plan.legend.facade", "plan.legend.edge", "plan.legend.part"};
+        if (!keepOut.isEmpty()) {
+            legendKeys = java.util.Arrays.copyOf(legendKeys, legendKeys.length + 1);
+            legendKeys[legendKeys.length - 1] = "plan.legend.keepOut";
+        }
         double height = drawHeight + 10 + LEGEND_ROW * legendKeys.length;
         double maxHeight = features.stream().filter(f -> layer(f).equals("structure"))
                 .mapToDouble(f -> f.path("properties").path("height").asDouble(0)).max().orElse(1);
@@ -80,6 +108,12 @@ public final class PlanSvg {
                 + " data-scale=\"%s\" data-margin=\"%s\" data-y-flipped=\"true\" data-draw-height=\"%.0f\">",
                 WIDTH, height, WIDTH, height, escape(labels.text("plan.title", text(root, "name"))),
                 exact(frame.minX()), exact(frame.maxY()), exact(frame.scale()), exact(MARGIN), drawHeight));
+        if (!keepOut.isEmpty()) {
+            svg.append("<defs><pattern id=\"keep-out-hatch\" patternUnits=\"userSpaceOnUse\" width=\"7\" height=\"7\""
+                    + " patternTransform=\"rotate(45)\"><rect width=\"7\" height=\"7\" fill=\"#ffffff\" fill-opacity=\"0.35\"/>"
+                    + "<line x1=\"0\" y1=\"0\" x2=\"0\" y2=\"7\" stroke=\"").append(KEEP_OUT)
+                    .append("\" stroke-width=\"2\"/></pattern></defs>");
+        }
         svg.append(String.format(Locale.ROOT, "<rect x=\"0\" y=\"0\" width=\"%.0f\" height=\"%.0f\" fill=\"#fbfbf8\"/>",
                 WIDTH, drawHeight));
         for (String layer : ResultGeoJson.LAYERS) {
@@ -101,10 +135,40 @@ public final class PlanSvg {
                 }
             }
         }
+        keepOut(svg, keepOut, frame);
         scaleBar(svg, frame, drawHeight, labels);
         northArrow(svg, labels);
         legend(svg, drawHeight + 10, legendKeys, labels);
         return svg.append("</svg>").toString();
+    }
+
+    private static void keepOut(StringBuilder svg, List<KeepOut> areas, Frame frame) {
+        if (areas.isEmpty()) {
+            return;
+        }
+        svg.append("<g id=\"keep-out-areas\" pointer-events=\"none\">");
+        for (KeepOut k : areas) {
+            StringBuilder d = new StringBuilder();
+            double sx = 0, sy = 0;
+            for (int i = 0; i < k.corners().size(); i++) {
+                double[] c = k.corners().get(i);
+                sx += c[0];
+                sy += c[1];
+                d.append(i == 0 ? "M" : " L").append(String.format(Locale.ROOT, " %.1f %.1f", frame.x(c[0]),
+                        frame.y(c[1])));
+            }
+            d.append(" Z");
+            svg.append("<path class=\"keep-out-area\" data-keep-out-name=\"").append(escape(k.name()))
+                    .append("\" fill=\"url(#keep-out-hatch)\" stroke=\"").append(KEEP_OUT)
+                    .append("\" stroke-width=\"1.5\" stroke-dasharray=\"6 3\" d=\"").append(d).append("\"><title>")
+                    .append(escape(k.name())).append("</title></path>");
+            int n = Math.max(1, k.corners().size());
+            svg.append(String.format(Locale.ROOT, "<text class=\"keep-out-label\" x=\"%.1f\" y=\"%.1f\""
+                    + " text-anchor=\"middle\" font-size=\"10\" font-family=\"sans-serif\" fill=\"%s\""
+                    + " stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">%s</text>",
+                    frame.x(sx / n), frame.y(sy / n), KEEP_OUT, escape(k.name())));
+        }
+        svg.append("</g>");
     }
 
     private record Frame(double minX, double maxY, double scale) {
@@ -233,7 +297,7 @@ public final class PlanSvg {
     }
 
     private static void legend(StringBuilder svg, double top, String[] keys, Labels labels) {
-        String[] colours = {"#9a9a9f", OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, PART};
+        String[] colours = {"#9a9a9f", OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, PART, "url(#keep-out-hatch)"};
         svg.append("<g class=\"legend\" font-size=\"12\" font-family=\"sans-serif\">");
         for (int i = 0; i < keys.length; i++) {
             double y = top + i * LEGEND_ROW;

@@ -8,6 +8,8 @@ import java.util.Map;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.PlanSvg;
+import org.lpzplanner.keepout.KeepOutArea;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.common.Cautions;
@@ -36,9 +38,11 @@ public class DesignPageController {
     private final ReviewService reviews;
     private final DesignService design;
     private final MessageSource messages;
+    private final KeepOutAreaService keepOut;
 
     DesignPageController(SiteService sites, AnalysisService analyses, ReviewService reviews, DesignService design,
-            MessageSource messages) {
+            MessageSource messages, KeepOutAreaService keepOut) {
+        this.keepOut = keepOut;
         this.sites = sites;
         this.analyses = analyses;
         this.reviews = reviews;
@@ -57,10 +61,12 @@ public class DesignPageController {
         model.addAttribute("radius", DesignService.round(site.sphere().radius()));
         model.addAttribute("editable", sites.isGeoJson(site));
         model.addAttribute("cautions", Cautions.lines());
+        List<KeepOutArea> areas = keepOut.areas(id);
+        model.addAttribute("keepOutAreas", areas.stream().map(KeepOutRow::of).toList());
         if (latest != null) {
             ReviewService.Review review = reviews.review(latest);
             model.addAttribute("svg", PlanSvg.render(latest.resultGeoJson(),
-                    (key, args) -> messages.getMessage(key, args, locale), review.accepted()));
+                    (key, args) -> messages.getMessage(key, args, locale), review.accepted(), keepOut.forPlan(id)));
         }
         double rate;
         try {
@@ -86,6 +92,19 @@ public class DesignPageController {
         model.addAttribute("installations", design.installations(id));
         model.addAttribute("quantities", design.quantities(id, rate));
         return "sites/design";
+    }
+
+    /** A stored keep-out area as the design page lists it: name, area and corners written out. */
+    record KeepOutRow(long id, String name, String area, int cornerCount, String corners) {
+
+        static KeepOutRow of(KeepOutArea a) {
+            List<String> corners = new ArrayList<>();
+            for (double[] c : a.corners()) {
+                corners.add(String.format(Locale.ROOT, "%.2f %.2f", c[0], c[1]));
+            }
+            return new KeepOutRow(a.id(), a.name(), String.format(Locale.ROOT, "%.2f", a.area()), a.corners().size(),
+                    String.join("; ", corners));
+        }
     }
 
     @PostMapping("/sites/{id}/design/down-conductors/{structureId}")

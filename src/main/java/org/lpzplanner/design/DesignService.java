@@ -34,6 +34,7 @@ import org.lpzplanner.engine.model.RooftopObject;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.engine.model.Structure;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.sites.AirTerminationService;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -61,9 +62,11 @@ public class DesignService {
     private final DesignRepository store;
     private final ProposalJobs jobs;
     private final Clock clock;
+    private final KeepOutAreaService storedKeepOut;
 
     public DesignService(SiteService sites, AirTerminationService parts, AnalysisService analyses, ReviewService reviews,
-            DesignRepository store, ProposalJobs jobs, Clock clock) {
+            DesignRepository store, ProposalJobs jobs, Clock clock, KeepOutAreaService storedKeepOut) {
+        this.storedKeepOut = storedKeepOut;
         this.sites = sites;
         this.parts = parts;
         this.analyses = analyses;
@@ -75,7 +78,8 @@ public class DesignService {
 
     /**
      * What a designer asks for: allowed rod heights, mast heights (may be empty), whether roof-edge
-     * and ridge conductors may be proposed, keep-out polygons in local metres.
+     * and ridge conductors may be proposed, keep-out polygons in local metres. The site's stored
+     * keep-out areas always apply as well; these add to them for this proposal only.
      */
     public record ProposeRequest(List<Double> rodHeights, List<Double> mastHeights, boolean edgeConductors,
             boolean ridgeConductors, List<List<double[]>> keepOut) {
@@ -105,7 +109,8 @@ public class DesignService {
                 throw new InvalidInputException("mastHeights", "mast heights must be between 1 m and 60 m, got " + h);
             }
         }
-        List<Polygon> keepOut = keepOut(request.keepOut());
+        List<Polygon> keepOut = new ArrayList<>(storedKeepOut.polygons(siteId));
+        keepOut.addAll(keepOut(request.keepOut()));
         List<Geometry> accepted = reviews.latest(siteId)
                 .map(r -> ReviewItems.geometries(r.revision().resultGeoJson(), r.accepted().keySet()))
                 .orElse(List.of());

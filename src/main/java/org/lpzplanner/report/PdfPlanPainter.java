@@ -34,6 +34,8 @@ final class PdfPlanPainter {
     private static final Color ACCEPTED = new Color(0x8a, 0x8a, 0x8a);
     private static final Color PART = new Color(0x1f, 0x5f, 0xbf);
     private static final Color DOWN = new Color(0x11, 0x11, 0x11);
+    /** Hatch and outline of keep-out areas (our own dark teal). */
+    private static final Color KEEP_OUT = new Color(0x1b, 0x6e, 0x5a);
 
     private PdfPlanPainter() {
     }
@@ -150,7 +152,7 @@ final class PdfPlanPainter {
         p.strokeRect(PdfPages.MARGIN, frameBottom, frameW, frameH, PdfReportRenderer.TEXT, 0.8f);
         northArrow(p, PdfPages.MARGIN + frameW - 22, frameTop - 12);
         scaleBar(p, denominator, k, frameBottom + 10);
-        legend(p, frameBottom - 10);
+        legend(p, frameBottom - 10, plan.has(Layer.KEEP_OUT));
     }
 
     private static void shape(PDPageContentStream out, Shape s, float k, float ox, float oy, double cx, double cy)
@@ -196,6 +198,28 @@ final class PdfPlanPainter {
                 out.stroke();
                 out.setLineDashPattern(new float[0], 0);
             }
+            case KEEP_OUT -> {
+                List<double[]> ring = s.paths().get(0);
+                out.saveGraphicsState();
+                path(out, ring, k, ox, oy, cx, cy, true);
+                out.clip();
+                double minX = Double.POSITIVE_INFINITY, minY = Double.POSITIVE_INFINITY;
+                double maxX = Double.NEGATIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+                for (double[] xy : ring) {
+                    minX = Math.min(minX, ox + (xy[0] - cx) * k);
+                    maxX = Math.max(maxX, ox + (xy[0] - cx) * k);
+                    minY = Math.min(minY, oy + (xy[1] - cy) * k);
+                    maxY = Math.max(maxY, oy + (xy[1] - cy) * k);
+                }
+                hatch(out, (float) minX, (float) minY, (float) (maxX - minX), (float) (maxY - minY));
+                out.restoreGraphicsState();
+                path(out, ring, k, ox, oy, cx, cy, true);
+                out.setStrokingColor(KEEP_OUT);
+                out.setLineWidth(0.9f);
+                out.setLineDashPattern(new float[] {4, 2}, 0);
+                out.stroke();
+                out.setLineDashPattern(new float[0], 0);
+            }
             case EXPOSED_CORNER -> dot(out, s.paths().get(0).get(0), k, ox, oy, cx, cy, 2.2f, EDGE);
             case DOWN_CONDUCTOR -> {
                 double[] xy = s.paths().get(0).get(0);
@@ -214,6 +238,18 @@ final class PdfPlanPainter {
                 out.fillAndStroke();
             }
         }
+    }
+
+    /** Diagonal lines (45°, 3 pt apart) over a rectangle; the caller clips them to the area. */
+    private static void hatch(PDPageContentStream out, float x, float y, float w, float h) throws IOException {
+        float step = 3f;
+        for (float d = -h; d <= w; d += step) {
+            out.moveTo(x + d, y);
+            out.lineTo(x + d + h, y + h);
+        }
+        out.setStrokingColor(KEEP_OUT);
+        out.setLineWidth(0.6f);
+        out.stroke();
     }
 
     private static void path(PDPageContentStream out, List<double[]> points, float k, float ox, float oy, double cx,
@@ -306,16 +342,30 @@ final class PdfPlanPainter {
         p.text("1:" + denominator, x + seg * 4 + 22, y, 6.5f, true, PdfReportRenderer.TEXT);
     }
 
-    private static void legend(PdfPages p, float top) {
+    private static void legend(PdfPages p, float top, boolean keepOut) {
         String[] names = {"Structure (darker is higher)", "Rooftop object", "Protected open ground (LPZ 0B)",
             "Exposed roof area (LPZ 0A)", "Facade band a sphere reaches", "Exposed edge / corner (E1, E2, …)",
-            "Accepted item (dashed grey)", "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)"};
+            "Accepted item (dashed grey)", "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)",
+            "Keep-out area, hatched (K1, …)"};
         Color[] colours = {new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, ACCEPTED, PART,
-            DOWN};
+            DOWN, null};
         float colW = PdfPages.CONTENT_WIDTH / 3;
-        for (int i = 0; i < names.length; i++) {
+        for (int i = 0; i < names.length - (keepOut ? 0 : 1); i++) {
             float x = PdfPages.MARGIN + (i % 3) * colW, y = top - (i / 3) * 14;
-            p.fillRect(x, y - 8, 14, 8, colours[i]);
+            if (colours[i] == null) {
+                p.fillRect(x, y - 8, 14, 8, Color.WHITE);
+                try {
+                    p.out.saveGraphicsState();
+                    p.out.addRect(x, y - 8, 14, 8);
+                    p.out.clip();
+                    hatch(p.out, x, y - 8, 14, 8);
+                    p.out.restoreGraphicsState();
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            } else {
+                p.fillRect(x, y - 8, 14, 8, colours[i]);
+            }
             p.strokeRect(x, y - 8, 14, 8, PdfReportRenderer.MUTED, 0.3f);
             p.text(names[i], x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
         }

@@ -16,8 +16,8 @@ public record PlanDrawing(List<Shape> shapes, List<Label> labels, double minX, d
 
     /** Drawing layers, bottom to top. */
     public enum Layer {
-        PROTECTED_GROUND, STRUCTURE, ROOFTOP_OBJECT, EXPOSED_ROOF, FACADE_BAND, ACCEPTED_ITEM, EXPOSED_EDGE,
-        EXPOSED_CORNER, CONDUCTOR, DOWN_CONDUCTOR, ROD
+        PROTECTED_GROUND, STRUCTURE, ROOFTOP_OBJECT, EXPOSED_ROOF, KEEP_OUT, FACADE_BAND, ACCEPTED_ITEM,
+        EXPOSED_EDGE, EXPOSED_CORNER, CONDUCTOR, DOWN_CONDUCTOR, ROD
     }
 
     /**
@@ -34,6 +34,11 @@ public record PlanDrawing(List<Shape> shapes, List<Label> labels, double minX, d
 
     /** A label at a point; {@code small} labels mark numbered items. */
     public record Label(String text, double x, double y, boolean small) {
+    }
+
+    /** True when some shape is on the layer (the legend lists optional layers only then). */
+    public boolean has(Layer layer) {
+        return shapes.stream().anyMatch(s -> s.layer() == layer);
     }
 
     public double width() {

@@ -15,8 +15,9 @@ import tools.jackson.databind.JsonNode;
 /**
  * Builds the {@link PlanDrawing} of a revision from its stored result: structures shaded by height
  * and named, rooftop objects, protected ground, exposed roof areas, facade bands, exposed edges and
- * corners numbered E1, E2, … (accepted ones drawn apart), air-termination parts numbered A1, A2, …
- * and planned down-conductors numbered D1, D2, ….
+ * corners numbered E1, E2, … (accepted ones drawn apart), air-termination parts numbered A1, A2, …,
+ * planned down-conductors numbered D1, D2, … and the site's stored keep-out areas numbered K1, K2, …
+ * (as stored when printed, like the down-conductors edited by the designer).
  */
 final class PlanDrawings {
 
@@ -87,6 +88,19 @@ final class PlanDrawings {
                 number++;
                 shapes.add(new Shape(Layer.DOWN_CONDUCTOR, List.of(List.of(new double[] {c.x, c.y})), 0));
                 labels.add(new Label("D" + number, c.x, c.y, true));
+            }
+        }
+        List<StoredDesign.KeepOutArea> areas = facts.design().keepOutAreas();
+        for (int i = 0; i < areas.size(); i++) {
+            List<double[]> ring = areas.get(i).corners();
+            shapes.add(new Shape(Layer.KEEP_OUT, List.of(ring), 0));
+            double[] c = centre(ring);
+            labels.add(new Label(KeepOutSchedule.number(i), c[0], c[1], true));
+            for (double[] xy : ring) {
+                box[0] = Math.min(box[0], xy[0]);
+                box[1] = Math.min(box[1], xy[1]);
+                box[2] = Math.max(box[2], xy[0]);
+                box[3] = Math.max(box[3], xy[1]);
             }
         }
         if (box[0] > box[2]) {

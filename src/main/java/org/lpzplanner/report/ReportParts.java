@@ -16,6 +16,7 @@ public final class ReportParts {
             ExposedItemSchedule::blocks,
             DownConductorSchedule::blocks,
             SeparationSchedule::blocks,
+            KeepOutSchedule::blocks,
             QuantitySchedule::blocks
     );
 

@@ -13,6 +13,7 @@ import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.RevisionInputs;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.sites.SiteFileVersion;
 import org.lpzplanner.sites.SiteCutService;
 import org.lpzplanner.sites.SiteService;
@@ -38,9 +39,11 @@ public class ReportService {
     private final DesignRepository design;
     private final SiteCutService cuts;
     private final Clock clock;
+    private final KeepOutAreaService keepOut;
 
     public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted,
-            RiskService risk, DesignRepository design, SiteCutService cuts, Clock clock) {
+            RiskService risk, DesignRepository design, SiteCutService cuts, Clock clock, KeepOutAreaService keepOut) {
+        this.keepOut = keepOut;
         this.sites = sites;
         this.analyses = analyses;
         this.accepted = accepted;
@@ -86,14 +89,16 @@ public class ReportService {
                 .map(c -> new ReportSource.Cut(c.name(), c.x1(), c.y1(), c.x2(), c.y2())).toList();
     }
 
-    /** The site's design data as stored now. */
+    /** The site's design data (edited down-conductors, installations, keep-out areas) as stored now. */
     StoredDesign storedDesign(long siteId) {
         Map<String, List<Coordinate>> downs = new LinkedHashMap<>();
         design.downConductors(siteId).forEach((structure, positions) -> downs.put(structure,
                 positions.stream().map(p -> new Coordinate(p[0], p[1])).toList()));
         List<StoredDesign.Installation> metals = design.installations(siteId).stream()
                 .map(i -> new StoredDesign.Installation(i.name(), i.x(), i.y(), i.z(), i.material())).toList();
-        return new StoredDesign(downs, metals, clock.instant().truncatedTo(ChronoUnit.SECONDS));
+        List<StoredDesign.KeepOutArea> areas = keepOut.areas(siteId).stream()
+                .map(a -> new StoredDesign.KeepOutArea(a.name(), a.corners(), a.area())).toList();
+        return new StoredDesign(downs, metals, clock.instant().truncatedTo(ChronoUnit.SECONDS), areas);
     }
 
     private RevisionInputs recovered(StoredSite site, AnalysisRevision revision) {

@@ -5,6 +5,7 @@ import io.swagger.v3.oas.annotations.media.Content;
 import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.system.ApiError;
 import java.net.URI;
 import java.util.List;
@@ -52,9 +53,11 @@ public class AirTerminationApiController {
     private final AnalysisService analyses;
     private final SiteService sites;
     private final MessageSource messages;
+    private final KeepOutAreaService keepOut;
 
     public AirTerminationApiController(AirTerminationService parts, AnalysisService analyses, SiteService sites,
-            MessageSource messages) {
+            MessageSource messages, KeepOutAreaService keepOut) {
+        this.keepOut = keepOut;
         this.parts = parts;
         this.analyses = analyses;
         this.sites = sites;
@@ -213,7 +216,9 @@ public class AirTerminationApiController {
 
     private Change answer(long id, String rodId, AirTerminationService.RodView before, long start, Locale locale) {
         AnalysisRevision revision = analyses.run(id, null, null, null);
-        String svg = PlanSvg.render(revision.resultGeoJson(), (key, args) -> messages.getMessage(key, args, locale));
+        // the stored keep-out areas stay on the redrawn plan
+        String svg = PlanSvg.render(revision.resultGeoJson(), (key, args) -> messages.getMessage(key, args, locale),
+                java.util.Map.of(), keepOut.forPlan(id));
         String basis = messages.getMessage("plan.basis", new Object[] {ResultGeoJson.METHOD, revision.level().name(),
                 SitePageController.number(revision.sphereRadius()), SitePageController.WHEN.format(revision.createdAt())},
                 locale);

@@ -16,6 +16,7 @@ import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.springframework.context.MessageSource;
 import org.springframework.stereotype.Component;
 
@@ -40,9 +41,11 @@ class PlanPage {
     private final SectionPage sectionPage;
     private final CommentService comments;
     private final AuditTrail audit;
+    private final KeepOutAreaService keepOut;
 
     PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews,
-            SectionPage sectionPage, CommentService comments, AuditTrail audit) {
+            SectionPage sectionPage, CommentService comments, AuditTrail audit, KeepOutAreaService keepOut) {
+        this.keepOut = keepOut;
         this.comments = comments;
         this.audit = audit;
         this.sectionPage = sectionPage;
@@ -93,7 +96,7 @@ class PlanPage {
             model.put("reviewRows", review.items().stream()
                     .map(i -> ReviewRow.of(i, review.accepted().get(i.key()))).toList());
             model.put("svg", PlanSvg.render(latest.resultGeoJson(),
-                    (key, args) -> messages.getMessage(key, args, locale), review.accepted()));
+                    (key, args) -> messages.getMessage(key, args, locale), review.accepted(), keepOut.forPlan(id)));
         }
         return model;
     }

@@ -7,19 +7,20 @@ import java.util.List;
  * Everything stored for one site, as a site export holds it: the site and its current file, the
  * earlier files corrections replaced, every analysis revision with what it read and the items
  * accepted on it and the reviewed marks, the site's risk inputs (null until first saved), the
- * designer's edited down-conductors and marked metal installations, the saved section cuts, the comments, and the audit
+ * designer's edited down-conductors and marked metal installations, the saved section cuts, the keep-out areas, the comments, and the audit
  * trail. The audit trail is carried for reading only: an import does not write it back (the new
  * site's trail starts with one "import" event). Database ids are left out; numbers that users see
  * (file numbers, revisions) are kept.
  */
 public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revision> revisions, RiskInputs riskInputs,
         List<DownConductorEdit> downConductors, List<MetalInstallation> metalInstallations, List<SavedCut> savedCuts,
-        List<Comment> comments, List<AuditEntry> auditTrail) {
+        List<KeepOutArea> keepOutAreas, List<Comment> comments, List<AuditEntry> auditTrail) {
 
     public SiteArchive {
         downConductors = List.copyOf(downConductors);
         metalInstallations = List.copyOf(metalInstallations);
         savedCuts = List.copyOf(savedCuts);
+        keepOutAreas = List.copyOf(keepOutAreas);
         comments = List.copyOf(comments);
         auditTrail = List.copyOf(auditTrail);
     }
@@ -53,6 +54,10 @@ public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revisi
 
     /** A section cut saved for the site under a name; ends in local metres. */
     public record SavedCut(String name, double x1, double y1, double x2, double y2, Instant createdAt) {
+    }
+
+    /** A keep-out area stored for the site; corners [x, y] in local metres, the ring not closed. */
+    public record KeepOutArea(String name, List<List<Double>> corners, Instant createdAt) {
     }
 
     public record Comment(String author, String body, Instant createdAt) {

@@ -35,6 +35,8 @@ import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
 import org.lpzplanner.risk.FlashDensitySource;
+import org.lpzplanner.keepout.KeepOutAreaService;
+import org.lpzplanner.keepout.KeepOutOutline;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.StreamReadFeature;
@@ -78,6 +80,7 @@ final class SiteArchiveCodec {
         document.put("downConductors", archive.downConductors());
         document.put("metalInstallations", archive.metalInstallations());
         document.put("savedCuts", archive.savedCuts());
+        document.put("keepOutAreas", archive.keepOutAreas());
         document.put("comments", archive.comments());
         document.put("auditTrail", archive.auditTrail());
         return JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
@@ -122,6 +125,7 @@ final class SiteArchiveCodec {
                 downConductors(optionalArray(root, "", "downConductors")),
                 metalInstallations(optionalArray(root, "", "metalInstallations")),
                 savedCuts(optionalArray(root, "", "savedCuts")),
+                keepOutAreas(optionalArray(root, "", "keepOutAreas")),
                 comments(optionalArray(root, "", "comments")), auditTrail(optionalArray(root, "", "auditTrail")));
     }
 
@@ -169,6 +173,29 @@ final class SiteArchiveCodec {
                 throw bad(p, "is " + length + " m long; a saved cut's ends must be 1 m to 2000 m apart");
             }
             out.add(new SiteArchive.SavedCut(name, x1, y1, x2, y2, instant(node, p, "createdAt")));
+        }
+        return out;
+    }
+
+    /** Areas as the design page stores them (checked by {@link KeepOutOutline}); exports before them have none. */
+    private static List<SiteArchive.KeepOutArea> keepOutAreas(JsonNode array) {
+        if (array.size() > KeepOutAreaService.MAX_AREAS) {
+            throw bad("keepOutAreas", "holds " + array.size() + " areas; a site keeps at most "
+                    + KeepOutAreaService.MAX_AREAS);
+        }
+        List<SiteArchive.KeepOutArea> out = new ArrayList<>();
+        for (int i = 0; i < array.size(); i++) {
+            String p = "keepOutAreas[" + i + "]";
+            JsonNode node = object(array.get(i), p);
+            String name = nonBlankText(node, p, "name", KeepOutAreaService.MAX_NAME);
+            List<double[]> corners;
+            try {
+                corners = KeepOutOutline.read(node.get("corners"), "corners");
+            } catch (InvalidInputException e) {
+                throw bad(p + "." + e.field(), "is unusable: " + e.getMessage());
+            }
+            out.add(new SiteArchive.KeepOutArea(name.strip(), corners.stream().map(c -> List.of(c[0], c[1])).toList(),
+                    instant(node, p, "createdAt")));
         }
         return out;
     }

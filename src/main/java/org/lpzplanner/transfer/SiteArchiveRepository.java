@@ -72,6 +72,11 @@ class SiteArchiveRepository {
                         rs.getDouble("y1"), rs.getDouble("x2"), rs.getDouble("y2"),
                         rs.getTimestamp("created_at").toInstant()))
                 .list();
+        List<SiteArchive.KeepOutArea> keepOut = jdbc.sql("SELECT name, corners, created_at FROM site_keep_out_areas"
+                        + " WHERE site_id = ? ORDER BY created_at, id")
+                .param(siteId).query((rs, n) -> new SiteArchive.KeepOutArea(rs.getString("name"),
+                        positions(rs.getString("corners")), rs.getTimestamp("created_at").toInstant()))
+                .list();
         List<SiteArchive.Comment> comments = jdbc.sql("SELECT author, body, created_at FROM site_comments"
                         + " WHERE site_id = ? ORDER BY created_at, id")
                 .param(siteId).query((rs, n) -> new SiteArchive.Comment(rs.getString("author"), rs.getString("body"),
@@ -82,7 +87,8 @@ class SiteArchiveRepository {
                 .param(siteId).query((rs, n) -> new SiteArchive.AuditEntry(rs.getString("actor"),
                         rs.getString("action"), rs.getString("detail"), rs.getTimestamp("created_at").toInstant()))
                 .list();
-        return Optional.of(new SiteArchive(site.get(), files, revisions, risk, downs, metals, cuts, comments, trail));
+        return Optional.of(new SiteArchive(site.get(), files, revisions, risk, downs, metals, cuts, keepOut, comments,
+                trail));
     }
 
     private List<SiteArchive.Review> reviews(long revisionId) {
@@ -165,6 +171,11 @@ class SiteArchiveRepository {
         for (SiteArchive.SavedCut c : archive.savedCuts()) {
             jdbc.sql("INSERT INTO site_cuts (site_id, name, x1, y1, x2, y2, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)")
                     .params(siteId, c.name(), c.x1(), c.y1(), c.x2(), c.y2(), Timestamp.from(c.createdAt()))
+                    .update();
+        }
+        for (SiteArchive.KeepOutArea k : archive.keepOutAreas()) {
+            jdbc.sql("INSERT INTO site_keep_out_areas (site_id, name, corners, created_at) VALUES (?, ?, ?, ?)")
+                    .params(siteId, k.name(), JSON.writeValueAsString(k.corners()), Timestamp.from(k.createdAt()))
                     .update();
         }
         for (SiteArchive.Comment c : archive.comments()) {

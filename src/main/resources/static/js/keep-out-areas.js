@@ -1,0 +1,82 @@
+// Design page: stores the last keep-out area of the proposal's keep-out field for the site, and
+// removes stored areas, through /api/sites/{id}/keep-out-areas; the page is reloaded after a change
+// so the list, the hatched plan and the proposal defaults all show the stored areas.
+const box = document.getElementById('keep-out-areas');
+
+if (box) {
+  const siteId = box.dataset.siteId;
+  const errorLine = document.getElementById('keep-out-error');
+  const status = document.getElementById('keep-out-status');
+  const url = '/api/sites/' + siteId + '/keep-out-areas';
+
+  function showError(message) {
+    errorLine.textContent = message;
+    errorLine.hidden = false;
+  }
+
+  async function call(method, target, body) {
+    const headers = { Accept: 'application/json' };
+    if (body) {
+      headers['Content-Type'] = 'application/json';
+    }
+    // the session's CSRF token, which every state-changing request must carry
+    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
+    const csrfToken = document.querySelector('meta[name="csrf-token"]');
+    if (csrfHeader && csrfToken) {
+      headers[csrfHeader.content] = csrfToken.content;
+    }
+    const response = await fetch(target, { method, headers, body: body ? JSON.stringify(body) : undefined });
+    if (!response.ok) {
+      const data = await response.json().catch(() => ({}));
+      throw new Error(data.error || response.statusText);
+    }
+  }
+
+  // The last non-empty line of the keep-out field: "x y; x y; x y", as the plan clicks write it.
+  function lastArea() {
+    const field = document.getElementById('keep-out');
+    if (!field) {
+      return [];
+    }
+    const lines = field.value.split('\n').map((line) => line.trim()).filter((line) => line !== '');
+    if (lines.length === 0) {
+      return [];
+    }
+    return lines[lines.length - 1].split(';').map((p) => p.trim()).filter((p) => p !== '')
+      .map((p) => p.split(/[\s,]+/).map(Number));
+  }
+
+  const store = document.getElementById('store-keep-out');
+  if (store) {
+    store.addEventListener('click', async () => {
+      errorLine.hidden = true;
+      const corners = lastArea();
+      if (corners.length === 0) {
+        showError(box.dataset.msgNoCorners);
+        return;
+      }
+      try {
+        await call('POST', url, { name: document.getElementById('keep-out-name').value, corners });
+        const field = document.getElementById('keep-out');
+        const lines = field.value.split('\n').map((line) => line.trim()).filter((line) => line !== '');
+        field.value = lines.slice(0, -1).join('\n');
+        status.textContent = box.dataset.msgStored;
+        window.location.reload();
+      } catch (e) {
+        showError(e.message);
+      }
+    });
+  }
+
+  for (const button of box.querySelectorAll('.remove-keep-out')) {
+    button.addEventListener('click', async () => {
+      errorLine.hidden = true;
+      try {
+        await call('DELETE', url + '/' + button.dataset.keepOutId);
+        window.location.reload();
+      } catch (e) {
+        showError(e.message);
+      }
+    });
+  }
+}
