@@ -81,6 +81,12 @@ public final class KeepOutOutline {
             }
         }
         LinearRing ring = ring(corners);
+        // corners (nearly) on one line first: such a ring also folds back on itself, but this says why
+        double hull = ring.convexHull().getArea();
+        if (!(hull >= MIN_AREA)) {
+            throw new InvalidInputException(field, String.format(Locale.ROOT, "the corners (nearly) lie on a line"
+                    + " (%.4f m² inside them); a keep-out area needs at least %.2f m²", hull, MIN_AREA));
+        }
         IsSimpleOp simple = new IsSimpleOp(ring);
         if (!simple.isSimple()) {
             Coordinate at = simple.getNonSimpleLocation();
@@ -89,8 +95,8 @@ public final class KeepOutOutline {
         }
         double area = GEOMETRY.createPolygon(ring).getArea();
         if (!(area >= MIN_AREA)) {
-            throw new InvalidInputException(field, String.format(Locale.ROOT, "the area is %.4f m²: its corners"
-                    + " (nearly) lie on a line; a keep-out area needs at least %.2f m²", area, MIN_AREA));
+            throw new InvalidInputException(field, String.format(Locale.ROOT, "the area is %.4f m²; a keep-out"
+                    + " area needs at least %.2f m²", area, MIN_AREA));
         }
         return corners;
     }

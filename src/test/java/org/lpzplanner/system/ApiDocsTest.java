@@ -76,6 +76,10 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{id}/rods/{rodId}", "put", List.of("200", "400", "404", "409"));
         hasResponses(doc, "/api/sites/{id}/risk", "get", List.of("200", "400", "404"));
         hasResponses(doc, "/api/sites/{id}/risk", "put", List.of("200", "400", "404"));
+        hasResponses(doc, "/api/sites/{id}/keep-out-areas", "get", List.of("200", "404"));
+        hasResponses(doc, "/api/sites/{id}/keep-out-areas", "post", List.of("201", "400", "403", "404"));
+        hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "patch", List.of("200", "400", "403", "404"));
+        hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "delete", List.of("204", "403", "404"));
         hasResponses(doc, "/api/sites/{siteId}/revisions/{revision}/report", "get",
                 List.of("200", "400", "404", "409"));
 
