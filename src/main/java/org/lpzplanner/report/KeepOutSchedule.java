@@ -56,8 +56,8 @@ final class KeepOutSchedule {
         }
         List<String> notes = new ArrayList<>();
         notes.add("Roof areas where no air-termination may stand (for example skylights, walkways, plant access,"
-                + " solar panels), hatched on the plan; corners in local metres (x east, y north), area in plan."
-                + " Stored for the site, " + design.asStored() + ".");
+                + " solar panels), hatched on the plan; corners in local metres (x east, y north), area in plan. As"
+                + design.asStored().substring("as".length()) + ".");
         notes.add("Proposals place no part inside a stored keep-out area. \"Parts inside\" lists the parts of this"
                 + " revision's site file that stand on or inside the outline (rods) or touch it (conductors)"
                 + (conflicts == 0 ? ": none do." : ": move them, or confirm with whoever uses the area."));

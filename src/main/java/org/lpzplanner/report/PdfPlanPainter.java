@@ -240,8 +240,20 @@ final class PdfPlanPainter {
         }
     }
 
-    /** Diagonal lines (45°, 3 pt apart) over a rectangle; the caller clips them to the area. */
+    /**
+     * A half-transparent white veil (what lies below stays visible, on dark roofs too) and diagonal
+     * lines (45°, 3 pt apart) over a rectangle; the caller clips them to the area.
+     */
     private static void hatch(PDPageContentStream out, float x, float y, float w, float h) throws IOException {
+        out.saveGraphicsState();
+        org.apache.pdfbox.pdmodel.graphics.state.PDExtendedGraphicsState veil =
+                new org.apache.pdfbox.pdmodel.graphics.state.PDExtendedGraphicsState();
+        veil.setNonStrokingAlphaConstant(0.55f);
+        out.setGraphicsStateParameters(veil);
+        out.setNonStrokingColor(Color.WHITE);
+        out.addRect(x, y, w, h);
+        out.fill();
+        out.restoreGraphicsState();
         float step = 3f;
         for (float d = -h; d <= w; d += step) {
             out.moveTo(x + d, y);

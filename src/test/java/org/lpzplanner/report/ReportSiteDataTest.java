@@ -20,6 +20,7 @@ import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.design.DesignService;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.risk.RiskService;
 import org.lpzplanner.sites.AirTerminationService;
 import org.lpzplanner.sites.SiteCutService;
@@ -56,6 +57,8 @@ class ReportSiteDataTest {
     ReportService reports;
     @Autowired
     SiteCutService cuts;
+    @Autowired
+    KeepOutAreaService keepOut;
 
     /** The 80 m × 40 m warehouse (wall 10 m, parapet 1 m) at level III with one 2.5 m rod at (3, 4). */
     private long designedWarehouse() throws Exception {
@@ -171,5 +174,49 @@ class ReportSiteDataTest {
                 .contains("m along the cut").containsPattern("\\b100\\b");
         // drawn before the automatic cuts
         assertThat(text.indexOf("Section through")).isGreaterThan(at);
+    }
+
+    @Test
+    void keepOutAreasAreHatchedOnThePlanAndListedWithTheirAreaAsStoredWhenPrinted() throws Exception {
+        long id = designedWarehouse();
+        String before = text(reports.pdf(id, 1));
+        assertThat(before).contains("No keep-out areas are stored for the site").doesNotContain("Keep-out area, hatched");
+
+        // stored after the revision: keep-out areas belong to the site and print as stored when printed
+        // a 4 m × 3 m roof hatch around the rod A1 at (3, 4): 12 m² (closed form), A1 inside it
+        keepOut.save(id, "Roof hatch", List.of(new double[] {1, 3}, new double[] {5, 3}, new double[] {5, 6},
+                new double[] {1, 6}));
+        // a 20 m × 15 m solar array: 300 m², no part inside
+        keepOut.save(id, "Solar array", List.of(new double[] {50, 20}, new double[] {70, 20}, new double[] {70, 35},
+                new double[] {50, 35}));
+        long gone = keepOut.save(id, "Removed walkway", List.of(new double[] {20, 20}, new double[] {30, 20},
+                new double[] {30, 22})).id();
+        keepOut.delete(id, gone);
+        byte[] pdf = reports.pdf(id, 1);
+        String text = text(pdf);
+
+        assertThat(text).contains("Keep-out area, hatched (K1, …)").doesNotContain("Removed walkway")
+                .doesNotContain("No keep-out areas are stored");
+        int at = text.indexOf("Keep-out areas No. Name Area (m²)");
+        assertThat(at).as(text).isPositive();
+        String schedule = text.substring(at, Math.min(text.length(), at + 1200));
+        assertThat(schedule).contains("K1 Roof hatch 12.00").contains("K2 Solar array 300.00")
+                .contains("(1.00, 3.00)").contains("(70.00, 35.00)").contains("(1.00, 6.00) A1 K2").contains("(50.00, 35.00) none")
+                .containsPattern("area in plan\\. As stored for the site on \\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2}"
+                        + " UTC when this report was printed")
+                .contains("move them, or confirm with whoever uses the area");
+
+        Path dir = Path.of("target/report-pages");
+        Files.createDirectories(dir);
+        try (PDDocument doc = Loader.loadPDF(pdf)) {
+            PDFRenderer renderer = new PDFRenderer(doc);
+            List<String> pages = ReportPdfTest.pages(pdf);
+            for (int i = 0; i < pages.size(); i++) {
+                if (pages.get(i).contains("Plan, scale") || pages.get(i).contains("Keep-out areas")) {
+                    ImageIO.write(renderer.renderImageWithDPI(i, 100), "png",
+                            dir.resolve("keep-out-" + (i + 1) + ".png").toFile());
+                }
+            }
+        }
     }
 }
