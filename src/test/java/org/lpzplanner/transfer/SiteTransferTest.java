@@ -16,6 +16,7 @@ import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.design.DesignService;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.sites.AirTerminationService;
 import org.lpzplanner.sites.SiteCutService;
 import org.lpzplanner.sites.SiteService;
@@ -56,6 +57,8 @@ class SiteTransferTest {
     CommentService comments;
     @Autowired
     SiteCutService cuts;
+    @Autowired
+    KeepOutAreaService keepOut;
 
     /** A site with an added rod, a corrected structure (two earlier files), two revisions and an accepted item. */
     private long workedSite() throws Exception {
@@ -80,6 +83,8 @@ class SiteTransferTest {
         design.saveDownConductors(site.id(), planned.structureId(), moved);
         design.addInstallation(site.id(), "Vent pipe \u00e9", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
         cuts.save(site.id(), "Quay \u00e9 section", new String[] {"-10", "20", "90.25", "20"});
+        keepOut.save(site.id(), "Skylight \u00e9 north", java.util.List.of(new double[] {10, 30}, new double[] {14.5, 30},
+                new double[] {14.5, 33}, new double[] {10, 33}));
         comments.comment(site.id(), "Check the gutter bonding \u2013 \"north\" side");
         comments.markReviewed(site.id());
         return site.id();
@@ -104,7 +109,7 @@ class SiteTransferTest {
                 + " + (SELECT COUNT(*) FROM analysis_revisions) + (SELECT COUNT(*) FROM accepted_items)"
                 + " + (SELECT COUNT(*) FROM site_risk_inputs) + (SELECT COUNT(*) FROM down_conductor_positions)"
                 + " + (SELECT COUNT(*) FROM metal_installations) + (SELECT COUNT(*) FROM site_comments)"
-                + " + (SELECT COUNT(*) FROM site_cuts)"
+                + " + (SELECT COUNT(*) FROM site_cuts) + (SELECT COUNT(*) FROM site_keep_out_areas)"
                 + " + (SELECT COUNT(*) FROM revision_reviews) + (SELECT COUNT(*) FROM audit_events)")
                 .query(Long.class).single();
     }
@@ -126,6 +131,8 @@ class SiteTransferTest {
         assertThat(doc.path("comments").get(0).path("body").stringValue()).contains("gutter bonding");
         assertThat(doc.path("savedCuts")).hasSize(1);
         assertThat(doc.path("savedCuts").get(0).path("x2").asDouble()).isEqualTo(90.25);
+        assertThat(doc.path("keepOutAreas")).hasSize(1);
+        assertThat(doc.path("keepOutAreas").get(0).path("corners").get(1).get(0).asDouble()).isEqualTo(14.5);
         JsonNode trail = doc.path("auditTrail");
         assertThat(trail.size()).isGreaterThanOrEqualTo(4);
         assertThat(trail.get(0).path("action").stringValue()).isEqualTo("upload");
@@ -151,8 +158,24 @@ class SiteTransferTest {
             assertThat(c.name()).isEqualTo("Quay \u00e9 section");
             assertThat(new double[] {c.x1(), c.y1(), c.x2(), c.y2()}).containsExactly(-10, 20, 90.25, 20);
         });
+        assertThat(keepOut.areas(copy)).singleElement().satisfies(k -> {
+            assertThat(k.name()).isEqualTo("Skylight \u00e9 north");
+            assertThat(k.corners()).hasSize(4);
+            assertThat(k.corners().get(2)).containsExactly(14.5, 33);
+            assertThat(k.area()).isEqualTo(4.5 * 3); // 4.5 m × 3 m
+        });
         assertThat(comments.reviews(copy)).hasSize(1);
         mvc.perform(get("/api/sites/" + copy + "/file/versions/2")).andExpect(status().isOk());
+    }
+
+    @Test
+    void anExportWrittenBeforeKeepOutAreasImportsWithNone() throws Exception {
+        long id = workedSite();
+        ObjectNode older = (ObjectNode) JSON.readTree(export(id));
+        older.remove("keepOutAreas");
+        long copy = importFile(bytes(older));
+        assertThat(keepOut.areas(copy)).isEmpty();
+        assertThat(cuts.cuts(copy)).hasSize(1);
     }
 
     @Test
@@ -219,6 +242,18 @@ class SiteTransferTest {
         ObjectNode shortCut = good.deepCopy();
         ((ObjectNode) shortCut.get("savedCuts").get(0)).put("x2", -9.5).put("y2", 20);
         refused(bytes(shortCut), "savedCuts[0]", "1 m to 2000 m apart");
+        ObjectNode bowTie = good.deepCopy();
+        // the sides (10, 30)-(14.5, 30) and (14.5, 33)-(10, 33) swapped into a bow tie crossing itself
+        ((ObjectNode) bowTie.get("keepOutAreas").get(0)).set("corners", JSON.readTree("[[10, 30], [14.5, 33],"
+                + " [14.5, 30], [10, 33]]"));
+        refused(bytes(bowTie), "keepOutAreas[0].corners", "crosses itself");
+        ObjectNode badCorner = good.deepCopy();
+        ((ObjectNode) badCorner.get("keepOutAreas").get(0)).set("corners", JSON.readTree("[[10, 30], [\"x\", 30],"
+                + " [14.5, 33]]"));
+        refused(bytes(badCorner), "keepOutAreas[0].corners[1]", "[x, y]");
+        ObjectNode unnamed = good.deepCopy();
+        ((ObjectNode) unnamed.get("keepOutAreas").get(0)).put("name", "");
+        refused(bytes(unnamed), "keepOutAreas[0].name", "must not be empty");
         ObjectNode badPosition = good.deepCopy();
         ((tools.jackson.databind.node.ArrayNode) badPosition.get("downConductors").get(0).get("positions")).set(1,
                 JSON.getNodeFactory().stringNode("north"));
