@@ -149,11 +149,11 @@ public final class PlanSvg {
         svg.append("<g id=\"keep-out-areas\" pointer-events=\"none\">");
         for (KeepOut k : areas) {
             StringBuilder d = new StringBuilder();
-            double sx = 0, sy = 0;
+            double minX = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
             for (int i = 0; i < k.corners().size(); i++) {
                 double[] c = k.corners().get(i);
-                sx += c[0];
-                sy += c[1];
+                minX = Math.min(minX, c[0]);
+                maxY = Math.max(maxY, c[1]);
                 d.append(i == 0 ? "M" : " L").append(String.format(Locale.ROOT, " %.1f %.1f", frame.x(c[0]),
                         frame.y(c[1])));
             }
@@ -162,11 +162,11 @@ public final class PlanSvg {
                     .append("\" fill=\"url(#keep-out-hatch)\" stroke=\"").append(KEEP_OUT)
                     .append("\" stroke-width=\"1.5\" stroke-dasharray=\"6 3\" d=\"").append(d).append("\"><title>")
                     .append(escape(k.name())).append("</title></path>");
-            int n = Math.max(1, k.corners().size());
+            // the name at the area's top left, clear of the structure names, which sit in the middle
             svg.append(String.format(Locale.ROOT, "<text class=\"keep-out-label\" x=\"%.1f\" y=\"%.1f\""
-                    + " text-anchor=\"middle\" font-size=\"10\" font-family=\"sans-serif\" fill=\"%s\""
-                    + " stroke=\"#ffffff\" stroke-width=\"3\" paint-order=\"stroke\">%s</text>",
-                    frame.x(sx / n), frame.y(sy / n), KEEP_OUT, escape(k.name())));
+                    + " font-size=\"10\" font-family=\"sans-serif\" fill=\"%s\" stroke=\"#ffffff\""
+                    + " stroke-width=\"3\" paint-order=\"stroke\">%s</text>",
+                    frame.x(minX) + 3, frame.y(maxY) + 11, KEEP_OUT, escape(k.name())));
         }
         svg.append("</g>");
     }

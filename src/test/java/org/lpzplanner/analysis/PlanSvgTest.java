@@ -99,4 +99,28 @@ class PlanSvgTest {
         String d = fromPath.substring(fromPath.indexOf("d=\"M ") + 5);
         return Double.parseDouble(d.split(" ")[1]);
     }
+
+    @Test
+    void storedKeepOutAreasAreHatchedWithALegendRowAndTheirNamesEscaped() {
+        Site site = SiteFiles.read("POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n", "block.wkt").site();
+        var result = ExposureAnalysis.analyze(site, AnalysisOptions.of(SphereSpec.of(ProtectionLevel.II)));
+        String geoJson = ResultGeoJson.write(site, result);
+        String without = PlanSvg.render(geoJson, KEYS);
+        assertThat(without).doesNotContain("keep-out").doesNotContain("plan.legend.keepOut");
+
+        // an area well east of the block (and of its protected ground) widens the drawn extent to x = 110
+        String svg = PlanSvg.render(geoJson, KEYS, java.util.Map.of(), java.util.List.of(new PlanSvg.KeepOut(
+                "<Panels> & \"vents\"", java.util.List.of(new double[] {100, 2}, new double[] {110, 2},
+                        new double[] {110, 8}, new double[] {100, 8}))));
+        assertThat(svg).contains("<pattern id=\"keep-out-hatch\"").contains("class=\"keep-out-area\"")
+                .contains("fill=\"url(#keep-out-hatch)\"").contains("plan.legend.keepOut[]")
+                .contains("data-keep-out-name=\"&lt;Panels&gt; &amp; &quot;vents&quot;\"")
+                .doesNotContain("<Panels>");
+        // the west end of the drawing stays where the result puts it; the width is then what governs the
+        // scale: (820 - 2 · 36) SVG units over the metres from there to x = 110
+        double west = Double.parseDouble(without.replaceAll("(?s).*?data-origin-x=\"(-?[0-9.]+)\".*", "$1"));
+        assertThat(svg).contains("data-origin-x=\"" + String.format(java.util.Locale.ROOT, "%.6f", west) + "\"");
+        double scale = Double.parseDouble(svg.replaceAll("(?s).*?data-scale=\"([0-9.]+)\".*", "$1"));
+        assertThat(scale).isCloseTo((820 - 2 * 36) / (110 - west), org.assertj.core.api.Assertions.within(1e-5));
+    }
 }

@@ -133,6 +133,11 @@ class KeepOutAreaApiTest {
         assertThat(plan).contains("class=\"keep-out-area\"").contains("data-keep-out-name=\"North skylight\"")
                 .contains("url(#keep-out-hatch)").contains("Keep-out area stored for the site")
                 .contains("keep-out area added");
+        // a rod placed on the plan answers with the plan drawn again: the stored areas stay on it
+        JsonNode change = send(post("/api/sites/{id}/rods", id).contentType(MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + sites.get(id).version() + ", \"x\": 30, \"y\": 30, \"height\": \"1\"}"),
+                201);
+        assertThat(change.path("svg").asString()).contains("data-keep-out-name=\"North skylight\"");
     }
 
     @Test
