@@ -54,7 +54,7 @@ public class KeepOutAreaApiController {
                     + " site. Designers and administrators only")
     @ApiResponse(responseCode = "201", description = "Stored; Location names the area")
     @ApiResponse(responseCode = "400", description = "The name or the corners are unusable, or the site keeps the most areas it may; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<KeepOutArea> save(@PathVariable long id, @RequestBody JsonNode body) {
@@ -70,7 +70,7 @@ public class KeepOutAreaApiController {
             + " Designers and administrators only")
     @ApiResponse(responseCode = "200", description = "Renamed; the area as stored")
     @ApiResponse(responseCode = "400", description = "The name is unusable", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such area", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PatchMapping(path = "/{areaId}", consumes = MediaType.APPLICATION_JSON_VALUE)
     public KeepOutArea rename(@PathVariable long id, @PathVariable long areaId, @RequestBody JsonNode body) {
@@ -82,7 +82,7 @@ public class KeepOutAreaApiController {
 
     @Operation(summary = "Delete a keep-out area", description = "Designers and administrators only")
     @ApiResponse(responseCode = "204", description = "Deleted")
-    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such area", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @DeleteMapping("/{areaId}")
     public ResponseEntity<Void> delete(@PathVariable long id, @PathVariable long areaId) {
