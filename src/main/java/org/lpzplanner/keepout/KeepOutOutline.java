@@ -57,6 +57,9 @@ public final class KeepOutOutline {
      * @throws InvalidInputException naming {@code field} or {@code field[i]}
      */
     public static List<double[]> checked(List<double[]> given, String field) {
+        if (given == null) {
+            throw new InvalidInputException(field, "give the outline as [[x, y], …] in local metres");
+        }
         List<double[]> corners = new ArrayList<>(given);
         if (corners.size() > 3 && same(corners.get(0), corners.get(corners.size() - 1))) {
             corners.remove(corners.size() - 1);
