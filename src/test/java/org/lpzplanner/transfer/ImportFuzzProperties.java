@@ -58,11 +58,12 @@ class ImportFuzzProperties {
     /**
      * Members a file may leave out: those written after the format's first release (read as empty),
      * what a revision read (revisions stored before that was kept have none) and risk inputs left
-     * at their defaults.
+     * at their defaults, and cover details left empty.
      */
     private static final List<String> OPTIONAL = List.of("customRadius", "tolerance", "reviews", "riskInputs",
             "downConductors", "metalInstallations", "savedCuts", "comments", "auditTrail", "flashDensity",
-            "thunderstormDays", "lineLength", "siteName", "sourceName", "sourceText", "locationFactor", "lineCount");
+            "thunderstormDays", "lineLength", "siteName", "sourceName", "sourceText", "locationFactor", "lineCount",
+            "address", "designer");
 
     @Autowired
     MockMvc mvc;
