@@ -40,9 +40,11 @@ class PlanPage {
     private final SectionPage sectionPage;
     private final CommentService comments;
     private final AuditTrail audit;
+    private final List<PlanContribution> contributions;
 
     PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews,
-            SectionPage sectionPage, CommentService comments, AuditTrail audit) {
+            SectionPage sectionPage, CommentService comments, AuditTrail audit, List<PlanContribution> contributions) {
+        this.contributions = List.copyOf(contributions);
         this.comments = comments;
         this.audit = audit;
         this.sectionPage = sectionPage;
@@ -63,6 +65,7 @@ class PlanPage {
         model.put("method", ResultGeoJson.METHOD);
         model.put("cautions", Cautions.lines());
         model.put("levels", ProtectionLevel.values());
+        contributions.forEach(c -> model.putAll(c.attributes(site, locale)));
         model.put("structures", sites.structures(site));
         model.put("roofForms", ROOF_FORMS);
         model.put("rodHeights", ROD_HEIGHTS);

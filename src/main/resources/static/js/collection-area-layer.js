@@ -1,0 +1,114 @@
+// Collection area layer on the plan page: a checkbox draws the risk estimate's collection area A_D
+// (rings in local metres, from the checkbox's data-zone) under the structures of the plan, in the
+// plan's own frame (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
+// usually reaches beyond the drawn site, so the view is widened to hold it, and the legend is moved
+// below it. The layer is drawn again when the plan is replaced after an edit. Without this module
+// the checkbox stays hidden.
+
+const SVG_NS = 'http://www.w3.org/2000/svg';
+const LAYER = 'collection-area-layer';
+const PAD = 12;
+
+function setUp(toggle) {
+  const drawing = document.getElementById('plan-drawing');
+  if (!drawing) {
+    return;
+  }
+  const rings = JSON.parse(toggle.dataset.zone || '[]');
+  if (rings.length === 0) {
+    return;
+  }
+  document.getElementById('collection-area-control').hidden = false;
+
+  function frameOf(svg) {
+    const d = svg.dataset;
+    return { originX: Number(d.originX), originY: Number(d.originY), scale: Number(d.scale), margin: Number(d.margin),
+      drawHeight: Number(d.drawHeight) };
+  }
+
+  function draw(svg) {
+    if (svg.querySelector('.' + LAYER)) {
+      return;
+    }
+    const f = frameOf(svg);
+    if (!svg.dataset.viewBoxPlain) {
+      svg.dataset.viewBoxPlain = svg.getAttribute('viewBox');
+      svg.dataset.heightPlain = svg.getAttribute('height');
+    }
+    let d = '';
+    let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+    for (const ring of rings) {
+      ring.forEach(([x, y], i) => {
+        const sx = f.margin + (x - f.originX) * f.scale;
+        const sy = f.margin + (f.originY - y) * f.scale;
+        minX = Math.min(minX, sx); maxX = Math.max(maxX, sx);
+        minY = Math.min(minY, sy); maxY = Math.max(maxY, sy);
+        d += (i === 0 ? 'M' : 'L') + sx.toFixed(2) + ' ' + sy.toFixed(2);
+      });
+      d += 'Z';
+    }
+    const path = document.createElementNS(SVG_NS, 'path');
+    path.setAttribute('class', LAYER);
+    path.setAttribute('d', d);
+    path.setAttribute('fill-rule', 'evenodd');
+    const title = document.createElementNS(SVG_NS, 'title');
+    title.textContent = toggle.dataset.title;
+    path.appendChild(title);
+    // under everything but the background, so structures and exposure stay on top
+    const background = svg.querySelector('rect');
+    svg.insertBefore(path, background ? background.nextSibling : svg.firstChild);
+
+    const [vx, vy, vw, vh] = svg.dataset.viewBoxPlain.split(/\s+/).map(Number);
+    const below = Math.max(0, maxY + PAD - f.drawHeight);
+    const legend = svg.querySelector('g.legend');
+    if (legend && below > 0) {
+      legend.setAttribute('transform', 'translate(0 ' + below.toFixed(1) + ')');
+    }
+    const left = Math.min(vx, minX - PAD);
+    const top = Math.min(vy, minY - PAD);
+    const right = Math.max(vx + vw, maxX + PAD);
+    const bottom = vy + vh + below;
+    const width = right - left;
+    const height = bottom - top;
+    svg.setAttribute('viewBox', [left, top, width, height].map((v) => v.toFixed(1)).join(' '));
+    svg.setAttribute('height', (Number(svg.getAttribute('width')) * height / width).toFixed(0));
+  }
+
+  function remove(svg) {
+    svg.querySelectorAll('.' + LAYER).forEach((element) => element.remove());
+    if (svg.dataset.viewBoxPlain) {
+      svg.setAttribute('viewBox', svg.dataset.viewBoxPlain);
+      svg.setAttribute('height', svg.dataset.heightPlain);
+    }
+    const legend = svg.querySelector('g.legend');
+    if (legend) {
+      legend.removeAttribute('transform');
+    }
+  }
+
+  function update() {
+    const svg = drawing.querySelector('svg.plan');
+    if (!svg) {
+      return;
+    }
+    if (toggle.checked) {
+      draw(svg);
+    } else {
+      remove(svg);
+    }
+  }
+
+  toggle.addEventListener('change', update);
+  // the plan editor replaces the drawing after each change: draw the layer again if it is on
+  new MutationObserver(() => {
+    if (toggle.checked) {
+      update();
+    }
+  }).observe(drawing, { childList: true });
+  update();
+}
+
+const toggle = document.getElementById('collection-area-toggle');
+if (toggle) {
+  setUp(toggle);
+}
