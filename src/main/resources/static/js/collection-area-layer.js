@@ -1,7 +1,7 @@
 // Collection area layer on the plan page: a checkbox draws the risk estimate's collection area A_D
 // (rings in local metres, from the checkbox's data-zone) under the structures of the plan, in the
 // plan's own frame (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
-// usually reaches beyond the drawn site, so the view is widened to hold it, and the legend is moved
+// often reaches beyond the drawn site, so the view is widened to hold it, and the legend is moved
 // below it. The layer is drawn again when the plan is replaced after an edit. Without this module
 // the checkbox stays hidden.
 
@@ -54,20 +54,21 @@ function setUp(toggle) {
     const title = document.createElementNS(SVG_NS, 'title');
     title.textContent = toggle.dataset.title;
     path.appendChild(title);
-    // under everything but the background, so structures and exposure stay on top
-    const background = svg.querySelector('rect');
-    svg.insertBefore(path, background ? background.nextSibling : svg.firstChild);
+    // over the protected ground (opaque) and under the exposed areas, edges and parts, which stay on top
+    const grounds = svg.querySelectorAll('path.protected-ground');
+    const below = grounds.length > 0 ? grounds[grounds.length - 1] : svg.querySelector('rect');
+    svg.insertBefore(path, below ? below.nextSibling : svg.firstChild);
 
     const [vx, vy, vw, vh] = svg.dataset.viewBoxPlain.split(/\s+/).map(Number);
-    const below = Math.max(0, maxY + PAD - f.drawHeight);
+    const overhang = Math.max(0, maxY + PAD - f.drawHeight);
     const legend = svg.querySelector('g.legend');
-    if (legend && below > 0) {
-      legend.setAttribute('transform', 'translate(0 ' + below.toFixed(1) + ')');
+    if (legend && overhang > 0) {
+      legend.setAttribute('transform', 'translate(0 ' + overhang.toFixed(1) + ')');
     }
     const left = Math.min(vx, minX - PAD);
     const top = Math.min(vy, minY - PAD);
     const right = Math.max(vx + vw, maxX + PAD);
-    const bottom = vy + vh + below;
+    const bottom = vy + vh + overhang;
     const width = right - left;
     const height = bottom - top;
     svg.setAttribute('viewBox', [left, top, width, height].map((v) => v.toFixed(1)).join(' '));
