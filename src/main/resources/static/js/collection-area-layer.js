@@ -72,6 +72,12 @@ function setUp(toggle) {
     const width = right - left;
     const height = bottom - top;
     svg.setAttribute('viewBox', [left, top, width, height].map((v) => v.toFixed(1)).join(' '));
+    // the drawing's background grows with the view, down to where the legend now starts
+    const background = svg.querySelector('rect');
+    if (background) {
+      background.dataset.plain = ['x', 'y', 'width', 'height'].map((a) => background.getAttribute(a)).join(' ');
+      setBox(background, [left, top, width, f.drawHeight + overhang - top]);
+    }
     svg.setAttribute('height', (Number(svg.getAttribute('width')) * height / width).toFixed(0));
   }
 
@@ -85,6 +91,18 @@ function setUp(toggle) {
     if (legend) {
       legend.removeAttribute('transform');
     }
+    const background = svg.querySelector('rect');
+    if (background && background.dataset.plain) {
+      setBox(background, background.dataset.plain.split(' ').map(Number));
+      delete background.dataset.plain;
+    }
+  }
+
+  function setBox(rect, [x, y, width, height]) {
+    rect.setAttribute('x', x.toFixed(1));
+    rect.setAttribute('y', y.toFixed(1));
+    rect.setAttribute('width', width.toFixed(1));
+    rect.setAttribute('height', height.toFixed(1));
   }
 
   function update() {
