@@ -145,6 +145,39 @@ class CollectionAreaOpTest {
         assertThat(area).isGreaterThan((20 * 48 + 576 * Math.PI) * (1 - CollectionAreaOp.MAX_RELATIVE_ERROR));
     }
 
+    static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> pitchedRoofs() {
+        String square = "POLYGON((0 0, 30 0, 30 30, 0 30, 0 0))";
+        String courtyard = "POLYGON((0 0, 30 0, 30 30, 0 30, 0 0), (10 10, 10 20, 20 20, 20 10, 10 10))";
+        String ell = "POLYGON((0 0, 24 0, 24 8, 8 8, 8 24, 0 24, 0 0))";
+        List<RoofShape> roofs = List.of(new RoofShape.Gable(11, 90), new RoofShape.Gable(11, 30), new RoofShape.Hip(11),
+                new RoofShape.Shed(11, 0), new RoofShape.Shed(11, 225));
+        java.util.List<org.junit.jupiter.params.provider.Arguments> cases = new java.util.ArrayList<>();
+        for (String footprint : List.of(square, courtyard, ell)) {
+            for (RoofShape roof : roofs) {
+                if (roof instanceof RoofShape.Hip && !footprint.equals(square)) {
+                    continue; // hip roofs need a convex footprint
+                }
+                cases.add(org.junit.jupiter.params.provider.Arguments.of(footprint, roof));
+            }
+        }
+        return cases.stream();
+    }
+
+    @ParameterizedTest(name = "{1} on {0}")
+    @org.junit.jupiter.params.provider.MethodSource("pitchedRoofs")
+    void pitchedRoofZoneLiesBetweenTheFlatZonesAtWallAndRidgeHeight(String footprint, RoofShape roof) {
+        // Every roof point stands between the wall top (5 m) and the ridge or high side (11 m), and
+        // the roof covers the whole footprint, so the exact zone contains the footprint's zone at
+        // 5 m and lies inside its zone at 11 m (monotonicity of the union of discs in the radius).
+        Geometry shape = wkt(footprint);
+        double area = CollectionAreaOp.ofStructures(List.of(new Structure("p", "p", shape, 5, roof))).area();
+        double low = CollectionAreaOp.ofStructures(List.of(new Structure("p", "p", shape, 5, new RoofShape.Flat(0)))).area();
+        double high = CollectionAreaOp.ofStructures(List.of(new Structure("p", "p", shape, 11, new RoofShape.Flat(0)))).area();
+
+        assertThat(area).isGreaterThanOrEqualTo(low * (1 - CollectionAreaOp.MAX_RELATIVE_ERROR));
+        assertThat(area).isLessThan(high);
+    }
+
     @Test
     void lShapedBuildingMatchesHandCalculation() {
         // L of arms [0,20]×[0,10] and [0,10]×[0,20], 2 m tall, so r = 6 m; notch [10,20]×[10,20].
