@@ -1,13 +1,16 @@
 // Collection area layer on the plan page: a checkbox draws the risk estimate's collection area A_D
 // (rings in local metres, from the checkbox's data-zone) under the structures of the plan, in the
 // plan's own frame (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
-// often reaches beyond the drawn site, so the view is widened to hold it, and the legend is moved
-// below it. The layer is drawn again when the plan is replaced after an edit. Without this module
+// often reaches beyond the drawn site: the view is widened to hold it and the legend moved below
+// it, up to MAX_WIDENING; a larger zone (a tall building) is clipped to the drawing with a note. The layer is drawn again when the plan is replaced after an edit. Without this module
 // the checkbox stays hidden.
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
 const LAYER = 'collection-area-layer';
 const PAD = 12;
+const CLIP_ID = 'collection-area-clip';
+// the view may grow to this multiple of its width or height; a larger zone is clipped instead
+const MAX_WIDENING = 1.6;
 
 function setUp(toggle) {
   const drawing = document.getElementById('plan-drawing');
@@ -19,6 +22,7 @@ function setUp(toggle) {
     return;
   }
   document.getElementById('collection-area-control').hidden = false;
+  const clippedNote = document.getElementById('collection-area-clipped');
 
   function frameOf(svg) {
     const d = svg.dataset;
@@ -61,28 +65,47 @@ function setUp(toggle) {
 
     const [vx, vy, vw, vh] = svg.dataset.viewBoxPlain.split(/\s+/).map(Number);
     const overhang = Math.max(0, maxY + PAD - f.drawHeight);
-    const legend = svg.querySelector('g.legend');
-    if (legend && overhang > 0) {
-      legend.setAttribute('transform', 'translate(0 ' + overhang.toFixed(1) + ')');
-    }
     const left = Math.min(vx, minX - PAD);
     const top = Math.min(vy, minY - PAD);
     const right = Math.max(vx + vw, maxX + PAD);
     const bottom = vy + vh + overhang;
     const width = right - left;
     const height = bottom - top;
+    if (width > MAX_WIDENING * vw || height > MAX_WIDENING * vh) {
+      // widening this far would shrink the site and the legend beyond reading: keep the view, clip
+      // the zone to the drawing area and say that it goes on (the risk page draws all of it)
+      clipToDrawing(svg, path, vw, f.drawHeight);
+      clippedNote.hidden = false;
+      return;
+    }
+    const legend = svg.querySelector('g.legend');
+    if (legend && overhang > 0) {
+      legend.setAttribute('transform', 'translate(0 ' + overhang.toFixed(1) + ')');
+    }
     svg.setAttribute('viewBox', [left, top, width, height].map((v) => v.toFixed(1)).join(' '));
+    svg.setAttribute('height', (Number(svg.getAttribute('width')) * height / width).toFixed(0));
     // the drawing's background grows with the view, down to where the legend now starts
     const background = svg.querySelector('rect');
     if (background) {
       background.dataset.plain = ['x', 'y', 'width', 'height'].map((a) => background.getAttribute(a)).join(' ');
       setBox(background, [left, top, width, f.drawHeight + overhang - top]);
     }
-    svg.setAttribute('height', (Number(svg.getAttribute('width')) * height / width).toFixed(0));
+  }
+
+  function clipToDrawing(svg, path, width, drawHeight) {
+    const clip = document.createElementNS(SVG_NS, 'clipPath');
+    clip.setAttribute('id', CLIP_ID);
+    clip.setAttribute('class', LAYER);
+    const box = document.createElementNS(SVG_NS, 'rect');
+    setBox(box, [0, 0, width, drawHeight]);
+    clip.appendChild(box);
+    svg.insertBefore(clip, svg.firstChild);
+    path.setAttribute('clip-path', 'url(#' + CLIP_ID + ')');
   }
 
   function remove(svg) {
     svg.querySelectorAll('.' + LAYER).forEach((element) => element.remove());
+    clippedNote.hidden = true;
     if (svg.dataset.viewBoxPlain) {
       svg.setAttribute('viewBox', svg.dataset.viewBoxPlain);
       svg.setAttribute('height', svg.dataset.heightPlain);

@@ -118,4 +118,40 @@ class RiskPageBrowserTest extends BrowserTestBase {
         browser.findElement(By.linkText("Back to the plan of Risk block")).click();
         assertThat(browser.findElement(By.tagName("body")).getText()).contains("Risk block");
     }
+
+    @Test
+    void aZoneFarLargerThanThePlanIsClippedToTheDrawingWithANote() throws Exception {
+        // a 10 × 10 m mast house 60 m tall: its zone reaches 3·60 = 180 m beyond the walls
+        // (IEC 62305-2 Annex A), far beyond the drawn plan, which would shrink past reading if widened
+        Path file = Files.createDirectories(Path.of("target", "browser-files")).resolve("risk-mast.geojson");
+        Files.writeString(file, """
+                {"type": "FeatureCollection", "name": "Risk mast", "coordinates": "local-metres", "features": [
+                  {"type": "Feature", "properties": {"kind": "structure", "name": "Mast house", "height": 60},
+                   "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [10, 0], [10, 10], [0, 10], [0, 0]]]}}
+                ]}
+                """);
+        browser.get("http://localhost:" + port + "/");
+        browser.findElement(By.cssSelector("input[type=file][name=file]")).sendKeys(file.toAbsolutePath().toString());
+        browser.findElement(By.cssSelector("form button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(60)).until(ExpectedConditions.urlMatches(".*/sites/\\d+$"));
+
+        WebElement plan = browser.findElement(By.cssSelector("#plan-drawing svg.plan"));
+        String plainViewBox = plan.getDomAttribute("viewBox");
+        assertThat(browser.findElement(By.id("collection-area-clipped")).isDisplayed()).isFalse();
+        browser.findElement(By.id("collection-area-toggle")).click();
+
+        WebElement layer = plan.findElement(By.cssSelector("path.collection-area-layer"));
+        assertThat(layer.getDomAttribute("clip-path")).isEqualTo("url(#collection-area-clip)");
+        assertThat(plan.getDomAttribute("viewBox")).isEqualTo(plainViewBox);
+        assertThat(browser.findElement(By.id("collection-area-clipped")).getText()).contains("cut off", "risk page");
+        Path shots = Files.createDirectories(Path.of("target", "screenshots"));
+        browser.manage().window().setSize(new Dimension(1400, 1400));
+        browser.executeScript("arguments[0].scrollIntoView();", plan);
+        Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("plan-collection-area-clipped.png"),
+                StandardCopyOption.REPLACE_EXISTING);
+
+        browser.findElement(By.id("collection-area-toggle")).click();
+        assertThat(plan.findElements(By.cssSelector(".collection-area-layer"))).isEmpty();
+        assertThat(browser.findElement(By.id("collection-area-clipped")).isDisplayed()).isFalse();
+    }
 }
