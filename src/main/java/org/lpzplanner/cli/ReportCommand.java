@@ -23,7 +23,9 @@ import org.lpzplanner.report.ReportAssembler;
 import org.lpzplanner.report.ReportSource;
 import org.lpzplanner.report.StoredDesign;
 import org.lpzplanner.common.ReportSection;
+import org.lpzplanner.sites.CoverDetails;
 import org.lpzplanner.sites.SiteFiles;
+import org.lpzplanner.system.InvalidInputException;
 
 /**
  * {@code report}: analyses a site (with the parts of {@code --parts} added) and writes the printed
@@ -33,6 +35,8 @@ final class ReportCommand implements Command {
 
     static final String OUT = "--out";
     static final String PARTS = "--parts";
+    static final String ADDRESS = "--address";
+    static final String DESIGNER = "--designer";
 
     /**
      * The risk estimate needs the site's stored risk inputs (flash density, use, occupancy, lines);
@@ -55,6 +59,8 @@ final class ReportCommand implements Command {
         Set<String> names = new HashSet<>(AssessmentSettings.OPTION_NAMES);
         names.add(OUT);
         names.add(PARTS);
+        names.add(ADDRESS);
+        names.add(DESIGNER);
         return names;
     }
 
@@ -62,6 +68,8 @@ final class ReportCommand implements Command {
     public void run(CliOptions options, PrintStream out) {
         AssessmentSettings settings = AssessmentSettings.from(options);
         options.required(OUT, "FILE");
+        ReportSource.Cover cover = new ReportSource.Cover(coverText(options, ADDRESS), coverText(options, DESIGNER),
+                null);
         Path outFile = options.outputFile(OUT);
         String siteName = settings.site().getFileName().toString();
         String text = read(settings.site(), AssessmentSettings.SITE);
@@ -82,7 +90,7 @@ final class ReportCommand implements Command {
         AnalysisResult result = ExposureAnalysis.analyze(document.site(), settings.analysisOptions());
         ReportSource source = new ReportSource(document.site().name(), siteName, text, settings.sphere(),
                 result.resolution(), result.tolerance(), 0, Instant.now().truncatedTo(ChronoUnit.SECONDS),
-                AnalysisService.sha256(text), ResultGeoJson.write(document, result), Map.of(), List.of());
+                AnalysisService.sha256(text), ResultGeoJson.write(document, result), Map.of(), List.of(), cover);
         byte[] pdf = PdfReportRenderer.render(ReportAssembler.assemble(source, result.envelope(), StoredDesign.NONE,
                 List.of(RISK_LEFT_OUT)));
         try {
@@ -91,6 +99,16 @@ final class ReportCommand implements Command {
             throw new CliException(OUT + ": cannot write " + outFile + ": " + e.getMessage(), e);
         }
         out.println("Report written to " + outFile + " (" + pdf.length / 1024 + " KiB)");
+    }
+
+    /** An optional cover detail, checked as the web app checks it; empty when not given. */
+    private static String coverText(CliOptions options, String option) {
+        try {
+            String value = CoverDetails.check(option, options.value(option));
+            return value == null ? "" : value;
+        } catch (InvalidInputException e) {
+            throw new CliException(e.getMessage(), e);
+        }
     }
 
     private static String read(Path file, String option) {

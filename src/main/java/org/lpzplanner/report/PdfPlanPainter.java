@@ -3,6 +3,7 @@ package org.lpzplanner.report;
 import java.awt.Color;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.util.ArrayList;
 import java.util.List;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.lpzplanner.report.PlanDrawing.Label;
@@ -130,17 +131,23 @@ final class PdfPlanPainter {
             for (Shape s : plan.shapes()) {
                 shape(out, s, k, ox, oy, cx, cy);
             }
-            for (Label l : plan.labels()) {
-                float x = (float) (ox + (l.x() - cx) * k), y = (float) (oy + (l.y() - cy) * k);
-                if ((l.small() && !numbers) || x < PdfPages.MARGIN || x > PdfPages.MARGIN + frameW || y < frameBottom
-                        || y > frameTop) {
-                    continue;
+            // Names first, then the numbers around them: a number goes where it overlaps no label
+            // already placed, so that D44 next to E0 does not read as "D440".
+            List<float[]> taken = new ArrayList<>();
+            for (boolean small : new boolean[] {false, true}) {
+                for (Label l : plan.labels()) {
+                    float x = (float) (ox + (l.x() - cx) * k), y = (float) (oy + (l.y() - cy) * k);
+                    if (l.small() != small || (l.small() && !numbers) || x < PdfPages.MARGIN
+                            || x > PdfPages.MARGIN + frameW || y < frameBottom || y > frameTop) {
+                        continue;
+                    }
+                    float size = l.small() ? 5.5f : 7f;
+                    String text = p.fonts.safe(l.text());
+                    float tw = p.fonts.width(text, size);
+                    float[] at = l.small() ? placeNumber(taken, x, y, tw, size) : new float[] {x - tw / 2, y - size / 3};
+                    taken.add(box(at[0], at[1], tw, size));
+                    halo(out, p.fonts, text, at[0], at[1], size);
                 }
-                float size = l.small() ? 5.5f : 7f;
-                String text = p.fonts.safe(l.text());
-                float tw = p.fonts.width(text, size);
-                float tx = l.small() ? x + 3 : x - tw / 2, ty = l.small() ? y + 2 : y - size / 3;
-                halo(out, p.fonts, text, tx, ty, size);
             }
             out.restoreGraphicsState();
             p.fonts.forget();
@@ -319,5 +326,45 @@ final class PdfPlanPainter {
             p.strokeRect(x, y - 8, 14, 8, PdfReportRenderer.MUTED, 0.3f);
             p.text(names[i], x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
         }
+    }
+
+    /**
+     * Where a small number label beside the point (x, y) goes: up and to the right of it, else the
+     * first of the other corners, above or below that overlaps no box in {@code taken}; when all
+     * overlap, the place that overlaps least (it is still drawn: a number is never left out).
+     *
+     * @return the text's baseline start {x, y}
+     */
+    static float[] placeNumber(List<float[]> taken, float x, float y, float width, float size) {
+        float[][] places = {{x + 3, y + 2}, {x + 3, y - 2 - size}, {x - 3 - width, y + 2},
+            {x - 3 - width, y - 2 - size}, {x - width / 2, y + 4}, {x - width / 2, y - 4 - size}};
+        float[] best = places[0];
+        double least = Double.MAX_VALUE;
+        for (float[] place : places) {
+            float[] candidate = box(place[0], place[1], width, size);
+            double covered = taken.stream().mapToDouble(t -> overlapArea(t, candidate)).sum();
+            if (covered == 0) {
+                return place;
+            }
+            if (covered < least) {
+                least = covered;
+                best = place;
+            }
+        }
+        return best;
+    }
+
+    private static double overlapArea(float[] a, float[] b) {
+        return Math.max(0, Math.min(a[2], b[2]) - Math.max(a[0], b[0]))
+                * Math.max(0, Math.min(a[3], b[3]) - Math.max(a[1], b[1]));
+    }
+
+    /** The box {left, bottom, right, top} a label's text covers, with its halo. */
+    static float[] box(float x, float baseline, float width, float size) {
+        return new float[] {x - 0.8f, baseline - size * 0.25f, x + width + 0.8f, baseline + size * 0.8f};
+    }
+
+    static boolean overlap(float[] a, float[] b) {
+        return a[0] < b[2] && b[0] < a[2] && a[1] < b[3] && b[1] < a[3];
     }
 }

@@ -127,15 +127,16 @@ public final class ReportAssembler {
         blocks.add(new ReportBlock.Heading("Lightning-protection assessment", 1));
         blocks.add(new ReportBlock.Facts(List.of(
                 new ReportBlock.Fact("Site", s.siteName()),
-                new ReportBlock.Fact("Address", ""),
+                new ReportBlock.Fact("Address", s.cover().address()),
                 new ReportBlock.Fact("Protection level", levelText(s)),
                 new ReportBlock.Fact("Method", STANDARD),
                 new ReportBlock.Fact("Revision", revisionText(s)),
                 new ReportBlock.Fact("Analysed", DATE.format(s.analysedAt())),
-                new ReportBlock.Fact("Designer", ""),
+                new ReportBlock.Fact("Designer", s.cover().designer()),
                 new ReportBlock.Fact("Site file", s.sourceName()),
                 new ReportBlock.Fact("Site file SHA-256", s.inputsSha256()),
                 new ReportBlock.Fact("Status", status))));
+        blocks.add(new ReportBlock.Paragraph(coverNote(s.cover())));
         blocks.add(new ReportBlock.CautionsBox("Read before use", Cautions.lines()));
         blocks.add(new ReportBlock.Heading("Findings", 2));
         long edges = facts.items().stream().filter(i -> !i.kind().equals("corner") && !i.kind().equals("facade-band"))
@@ -160,6 +161,27 @@ public final class ReportAssembler {
         blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
                 + " air-termination parts, exposed items, down-conductors and separation distances; bill of"
                 + " quantities;" + (appendix ? " appendix (risk estimate);" : "") + " review and approval."));
+    }
+
+    /**
+     * Where the cover's address and designer come from. They belong to the site, not to the
+     * revision, so a stored report says when they were read; empty ones keep their line to fill in.
+     */
+    static String coverNote(ReportSource.Cover cover) {
+        boolean address = !cover.address().isEmpty();
+        boolean designer = !cover.designer().isEmpty();
+        String origin = cover.readAt() == null ? "as given on the command line"
+                : "as stored for the site on " + DATE.format(cover.readAt()) + " when this report was printed"
+                        + " (site data, not part of the analysis revision)";
+        if (address && designer) {
+            return "Address and designer " + origin + ".";
+        }
+        String missing = cover.readAt() == null ? "not given" : "not stored for the site";
+        if (!address && !designer) {
+            return "Address and designer " + missing + ": write them on the lines above.";
+        }
+        return (address ? "Address " : "Designer ") + origin + "; " + (address ? "designer " : "address ") + missing
+                + ": write it on the line above.";
     }
 
     private static void method(ReportFacts facts, List<ReportBlock> blocks) {

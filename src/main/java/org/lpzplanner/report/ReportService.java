@@ -24,7 +24,7 @@ import org.springframework.stereotype.Service;
 /**
  * Prints a stored analysis revision. The report is made from what the revision kept: its site file
  * and name, sphere, resolution, tolerance and result, plus the acceptances of its review items, and
- * the site's saved section cuts as stored when printed.
+ * the site's saved section cuts, address and designer as stored when printed.
  * Revisions stored before inputs were kept find their file again by its SHA-256 among the site's
  * current and earlier files.
  */
@@ -66,7 +66,8 @@ public class ReportService {
         return new ReportSource(inputs.siteName(), inputs.sourceName(), inputs.sourceText(),
                 new SphereSpec(revision.level(), revision.sphereRadius()), revision.resolution(), inputs.tolerance(),
                 revision.revision(), revision.createdAt(), revision.inputsSha256(), revision.resultGeoJson(),
-                accepted.reasons(revision.id()), savedCuts(siteId));
+                accepted.reasons(revision.id()), savedCuts(siteId), new ReportSource.Cover(site.address(),
+                        site.designer(), clock.instant().truncatedTo(ChronoUnit.SECONDS)));
     }
 
     /**

@@ -21,14 +21,40 @@ import org.lpzplanner.engine.model.SphereSpec;
  * @param resultGeoJson the stored result (see {@link org.lpzplanner.analysis.ResultGeoJson})
  * @param accepted      reasons of the accepted review items, by item key
  * @param savedCuts     section cuts the user saved, drawn before the automatic ones
+ * @param cover         the address and designer the cover prints, and where they come from
  */
 public record ReportSource(String siteName, String sourceName, String sourceText, SphereSpec sphere,
         double resolution, double tolerance, int revision, Instant analysedAt, String inputsSha256,
-        String resultGeoJson, Map<String, String> accepted, List<Cut> savedCuts) {
+        String resultGeoJson, Map<String, String> accepted, List<Cut> savedCuts, Cover cover) {
 
     public ReportSource {
         accepted = Map.copyOf(accepted);
         savedCuts = List.copyOf(savedCuts);
+        cover = cover == null ? Cover.NONE : cover;
+    }
+
+    /** A source without address and designer: the cover keeps lines to fill in by hand. */
+    public ReportSource(String siteName, String sourceName, String sourceText, SphereSpec sphere,
+            double resolution, double tolerance, int revision, Instant analysedAt, String inputsSha256,
+            String resultGeoJson, Map<String, String> accepted, List<Cut> savedCuts) {
+        this(siteName, sourceName, sourceText, sphere, resolution, tolerance, revision, analysedAt, inputsSha256,
+                resultGeoJson, accepted, savedCuts, Cover.NONE);
+    }
+
+    /**
+     * The site's address and the designer's name for the cover, empty when not known (the cover then
+     * keeps a line to write on), and where they come from: {@code readAt} is when they were read from
+     * the site's stored data (they belong to the site, not to the revision, so they print as stored
+     * when printed); null when they were given on the command line or not at all.
+     */
+    public record Cover(String address, String designer, Instant readAt) {
+
+        public static final Cover NONE = new Cover("", "", null);
+
+        public Cover {
+            address = address == null ? "" : address.strip();
+            designer = designer == null ? "" : designer.strip();
+        }
     }
 
     /** A straight section cut in local metres, with the name it was saved under. */

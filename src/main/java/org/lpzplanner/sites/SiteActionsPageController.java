@@ -14,7 +14,8 @@ import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.ModelAndView;
 
 /**
- * Page forms that change a stored site: rename ({@code POST /sites/{id}/name}), duplicate
+ * Page forms that change a stored site: rename ({@code POST /sites/{id}/name}), the address and
+ * designer printed on the report's cover ({@code POST /sites/{id}/cover-details}), duplicate
  * ({@code POST /sites/{id}/duplicate}), delete after confirmation ({@code GET /sites/{id}/delete}
  * asks, {@code POST /sites/{id}/delete} with {@code confirm=yes} deletes) and the correction of one
  * structure ({@code POST /sites/{id}/structures}), which stores a corrected site file and analyses
@@ -49,6 +50,30 @@ public class SiteActionsPageController {
             ModelAndView page = plan(id, locale, HttpStatus.CONFLICT);
             page.addObject("renameClash", true);
             page.addObject("enteredName", name);
+            return page;
+        }
+    }
+
+    /** The address and designer printed on the report's cover; blank clears. */
+    @PostMapping("/sites/{id}/cover-details")
+    public ModelAndView coverDetails(@PathVariable long id, @RequestParam(required = false) String address,
+            @RequestParam(required = false) String designer, @RequestParam(required = false) Long version,
+            Locale locale) {
+        try {
+            sites.updateCoverDetails(id, requireVersion(version), address == null ? "" : address,
+                    designer == null ? "" : designer);
+            return new ModelAndView("redirect:/sites/" + id);
+        } catch (InvalidInputException e) {
+            ModelAndView page = plan(id, locale, HttpStatus.BAD_REQUEST);
+            page.addObject("coverError", e.getMessage());
+            page.addObject("enteredAddress", address);
+            page.addObject("enteredDesigner", designer);
+            return page;
+        } catch (OptimisticLockingFailureException e) {
+            ModelAndView page = plan(id, locale, HttpStatus.CONFLICT);
+            page.addObject("coverClash", true);
+            page.addObject("enteredAddress", address);
+            page.addObject("enteredDesigner", designer);
             return page;
         }
     }

@@ -36,7 +36,8 @@ import tools.jackson.databind.JsonNode;
  * {@code file} with optional {@code name}, {@code level}, {@code radius}), one site
  * ({@code GET /api/sites/{id}}), changes ({@code PATCH /api/sites/{id}}, a JSON object with the
  * site's {@code version} and any of {@code name}, {@code level}, {@code radius}; a null radius goes
- * back to the level's own), a copy ({@code POST /api/sites/{id}/duplicate}), removal
+ * back to the level's own; {@code address} and {@code designer}, printed on the report's cover,
+ * one line of at most 200 characters each, null or blank to clear), a copy ({@code POST /api/sites/{id}/duplicate}), removal
  * ({@code DELETE /api/sites/{id}}, optionally {@code ?version=N}), the stored file ({@code GET /api/sites/{id}/file}) and the
  * files corrections replaced ({@code GET /api/sites/{id}/file/versions} and
  * {@code .../versions/{number}}). A stale {@code version} answers 409. Errors are JSON, see
@@ -60,11 +61,13 @@ public class SiteApiController {
      * {@code lastChange} is when the site or its analyses last changed.
      */
     public record SiteView(long id, String name, String level, Double customRadius, String fileName,
-            Instant createdAt, Instant lastChange, long version, AnalysisSummary latest) {
+            Instant createdAt, Instant lastChange, long version, AnalysisSummary latest, String address,
+            String designer) {
 
         static SiteView of(StoredSite s, AnalysisRevision latest) {
             return new SiteView(s.id(), s.name(), s.level().name(), s.customRadius(), s.sourceName(), s.createdAt(),
-                    s.updatedAt(), s.version(), latest == null ? null : AnalysisSummary.of(latest));
+                    s.updatedAt(), s.version(), latest == null ? null : AnalysisSummary.of(latest), s.address(),
+                    s.designer());
         }
     }
 
@@ -104,8 +107,10 @@ public class SiteApiController {
         return SiteView.of(site, analyses.latest(id).orElse(null));
     }
 
-    @Operation(summary = "Change name, level or radius",
-            description = "JSON object with the site's version and any of name, level, radius (null radius: the level's own).")
+    @Operation(summary = "Change name, level, radius, address or designer",
+            description = "JSON object with the site's version and any of name, level, radius (null radius: the level's own),"
+                    + " address and designer (strings printed on the report's cover: one line, at most 200 characters,"
+                    + " no control characters; null or blank clears).")
     @ApiResponse(responseCode = "200", description = "Changed")
     @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
@@ -114,7 +119,7 @@ public class SiteApiController {
     public SiteView update(@PathVariable long id, @RequestBody JsonNode body) {
         if (!body.isObject()) {
             throw new InvalidInputException("body", "the body must be a JSON object with \"version\" and any of"
-                    + " \"name\", \"level\", \"radius\"");
+                    + " \"name\", \"level\", \"radius\", \"address\", \"designer\"");
         }
         JsonNode version = body.path("version");
         if (!version.isIntegralNumber()) {
@@ -124,7 +129,8 @@ public class SiteApiController {
         String name = text(body, "name");
         String level = text(body, "level");
         String radius = body.has("radius") && body.get("radius").isNull() ? "" : text(body, "radius");
-        StoredSite site = sites.update(id, version.longValue(), name, level, radius);
+        StoredSite site = sites.update(id, version.longValue(), name, level, radius, coverText(body, "address"),
+                coverText(body, "designer"));
         return SiteView.of(site, analyses.latest(id).orElse(null));
     }
 
@@ -156,6 +162,21 @@ public class SiteApiController {
     public ResponseEntity<byte[]> fileVersion(@PathVariable long id, @PathVariable int number) {
         SiteFileVersion version = sites.fileVersion(id, number);
         return textFile(version.sourceName(), version.sourceText());
+    }
+
+    /** A cover detail: a JSON string, or null (cleared, as an empty string); null when absent. */
+    private static String coverText(JsonNode body, String field) {
+        JsonNode node = body.get(field);
+        if (node == null) {
+            return null;
+        }
+        if (node.isNull()) {
+            return "";
+        }
+        if (!node.isString()) {
+            throw new InvalidInputException(field, field + " must be a string (or null to clear it)");
+        }
+        return node.stringValue();
     }
 
     /** A JSON string or number member as text, null when absent. */

@@ -18,7 +18,7 @@ import org.springframework.stereotype.Repository;
 public class SiteRepository {
 
     private static final String COLUMNS = "id, name, protection_level, custom_radius, source_name, source_text,"
-            + " created_at, updated_at, version";
+            + " created_at, updated_at, version, address, designer_name";
 
     private final JdbcClient jdbc;
 
@@ -29,14 +29,20 @@ public class SiteRepository {
     /** Stores a new site of a team (version 0, both timestamps {@code now}) and returns it with its id. */
     public StoredSite insert(long teamId, String name, ProtectionLevel level, Double customRadius, String sourceName,
             String sourceText, Instant now) {
+        return insert(teamId, name, level, customRadius, sourceName, sourceText, "", "", now);
+    }
+
+    /** Stores a new site with its cover details (address and designer, checked by the caller). */
+    public StoredSite insert(long teamId, String name, ProtectionLevel level, Double customRadius, String sourceName,
+            String sourceText, String address, String designer, Instant now) {
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO sites (name, protection_level, custom_radius, source_name, source_text, created_at,"
-                        + " updated_at, version, team_id) VALUES (?, ?, ?, ?, ?, ?, ?, 0, ?)")
+                        + " updated_at, version, team_id, address, designer_name) VALUES (?, ?, ?, ?, ?, ?, ?, 0, ?, ?, ?)")
                 .params(name, level.name(), customRadius, sourceName, sourceText, Timestamp.from(now),
-                        Timestamp.from(now), teamId)
+                        Timestamp.from(now), teamId, address, designer)
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
-        return new StoredSite(id, name, level, customRadius, sourceName, sourceText, now, now, 0);
+        return new StoredSite(id, name, level, customRadius, sourceName, sourceText, now, now, 0, address, designer);
     }
 
     public Optional<StoredSite> findById(long id) {
@@ -96,6 +102,21 @@ public class SiteRepository {
         int rows = jdbc.sql("UPDATE sites SET name = ?, protection_level = ?, custom_radius = ?, updated_at = ?,"
                         + " version = version + 1 WHERE id = ? AND version = ?")
                 .params(name, level.name(), customRadius, Timestamp.from(now), id, expectedVersion).update();
+        if (rows == 0) {
+            throw stale(id);
+        }
+    }
+
+    /**
+     * Changes the address and designer printed on the report's cover, provided nobody changed the
+     * site since {@code expectedVersion} was read.
+     *
+     * @throws OptimisticLockingFailureException when the stored version differs
+     */
+    public void updateCoverDetails(long id, long expectedVersion, String address, String designer, Instant now) {
+        int rows = jdbc.sql("UPDATE sites SET address = ?, designer_name = ?, updated_at = ?, version = version + 1"
+                        + " WHERE id = ? AND version = ?")
+                .params(address, designer, Timestamp.from(now), id, expectedVersion).update();
         if (rows == 0) {
             throw stale(id);
         }
@@ -171,6 +192,6 @@ public class SiteRepository {
                 ProtectionLevel.valueOf(rs.getString("protection_level")), customRadius,
                 rs.getString("source_name"), rs.getString("source_text"),
                 rs.getTimestamp("created_at").toInstant(), rs.getTimestamp("updated_at").toInstant(),
-                rs.getLong("version"));
+                rs.getLong("version"), rs.getString("address"), rs.getString("designer_name"));
     }
 }

@@ -152,6 +152,57 @@ public class SiteService {
     }
 
     /**
+     * Changes the site's settings and the details its report's cover prints in one change: any of
+     * name, level, radius (as {@link #update(long, long, String, String, String)}) and any of address
+     * and designer (as {@link #updateCoverDetails}); null keeps the stored value. Every value is
+     * checked before anything is written.
+     */
+    @Transactional
+    public StoredSite update(long id, long expectedVersion, String name, String levelText, String radiusText,
+            String address, String designer) {
+        CoverDetails.check("address", address);
+        CoverDetails.check("designer", designer);
+        boolean cover = address != null || designer != null;
+        long version = expectedVersion;
+        if (name != null || levelText != null || radiusText != null || !cover) {
+            update(id, version, name, levelText, radiusText);
+            version++;
+        }
+        return cover ? updateCoverDetails(id, version, address, designer) : get(id);
+    }
+
+    /**
+     * Changes the address and the designer's name that the site's report prints on its cover; null
+     * keeps the stored value, blank clears it.
+     *
+     * @throws SiteNotFoundException when no site has this id
+     * @throws InvalidInputException when a value is too long or holds a control character, naming
+     *         {@code address} or {@code designer} (nothing changes)
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site is no longer
+     *         at {@code expectedVersion} (nothing changes)
+     */
+    @Transactional
+    public StoredSite updateCoverDetails(long id, long expectedVersion, String address, String designer) {
+        String newAddress = CoverDetails.check("address", address);
+        String newDesigner = CoverDetails.check("designer", designer);
+        StoredSite site = get(id);
+        newAddress = newAddress == null ? site.address() : newAddress;
+        newDesigner = newDesigner == null ? site.designer() : newDesigner;
+        sites.updateCoverDetails(id, expectedVersion, newAddress, newDesigner, now());
+        List<String> changes = new java.util.ArrayList<>();
+        if (!newAddress.equals(site.address())) {
+            changes.add("address \"" + site.address() + "\" to \"" + newAddress + "\"");
+        }
+        if (!newDesigner.equals(site.designer())) {
+            changes.add("designer \"" + site.designer() + "\" to \"" + newDesigner + "\"");
+        }
+        if (!changes.isEmpty()) {
+            audit.record(id, "cover details", String.join("; ", changes));
+        }
+        return get(id);
+    }
+
+    /**
      * Stores a copy of a site: the same file, byte for byte, and the same settings, named
      * "&lt;name&gt; (copy)"; its analyses are not copied.
      *
@@ -166,7 +217,7 @@ public class SiteService {
             base = base.substring(0, MAX_NAME_LENGTH - suffix.length()).strip();
         }
         StoredSite copy = sites.insert(CurrentAccount.teamId(), base + suffix, site.level(), site.customRadius(),
-                site.sourceName(), site.sourceText(), now());
+                site.sourceName(), site.sourceText(), site.address(), site.designer(), now());
         audit.record(copy.id(), "duplicate", "copied from site " + site.id() + " \"" + site.name() + "\"");
         return copy;
     }

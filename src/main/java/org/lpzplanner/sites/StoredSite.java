@@ -17,9 +17,16 @@ import org.lpzplanner.engine.model.SphereSpec;
  * @param createdAt    when it was stored
  * @param updatedAt    when it or its analyses last changed
  * @param version      optimistic-locking counter, raised on every change
+ * @param address      the site's address for the report's cover, empty when not entered
+ * @param designer     the designer's name for the report's cover, empty when not entered
  */
 public record StoredSite(long id, String name, ProtectionLevel level, Double customRadius, String sourceName,
-        String sourceText, Instant createdAt, Instant updatedAt, long version) {
+        String sourceText, Instant createdAt, Instant updatedAt, long version, String address, String designer) {
+
+    public StoredSite {
+        address = address == null ? "" : address;
+        designer = designer == null ? "" : designer;
+    }
 
     /** The sphere the site is assessed with by default. */
     public SphereSpec sphere() {

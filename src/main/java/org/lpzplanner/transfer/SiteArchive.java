@@ -24,9 +24,18 @@ public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revisi
         auditTrail = List.copyOf(auditTrail);
     }
 
-    /** The site row; {@code fileText} is the site file byte for byte (air-termination parts included). */
+    /**
+     * The site row; {@code fileText} is the site file byte for byte (air-termination parts included);
+     * {@code address} and {@code designer} are the report cover's details, empty when not entered
+     * (and in files written before they were exported).
+     */
     public record Site(String name, String level, Double customRadius, String fileName, String fileText,
-            Instant createdAt, Instant updatedAt, long version) {
+            Instant createdAt, Instant updatedAt, long version, String address, String designer) {
+
+        public Site {
+            address = address == null ? "" : address;
+            designer = designer == null ? "" : designer;
+        }
     }
 
     public record EarlierFile(int number, String fileName, String text, Instant replacedAt) {

@@ -35,6 +35,7 @@ import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
 import org.lpzplanner.risk.FlashDensitySource;
+import org.lpzplanner.sites.CoverDetails;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.StreamReadFeature;
@@ -228,7 +229,18 @@ final class SiteArchiveCodec {
         return new SiteArchive.Site(nonBlankText(node, p, "name", NAME), level(node, p),
                 optionalPositive(node, p, "customRadius"), nonBlankText(node, p, "fileName", FILE_NAME),
                 nonBlankText(node, p, "fileText", LONG_TEXT), instant(node, p, "createdAt"),
-                instant(node, p, "updatedAt"), whole(node, p, "version", 0, Long.MAX_VALUE));
+                instant(node, p, "updatedAt"), whole(node, p, "version", 0, Long.MAX_VALUE),
+                coverDetail(node, p, "address"), coverDetail(node, p, "designer"));
+    }
+
+    /** An address or designer: checked as the site page checks it; absent or null (older files) is empty. */
+    private static String coverDetail(JsonNode node, String path, String name) {
+        String value = optionalText(node, path, name, CoverDetails.MAX_LENGTH);
+        try {
+            return value == null ? "" : CoverDetails.check(path + "." + name, value);
+        } catch (InvalidInputException e) {
+            throw bad(e.field(), e.getMessage().substring(e.field().length()).strip());
+        }
     }
 
     private static List<SiteArchive.EarlierFile> earlierFiles(JsonNode array) {

@@ -28,7 +28,8 @@ class SiteArchiveRepository {
     /** The site if the team owns it. */
     Optional<SiteArchive> read(long siteId, long teamId) {
         Optional<SiteArchive.Site> site = jdbc.sql("SELECT name, protection_level, custom_radius, source_name,"
-                        + " source_text, created_at, updated_at, version FROM sites WHERE id = ? AND team_id = ?")
+                        + " source_text, created_at, updated_at, version, address, designer_name FROM sites"
+                        + " WHERE id = ? AND team_id = ?")
                 .params(siteId, teamId).query(SiteArchiveRepository::siteRow).optional();
         if (site.isEmpty()) {
             return Optional.empty();
@@ -116,9 +117,11 @@ class SiteArchiveRepository {
         SiteArchive.Site s = archive.site();
         KeyHolder siteKey = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO sites (name, protection_level, custom_radius, source_name, source_text, created_at,"
-                        + " updated_at, version, team_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                        + " updated_at, version, team_id, address, designer_name)"
+                        + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
                 .params(s.name(), s.level(), s.customRadius(), s.fileName(), s.fileText(),
-                        Timestamp.from(s.createdAt()), Timestamp.from(s.updatedAt()), s.version(), teamId)
+                        Timestamp.from(s.createdAt()), Timestamp.from(s.updatedAt()), s.version(), teamId,
+                        s.address(), s.designer())
                 .update(siteKey, "id");
         long siteId = siteKey.getKeyAs(Number.class).longValue();
         for (SiteArchive.EarlierFile f : archive.earlierFiles()) {
@@ -201,7 +204,8 @@ class SiteArchiveRepository {
         Double customRadius = rs.wasNull() ? null : radius;
         return new SiteArchive.Site(rs.getString("name"), rs.getString("protection_level"), customRadius,
                 rs.getString("source_name"), rs.getString("source_text"), rs.getTimestamp("created_at").toInstant(),
-                rs.getTimestamp("updated_at").toInstant(), rs.getLong("version"));
+                rs.getTimestamp("updated_at").toInstant(), rs.getLong("version"), rs.getString("address"),
+                rs.getString("designer_name"));
     }
 
     private static SiteArchive.Revision revisionRow(ResultSet rs, List<SiteArchive.AcceptedItem> accepted,

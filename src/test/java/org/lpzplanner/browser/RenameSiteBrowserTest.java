@@ -13,7 +13,8 @@ import org.springframework.beans.factory.annotation.Autowired;
 
 /**
  * In a real browser: rename a stored site with the form on its plan page, and find the new name,
- * shown as text, on the plan and in the site list.
+ * shown as text, on the plan and in the site list; enter the address and designer for the report
+ * cover (saves target/screenshots/cover-details.png).
  */
 class RenameSiteBrowserTest extends BrowserTestBase {
 
@@ -38,5 +39,23 @@ class RenameSiteBrowserTest extends BrowserTestBase {
         browser.get("http://localhost:" + port + "/");
         assertThat(browser.findElement(By.cssSelector("a[href='/sites/" + site.id() + "']")).getText())
                 .isEqualTo("Renamed <quay> shed");
+    }
+
+    @Test
+    void coverDetailsEnteredOnThePlanPageAreStoredAndShown() throws Exception {
+        StoredSite site = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Cover shed", "II", null);
+
+        browser.get("http://localhost:" + port + "/sites/" + site.id());
+        browser.findElement(By.cssSelector("#cover-form input[name=address]")).sendKeys("4 Quay Row, Saltmarsh");
+        browser.findElement(By.cssSelector("#cover-form input[name=designer]")).sendKeys("Mara <Q> Quill");
+        clickAndAwaitNewPage(By.cssSelector("#cover-form button[type=submit]"));
+
+        assertThat(browser.findElement(By.id("cover-details")).getText())
+                .isEqualTo("Address: 4 Quay Row, Saltmarsh \u00b7 Designer: Mara <Q> Quill");
+        assertThat(sites.get(site.id()).designer()).isEqualTo("Mara <Q> Quill");
+        Path shots = Files.createDirectories(Path.of("target/screenshots"));
+        Files.write(shots.resolve("cover-details.png"),
+                browser.getScreenshotAs(org.openqa.selenium.OutputType.BYTES));
     }
 }

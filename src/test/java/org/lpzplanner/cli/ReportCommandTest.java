@@ -50,6 +50,36 @@ class ReportCommandTest {
     }
 
     @Test
+    void addressAndDesignerGivenOnTheCommandLinePrintOnTheCover() throws Exception {
+        Path site = TestFiles.write(dir, "block.geojson", LOCAL_BLOCK);
+        Path out = dir.resolve("report.pdf");
+        CliRun run = CliRun.of("report", "--site", site.toString(), "--level", "II", "--address",
+                "12 Larch Street, Pellby", "--designer=Ida Marsh", "--out", out.toString());
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        assertThat(text(out)).contains("Address 12 Larch Street, Pellby").contains("Designer Ida Marsh")
+                .contains("Address and designer as given on the command line.");
+
+        Path blank = dir.resolve("blank.pdf");
+        assertThat(CliRun.of("report", "--site", site.toString(), "--level", "II", "--out", blank.toString())
+                .exitCode()).isZero();
+        assertThat(text(blank)).contains("Address and designer not given: write them on the lines above.");
+    }
+
+    @Test
+    void aBadAddressIsRefusedBeforeAnyWork() {
+        Path site = TestFiles.write(dir, "block.geojson", LOCAL_BLOCK);
+        CliRun run = CliRun.of("report", "--site", site.toString(), "--level", "II", "--address", "x".repeat(201),
+                "--out", dir.resolve("r.pdf").toString());
+        assertThat(run.exitCode()).isEqualTo(CommandLine.INVALID);
+        assertThat(run.errLines()).containsExactly("error: --address must be at most 200 characters, got 201");
+        CliRun tab = CliRun.of("report", "--site", site.toString(), "--level", "II", "--designer", "Ida\tMarsh",
+                "--out", dir.resolve("r.pdf").toString());
+        assertThat(tab.exitCode()).isEqualTo(CommandLine.INVALID);
+        assertThat(tab.err()).startsWith("error: --designer must be one line of text");
+        assertThat(Files.exists(dir.resolve("r.pdf"))).isFalse();
+    }
+
+    @Test
     void aPartsFileWithAStructureIsRefusedInOneLine() {
         Path site = TestFiles.write(dir, "block.geojson", LOCAL_BLOCK);
         Path parts = TestFiles.write(dir, "parts.geojson", LOCAL_BLOCK);

@@ -82,6 +82,8 @@ class SiteTransferTest {
         cuts.save(site.id(), "Quay \u00e9 section", new String[] {"-10", "20", "90.25", "20"});
         comments.comment(site.id(), "Check the gutter bonding \u2013 \"north\" side");
         comments.markReviewed(site.id());
+        sites.updateCoverDetails(site.id(), sites.get(site.id()).version(), "4 Quay Row, \u00c9tang",
+                "Mara \"Q\" Quill");
         return site.id();
     }
 
@@ -126,6 +128,8 @@ class SiteTransferTest {
         assertThat(doc.path("comments").get(0).path("body").stringValue()).contains("gutter bonding");
         assertThat(doc.path("savedCuts")).hasSize(1);
         assertThat(doc.path("savedCuts").get(0).path("x2").asDouble()).isEqualTo(90.25);
+        assertThat(doc.path("site").path("address").stringValue()).isEqualTo("4 Quay Row, \u00c9tang");
+        assertThat(doc.path("site").path("designer").stringValue()).isEqualTo("Mara \"Q\" Quill");
         JsonNode trail = doc.path("auditTrail");
         assertThat(trail.size()).isGreaterThanOrEqualTo(4);
         assertThat(trail.get(0).path("action").stringValue()).isEqualTo("upload");
@@ -152,7 +156,22 @@ class SiteTransferTest {
             assertThat(new double[] {c.x1(), c.y1(), c.x2(), c.y2()}).containsExactly(-10, 20, 90.25, 20);
         });
         assertThat(comments.reviews(copy)).hasSize(1);
+        assertThat(sites.get(copy).address()).isEqualTo("4 Quay Row, \u00c9tang");
+        assertThat(sites.get(copy).designer()).isEqualTo("Mara \"Q\" Quill");
         mvc.perform(get("/api/sites/" + copy + "/file/versions/2")).andExpect(status().isOk());
+    }
+
+    @Test
+    void anExportWrittenBeforeCoverDetailsImportsWithThemEmpty() throws Exception {
+        ObjectNode older = (ObjectNode) JSON.readTree(export(workedSite()));
+        ((ObjectNode) older.get("site")).remove("address");
+        ((ObjectNode) older.get("site")).remove("designer");
+        long copy = importFile(bytes(older));
+        assertThat(sites.get(copy).address()).isEmpty();
+        assertThat(sites.get(copy).designer()).isEmpty();
+        ObjectNode cleared = (ObjectNode) JSON.readTree(export(workedSite()));
+        ((ObjectNode) cleared.get("site")).putNull("address");
+        assertThat(sites.get(importFile(bytes(cleared))).address()).isEmpty();
     }
 
     @Test
@@ -230,6 +249,12 @@ class SiteTransferTest {
         ObjectNode blankComment = good.deepCopy();
         ((ObjectNode) blankComment.get("comments").get(0)).put("body", " ");
         refused(bytes(blankComment), "comments[0].body", "");
+        ObjectNode twoLineAddress = good.deepCopy();
+        ((ObjectNode) twoLineAddress.get("site")).put("address", "4 Quay Row\nSecond line");
+        refused(bytes(twoLineAddress), "site.address", "one line of text without control characters");
+        ObjectNode longDesigner = good.deepCopy();
+        ((ObjectNode) longDesigner.get("site")).put("designer", "d".repeat(201));
+        refused(bytes(longDesigner), "site.designer", "at most 200 characters");
 
         // the site file inside is checked like an upload: the engine's reader names the feature
         ObjectNode badSiteFile = good.deepCopy();
