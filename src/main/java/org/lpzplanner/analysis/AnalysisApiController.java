@@ -74,10 +74,10 @@ public class AnalysisApiController {
             @RequestParam(required = false) String level, @RequestParam(required = false) String radius,
             @RequestParam(required = false) String resolution, @RequestParam(defaultValue = "false") boolean async) {
         if (async) {
-            AnalysisJob job = jobs.submit(siteId, level, radius, resolution);
+            AnalysisJob.Snapshot job = jobs.submit(siteId, level, radius, resolution);
             return ResponseEntity.accepted()
                     .location(URI.create("/api/sites/" + siteId + "/analyses/jobs/" + job.id()))
-                    .body(job.snapshot());
+                    .body(job);
         }
         AnalysisRevision revision = analyses.run(siteId, level, radius, resolution);
         return ResponseEntity.status(HttpStatus.CREATED).body(AnalysisView.of(revision, analyses));
@@ -91,7 +91,7 @@ public class AnalysisApiController {
     @GetMapping("/jobs/{jobId}")
     public AnalysisJob.Snapshot job(@PathVariable long siteId, @PathVariable String jobId) {
         sites.get(siteId); // another team's site (and so its jobs) is not found
-        return jobs.find(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
+        return jobs.find(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId));
     }
 
     /** Asks a background analysis to stop; nothing of it is stored. Answers with the job. */
@@ -101,7 +101,7 @@ public class AnalysisApiController {
     @DeleteMapping("/jobs/{jobId}")
     public AnalysisJob.Snapshot cancel(@PathVariable long siteId, @PathVariable String jobId) {
         sites.get(siteId); // another team's site (and so its jobs) is not found
-        return jobs.cancel(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId)).snapshot();
+        return jobs.cancel(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId));
     }
 
     /** 404 with a JSON message when the site was never analysed. */

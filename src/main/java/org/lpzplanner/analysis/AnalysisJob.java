@@ -2,96 +2,55 @@ package org.lpzplanner.analysis;
 
 import java.time.Instant;
 import org.lpzplanner.engine.exposure.AnalysisProgress;
+import org.lpzplanner.jobs.JobInstance;
+import org.lpzplanner.jobs.LiveJob;
+import org.lpzplanner.jobs.StoredJob;
 
 /**
- * One background analysis: where it is, how far it got, and how it ended. Thread-safe: the worker
- * reports progress while requests read it and may ask it to stop.
+ * One background analysis as the worker running it sees it: it reports the engine's stages to the
+ * job's {@link LiveJob} and stops when a cancel was asked for on any instance. What readers see is
+ * the stored row ({@link Snapshot#of}). Thread-safe: the stages run on several threads.
  */
 public final class AnalysisJob implements AnalysisProgress {
 
     /** Where a job is. */
     public enum State { QUEUED, RUNNING, DONE, FAILED, CANCELLED }
 
-    private final String id;
-    private final long siteId;
-    private final Instant submittedAt;
-    private State state = State.QUEUED;
-    private String stage;
-    private double fraction;
-    private Integer revision;
-    private String error;
-    private volatile boolean cancelRequested;
+    private final LiveJob live;
+    private final JobInstance instance;
 
-    AnalysisJob(String id, long siteId, Instant submittedAt) {
-        this.id = id;
-        this.siteId = siteId;
-        this.submittedAt = submittedAt;
+    AnalysisJob(LiveJob live, JobInstance instance) {
+        this.live = live;
+        this.instance = instance;
     }
 
-    public String id() {
-        return id;
-    }
-
-    public long siteId() {
-        return siteId;
-    }
-
-    /** A consistent copy of where the job is, for an answer. */
-    public synchronized Snapshot snapshot() {
-        return new Snapshot(id, siteId, state, stage, fraction, revision, error, submittedAt);
+    String id() {
+        return live.id();
     }
 
     /**
+     * Where a job is, as the API shows it.
+     *
      * @param fraction share done, 0..1 (an estimate from the stages)
      * @param revision the stored revision number once done
      * @param error    why the job failed, in plain words
      */
     public record Snapshot(String id, long siteId, State state, String stage, double fraction, Integer revision,
             String error, Instant submittedAt) {
+
+        static Snapshot of(StoredJob job) {
+            return new Snapshot(job.id(), job.siteId(), State.valueOf(job.state()), job.stage(), job.fraction(),
+                    job.revision(), job.error(), job.createdAt());
+        }
     }
 
     @Override
-    public synchronized void stage(String name, double fractionDone) {
-        stage = name;
-        fraction = fractionDone;
+    public void stage(String name, double fractionDone) {
+        live.progress(name, fractionDone);
     }
 
     @Override
     public boolean cancelled() {
-        return cancelRequested;
-    }
-
-    synchronized boolean start() {
-        if (cancelRequested) {
-            state = State.CANCELLED;
-            return false;
-        }
-        state = State.RUNNING;
-        return true;
-    }
-
-    synchronized void requestCancel() {
-        if (state == State.QUEUED || state == State.RUNNING) {
-            cancelRequested = true;
-            if (state == State.QUEUED) {
-                state = State.CANCELLED;
-            }
-        }
-    }
-
-    synchronized void finish(int revisionNumber) {
-        state = State.DONE;
-        fraction = 1;
-        stage = null;
-        revision = revisionNumber;
-    }
-
-    synchronized void markCancelled() {
-        state = State.CANCELLED;
-    }
-
-    synchronized void fail(String message) {
-        state = State.FAILED;
-        error = message;
+        return instance.cancelRequested(live.id());
     }
 }

@@ -1,9 +1,7 @@
 package org.lpzplanner.analysis;
 
 import java.time.Clock;
-import org.lpzplanner.accounts.CurrentAccount;
-import java.util.LinkedHashMap;
-import java.util.Map;
+import java.time.Duration;
 import java.util.Optional;
 import java.util.UUID;
 import java.util.concurrent.ArrayBlockingQueue;
@@ -12,12 +10,16 @@ import java.util.concurrent.ThreadPoolExecutor;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.lpzplanner.accounts.CurrentAccount;
-import org.lpzplanner.engine.exposure.AnalysisCancelledException;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
+import org.lpzplanner.engine.exposure.AnalysisCancelledException;
+import org.lpzplanner.jobs.JobInstance;
+import org.lpzplanner.jobs.JobStore;
+import org.lpzplanner.jobs.StoredJob;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.system.InvalidInputException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.dao.OptimisticLockingFailureException;
 import org.springframework.stereotype.Service;
@@ -25,24 +27,32 @@ import org.springframework.stereotype.Service;
 /**
  * Runs analyses in the background on a small, bounded pool of workers with a short queue, so long
  * analyses show progress and can be cancelled, and a burst of requests is refused
- * ({@link AnalysisBusyException}) instead of piling up. Finished jobs are remembered for a while
- * (the most recent {@value #KEPT_JOBS}) so their outcome can be read.
+ * ({@link AnalysisBusyException}) instead of piling up. The pool is this instance's; the jobs are
+ * rows in the database ({@link JobStore}), so any instance answers a poll or a cancel, and a job
+ * survives a restart as its outcome (or as interrupted). Finished jobs are kept for a day, at most
+ * {@value #KEPT_PER_SITE} per site.
  */
 @Service
 public class AnalysisJobs {
 
     private static final Logger LOG = LoggerFactory.getLogger(AnalysisJobs.class);
-    static final int KEPT_JOBS = 200;
+    static final int KEPT_PER_SITE = 20;
+    static final Duration KEPT_FOR = Duration.ofDays(1);
 
     private final AnalysisService analyses;
+    private final JobStore store;
+    private final JobInstance instance;
     private final Clock clock;
     private final ThreadPoolExecutor pool;
     private final int retryAfterSeconds;
-    private final Map<String, AnalysisJob> jobs = new LinkedHashMap<>();
 
-    public AnalysisJobs(AnalysisService analyses, Clock clock, @Value("${lpz.analysis.workers:2}") int workers,
-            @Value("${lpz.analysis.queue:4}") int queue, @Value("${lpz.analysis.retry-after-seconds:5}") int retryAfter) {
+    @Autowired
+    public AnalysisJobs(AnalysisService analyses, JobStore store, JobInstance instance, Clock clock,
+            @Value("${lpz.analysis.workers:2}") int workers, @Value("${lpz.analysis.queue:4}") int queue,
+            @Value("${lpz.analysis.retry-after-seconds:5}") int retryAfter) {
         this.analyses = analyses;
+        this.store = store;
+        this.instance = instance;
         this.clock = clock;
         this.retryAfterSeconds = retryAfter;
         AtomicInteger count = new AtomicInteger();
@@ -62,57 +72,70 @@ public class AnalysisJobs {
      * @throws InvalidInputException when a setting cannot be used
      * @throws AnalysisBusyException when every worker is busy and the queue is full
      */
-    public AnalysisJob submit(long siteId, String level, String radius, String resolution) {
+    public AnalysisJob.Snapshot submit(long siteId, String level, String radius, String resolution) {
         analyses.check(siteId, level, radius, resolution); // bad input: 4xx now rather than a failed job later
-        AnalysisJob job = new AnalysisJob(UUID.randomUUID().toString(), siteId, clock.instant());
-        synchronized (jobs) {
-            jobs.put(job.id(), job);
-            while (jobs.size() > KEPT_JOBS) {
-                String oldest = jobs.keySet().iterator().next();
-                jobs.remove(oldest);
-            }
-        }
+        String id = UUID.randomUUID().toString();
+        long teamId = CurrentAccount.teamId();
+        store.insert(new JobStore.NewJob(id, JobStore.ANALYSIS, siteId, teamId, CurrentAccount.actorName(),
+                JobStore.QUEUED, null, null, null, instance.name()), clock.instant());
+        AnalysisJob job = new AnalysisJob(instance.track(id, null), instance);
         try {
-            pool.execute(CurrentAccount.carry(() -> runJob(job, level, radius, resolution)));
+            pool.execute(CurrentAccount.carry(() -> runJob(job, siteId, level, radius, resolution)));
         } catch (RejectedExecutionException e) {
-            synchronized (jobs) {
-                jobs.remove(job.id());
-            }
+            instance.untrack(id);
+            store.delete(id);
             throw new AnalysisBusyException(retryAfterSeconds);
         }
-        return job;
+        store.prune(siteId, JobStore.ANALYSIS, KEPT_PER_SITE, clock.instant().minus(KEPT_FOR));
+        return find(siteId, id).orElseThrow();
     }
 
-    private void runJob(AnalysisJob job, String level, String radius, String resolution) {
-        if (!job.start()) {
-            return; // cancelled while queued
-        }
+    private void runJob(AnalysisJob job, long siteId, String level, String radius, String resolution) {
         try {
-            AnalysisRevision revision = analyses.run(job.siteId(), level, radius, resolution, job);
-            job.finish(revision.revision());
-        } catch (AnalysisCancelledException e) {
-            job.markCancelled();
-        } catch (InvalidInputException | AnalysisTooLargeException | SiteNotFoundException
-                | OptimisticLockingFailureException e) {
-            job.fail(e.getMessage());
+            if (!store.markRunning(job.id(), clock.instant())) {
+                return; // cancelled while queued
+            }
+            try {
+                AnalysisRevision revision = analyses.run(siteId, level, radius, resolution, job);
+                store.finish(job.id(), JobStore.DONE, revision.revision(), null, null, clock.instant());
+            } catch (AnalysisCancelledException e) {
+                store.finish(job.id(), JobStore.CANCELLED, null, null, null, clock.instant());
+            } catch (InvalidInputException | AnalysisTooLargeException | SiteNotFoundException
+                    | OptimisticLockingFailureException e) {
+                store.finish(job.id(), JobStore.FAILED, null, null, e.getMessage(), clock.instant());
+            } catch (RuntimeException e) {
+                LOG.error("analysis job {} of site {} failed", job.id(), siteId, e);
+                store.finish(job.id(), JobStore.FAILED, null, null,
+                        "the analysis failed unexpectedly; the site is unchanged", clock.instant());
+            }
         } catch (RuntimeException e) {
-            LOG.error("analysis job {} of site {} failed", job.id(), job.siteId(), e);
-            job.fail("the analysis failed unexpectedly; the site is unchanged");
+            LOG.error("analysis job {} of site {}: its state could not be stored", job.id(), siteId, e);
+        } finally {
+            instance.untrack(job.id());
         }
     }
 
-    /** The job, if it is known and belongs to this site. */
-    public Optional<AnalysisJob> find(long siteId, String jobId) {
-        synchronized (jobs) {
-            return Optional.ofNullable(jobs.get(jobId)).filter(j -> j.siteId() == siteId);
-        }
+    /** The job, if it is known and belongs to this site of the caller's team. */
+    public Optional<AnalysisJob.Snapshot> find(long siteId, String jobId) {
+        return stored(siteId, jobId).map(AnalysisJob.Snapshot::of);
     }
 
-    /** Asks the job to stop; a queued job never starts, a running one stops at its next check. */
-    public Optional<AnalysisJob> cancel(long siteId, String jobId) {
-        Optional<AnalysisJob> job = find(siteId, jobId);
-        job.ifPresent(AnalysisJob::requestCancel);
-        return job;
+    private Optional<StoredJob> stored(long siteId, String jobId) {
+        return store.find(JobStore.ANALYSIS, siteId, CurrentAccount.teamId(), jobId).map(instance::current);
+    }
+
+    /**
+     * Asks the job to stop, whichever instance runs it: a queued job never starts, a running one
+     * stops at its next check after the request reaches it.
+     */
+    public Optional<AnalysisJob.Snapshot> cancel(long siteId, String jobId) {
+        Optional<StoredJob> job = stored(siteId, jobId);
+        if (job.isEmpty()) {
+            return Optional.empty();
+        }
+        store.requestCancel(jobId, true, clock.instant());
+        instance.cancelLocally(jobId);
+        return find(siteId, jobId);
     }
 
     @jakarta.annotation.PreDestroy

@@ -158,10 +158,18 @@ public class AnalysisService {
      *
      * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
      * @throws InvalidInputException when a setting cannot be used
+     * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException when the analysis would not fit
      */
     public void check(long siteId, String levelText, String radiusText, String resolutionText) {
-        sphere(sites.get(siteId), levelText, radiusText);
-        Settings.resolution(resolutionText);
+        StoredSite site = sites.get(siteId);
+        SphereSpec sphere = sphere(site, levelText, radiusText);
+        Double resolution = Settings.resolution(resolutionText);
+        try {
+            ExposureAnalysis.checkSize(sites.document(site).site(),
+                    new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
+        }
     }
 
     /**

@@ -7,8 +7,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.lpzplanner.common.Cautions;
-import org.lpzplanner.engine.design.proposal.Proposal;
-import org.lpzplanner.engine.design.proposal.ProposedPart;
 import org.lpzplanner.engine.design.quantities.QuantityTable;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpHeaders;
@@ -191,43 +189,14 @@ public class DesignApiController {
         out.put("stage", job.stage());
         out.put("fraction", Math.round(job.fraction() * 1000) / 1000.0);
         out.put("siteVersion", job.siteVersion());
-        out.put("level", job.options().sphere().level().name());
-        out.put("radius", job.options().sphere().radius());
+        out.put("level", job.level());
+        out.put("radius", job.radius());
         if (job.error() != null) {
             out.put("error", job.error());
         }
-        Proposal p = job.result();
-        if (p != null) {
-            List<Map<String, Object>> parts = new ArrayList<>();
-            for (ProposedPart part : p.parts()) {
-                Map<String, Object> m = new LinkedHashMap<>();
-                m.put("kind", part.kind().name().toLowerCase(java.util.Locale.ROOT));
-                m.put("place", part.place().name().toLowerCase(java.util.Locale.ROOT));
-                m.put("structure", part.ownerId());
-                if (part.rod() != null) {
-                    m.put("name", part.rod().name());
-                    m.put("x", part.rod().x());
-                    m.put("y", part.rod().y());
-                    m.put("height", part.rod().height());
-                } else {
-                    m.put("name", part.conductor().name());
-                    List<double[]> path = new ArrayList<>();
-                    part.conductor().path().forEach(c -> path.add(new double[] {c.x, c.y, c.getZ()}));
-                    m.put("path", path);
-                    m.put("length", Math.round(part.conductorLength() * 100) / 100.0);
-                }
-                parts.add(m);
-            }
-            out.put("parts", parts);
-            out.put("count", p.count());
-            out.put("counts", DesignService.partCounts(p.parts()));
-            out.put("regularLayoutCount", p.regularLayoutCount());
-            out.put("shareOfRegular", Double.isNaN(p.shareOfRegular()) ? null : Math.round(p.shareOfRegular() * 1000) / 1000.0);
-            out.put("complete", p.complete());
-            out.put("left", p.left());
-            out.put("beyondReach", p.beyondReach());
-            out.put("rounds", p.rounds());
-            out.put("elapsedMillis", p.elapsedMillis());
+        if (job.result() != null) {
+            // the proposal's parts and figures as stored when it finished (ProposalResultJson)
+            job.result().properties().forEach(e -> out.put(e.getKey(), e.getValue()));
             out.put("cautions", Cautions.lines());
         }
         return out;

@@ -41,6 +41,7 @@ import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.dao.OptimisticLockingFailureException;
 import org.springframework.stereotype.Service;
+import tools.jackson.databind.JsonNode;
 
 /**
  * The design of a stored site: proposals (run by {@link ProposalJobs}) and their acceptance into
@@ -155,16 +156,15 @@ public class DesignService {
         sites.get(siteId);
         ProposalJobs.Job job = jobs.get(siteId, jobId);
         if (job == null) {
-            throw new SiteNotFoundException(siteId, "site " + siteId + " has no proposal \"" + jobId + "\" (proposals are"
-                    + " kept in memory until the server restarts)");
+            throw new SiteNotFoundException(siteId, "site " + siteId + " has no proposal \"" + jobId + "\" (finished"
+                    + " proposals are kept for a day, the latest " + ProposalJobs.KEEP + " of a site)");
         }
         return job;
     }
 
     public ProposalJobs.Job cancel(long siteId, String jobId) {
-        ProposalJobs.Job job = job(siteId, jobId);
-        jobs.cancel(job);
-        return job;
+        jobs.cancel(job(siteId, jobId));
+        return job(siteId, jobId);
     }
 
     /** Ids of the parts an accepted proposal added to the site, and the site's version after accepting. */
@@ -192,18 +192,19 @@ public class DesignService {
         List<AirTerminationService.ConductorInput> conductors = new ArrayList<>();
         int masts = 0;
         double conductorLength = 0;
-        for (ProposedPart p : job.result().parts()) {
-            if (p.rod() != null) {
-                rods.add(new AirTerminationService.RodInput(null, p.rod().name(), p.rod().x(), p.rod().y(),
-                        BillOfQuantities.metresText(p.rod().height())));
-                masts += p.kind() == ProposedPart.Kind.MAST ? 1 : 0;
+        // the parts as stored with the job (ProposalResultJson), so that any instance can accept them
+        for (JsonNode p : job.result().path("parts")) {
+            if (p.has("x")) {
+                rods.add(new AirTerminationService.RodInput(null, p.path("name").asString(), p.path("x").asDouble(),
+                        p.path("y").asDouble(), BillOfQuantities.metresText(p.path("height").asDouble())));
+                masts += "mast".equals(p.path("kind").asString()) ? 1 : 0;
             } else {
                 List<double[]> points = new ArrayList<>();
-                for (Coordinate c : p.conductor().path()) {
-                    points.add(new double[] {c.x, c.y, c.getZ()});
+                for (JsonNode c : p.path("path")) {
+                    points.add(new double[] {c.path(0).asDouble(), c.path(1).asDouble(), c.path(2).asDouble()});
                 }
-                conductors.add(new AirTerminationService.ConductorInput(null, p.conductor().name(), points, null));
-                conductorLength += p.conductorLength();
+                conductors.add(new AirTerminationService.ConductorInput(null, p.path("name").asString(), points, null));
+                conductorLength += p.path("length").asDouble();
             }
         }
         if (rods.isEmpty() && conductors.isEmpty()) {
@@ -211,11 +212,11 @@ public class DesignService {
         }
         String text = String.format(Locale.ROOT, "accepted proposal %s: %d rods, %d masts, %d conductors (%.1f m)%s",
                 job.id(), rods.size() - masts, masts, conductors.size(), conductorLength,
-                job.result().complete() ? "" : ", not complete");
+                job.result().path("complete").asBoolean() ? "" : ", not complete");
         AirTerminationService.AddedParts added = parts.addParts(siteId, version, rods, conductors, "proposal-accepted", text);
         analyses.run(siteId, null, null, null);
         Accepted accepted = new Accepted(added.rodIds(), added.conductorIds(), sites.get(siteId).version());
-        job.accepted = accepted;
+        jobs.accepted(job, accepted);
         return accepted;
     }
 
@@ -243,7 +244,7 @@ public class DesignService {
         parts.removeParts(siteId, version, accepted.rodIds(), accepted.conductorIds(), "proposal-accept-undone",
                 String.format(Locale.ROOT, "took back proposal %s: removed %d rods or masts and %d conductors", job.id(),
                         accepted.rodIds().size(), accepted.conductorIds().size()));
-        job.accepted = null;
+        jobs.accepted(job, null);
         analyses.run(siteId, null, null, null);
         return sites.get(siteId).version();
     }

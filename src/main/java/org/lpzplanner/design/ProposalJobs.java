@@ -1,11 +1,14 @@
 package org.lpzplanner.design;
 
+import java.time.Clock;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.UUID;
-import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
-import java.util.concurrent.atomic.AtomicBoolean;
 import jakarta.annotation.PreDestroy;
 import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.engine.design.proposal.AirTerminationProposer;
@@ -15,127 +18,153 @@ import org.lpzplanner.engine.design.proposal.ProposalMonitor;
 import org.lpzplanner.engine.design.proposal.ProposalOptions;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.jobs.JobInstance;
+import org.lpzplanner.jobs.JobStore;
+import org.lpzplanner.jobs.LiveJob;
+import org.lpzplanner.jobs.StoredJob;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.stereotype.Component;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Runs proposals one at a time in the background (a proposal uses every core) and keeps the latest
- * {@value #KEEP} of them in memory, so a page can poll progress and take the result. Jobs do not
- * survive a restart; a proposal is quick to run again.
+ * Runs proposals one at a time in the background (a proposal uses every core of this instance) and
+ * stores each as a row of {@code background_jobs} ({@link JobStore}): progress, outcome (the
+ * proposal's parts and figures as JSON) and what accepting it added. So any app instance answers a
+ * poll, a cancel, an accept or its undo, also after a restart. Finished proposals are kept for a
+ * day, at most {@value #KEEP} per site.
  */
 @Component
 public class ProposalJobs {
 
     static final int KEEP = 20;
+    static final Duration KEPT_FOR = Duration.ofDays(1);
     private static final Logger LOG = LoggerFactory.getLogger(ProposalJobs.class);
+    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     /** Where a job stands. */
     public enum State { RUNNING, DONE, FAILED, CANCELLED }
 
-    /** One proposal run; mutable fields are volatile, written by the worker, read by requests. */
-    public static final class Job {
-        final String id;
-        final long siteId;
-        final long siteVersion;
-        final ProposalOptions options;
-        final Site site;
-        final AtomicBoolean cancel = new AtomicBoolean();
-        volatile State state = State.RUNNING;
-        volatile String stage = "waiting";
-        volatile double fraction;
-        volatile Proposal result;
-        volatile String error;
-        /** What accepting it added, and the site's version after that; null until accepted or after an undo. */
-        volatile DesignService.Accepted accepted;
-
-        Job(String id, long siteId, long siteVersion, Site site, ProposalOptions options) {
-            this.id = id;
-            this.siteId = siteId;
-            this.siteVersion = siteVersion;
-            this.site = site;
-            this.options = options;
-        }
-
-        public String id() { return id; }
-        public long siteId() { return siteId; }
-        public long siteVersion() { return siteVersion; }
-        public State state() { return state; }
-        public String stage() { return stage; }
-        public double fraction() { return fraction; }
-        public Proposal result() { return result; }
-        public String error() { return error; }
-        public DesignService.Accepted accepted() { return accepted; }
-        public Site site() { return site; }
-        public ProposalOptions options() { return options; }
+    /**
+     * A proposal job as stored.
+     *
+     * @param result   the proposal's parts and figures once done ({@link ProposalResultJson}), else null
+     * @param accepted what accepting it added, and the site's version after that; null until accepted or after an undo
+     */
+    public record Job(String id, long siteId, long siteVersion, State state, String stage, double fraction,
+            String level, double radius, String error, JsonNode result, DesignService.Accepted accepted) {
     }
 
+    private final JobStore store;
+    private final JobInstance instance;
+    private final Clock clock;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "proposal-worker");
         t.setDaemon(true);
         return t;
     });
-    private final Map<String, Job> jobs = new ConcurrentHashMap<>();
+
+    public ProposalJobs(JobStore store, JobInstance instance, Clock clock) {
+        this.store = store;
+        this.instance = instance;
+        this.clock = clock;
+    }
 
     public Job start(long siteId, long siteVersion, Site site, ProposalOptions options) {
-        Job job = new Job(UUID.randomUUID().toString().substring(0, 12), siteId, siteVersion, site, options);
-        if (jobs.size() >= KEEP) {
-            jobs.values().stream().filter(j -> j.state != State.RUNNING).findFirst().ifPresent(j -> jobs.remove(j.id));
-        }
-        jobs.put(job.id, job);
+        String id = UUID.randomUUID().toString().substring(0, 12);
+        Map<String, Object> settings = new LinkedHashMap<>();
+        settings.put("level", options.sphere().level().name());
+        settings.put("radius", options.sphere().radius());
+        store.insert(new JobStore.NewJob(id, JobStore.PROPOSAL, siteId, CurrentAccount.teamId(),
+                CurrentAccount.actorName(), JobStore.RUNNING, "waiting", siteVersion, JSON.writeValueAsString(settings),
+                instance.name()), clock.instant());
+        LiveJob live = instance.track(id, "waiting");
         // the worker acts for the person who started the proposal, like every background task
-        worker.submit(CurrentAccount.carry(() -> run(job)));
-        return job;
+        worker.submit(CurrentAccount.carry(() -> run(live, site, options)));
+        store.prune(siteId, JobStore.PROPOSAL, KEEP, clock.instant().minus(KEPT_FOR));
+        return get(siteId, id);
     }
 
     /**
-     * The job, or null when there is none with this id for this site. Callers first read the site
-     * through SiteService, which answers 404 for another team's site, so a job is only found by
-     * its own team.
+     * The job, or null when there is none with this id for this site of the caller's team (callers
+     * first read the site through SiteService, which answers 404 for another team's site).
      */
     public Job get(long siteId, String jobId) {
-        Job job = jobs.get(jobId);
-        return job != null && job.siteId == siteId ? job : null;
+        return store.find(JobStore.PROPOSAL, siteId, CurrentAccount.teamId(), jobId).map(instance::current)
+                .map(ProposalJobs::job).orElse(null);
     }
 
+    /** Asks the proposal to stop, whichever instance runs it. */
     public void cancel(Job job) {
-        job.cancel.set(true);
+        store.requestCancel(job.id(), false, clock.instant());
+        instance.cancelLocally(job.id());
     }
 
-    private void run(Job job) {
-        if (job.cancel.get()) {
-            job.state = State.CANCELLED;
-            return;
-        }
+    /** Records what accepting the proposal added (null: it was taken back). */
+    void accepted(Job job, DesignService.Accepted accepted) {
+        store.setAccepted(job.id(), accepted == null ? null : JSON.writeValueAsString(accepted));
+    }
+
+    private void run(LiveJob live, Site site, ProposalOptions options) {
+        String id = live.id();
         try {
-            job.result = AirTerminationProposer.propose(job.site, job.options, new ProposalMonitor() {
+            if (live.cancelRequested() || store.find(id).map(StoredJob::cancelRequested).orElse(true)) {
+                store.finish(id, JobStore.CANCELLED, null, null, null, clock.instant());
+                return;
+            }
+            Proposal proposal = AirTerminationProposer.propose(site, options, new ProposalMonitor() {
                 @Override
                 public void progress(String stage, double fraction) {
-                    job.stage = stage;
-                    job.fraction = fraction;
+                    live.progress(stage, fraction);
                 }
 
                 @Override
                 public boolean isCancelled() {
-                    return job.cancel.get();
+                    return instance.cancelRequested(id);
                 }
             });
-            job.state = State.DONE;
+            store.finish(id, JobStore.DONE, null, JSON.writeValueAsString(ProposalResultJson.of(proposal)), null,
+                    clock.instant());
         } catch (ProposalCancelledException e) {
-            job.state = State.CANCELLED;
+            store.finish(id, JobStore.CANCELLED, null, null, null, clock.instant());
         } catch (AnalysisTooLargeException | IllegalArgumentException e) {
-            job.error = e.getMessage();
-            job.state = State.FAILED;
+            store.finish(id, JobStore.FAILED, null, null, e.getMessage(), clock.instant());
         } catch (RuntimeException e) {
-            LOG.error("proposal {} for site {} failed", job.id, job.siteId, e);
-            job.error = "the proposal could not be computed; the server log has the details";
-            job.state = State.FAILED;
+            LOG.error("proposal {} failed", id, e);
+            try {
+                store.finish(id, JobStore.FAILED, null, null,
+                        "the proposal could not be computed; the server log has the details", clock.instant());
+            } catch (RuntimeException stored) {
+                LOG.error("proposal {}: its failure could not be stored", id, stored);
+            }
+        } finally {
+            instance.untrack(id);
         }
+    }
+
+    private static Job job(StoredJob s) {
+        JsonNode settings = s.settingsJson() == null ? JSON.createObjectNode() : JSON.readTree(s.settingsJson());
+        JsonNode result = s.outcomeJson() == null ? null : JSON.readTree(s.outcomeJson());
+        DesignService.Accepted accepted = null;
+        if (s.acceptedJson() != null) {
+            JsonNode a = JSON.readTree(s.acceptedJson());
+            accepted = new DesignService.Accepted(texts(a.path("rodIds")), texts(a.path("conductorIds")),
+                    a.path("version").asLong());
+        }
+        return new Job(s.id(), s.siteId(), s.siteVersion() == null ? -1 : s.siteVersion(),
+                State.valueOf(JobStore.QUEUED.equals(s.state()) ? JobStore.RUNNING : s.state()), s.stage(), s.fraction(),
+                settings.path("level").asString(), settings.path("radius").asDouble(), s.error(), result, accepted);
+    }
+
+    private static List<String> texts(JsonNode array) {
+        List<String> out = new ArrayList<>();
+        array.forEach(n -> out.add(n.asString()));
+        return out;
     }
 
     @PreDestroy
     void stop() {
-        jobs.values().forEach(j -> j.cancel.set(true));
         worker.shutdownNow();
     }
 }

@@ -73,6 +73,30 @@ class HostileNamesTest {
         assertThat(plan.substring(plan.indexOf("id=\"history\""))).contains(ESCAPED);
     }
 
+    /**
+     * In the PDF a name is text drawn as it is: markup shows as its characters, and characters the
+     * font lacks (a control character, an emoji, a right-to-left override) do not break the report.
+     */
+    @Test
+    void hostileNamesPrintAsPlainTextInTheReport() throws Exception {
+        String odd = "Hall\u0007 \uD83D\uDE00 \u202Eevil\u202C\ttab";
+        String geoJson = "{\"type\":\"FeatureCollection\",\"coordinates\":\"local-metres\",\"features\":["
+                + "{\"type\":\"Feature\",\"properties\":{\"kind\":\"structure\",\"name\":" + JsonMapper.builder().build().writeValueAsString(odd)
+                + ",\"height\":6},\"geometry\":{\"type\":\"Polygon\",\"coordinates\":"
+                + "[[[0,0],[10,0],[10,10],[0,10],[0,0]]]}},{\"type\":\"Feature\",\"properties\":{\"kind\":\"rod\","
+                + "\"name\":" + json(HOSTILE) + ",\"height\":2},\"geometry\":{\"type\":\"Point\",\"coordinates\":[5,5]}}]}";
+        String location = mvc.perform(multipart("/sites").file(new MockMultipartFile("file", "hostile.geojson", null,
+                geoJson.getBytes(StandardCharsets.UTF_8))).param("name", HOSTILE))
+                .andExpect(status().is3xxRedirection()).andReturn().getResponse().getRedirectedUrl();
+        long id = Long.parseLong(location.substring(location.lastIndexOf('/') + 1));
+        byte[] pdf = mvc.perform(get("/api/sites/{id}/revisions/1/report", id)).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsByteArray();
+        try (var document = org.apache.pdfbox.Loader.loadPDF(pdf)) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(document);
+            assertThat(text).contains("<script>alert(1)</script> & \"quotes\"").contains("Hall");
+        }
+    }
+
     private String page(String url) throws Exception {
         var response = mvc.perform(get(url)).andExpect(status().isOk()).andReturn().getResponse();
         return response.getContentAsString(StandardCharsets.UTF_8);

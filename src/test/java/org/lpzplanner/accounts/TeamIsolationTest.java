@@ -17,6 +17,7 @@ import org.lpzplanner.analysis.AnalysisJobs;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.design.DesignService;
 import org.lpzplanner.design.ProposalJobs;
+import org.lpzplanner.jobs.JobStore;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -49,6 +50,9 @@ class TeamIsolationTest {
 
     @Autowired
     AnalysisJobs analysisJobs;
+
+    @Autowired
+    JobStore jobs;
 
     long foreignId;
 
@@ -104,7 +108,7 @@ class TeamIsolationTest {
         long id = foreignId;
         ProposalJobs.Job proposal = CurrentAccount.asSystem("test", otherTeam,
                 () -> design.propose(id, new DesignService.ProposeRequest(List.of(1.0), List.of(), List.of())));
-        AnalysisJob analysis = CurrentAccount.asSystem("test", otherTeam,
+        AnalysisJob.Snapshot analysis = CurrentAccount.asSystem("test", otherTeam,
                 () -> analysisJobs.submit(id, null, null, "2"));
         RequestBuilder[] requests = {
             get("/api/sites/{id}/proposals/{job}", id, proposal.id()),
@@ -128,9 +132,12 @@ class TeamIsolationTest {
             assertThat(body).doesNotContain("Secret campus", "Larch rod");
         }
         // the other team's proposal was not cancelled by the refused request
-        assertThat(proposal.state()).isNotEqualTo(ProposalJobs.State.CANCELLED);
+        assertThat(CurrentAccount.asSystem("test", otherTeam, () -> jobs.find(proposal.id())).orElseThrow()
+                .cancelRequested()).isFalse();
+        assertThat(CurrentAccount.asSystem("test", otherTeam, () -> jobs.find(analysis.id())).orElseThrow()
+                .cancelRequested()).isFalse();
         // the owners stop both, so that they do not hold workers other tests need
         CurrentAccount.asSystem("test", otherTeam, () -> design.cancel(id, proposal.id()));
-        analysisJobs.cancel(id, analysis.id());
+        CurrentAccount.asSystem("test", otherTeam, () -> analysisJobs.cancel(id, analysis.id()));
     }
 }

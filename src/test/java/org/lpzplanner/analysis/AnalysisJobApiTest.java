@@ -35,6 +35,9 @@ class AnalysisJobApiTest {
     @Autowired
     AnalysisRepository revisions;
 
+    @Autowired
+    org.springframework.jdbc.core.simple.JdbcClient jdbc;
+
     private long upload() throws Exception {
         byte[] file = Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson"));
         String body = mvc.perform(multipart("/api/sites").file(new MockMultipartFile("file", "harbour.geojson",
@@ -76,6 +79,38 @@ class AnalysisJobApiTest {
         mvc.perform(post("/api/sites/" + id + "/analyses").param("async", "true").param("radius", "-3"))
                 .andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("radius"));
         mvc.perform(post("/api/sites/987654/analyses").param("async", "true")).andExpect(status().isNotFound());
+    }
+
+    /**
+     * Two sheds 12 km apart east and north at 0.5 m resolution would need a grid of some 6e8 cells, far beyond
+     * what an analysis may use: refused before anything is queued or computed, naming the
+     * resolution and one that fits, in the background as in the foreground.
+     */
+    @Test
+    void anAnalysisTooLargeIsRefusedBeforeItIsQueued() throws Exception {
+        String far = """
+                {"type": "FeatureCollection", "name": "Far sheds", "coordinates": "local-metres", "features": [
+                  {"type": "Feature", "properties": {"kind": "structure", "name": "West shed", "height": 5},
+                   "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [10, 0], [10, 8], [0, 8], [0, 0]]]}},
+                  {"type": "Feature", "properties": {"kind": "structure", "name": "East shed", "height": 5},
+                   "geometry": {"type": "Polygon", "coordinates": [[[12000, 12000], [12010, 12000], [12010, 12008], [12000, 12008], [12000, 12000]]]}}
+                ]}""";
+        String body = mvc.perform(multipart("/api/sites").file(new MockMultipartFile("file", "far.geojson",
+                "application/geo+json", far.getBytes(java.nio.charset.StandardCharsets.UTF_8))))
+                .andReturn().getResponse().getContentAsString();
+        long id = JSON.readTree(body).path("id").asLong();
+        for (String async : new String[] {"true", "false"}) {
+            String answer = mvc.perform(post("/api/sites/" + id + "/analyses").param("async", async)
+                            .param("resolution", "0.5"))
+                    .andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("resolution"))
+                    .andReturn().getResponse().getContentAsString();
+            JsonNode error = JSON.readTree(answer);
+            assertThat(error.path("error").asString()).contains("cells").contains("coarser");
+            // the suggested resolution fits: (12,008 m + 2 R + margins)^2 / h^2 <= 12 million cells
+            assertThat(error.path("suggestedResolution").asDouble()).isGreaterThan(12_000 / Math.sqrt(12e6));
+        }
+        assertThat(jdbc.sql("SELECT COUNT(*) FROM background_jobs WHERE site_id = ?").param(id).query(Long.class)
+                .single()).as("nothing was queued").isZero();
     }
 
     @Test

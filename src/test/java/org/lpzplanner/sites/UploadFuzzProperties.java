@@ -29,7 +29,7 @@ import tools.jackson.databind.json.JsonMapper;
 @SignedIn
 class UploadFuzzProperties {
 
-    private static final int FILES_PER_SEED = 200;
+    private static final int FILES_PER_SEED = 1000;
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
     @Autowired

@@ -72,17 +72,31 @@ public final class EnvelopeOp {
     }
 
     /**
+     * Whether an analysis at spacing h fits, without computing anything: lets a caller refuse a
+     * request before queueing it.
+     *
+     * @throws AnalysisTooLargeException when the grid at spacing h would exceed {@link #MAX_CELLS}
+     */
+    public static void checkSize(SiteSurface surface, double radius, double h) {
+        checkCells(gridFor(surface, Supports.of(surface, radius), radius, h), h);
+    }
+
+    private static void checkCells(Grid grid, double h) {
+        long cells = (long) grid.nx() * grid.ny();
+        if (cells > MAX_CELLS) {
+            double fits = Math.ceil(h * Math.sqrt((double) cells / MAX_CELLS) * 1.05 * 100) / 100;
+            throw new AnalysisTooLargeException(cells, h, fits);
+        }
+    }
+
+    /**
      * @throws AnalysisTooLargeException when the grid at spacing h would exceed {@link #MAX_CELLS};
      *         nothing is computed then
      */
     public static EnvelopeField compute(SiteSurface surface, double radius, double h) {
         List<Support> supports = Supports.of(surface, radius);
         Grid grid = gridFor(surface, supports, radius, h);
-        long cells = (long) grid.nx() * grid.ny();
-        if (cells > MAX_CELLS) {
-            double fits = Math.ceil(h * Math.sqrt((double) cells / MAX_CELLS) * 1.05 * 100) / 100;
-            throw new AnalysisTooLargeException(cells, h, fits);
-        }
+        checkCells(grid, h);
         CentreSurface centres = CentreSurface.compute(grid, supports, radius);
         double[] vertexLower = BallErosion.erode(centres.vertexLowers(), grid.nx() + 1, grid.ny() + 1, h, radius);
         SupportIndex index = new SupportIndex(supports, grid, Math.max(4 * h, radius / 4));

@@ -68,6 +68,19 @@ public final class ExposureAnalysis {
         return run(site, options, progress, previous);
     }
 
+    /**
+     * Refuses an analysis whose grid would not fit before anything is computed (as the analysis
+     * itself would at its start), so that a request can be refused before it is queued.
+     *
+     * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException with a resolution that fits
+     */
+    public static void checkSize(Site site, AnalysisOptions options) {
+        SiteSurface surface = SiteSurfaceBuilder.build(site);
+        double radius = options.sphere().radius();
+        double h = options.resolution() != null ? options.resolution() : ResolutionChoice.choose(surface, radius);
+        EnvelopeOp.checkSize(surface, radius, h);
+    }
+
     private static AnalysisState run(Site site, AnalysisOptions options, AnalysisProgress progress,
             AnalysisState previous) {
         long start = System.nanoTime();
