@@ -37,20 +37,25 @@ public record RiskAssessment(StoredSite site, Site geometry, RiskSettings settin
 
     /**
      * Flashes to the incoming lines, shown for information only (R1 here does not count them):
-     * A_L = 40·L_L m² per line and N_L = N_G·A_L·10⁻⁶ per year with the installation, environment
-     * and transformer factors at their largest value 1 [IEC 62305-2:2010 Annex A; from memory —
-     * check against the standard].
+     * A_L = 40·L_L m² per line and N_L = N_G·A_L·10⁻⁶ per year; and the ground near each line,
+     * A_I = 4000·L_L m², with N_I = N_G·A_I·10⁻⁶ flashes per year near it; the installation,
+     * environment and transformer factors at their largest value 1 [IEC 62305-2:2010 Annex A; from
+     * memory — check against the standard].
      *
      * @param count  number of lines
      * @param length L_L of each line, metres
      * @param collectionAreaPerLine A_L in m²
      * @param flashesPerLine N_L per year and line
+     * @param nearAreaPerLine A_I in m²: ground where a flash induces overvoltage on the line
+     * @param flashesNearLine N_I per year and line
      */
-    public record LineFlashes(int count, double length, double collectionAreaPerLine, double flashesPerLine) {
+    public record LineFlashes(int count, double length, double collectionAreaPerLine, double flashesPerLine,
+            double nearAreaPerLine, double flashesNearLine) {
 
         static LineFlashes of(int count, double length, double flashDensity) {
             double area = 40 * length;
-            return new LineFlashes(count, length, area, flashDensity * area * 1e-6);
+            double near = 4000 * length;
+            return new LineFlashes(count, length, area, flashDensity * area * 1e-6, near, flashDensity * near * 1e-6);
         }
     }
 }

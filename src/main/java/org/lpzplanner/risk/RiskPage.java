@@ -69,7 +69,8 @@ class RiskPage {
         model.put("suggestion", suggestion(a.suggestion(), locale));
         model.put("lines", a.lines() == null ? null : text(locale, "risk.lines.figures", a.lines().count(),
                 RiskFormat.metres(a.lines().length()), RiskFormat.area(a.lines().collectionAreaPerLine()),
-                RiskFormat.scientific(a.lines().flashesPerLine())));
+                RiskFormat.scientific(a.lines().flashesPerLine())) + " " + text(locale, "risk.lines.near",
+                RiskFormat.area(a.lines().nearAreaPerLine()), RiskFormat.scientific(a.lines().flashesNearLine())));
         ProtectionLevel level = a.choice().level().orElse(null);
         model.put("chosenLevel", level == null ? null : level.name());
         model.put("levelAlreadySet", level != null && a.site().level() == level && a.site().customRadius() == null);

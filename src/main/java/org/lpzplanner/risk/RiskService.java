@@ -128,6 +128,7 @@ public class RiskService {
         notes.add(text(locale, "risk.limits.components"));
         notes.add(text(locale, "risk.limits.edition"));
         notes.add(text(locale, "risk.limits.memory"));
+        notes.add(text(locale, "risk.limits.geometry"));
         return new ReportSection(text(locale, "risk.report.title"), columns, rows, notes);
     }
 

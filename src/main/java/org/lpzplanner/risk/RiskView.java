@@ -52,7 +52,8 @@ public record RiskView(long siteId, boolean saved, Inputs inputs, Suggestion sug
     }
 
     /** Flashes to the entered lines, for information only (not counted in R1). */
-    public record Lines(int count, double length, double collectionAreaPerLine, double flashesPerLinePerYear) {
+    public record Lines(int count, double length, double collectionAreaPerLine, double flashesPerLinePerYear,
+            double nearAreaPerLine, double flashesNearLinePerYear) {
     }
 
     static RiskView of(RiskAssessment a, String outcome, String dominance) {
@@ -67,7 +68,8 @@ public record RiskView(long siteId, boolean saved, Inputs inputs, Suggestion sug
                 a.choice().level().map(Enum::name).orElse(null),
                 a.withoutLps().isTolerable(), a.choice().chosen().isPresent(), outcome, dominance,
                 a.choice().summary(),
-                l == null ? null : new Lines(l.count(), l.length(), l.collectionAreaPerLine(), l.flashesPerLine()),
+                l == null ? null : new Lines(l.count(), l.length(), l.collectionAreaPerLine(), l.flashesPerLine(),
+                        l.nearAreaPerLine(), l.flashesNearLine()),
                 Cautions.lines());
     }
 }

@@ -42,10 +42,13 @@ class PlanPage {
     private final CommentService comments;
     private final AuditTrail audit;
     private final KeepOutAreaService keepOut;
+    private final List<PlanContribution> contributions;
 
     PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews,
-            SectionPage sectionPage, CommentService comments, AuditTrail audit, KeepOutAreaService keepOut) {
+            SectionPage sectionPage, CommentService comments, AuditTrail audit, KeepOutAreaService keepOut,
+            List<PlanContribution> contributions) {
         this.keepOut = keepOut;
+        this.contributions = List.copyOf(contributions);
         this.comments = comments;
         this.audit = audit;
         this.sectionPage = sectionPage;
@@ -66,6 +69,7 @@ class PlanPage {
         model.put("method", ResultGeoJson.METHOD);
         model.put("cautions", Cautions.lines());
         model.put("levels", ProtectionLevel.values());
+        contributions.forEach(c -> model.putAll(c.attributes(site, locale)));
         model.put("structures", sites.structures(site));
         model.put("roofForms", ROOF_FORMS);
         model.put("rodHeights", ROD_HEIGHTS);

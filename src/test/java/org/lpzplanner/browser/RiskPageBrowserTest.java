@@ -22,7 +22,8 @@ import org.openqa.selenium.support.ui.WebDriverWait;
  * invented 40 m × 20 m × 10 m block; with T_d = 20, a hospital, high fire risk, automatic fire
  * provisions and difficulty of evacuation, R1 is 1.46 · 10⁻⁴ per year without an LPS and level II
  * is the lowest sufficient level (worked out in RiskApiTest from IEC 62305-2:2010's formulas).
- * Saves target/screenshots/risk-page.png.
+ * On the plan page the analysis form then starts at level II with a note, and the collection area
+ * is switched on and off as a layer. Saves target/screenshots/risk-page.png and plan-collection-area.png.
  */
 class RiskPageBrowserTest extends BrowserTestBase {
 
@@ -70,6 +71,38 @@ class RiskPageBrowserTest extends BrowserTestBase {
             assertThat(page).contains(caution);
         }
 
+        // the plan page: the analysis form starts at the estimate's level II (the site is at IV), says
+        // why, and the collection area can be switched on as a layer of the plan
+        String riskUrl = browser.getCurrentUrl();
+        browser.findElement(By.linkText("Back to the plan of Risk block")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.urlMatches(".*/sites/\\d+$"));
+        Select level = new Select(browser.findElement(By.cssSelector("#analysis-form select[name=level]")));
+        assertThat(level.getFirstSelectedOption().getAttribute("value")).isEqualTo("II");
+        assertThat(browser.findElement(By.id("analysis-level-note")).getText())
+                .contains("starts at level II", "instead of the site's level IV");
+        WebElement plan = browser.findElement(By.cssSelector("#plan-drawing svg.plan"));
+        String plainViewBox = plan.getDomAttribute("viewBox");
+        assertThat(plan.findElements(By.cssSelector("path.collection-area-layer"))).isEmpty();
+        WebElement toggle = browser.findElement(By.id("collection-area-toggle"));
+        assertThat(toggle.isDisplayed()).isTrue();
+        toggle.click();
+        WebElement layer = browser.findElement(By.cssSelector("#plan-drawing svg.plan path.collection-area-layer"));
+        // the ward block's zone reaches 3·10 = 30 m beyond its walls (IEC 62305-2 Annex A): the zone
+        // drawn on screen is wider than the block by 60 m at the plan's scale, and the view widened to hold it
+        double scale = Double.parseDouble(plan.getDomAttribute("data-scale"));
+        Number zoneWidth = (Number) browser.executeScript("return arguments[0].getBBox().width;", layer);
+        assertThat(zoneWidth.doubleValue() / scale).isCloseTo(65 + 18 + 30, org.assertj.core.data.Offset.offset(0.5));
+        assertThat(plan.getDomAttribute("viewBox")).isNotEqualTo(plainViewBox);
+        Path shots = Files.createDirectories(Path.of("target", "screenshots"));
+        browser.manage().window().setSize(new Dimension(1400, 1400));
+        browser.executeScript("arguments[0].scrollIntoView();", plan);
+        Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("plan-collection-area.png"),
+                StandardCopyOption.REPLACE_EXISTING);
+        toggle.click();
+        assertThat(plan.findElements(By.cssSelector("path.collection-area-layer"))).isEmpty();
+        assertThat(plan.getDomAttribute("viewBox")).isEqualTo(plainViewBox);
+        browser.get(riskUrl);
+
         browser.findElement(By.id("select-level")).click();
         new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(By.id("risk-level-set")));
         assertThat(browser.findElement(By.id("risk-level-set")).getText()).contains("Protection level II");
@@ -78,12 +111,47 @@ class RiskPageBrowserTest extends BrowserTestBase {
         // the whole page in one picture: the window as tall as the page
         Number height = (Number) browser.executeScript("return document.documentElement.scrollHeight;");
         browser.manage().window().setSize(new Dimension(1400, Math.min(8000, height.intValue() + 150)));
-        Path shots = Files.createDirectories(Path.of("target", "screenshots"));
         Path shot = browser.getScreenshotAs(OutputType.FILE).toPath();
         Files.copy(shot, shots.resolve("risk-page.png"), StandardCopyOption.REPLACE_EXISTING);
         assertThat(Files.size(shots.resolve("risk-page.png"))).isGreaterThan(10_000);
 
         browser.findElement(By.linkText("Back to the plan of Risk block")).click();
         assertThat(browser.findElement(By.tagName("body")).getText()).contains("Risk block");
+    }
+
+    @Test
+    void aZoneFarLargerThanThePlanIsClippedToTheDrawingWithANote() throws Exception {
+        // a 10 × 10 m mast house 60 m tall: its zone reaches 3·60 = 180 m beyond the walls
+        // (IEC 62305-2 Annex A), far beyond the drawn plan, which would shrink past reading if widened
+        Path file = Files.createDirectories(Path.of("target", "browser-files")).resolve("risk-mast.geojson");
+        Files.writeString(file, """
+                {"type": "FeatureCollection", "name": "Risk mast", "coordinates": "local-metres", "features": [
+                  {"type": "Feature", "properties": {"kind": "structure", "name": "Mast house", "height": 60},
+                   "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [10, 0], [10, 10], [0, 10], [0, 0]]]}}
+                ]}
+                """);
+        browser.get("http://localhost:" + port + "/");
+        browser.findElement(By.cssSelector("input[type=file][name=file]")).sendKeys(file.toAbsolutePath().toString());
+        browser.findElement(By.cssSelector("form button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(60)).until(ExpectedConditions.urlMatches(".*/sites/\\d+$"));
+
+        WebElement plan = browser.findElement(By.cssSelector("#plan-drawing svg.plan"));
+        String plainViewBox = plan.getDomAttribute("viewBox");
+        assertThat(browser.findElement(By.id("collection-area-clipped")).isDisplayed()).isFalse();
+        browser.findElement(By.id("collection-area-toggle")).click();
+
+        WebElement layer = plan.findElement(By.cssSelector("path.collection-area-layer"));
+        assertThat(layer.getDomAttribute("clip-path")).isEqualTo("url(#collection-area-clip)");
+        assertThat(plan.getDomAttribute("viewBox")).isEqualTo(plainViewBox);
+        assertThat(browser.findElement(By.id("collection-area-clipped")).getText()).contains("cut off", "risk page");
+        Path shots = Files.createDirectories(Path.of("target", "screenshots"));
+        browser.manage().window().setSize(new Dimension(1400, 1400));
+        browser.executeScript("arguments[0].scrollIntoView();", plan);
+        Files.copy(browser.getScreenshotAs(OutputType.FILE).toPath(), shots.resolve("plan-collection-area-clipped.png"),
+                StandardCopyOption.REPLACE_EXISTING);
+
+        browser.findElement(By.id("collection-area-toggle")).click();
+        assertThat(plan.findElements(By.cssSelector(".collection-area-layer"))).isEmpty();
+        assertThat(browser.findElement(By.id("collection-area-clipped")).isDisplayed()).isFalse();
     }
 }

@@ -44,6 +44,9 @@ class ReportCommandTest {
         assertThat(text).contains("Protection level II, R = 30.00 m").contains("Test block");
         assertThat(text).contains("A1 rod Corner rod 1.00 1.00 2.00 Block 12.00");
         assertThat(text).contains("Unsaved analysis (command line)");
+        // the command line has no stored risk inputs: the report says the risk estimate is left out and why
+        assertThat(text).contains("Risk estimate (IEC 62305-2) Not included: a report printed on the command line has no"
+                + " stored risk inputs");
     }
 
     @Test

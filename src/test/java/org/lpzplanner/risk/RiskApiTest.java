@@ -132,6 +132,10 @@ class RiskApiTest {
         assertThat(risk.path("lines").path("length").asDouble()).isEqualTo(1000.0);
         assertThat(risk.path("lines").path("collectionAreaPerLine").asDouble()).isEqualTo(40_000.0);
         assertThat(risk.path("lines").path("flashesPerLinePerYear").asDouble()).isCloseTo(0.16, within(1e-12));
+        // ground near the line A_I = 4000 · L_L [IEC 62305-2:2010 Annex A; from memory]: 4·10⁶ m²,
+        // N_I = N_G · A_I · 10⁻⁶ = 4 · 4 = 16 per year with every line factor at 1
+        assertThat(risk.path("lines").path("nearAreaPerLine").asDouble()).isEqualTo(4_000_000.0);
+        assertThat(risk.path("lines").path("flashesNearLinePerYear").asDouble()).isCloseTo(16, within(1e-9));
     }
 
     @Test

@@ -131,6 +131,82 @@ class RiskPagesTest {
                 .contains("changed meanwhile");
     }
 
+    /** The level option the plan page's analysis form starts at. */
+    private static String selectedLevel(String html) {
+        java.util.regex.Matcher m = java.util.regex.Pattern
+                .compile("<option value=\"(I|II|III|IV)\"[^>]*selected[^>]*>").matcher(html);
+        assertThat(m.find()).as("a level option is selected").isTrue();
+        String level = m.group(1);
+        assertThat(m.find()).as("only one level option is selected").isFalse();
+        return level;
+    }
+
+    @Test
+    void planPageAnalysisFormStartsAtTheLevelTheSavedEstimateAsksFor() throws Exception {
+        // uploaded at level IV; the worked example of RiskApiTest asks for level II
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Preselect block");
+
+        String html = page(get("/sites/" + id), 200);
+        assertThat(selectedLevel(html)).isEqualTo("IV");
+        assertThat(html).contains("id=\"analysis-level-note\"", "No risk inputs are saved for this site yet");
+
+        mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
+        html = page(get("/sites/" + id), 200);
+        assertThat(selectedLevel(html)).isEqualTo("II");
+        assertThat(html).contains("The list starts at level II, the lowest protection level that brings",
+                "instead of the site's level IV", "You can choose another level");
+        // the choice stays free: every level is offered
+        assertThat(html).contains("<option value=\"I\"", "<option value=\"III\"", "<option value=\"IV\"");
+        // and the site's own level is unchanged until an analysis or the risk page sets it
+        assertThat(api("/api/sites/" + id).path("level").asString()).isEqualTo("IV");
+    }
+
+    @Test
+    void planPageKeepsAStricterSiteLevelAndSaysSo() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Strict plan block");
+        long version = api("/api/sites/" + id).path("version").asLong();
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.patch("/api/sites/" + id)
+                .contentType(org.springframework.http.MediaType.APPLICATION_JSON)
+                .content("{\"version\": " + version + ", \"level\": \"I\"}")).andExpect(status().isOk());
+        mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
+
+        String html = page(get("/sites/" + id), 200);
+
+        assertThat(selectedLevel(html)).isEqualTo("I");
+        assertThat(html).contains("the site's level I, stricter than the level II the risk estimate asks for");
+    }
+
+    @Test
+    void planPageCarriesTheCollectionAreaLayerInLocalMetres() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Layer block");
+        mvc.perform(post("/api/sites/" + id + "/analyses")).andExpect(status().isCreated());
+
+        String html = page(get("/sites/" + id), 200);
+
+        assertThat(html).contains("id=\"collection-area-toggle\"", "/js/collection-area-layer.js");
+        // the area in whole m², within the buffer error below the rectangle formula's 7227.43 m²
+        java.util.regex.Matcher shown = java.util.regex.Pattern.compile("Show the collection area A_D = (\\d+) m").matcher(html);
+        assertThat(shown.find()).isTrue();
+        assertThat(Double.parseDouble(shown.group(1))).isBetween(
+                Math.floor(RiskSites.BLOCK_AREA * (1 - RiskSites.RIGHT_ANGLE_ERROR)), Math.ceil(RiskSites.BLOCK_AREA));
+        // the block 40 × 20 × 10 m: the zone reaches 3·H = 30 m beyond each wall (IEC 62305-2 Annex A),
+        // so its rings span x from -30 to 70 and y from -30 to 50 (buffer vertices lie on the circle)
+        java.util.regex.Matcher zone = java.util.regex.Pattern.compile("data-zone=\"([^\"]*)\"").matcher(html);
+        assertThat(zone.find()).isTrue();
+        JsonNode rings = RiskSites.JSON.readTree(zone.group(1));
+        double minX = Double.MAX_VALUE, maxX = -Double.MAX_VALUE, minY = Double.MAX_VALUE, maxY = -Double.MAX_VALUE;
+        for (JsonNode ring : rings) {
+            for (JsonNode p : ring) {
+                minX = Math.min(minX, p.get(0).asDouble());
+                maxX = Math.max(maxX, p.get(0).asDouble());
+                minY = Math.min(minY, p.get(1).asDouble());
+                maxY = Math.max(maxY, p.get(1).asDouble());
+            }
+        }
+        assertThat(new double[] {minX, maxX, minY, maxY}).containsExactly(new double[] {-30, 70, -30, 50},
+                org.assertj.core.data.Offset.offset(0.01));
+    }
+
     @Test
     void aStricterSiteLevelIsPointedOutAsTheSafeSide() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Strict block");

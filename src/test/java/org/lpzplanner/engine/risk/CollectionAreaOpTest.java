@@ -51,6 +51,11 @@ class CollectionAreaOpTest {
         assertThat(computed).isGreaterThanOrEqualTo(exact * (1 - CollectionAreaOp.MAX_RELATIVE_ERROR - ROUNDING));
     }
 
+    private static void assertWithinStatedBound(CollectionArea a, double exact) {
+        assertThat(a.area()).isLessThanOrEqualTo(exact * (1 + ROUNDING));
+        assertThat(a.area()).isGreaterThanOrEqualTo(exact * (1 - a.maxRelativeError() - ROUNDING));
+    }
+
     /** Area of n chords replacing a quarter circle of radius r: n triangles of (r²/2)·sin q. */
     private static double inscribedQuarter(double r) {
         return N * r * r / 2 * Math.sin(Q);
@@ -89,13 +94,88 @@ class CollectionAreaOpTest {
     }
 
     @Test
-    void pitchedRoofUsesRidgeHeightForTheWholeFootprint() {
-        // gable ridge 7 m over 4 m walls: conservative, as if the whole 10 × 20 footprint stood 7 m tall
+    void gableRoofTakesEachPointAtItsOwnHeight() {
+        // 20 × 10 m footprint, walls 4 m, ridge 7 m along x at y = 5 (bearing 90°).
+        // Eaves at y = 0 and y = 10 have r = 3·4 = 12, the ridge r = 3·7 = 21. The eave disc at
+        // (x, 0) lies inside the ridge disc at (x, 5) since 5 + 12 ≤ 21, and every roof point's disc
+        // lies in the hull of its face's corner discs, so the zone is the ridge's stadium:
+        // A_D = 20·(2·21) + π·21² = 840 + 441π = 2225.442 m² (hand).
+        // The whole footprint at 7 m would give 1460 + 441π (rectangle formula), 620 m² more.
         Structure s = new Structure("g", "g", box(0, 0, 20, 10), 4, new RoofShape.Gable(7, 90));
+        CollectionArea a = CollectionAreaOp.ofStructures(List.of(s));
+
+        assertWithinStatedBound(a, 840 + 441 * Math.PI);
+        assertThat(a.area()).isLessThan(CollectionAreaOp.rectangleFormula(20, 10, 7) - 600);
+        assertThat(a.area()).isGreaterThan(CollectionAreaOp.rectangleFormula(20, 10, 4));
+    }
+
+    @Test
+    void shedRoofIsTheHullOfItsCornerDiscs() {
+        // 20 × 10 m footprint, low side y = 0 at 3 m (r = 9), high side y = 10 at 6 m (r = 18),
+        // bearing 0° (high side north). 10 + 9 > 18, so the low side sticks out of the high side's
+        // zone. The zone is A ⊕ [0, 20]·x̂ with A the hull of the discs (0, 0, r 9) and (0, 10, r 18),
+        // so its area is area(A) + 20 · (y-extent of A) (Minkowski sum of a convex set and a segment).
+        // Hull of two discs, centre distance d, radii R > r: tangent length L = √(d² − (R − r)²),
+        // β = asin((R − r)/d); area = (R + r)·L + R²(π + 2β)/2 + r²(π − 2β)/2 (two right trapezoids
+        // and two sectors; plane geometry). d = 10, R = 18, r = 9: L = √19, β = asin 0.9.
+        // y-extent: from min(0 − 9, 10 − 18) = −9 to 10 + 18 = 28, i.e. 37.
+        // A_D = 27·√19 + 162(π + 2β) + 40.5(π − 2β) + 740 = 1765.966 m² (hand).
+        double beta = Math.asin(0.9);
+        double exact = 27 * Math.sqrt(19) + 162 * (Math.PI + 2 * beta) + 40.5 * (Math.PI - 2 * beta) + 20 * 37;
+        Structure s = new Structure("s", "s", box(0, 0, 20, 10), 3, new RoofShape.Shed(6, 0));
+        CollectionArea a = CollectionAreaOp.ofStructures(List.of(s));
+
+        assertThat(exact).isCloseTo(1765.966, within(1e-3));
+        assertWithinStatedBound(a, exact);
+        // the stated bound of a site with a pitched roof stays small
+        assertThat(a.maxRelativeError()).isLessThan(2e-3);
+    }
+
+    @Test
+    void hipRoofZoneLiesBetweenEavesAndRidgeHeights() {
+        // 30 × 10 m hip roof, walls 5 m, ridge 8 m: every roof point is between 5 and 8 m tall, so the
+        // zone lies between the footprint's zones at 5 m and at 8 m (rectangle formula, hand bounds).
+        // The ridge, a segment from (5, 5) to (25, 5) at 8 m (equal slopes from every eave reach
+        // 8 m at distance 5 from the long sides), gives a stadium 20·48 + 576π that the zone contains.
+        Structure s = new Structure("h", "h", box(0, 0, 30, 10), 5, new RoofShape.Hip(8));
         double area = CollectionAreaOp.ofStructures(List.of(s)).area();
 
-        assertWithinBufferError(area, CollectionAreaOp.rectangleFormula(20, 10, 7));
-        assertThat(area).isGreaterThan(CollectionAreaOp.rectangleFormula(20, 10, 4));
+        assertThat(area).isGreaterThan(CollectionAreaOp.rectangleFormula(30, 10, 5));
+        assertThat(area).isLessThan(CollectionAreaOp.rectangleFormula(30, 10, 8));
+        assertThat(area).isGreaterThan((20 * 48 + 576 * Math.PI) * (1 - CollectionAreaOp.MAX_RELATIVE_ERROR));
+    }
+
+    static java.util.stream.Stream<org.junit.jupiter.params.provider.Arguments> pitchedRoofs() {
+        String square = "POLYGON((0 0, 30 0, 30 30, 0 30, 0 0))";
+        String courtyard = "POLYGON((0 0, 30 0, 30 30, 0 30, 0 0), (10 10, 10 20, 20 20, 20 10, 10 10))";
+        String ell = "POLYGON((0 0, 24 0, 24 8, 8 8, 8 24, 0 24, 0 0))";
+        List<RoofShape> roofs = List.of(new RoofShape.Gable(11, 90), new RoofShape.Gable(11, 30), new RoofShape.Hip(11),
+                new RoofShape.Shed(11, 0), new RoofShape.Shed(11, 225));
+        java.util.List<org.junit.jupiter.params.provider.Arguments> cases = new java.util.ArrayList<>();
+        for (String footprint : List.of(square, courtyard, ell)) {
+            for (RoofShape roof : roofs) {
+                if (roof instanceof RoofShape.Hip && !footprint.equals(square)) {
+                    continue; // hip roofs need a convex footprint
+                }
+                cases.add(org.junit.jupiter.params.provider.Arguments.of(footprint, roof));
+            }
+        }
+        return cases.stream();
+    }
+
+    @ParameterizedTest(name = "{1} on {0}")
+    @org.junit.jupiter.params.provider.MethodSource("pitchedRoofs")
+    void pitchedRoofZoneLiesBetweenTheFlatZonesAtWallAndRidgeHeight(String footprint, RoofShape roof) {
+        // Every roof point stands between the wall top (5 m) and the ridge or high side (11 m), and
+        // the roof covers the whole footprint, so the exact zone contains the footprint's zone at
+        // 5 m and lies inside its zone at 11 m (monotonicity of the union of discs in the radius).
+        Geometry shape = wkt(footprint);
+        double area = CollectionAreaOp.ofStructures(List.of(new Structure("p", "p", shape, 5, roof))).area();
+        double low = CollectionAreaOp.ofStructures(List.of(new Structure("p", "p", shape, 5, new RoofShape.Flat(0)))).area();
+        double high = CollectionAreaOp.ofStructures(List.of(new Structure("p", "p", shape, 11, new RoofShape.Flat(0)))).area();
+
+        assertThat(area).isGreaterThanOrEqualTo(low * (1 - CollectionAreaOp.MAX_RELATIVE_ERROR));
+        assertThat(area).isLessThan(high);
     }
 
     @Test

@@ -10,7 +10,8 @@ import org.lpzplanner.engine.model.ProtectionLevel;
 
 /**
  * R1 due to flashes to the structure [IEC 62305-2:2010]. Factor values are those of the enums,
- * each from the IEC 62305-2:2010 table named beside it (recalled, see the enums).
+ * each from the IEC 62305-2:2010 table named beside it. The factor values and table numbers are
+ * [from memory — check against the standard]; the formulas and the arithmetic below are not.
  */
 class LifeRiskEstimateTest {
 
