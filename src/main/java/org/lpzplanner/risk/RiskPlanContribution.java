@@ -70,7 +70,7 @@ class RiskPlanContribution implements PlanContribution {
         model.put("analysisLevel", start);
         model.put("analysisLevelNote", note);
         model.put("collectionZone", rings(a.area().zone()));
-        model.put("collectionAreaText", RiskFormat.area(a.area().area()));
+        model.put("collectionAreaText", RiskFormat.area(a.area().upperBound()));
         return model;
     }
 

@@ -154,8 +154,8 @@ public class RiskService {
                 ? text(locale, "risk.figure.ngMeasured", RiskFormat.significant(s.groundFlashDensity()))
                 : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
                         RiskFormat.significant(s.thunderstormDays())));
-        lines.add(text(locale, "risk.figure.ad", RiskFormat.area(a.area().area()),
-                RiskFormat.percent(a.area().maxRelativeError() * 100)));
+        lines.add(text(locale, "risk.figure.ad", RiskFormat.area(a.area().upperBound()),
+                RiskFormat.percent(a.area().maxRelativeError() * 100), RiskFormat.area(a.area().area())));
         lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
                 RiskFormat.significant(a.location().value()), text(locale, "risk.location." + a.location().name())));
         lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
@@ -183,7 +183,7 @@ public class RiskService {
         LocationSuggestion suggestion = LocationSuggestion.of(geometry);
         LocationFactor location = settings.location() == null ? suggestion.factor() : settings.location();
         double ng = settings.groundFlashDensity();
-        DangerousEvents events = new DangerousEvents(ng, area.area(), location);
+        DangerousEvents events = new DangerousEvents(ng, area.upperBound(), location);
         LevelChoice choice = LifeRiskEstimate.choose(settings.lifeRiskInputs(events.perYear()));
         RiskAssessment.LineFlashes lines = settings.lineCount() == null || settings.lineCount() == 0 ? null
                 : RiskAssessment.LineFlashes.of(settings.lineCount(), settings.lineLength(), ng);

@@ -62,7 +62,7 @@ public record RiskView(long siteId, boolean saved, Inputs inputs, Suggestion sug
         return new RiskView(a.site().id(), a.saved(), Inputs.of(a.settings()),
                 new Suggestion(s.factor().name(), s.factor().value(), s.structureName(), s.height(), s.reach(), s.near(),
                         s.higher()),
-                a.events().flashDensity(), a.area().area(), a.area().maxRelativeError(), a.location().name(),
+                a.events().flashDensity(), a.area().upperBound(), a.area().maxRelativeError(), a.location().name(),
                 a.location().value(), a.events().perYear(), LifeRiskEstimate.TOLERABLE_RISK,
                 a.choice().options().stream().map(Option::of).toList(),
                 a.choice().level().map(Enum::name).orElse(null),

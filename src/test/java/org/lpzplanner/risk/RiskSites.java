@@ -25,11 +25,6 @@ final class RiskSites {
      */
     static final double BLOCK_AREA = 800 + 2 * 30 * 60 + Math.PI * 900;
 
-    /**
-     * Bound of the buffer's area error for right-angled corners, 1 − sin q / q with q = π/96
-     * (48 segments per quadrant; the computed area is inscribed, never above the exact one).
-     */
-    static final double RIGHT_ANGLE_ERROR = 1 - Math.sin(Math.PI / 96) / (Math.PI / 96);
 
     static final JsonMapper JSON = JsonMapper.builder().build();
 

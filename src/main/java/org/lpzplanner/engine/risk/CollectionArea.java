@@ -8,4 +8,13 @@ import org.locationtech.jts.geom.Geometry;
  * is at most {@code maxRelativeError} (a fraction, not a percentage) below the exact value and never
  * above it.
  */
-public record CollectionArea(double area, Geometry zone, double maxRelativeError) {}
+public record CollectionArea(double area, Geometry zone, double maxRelativeError) {
+
+    /**
+     * An area never below the exact one: {@code area / (1 − maxRelativeError)}. The risk estimate uses
+     * it, so that the approximation can only raise N_D, never lower it.
+     */
+    public double upperBound() {
+        return area / (1 - maxRelativeError);
+    }
+}

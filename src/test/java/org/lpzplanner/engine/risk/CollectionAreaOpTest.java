@@ -86,6 +86,16 @@ class CollectionAreaOpTest {
         assertThat(a.area()).isCloseTo(l * w + 2 * r * (l + w) + 4 * inscribedQuarter(r), within(exact * ROUNDING));
     }
 
+    @ParameterizedTest(name = "upper bound, {0} x {1} x {2} m")
+    @CsvSource({"10, 20, 5", "40, 40, 10", "100, 8, 3", "1, 1, 30"})
+    void upperBoundIsNeverBelowTheRectangleFormula(double l, double w, double h) {
+        // exact A_D of an isolated rectangle [IEC 62305-2:2010 Annex A]; the risk estimate uses the upper bound
+        CollectionArea a = CollectionAreaOp.ofStructures(List.of(flat("r", 0, 0, l, w, h)));
+        double exact = CollectionAreaOp.rectangleFormula(l, w, h);
+        assertThat(a.upperBound()).isGreaterThanOrEqualTo(exact * (1 - ROUNDING));
+        assertThat(a.upperBound()).isLessThanOrEqualTo(exact * (1 + 2 * a.maxRelativeError()));
+    }
+
     @Test
     void parapetCountsInTheHeight() {
         // wall top 8 m + parapet 1 m = 9 m: same as the 9 m rectangle formula
