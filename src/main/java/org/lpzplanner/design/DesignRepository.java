@@ -7,6 +7,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.lpzplanner.sites.SiteDuplicated;
+import org.springframework.context.event.EventListener;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Repository;
 import tools.jackson.databind.JsonNode;
@@ -74,5 +76,16 @@ public class DesignRepository {
 
     public boolean removeInstallation(long siteId, long id) {
         return jdbc.sql("DELETE FROM metal_installations WHERE site_id = ? AND id = ?").params(siteId, id).update() > 0;
+    }
+
+    /** A copied site keeps the original's edited down-conductor positions and metal installations. */
+    @EventListener
+    void copyFor(SiteDuplicated copy) {
+        jdbc.sql("INSERT INTO down_conductor_positions (site_id, structure_id, positions, updated_at)"
+                + " SELECT ?, structure_id, positions, updated_at FROM down_conductor_positions WHERE site_id = ?")
+                .params(copy.to(), copy.from()).update();
+        jdbc.sql("INSERT INTO metal_installations (site_id, name, x, y, z, material, created_at)"
+                + " SELECT ?, name, x, y, z, material, created_at FROM metal_installations WHERE site_id = ?"
+                + " ORDER BY id").params(copy.to(), copy.from()).update();
     }
 }

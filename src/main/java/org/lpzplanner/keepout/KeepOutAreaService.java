@@ -10,9 +10,11 @@ import java.util.Locale;
 import org.locationtech.jts.geom.Polygon;
 import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.sites.SiteDuplicated;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.system.InvalidInputException;
+import org.springframework.context.event.EventListener;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.jdbc.support.GeneratedKeyHolder;
 import org.springframework.jdbc.support.KeyHolder;
@@ -152,5 +154,13 @@ public class KeepOutAreaService {
             out.add(new double[] {p.get(0).asDouble(), p.get(1).asDouble()});
         }
         return out;
+    }
+
+    /** A copied site keeps the original's keep-out areas (the same file, so the same local frame). */
+    @EventListener
+    void copyFor(SiteDuplicated copy) {
+        jdbc.sql("INSERT INTO site_keep_out_areas (site_id, name, corners, created_at)"
+                + " SELECT ?, name, corners, created_at FROM site_keep_out_areas WHERE site_id = ? ORDER BY id")
+                .params(copy.to(), copy.from()).update();
     }
 }

@@ -13,6 +13,8 @@ import org.lpzplanner.engine.risk.SpecialHazard;
 import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.sites.SiteDuplicated;
+import org.springframework.context.event.EventListener;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Repository;
 
@@ -73,5 +75,15 @@ class RiskRepository {
     private static Double nullableDouble(ResultSet rs, String column) throws SQLException {
         double value = rs.getDouble(column);
         return rs.wasNull() ? null : value;
+    }
+
+    /** A copied site keeps the original's risk inputs. */
+    @EventListener
+    void copyFor(SiteDuplicated copy) {
+        String columns = "flash_density_source, flash_density, thunderstorm_days, location_factor, surface_type, "
+                + "fire_risk, fire_provisions, special_hazard, structure_use, touch_step, persons_in_zone, "
+                + "persons_total, hours_per_year, line_count, line_length, updated_at";
+        jdbc.sql("INSERT INTO site_risk_inputs (site_id, " + columns + ") SELECT ?, " + columns
+                + " FROM site_risk_inputs WHERE site_id = ?").params(copy.to(), copy.from()).update();
     }
 }

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.system.InvalidInputException;
+import org.springframework.context.event.EventListener;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.jdbc.support.GeneratedKeyHolder;
 import org.springframework.jdbc.support.KeyHolder;
@@ -95,5 +96,13 @@ public class SiteCutService {
 
     private static String metres(double v) {
         return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    /** A copied site keeps the original's saved cuts (the same file, so the same local frame). */
+    @EventListener
+    void copyFor(SiteDuplicated copy) {
+        jdbc.sql("INSERT INTO site_cuts (site_id, name, x1, y1, x2, y2, created_at)"
+                + " SELECT ?, name, x1, y1, x2, y2, created_at FROM site_cuts WHERE site_id = ? ORDER BY id")
+                .params(copy.to(), copy.from()).update();
     }
 }

@@ -15,6 +15,7 @@ import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.system.InvalidInputException;
 import org.lpzplanner.system.Settings;
+import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -35,11 +36,13 @@ public class SiteService {
     private final SiteRepository sites;
     private final AuditTrail audit;
     private final Clock clock;
+    private final ApplicationEventPublisher events;
 
-    public SiteService(SiteRepository sites, AuditTrail audit, Clock clock) {
+    public SiteService(SiteRepository sites, AuditTrail audit, Clock clock, ApplicationEventPublisher events) {
         this.sites = sites;
         this.audit = audit;
         this.clock = clock;
+        this.events = events;
     }
 
     /**
@@ -204,7 +207,9 @@ public class SiteService {
 
     /**
      * Stores a copy of a site: the same file, byte for byte, and the same settings, named
-     * "&lt;name&gt; (copy)"; its analyses are not copied.
+     * "&lt;name&gt; (copy)", with the data the designer keeps for the site beside its file (risk
+     * inputs, edited down-conductors, metal installations, saved cuts, keep-out areas: each feature
+     * copies its own on {@link SiteDuplicated}); its analyses, reviews and comments are not copied.
      *
      * @throws SiteNotFoundException when no site has this id
      */
@@ -219,6 +224,7 @@ public class SiteService {
         StoredSite copy = sites.insert(CurrentAccount.teamId(), base + suffix, site.level(), site.customRadius(),
                 site.sourceName(), site.sourceText(), site.address(), site.designer(), now());
         audit.record(copy.id(), "duplicate", "copied from site " + site.id() + " \"" + site.name() + "\"");
+        events.publishEvent(new SiteDuplicated(site.id(), copy.id()));
         return copy;
     }
 

@@ -117,6 +117,27 @@ class SiteTransferTest {
     }
 
     @Test
+    void aDuplicateKeepsTheDataStoredBesideTheFileButNotTheAnalysesNorTheDiscussion() throws Exception {
+        long id = workedSite();
+        JsonNode original = JSON.readTree(export(id));
+
+        long copy = sites.duplicate(id).id();
+        JsonNode copied = JSON.readTree(export(copy));
+
+        for (String member : java.util.List.of("riskInputs", "downConductors", "metalInstallations", "savedCuts",
+                "keepOutAreas")) {
+            assertThat(original.path(member).isMissingNode()).as(member).isFalse();
+            assertThat(copied.path(member)).as(member).isEqualTo(original.path(member));
+        }
+        assertThat(copied.path("keepOutAreas")).hasSize(1);
+        assertThat(copied.path("revisions")).isEmpty();
+        assertThat(copied.path("comments")).isEmpty();
+        // the original keeps its own rows
+        assertThat(JSON.readTree(export(id)).path("keepOutAreas")).isEqualTo(original.path("keepOutAreas"));
+        assertThat(design.downConductors(copy).get(0).edited()).isTrue();
+    }
+
+    @Test
     void exportedSiteImportsBackUnchanged() throws Exception {
         long id = workedSite();
         byte[] first = export(id);
