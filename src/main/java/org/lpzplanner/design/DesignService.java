@@ -35,6 +35,7 @@ import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.engine.model.Structure;
 import org.lpzplanner.keepout.KeepOutAreaService;
+import org.lpzplanner.keepout.KeepOutOutline;
 import org.lpzplanner.sites.AirTerminationService;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -52,9 +53,8 @@ import tools.jackson.databind.JsonNode;
 @Service
 public class DesignService {
 
-    /** Largest number of keep-out areas and vertices per area a request may give. */
-    static final int MAX_KEEP_OUT = 50;
-    static final int MAX_VERTICES = 200;
+    /** Largest number of keep-out areas a request may give, as many as a site may store. */
+    static final int MAX_KEEP_OUT = KeepOutAreaService.MAX_AREAS;
 
     private final SiteService sites;
     private final AirTerminationService parts;
@@ -121,6 +121,7 @@ public class DesignService {
         return jobs.start(siteId, stored.version(), site, options);
     }
 
+    /** The request's own keep-out areas, checked like stored ones ({@link KeepOutOutline}). */
     private static List<Polygon> keepOut(List<List<double[]>> areas) {
         List<Polygon> out = new ArrayList<>();
         if (areas == null) {
@@ -129,29 +130,8 @@ public class DesignService {
         if (areas.size() > MAX_KEEP_OUT) {
             throw new InvalidInputException("keepOut", "at most " + MAX_KEEP_OUT + " keep-out areas, got " + areas.size());
         }
-        var gf = new org.locationtech.jts.geom.GeometryFactory();
         for (int i = 0; i < areas.size(); i++) {
-            List<double[]> ring = areas.get(i);
-            if (ring == null || ring.size() < 3 || ring.size() > MAX_VERTICES) {
-                throw new InvalidInputException("keepOut[" + i + "]", "a keep-out area needs 3 to " + MAX_VERTICES
-                        + " corners [x, y] in local metres");
-            }
-            List<Coordinate> cs = new ArrayList<>();
-            for (double[] p : ring) {
-                if (p == null || p.length != 2 || !Double.isFinite(p[0]) || !Double.isFinite(p[1])) {
-                    throw new InvalidInputException("keepOut[" + i + "]", "every corner must be [x, y] in metres");
-                }
-                cs.add(new Coordinate(p[0], p[1]));
-            }
-            cs.add(cs.get(0));
-            Polygon polygon = gf.createPolygon(cs.toArray(new Coordinate[0]));
-            Geometry valid = polygon.buffer(0);
-            if (valid.isEmpty() || valid.getArea() < 1e-6) {
-                throw new InvalidInputException("keepOut[" + i + "]", "the keep-out area has no area (its corners lie on a line)");
-            }
-            for (int k = 0; k < valid.getNumGeometries(); k++) {
-                out.add((Polygon) valid.getGeometryN(k));
-            }
+            out.add(KeepOutOutline.polygon(KeepOutOutline.checked(areas.get(i), "keepOut[" + i + "]")));
         }
         return out;
     }
