@@ -14,13 +14,13 @@ import org.lpzplanner.engine.model.SphereSpec;
  * @param tolerance  exact envelope queries are at most this far below the true envelope, never above
  * @param refinedQueries how many decisions needed the exact (branch and bound) evaluation
  * @param stageMillis    time per stage (envelope, roofs, edges, corners, facades, parts, ground)
- * @param warnings       where the model's assumptions may not hold (e.g. a wire higher than R above
- *                       the surface below), in plain words
+ * @param warnings       what the designer must know before relying on the result (e.g. a wire more
+ *                       than R above the surface beneath it); no verdict of full protection while any stands
  */
 public record AnalysisResult(SphereSpec sphere, double resolution, double tolerance, List<RoofExposure> roofs,
         List<EdgeExposure> edges, List<CornerExposure> corners, List<FacadeBand> facades,
         List<PartInterception> parts, ProtectedGround protectedGround, EnvelopeField envelope, long envelopeMillis,
-        long totalMillis, long refinedQueries, Map<String, Long> stageMillis, List<String> warnings) {
+        long totalMillis, long refinedQueries, Map<String, Long> stageMillis, List<ModelWarning> warnings) {
 
     public AnalysisResult {
         stageMillis = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(stageMillis));
@@ -44,8 +44,9 @@ public record AnalysisResult(SphereSpec sphere, double resolution, double tolera
         return edges.stream().mapToDouble(EdgeExposure::length).sum();
     }
 
-    /** True when no roof, edge, corner or facade band is exposed. */
+    /** True when no roof, edge, corner or facade band is exposed and no warning stands. */
     public boolean isFullyProtected() {
-        return totalExposedRoofArea() == 0 && edges.isEmpty() && corners.isEmpty() && facades.isEmpty();
+        return warnings.isEmpty() && totalExposedRoofArea() == 0 && edges.isEmpty() && corners.isEmpty()
+                && facades.isEmpty();
     }
 }
