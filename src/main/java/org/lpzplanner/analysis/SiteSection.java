@@ -13,7 +13,8 @@ import org.lpzplanner.engine.geom.SiteSurface;
  * sphere. Distances {@code s} run from the cut's start (0) to its end ({@code length}).
  *
  * <p>The profile is sampled every {@value #PROFILE_STEP} m: {@link SiteSurface#topHeight}, raised to
- * {@link SiteSurface#standHeight} on a structure so that parapets show (open ground stays at 0). E is
+ * a parapet's top within {@value #PARAPET_DRAWN} m of its line on a structure so that parapets show
+ * (open ground stays at 0). E is
  * {@link EnvelopeField#heightAt} (never above the true value, at most {@value #TOLERANCE} m below)
  * every {@value #ENVELOPE_STEP} m, at every profile breakpoint and at every profile sample on a
  * structure. A profile sample on a structure counts as exposed (LPZ 0A) when E there is no more than
@@ -26,6 +27,8 @@ public record SiteSection(double x1, double y1, double x2, double y2, double len
 
     /** Profile sampling step along the cut, metres. */
     public static final double PROFILE_STEP = 0.25;
+    /** A parapet is drawn this far (metres) each side of its line, wider than a sampling step. */
+    static final double PARAPET_DRAWN = 0.3;
     /** Envelope sampling step along the cut, metres. */
     public static final double ENVELOPE_STEP = 0.5;
     /** Rods within this plan distance of the cut are drawn, metres. */
@@ -79,7 +82,7 @@ public record SiteSection(double x1, double y1, double x2, double y2, double len
         for (int i = 0; i <= n; i++) {
             s[i] = Math.min(i * PROFILE_STEP, length);
             double x = x1 + ux * s[i], y = y1 + uy * s[i];
-            top[i] = surface.topHeight(x, y) > 0 ? surface.standHeight(x, y) : 0;
+            top[i] = surface.topHeight(x, y) > 0 ? surface.drawnTop(x, y, PARAPET_DRAWN) : 0;
         }
         Map<Double, Double> e = new TreeMap<>();
         java.util.function.DoubleUnaryOperator envelopeAt = d -> e.computeIfAbsent(d,

@@ -5,8 +5,9 @@ import java.util.List;
 import java.util.stream.IntStream;
 
 /**
- * The lowest sphere-centre height D over every cell of a grid: exact at each node (cell centre),
- * and a lower bound over each whole cell. Both include the ground floor D ≥ R.
+ * The lowest free sphere-centre height over every cell of a grid (D, or L where conductors have
+ * free space beneath them: see {@link CentreHeights}): exact at each node (cell centre), and a lower
+ * bound over each whole cell. Both include the ground floor D ≥ R.
  *
  * <p>Cost O(Σ supports · cells in reach); rows are split across cores.
  */
@@ -71,9 +72,13 @@ public final class CentreSurface {
         double half = grid.h() / 2;
         int rows = wj1 - wj0 + 1;
         int bands = Math.max(1, Math.min(rows, 4 * Runtime.getRuntime().availableProcessors()));
+        List<Support> spans = supports.stream().filter(Support::hasSpaceBelow).toList();
         IntStream.range(0, bands).parallel().forEach(b -> {
             int jFrom = wj0 + (int) ((long) rows * b / bands), jTo = wj0 + (int) ((long) rows * (b + 1) / bands);
             for (Support s : supports) {
+                if (s.hasSpaceBelow()) {
+                    continue;
+                }
                 double[] r = s.reach();
                 int i0 = Math.max(wi0, (int) Math.floor((r[0] - grid.x0()) / grid.h()) - 1);
                 int i1 = Math.min(wi1, (int) Math.floor((r[2] - grid.x0()) / grid.h()) + 1);
@@ -95,7 +100,43 @@ public final class CentreSurface {
                     }
                 }
             }
+            if (!spans.isEmpty()) {
+                raiseOverSpans(grid, spans, node, low, wi0, wi1, jFrom, jTo - 1);
+            }
         });
+    }
+
+    /**
+     * Second pass over the cells the spans reach, once the solid value of each cell is known: the
+     * node moves above every span's excluded interval it lies in, the cell bound rises where no gap
+     * under it is possible ({@link CentreHeights}).
+     */
+    private static void raiseOverSpans(Grid grid, List<Support> spans, double[] node, double[] low, int wi0, int wi1,
+            int wj0, int wj1) {
+        int nx = grid.nx();
+        double half = grid.h() / 2;
+        double[] box = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY,
+            Double.NEGATIVE_INFINITY};
+        for (Support s : spans) {
+            double[] r = s.reach();
+            box[0] = Math.min(box[0], r[0]);
+            box[1] = Math.min(box[1], r[1]);
+            box[2] = Math.max(box[2], r[2]);
+            box[3] = Math.max(box[3], r[3]);
+        }
+        int i0 = Math.max(wi0, (int) Math.floor((box[0] - grid.x0()) / grid.h()) - 1);
+        int i1 = Math.min(wi1, (int) Math.floor((box[2] - grid.x0()) / grid.h()) + 1);
+        int j0 = Math.max(wj0, (int) Math.floor((box[1] - grid.y0()) / grid.h()) - 1);
+        int j1 = Math.min(wj1, (int) Math.floor((box[3] - grid.y0()) / grid.h()) + 1);
+        for (int j = j0; j <= j1; j++) {
+            double y = grid.nodeY(j);
+            int row = j * nx;
+            for (int i = i0; i <= i1; i++) {
+                double x = grid.nodeX(i);
+                node[row + i] = CentreHeights.aboveSpans(spans, x, y, node[row + i]);
+                low[row + i] = CentreHeights.raiseOverSpans(spans, x, y, half, low[row + i]);
+            }
+        }
     }
 
     public Grid grid() { return grid; }

@@ -184,12 +184,9 @@ public final class EnvelopeRefiner {
                 for (int dj = -1; dj <= 1; dj += 2) {
                     for (int di = -1; di <= 1; di += 2) {
                         double sx = r.cx + di * q, sy = r.cy + dj * q;
-                        double low = r.lowD;
-                        double exact = radius;
-                        for (Support s : r.supports) {
-                            low = Math.max(low, s.lowerBound(sx, sy, q));
-                            exact = Math.max(exact, s.centreHeight(sx, sy));
-                        }
+                        // the region's bound stands in for the supports left out as irrelevant
+                        double low = CentreHeights.lowerBound(r.supports, sx, sy, q, r.lowD);
+                        double exact = CentreHeights.lowest(r.supports, sx, sy, Math.max(radius, r.lowD));
                         Region sub = new Region(-1, 0, 0, sx, sy, q, low, r.depth + 1, null);
                         sub.supports = relevant(r.supports, sub);
                         upper = Math.min(upper, evaluate(sx, sy, exact, target));
@@ -219,13 +216,14 @@ public final class EnvelopeRefiner {
         return index.near(x, y, half);
     }
 
-    /** D at column (x, y), exact. */
+    /** The lowest free centre height over column (x, y), exact (D, or L under spans: {@link CentreHeights}). */
     public double centreHeight(double x, double y) {
-        double d = radius;
-        for (Support s : index.near(x, y, 0)) {
-            d = Math.max(d, s.centreHeight(x, y));
-        }
-        return d;
+        return CentreHeights.lowest(index.near(x, y, 0), x, y, radius);
+    }
+
+    /** True when the sphere centred at (x, y, z) enters no part of the solid (by more than {@code slack}). */
+    public boolean isFree(double x, double y, double z, double slack) {
+        return z >= radius - slack && CentreHeights.isFree(index.near(x, y, 0), x, y, z, slack);
     }
 
     /**
@@ -317,7 +315,10 @@ public final class EnvelopeRefiner {
         double[] ref = line == null || r.half > JOINT_MAX_HALF * radius ? null : jointReference(r, target, line);
         if (ref != null) {
             for (Support s : r.supports) {
-                r.bound = Math.max(r.bound, s.jointLowerBound(r.cx, r.cy, r.half, ref[0], ref[1], ref[2], ref[3]));
+                // a span bounds L only where no gap under it is possible (see CentreHeights)
+                if (!s.hasSpaceBelow() || s.floorUpperBound(r.cx, r.cy, r.half) < r.lowD) {
+                    r.bound = Math.max(r.bound, s.jointLowerBound(r.cx, r.cy, r.half, ref[0], ref[1], ref[2], ref[3]));
+                }
             }
         }
         return true;

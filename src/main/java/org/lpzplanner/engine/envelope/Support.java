@@ -5,9 +5,14 @@ package org.lpzplanner.engine.envelope;
  *
  * <p>For a sphere of radius R, {@link #centreHeight} is D<sub>k</sub>(c): the lowest height a
  * sphere centre may have over column c without the sphere entering this piece (everything is solid
- * down to the ground). The site's centre surface is D(c) = max(R, max<sub>k</sub> D<sub>k</sub>(c)).
+ * down to the ground). Without free spans the site's centre surface is
+ * D(c) = max(R, max<sub>k</sub> D<sub>k</sub>(c)); {@link CentreHeights} combines supports in general.
  * {@code NEGATIVE_INFINITY} means "no constraint here". The two bound methods enclose D<sub>k</sub>
  * over an axis-aligned square and are what make the envelope conservative.
+ *
+ * <p>A support with {@link #hasSpaceBelow()} is a conductor with free space beneath it
+ * ({@link SpanSupport}): a sphere may also pass under it, so it excludes only the centres between
+ * {@link #floorHeight} and {@link #centreHeight} over each column.
  */
 public interface Support {
 
@@ -34,4 +39,22 @@ public interface Support {
 
     /** Plan bounding box of where this piece constrains centres: [minX, minY, maxX, maxY]. */
     double[] reach();
+
+    /** True for a conductor with free space beneath it: centres below {@link #floorHeight} are free of it. */
+    default boolean hasSpaceBelow() {
+        return false;
+    }
+
+    /**
+     * For a support with space below: the highest centre height over column c at which a sphere
+     * clears it from below (+∞ where it does not constrain the column); −∞ for solid supports.
+     */
+    default double floorHeight(double x, double y) {
+        return Double.NEGATIVE_INFINITY;
+    }
+
+    /** A value ≥ {@link #floorHeight} for every column in the square; −∞ for solid supports. */
+    default double floorUpperBound(double x, double y, double half) {
+        return Double.NEGATIVE_INFINITY;
+    }
 }

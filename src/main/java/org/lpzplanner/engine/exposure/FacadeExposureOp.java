@@ -3,6 +3,7 @@ package org.lpzplanner.engine.exposure;
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.envelope.CentreHeights;
 import org.lpzplanner.engine.envelope.Support;
 import org.lpzplanner.engine.geom.Wall;
 
@@ -11,8 +12,9 @@ import org.lpzplanner.engine.geom.Wall;
  *
  * <p>A sphere that touches a vertical wall at a point w (away from the wall's ends) without entering
  * the wall has its centre on the outward normal at distance R: c = w + R·n, at the height of the
- * touch. So the wall point at height z is exposed iff z ≥ D(w + R·n), and the band over a piece of
- * wall runs from the least D along the offset piece (a rigorous lower bound, refined by halving the
+ * touch. So the wall point at height z is exposed iff a centre at that height over w + R·n is free;
+ * every free height is at least the lowest one, L(w + R·n) (D where nothing has space beneath), so
+ * the band over a piece of wall runs from the least L along the offset piece (a rigorous lower bound, refined by halving the
  * piece until within {@link #BAND_TOLERANCE}) up to the wall top. Bands lower than
  * {@link #MIN_BAND} are left out: there the wall top is at or above the envelope and is reported
  * as an exposed edge. The vertical corner lines at wall ends are taken as the limit of their walls.
@@ -90,11 +92,8 @@ final class FacadeExposureOp {
             double by, double cutoff, int depth) {
         double mx = (ax + bx) / 2, my = (ay + by) / 2;
         double half = Math.max(Math.abs(bx - ax), Math.abs(by - ay)) / 2;
-        double lower = radius, exact = radius;
-        for (Support s : near) {
-            lower = Math.max(lower, s.lowerBound(mx, my, half));
-            exact = Math.max(exact, s.centreHeight(mx, my));
-        }
+        double lower = CentreHeights.lowerBound(near, mx, my, half, radius);
+        double exact = CentreHeights.lowest(near, mx, my, radius);
         if (lower >= cutoff || depth >= MAX_HALVINGS || exact - lower <= BAND_TOLERANCE) {
             return lower;
         }

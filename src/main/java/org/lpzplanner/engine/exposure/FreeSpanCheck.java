@@ -11,8 +11,10 @@ import org.lpzplanner.engine.geom.SiteSurface;
 /**
  * Finds the stretches of conductors and wires that run more than R above the surface beneath them:
  * a sphere of radius R resting on that surface passes under them, so they protect nothing directly
- * beneath there (rolling sphere method, IEC 62305-3:2010 Annex A). One warning per part, naming it
- * and giving the stretches in plan.
+ * beneath there (rolling sphere method, IEC 62305-3:2010 Annex A). The engine models that free space
+ * exactly ({@link org.lpzplanner.engine.envelope.SpanSupport}); the warning tells the designer, who
+ * may have meant the wire to protect what lies beneath. One warning per part, naming it and giving
+ * the stretches in plan, exact from the clearances of the placed legs.
  */
 final class FreeSpanCheck {
 
@@ -30,22 +32,31 @@ final class FreeSpanCheck {
             List<Coordinate> p = c.path();
             for (int i = 1; i < p.size(); i++) {
                 Coordinate a = p.get(i - 1), b = p.get(i);
-                int n = Math.max(1, (int) Math.ceil(a.distance(b) / 0.5));
-                for (int k = 0; k <= n; k++) {
-                    Coordinate q = EdgeExposureOp.lerp(a, b, (double) k / n);
-                    double above = q.getZ() - surface.topHeight(q.x, q.y);
-                    if (above > radius) {
-                        worst = Math.max(worst, above);
-                        run.add(new Coordinate(q.x, q.y));
-                    } else {
-                        close(run, stretches);
-                    }
+                SiteSurface.Clearance k = c.clearances().get(i - 1);
+                if (a.distance(b) == 0 || k.max() <= radius) {
+                    // a leg down a wall rests against it; a low leg keeps spheres off what lies beneath
+                    close(run, stretches);
+                    continue;
+                }
+                worst = Math.max(worst, k.max());
+                // the clearance is linear along a leg: the part above R runs from t0 to t1
+                double t0 = k.start() > radius ? 0 : (radius - k.start()) / (k.end() - k.start());
+                double t1 = k.end() > radius ? 1 : (radius - k.start()) / (k.end() - k.start());
+                Coordinate from = EdgeExposureOp.lerp(a, b, t0), to = EdgeExposureOp.lerp(a, b, t1);
+                if (t0 > 0) {
+                    close(run, stretches);
+                }
+                if (run.isEmpty() || !run.get(run.size() - 1).equals2D(from)) {
+                    run.add(new Coordinate(from.x, from.y));
+                }
+                run.add(new Coordinate(to.x, to.y));
+                if (t1 < 1) {
+                    close(run, stretches);
                 }
             }
             close(run, stretches);
             if (!stretches.isEmpty()) {
-                String name = c.conductor().name() == null || c.conductor().name().isBlank() ? c.conductor().id()
-                        : c.conductor().name();
+                String name = c.label();
                 out.add(new ModelWarning(ModelWarning.Kind.FREE_SPAN, c.conductor().id(), name,
                         GF.createMultiLineString(stretches.toArray(new LineString[0])), worst, radius,
                         String.format(Locale.ROOT, "Conductor %s runs up to %.1f m above the surface beneath it, more"

@@ -91,6 +91,22 @@ public final class PlanPolygon {
                 && contains(x, y) && distanceToBoundary(x, y) >= half * Math.sqrt(2);
     }
 
+    /** One side of a ring, from (px, py) to (qx, qy). */
+    @FunctionalInterface
+    public interface SideVisitor {
+        void side(double px, double py, double qx, double qy);
+    }
+
+    /** Visits every side of every ring. */
+    public void forEachSide(SideVisitor visitor) {
+        for (int r = 0; r < xs.length; r++) {
+            double[] rx = xs[r], ry = ys[r];
+            for (int i = 1; i < rx.length; i++) {
+                visitor.side(rx[i - 1], ry[i - 1], rx[i], ry[i]);
+            }
+        }
+    }
+
     static double segmentDistanceSq(double px, double py, double ax, double ay, double bx, double by) {
         double vx = bx - ax, vy = by - ay;
         double len2 = vx * vx + vy * vy;

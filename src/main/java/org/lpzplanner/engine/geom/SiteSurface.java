@@ -18,8 +18,37 @@ public final class SiteSurface {
     /** A rod with its resolved base (what it stands on) and tip. */
     public record PlacedRod(Rod rod, double base, Coordinate tip) {}
 
-    /** A conductor with every vertex resolved to an elevation above ground. */
-    public record PlacedConductor(Conductor conductor, List<Coordinate> path) {}
+    /**
+     * A conductor as placed: its path in 3D (a conductor that follows the surface runs over every
+     * face it crosses and down or up every step and wall on its way; a wire keeps its straight
+     * legs, split where the surface beneath changes), and per leg its clearance above the solid
+     * directly beneath, at the leg's start and end (linear in between; a vertical leg rests against
+     * a wall).
+     */
+    public record PlacedConductor(Conductor conductor, List<Coordinate> path, List<Clearance> clearances) {
+
+        public PlacedConductor {
+            path = List.copyOf(path);
+            clearances = List.copyOf(clearances);
+            if (clearances.size() != Math.max(0, path.size() - 1)) {
+                throw new IllegalArgumentException("one clearance per leg");
+            }
+        }
+
+        /** The conductor's name, or its id when it has none. */
+        public String label() {
+            String name = conductor.name();
+            return name == null || name.isBlank() ? conductor.id() : name;
+        }
+    }
+
+    /** Height of a conductor leg above the solid directly beneath it, at the leg's start and end (metres). */
+    public record Clearance(double start, double end) {
+
+        public double max() {
+            return Math.max(start, end);
+        }
+    }
 
     /** A footprint corner (a vertex where two roof edges meet), at wall-top height. */
     public record Corner(String ownerId, String ownerName, Coordinate point) {}
@@ -72,26 +101,95 @@ public final class SiteSurface {
         return top;
     }
 
-    /** How far from a parapet's line a rod or conductor still stands on the parapet, metres. */
-    public static final double PARAPET_REACH = 0.3;
+    /**
+     * A part placed this close to a parapet's line (metres) stands on the parapet: the precision of
+     * stored coordinates (seven decimals of a degree are about 1 cm). Farther off, it stands on
+     * whatever is under its own position.
+     */
+    public static final double PARAPET_SNAP = 0.01;
 
     /**
-     * Elevation of what a rod or conductor placed at (x, y) stands on: the top surface, or the top
-     * of a parapet when the point lies within {@link #PARAPET_REACH} of it.
+     * Elevation of what a rod or conductor placed at (x, y) stands on: the top of a parapet when
+     * the point lies within {@link #PARAPET_SNAP} of its line, otherwise the top surface under it.
      */
     public double standHeight(double x, double y) {
-        double top = topHeight(x, y);
+        Coordinate on = onParapet(x, y);
+        return on != null ? Math.max(topHeight(on.x, on.y), on.getZ()) : topHeight(x, y);
+    }
+
+    /**
+     * The nearest point (with the parapet's top as z) on a parapet's line within
+     * {@link #PARAPET_SNAP} of (x, y), or null when there is none. A part given there stands on the
+     * parapet and is placed exactly on its line.
+     */
+    public Coordinate onParapet(double x, double y) {
+        Coordinate best = null;
+        double bestDistance = PARAPET_SNAP;
         for (RoofEdge e : edges) {
             if (e.kind() == EdgeKind.PARAPET) {
                 Coordinate a = e.p0(), b = e.p1();
                 double vx = b.x - a.x, vy = b.y - a.y, len2 = vx * vx + vy * vy;
                 double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((x - a.x) * vx + (y - a.y) * vy) / len2));
-                if (Math.hypot(x - (a.x + t * vx), y - (a.y + t * vy)) <= PARAPET_REACH) {
-                    top = Math.max(top, a.getZ() + t * (b.getZ() - a.getZ()));
+                double px = a.x + t * vx, py = a.y + t * vy;
+                double d = Math.hypot(x - px, y - py);
+                if (d <= bestDistance) {
+                    bestDistance = d;
+                    best = new Coordinate(px, py, a.getZ() + t * (b.getZ() - a.getZ()));
                 }
             }
         }
+        return best;
+    }
+
+    /**
+     * Elevation of the solid's top exactly at (x, y): the highest face over the point or parapet
+     * whose line passes through it, 0 on open ground.
+     */
+    public double solidTop(double x, double y) {
+        double top = topHeight(x, y);
+        for (RoofEdge e : edges) {
+            if (e.kind() == EdgeKind.PARAPET && distanceToLine(x, y, e) <= SurfaceProfile.ON_LINE) {
+                Coordinate a = e.p0(), b = e.p1();
+                double vx = b.x - a.x, vy = b.y - a.y, len2 = vx * vx + vy * vy;
+                double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((x - a.x) * vx + (y - a.y) * vy) / len2));
+                top = Math.max(top, a.getZ() + t * (b.getZ() - a.getZ()));
+            }
+        }
         return top;
+    }
+
+    /**
+     * For drawings: the top surface at (x, y), or a parapet's top within {@code reach} of its line,
+     * so that a parapet shows in a section sampled at finite steps.
+     */
+    public double drawnTop(double x, double y, double reach) {
+        double top = topHeight(x, y);
+        for (RoofEdge e : edges) {
+            if (e.kind() == EdgeKind.PARAPET && distanceToLine(x, y, e) <= reach) {
+                top = Math.max(top, Math.max(e.p0().getZ(), e.p1().getZ()));
+            }
+        }
+        return top;
+    }
+
+    /** Plan distance from (x, y) to the edge's segment. */
+    static double distanceToLine(double x, double y, RoofEdge e) {
+        return Math.sqrt(PlanPolygon.segmentDistanceSq(x, y, e.p0().x, e.p0().y, e.p1().x, e.p1().y));
+    }
+
+    /** Indices of the faces whose bounding box meets the plan box. */
+    List<Integer> facesNear(double minX, double minY, double maxX, double maxY) {
+        List<Integer> out = new java.util.ArrayList<>();
+        for (Object o : faceIndex.query(new Envelope(minX, maxX, minY, maxY))) {
+            out.add((Integer) o);
+        }
+        out.sort(Integer::compare);
+        return out;
+    }
+
+    /** The top of the solid under the plan segment a→b. */
+    public SurfaceProfile profile(double ax, double ay, double bx, double by) {
+        return SurfaceProfile.along(this, ax, ay, bx, by);
     }
 
     /** Highest elevation of any face, edge or part: the site's top. */

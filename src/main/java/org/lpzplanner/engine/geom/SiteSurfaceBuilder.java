@@ -53,19 +53,26 @@ public final class SiteSurfaceBuilder {
         SiteSurface withoutParts = new SiteSurface(faces, edges, walls, corners, List.of(), List.of());
         List<SiteSurface.PlacedRod> rods = new ArrayList<>();
         for (Rod r : site.rods()) {
-            double base = withoutParts.standHeight(r.x(), r.y());
-            rods.add(new SiteSurface.PlacedRod(r, base, new Coordinate(r.x(), r.y(), base + r.height())));
+            Coordinate foot = footOf(withoutParts, r.x(), r.y());
+            rods.add(new SiteSurface.PlacedRod(r, foot.getZ(), new Coordinate(foot.x, foot.y, foot.getZ() + r.height())));
         }
         List<SiteSurface.PlacedConductor> conductors = new ArrayList<>();
         for (Conductor c : site.conductors()) {
-            List<Coordinate> path = new ArrayList<>();
-            for (Coordinate p : c.path()) {
-                double z = c.followsSurface() ? withoutParts.standHeight(p.x, p.y) + c.heightAboveRoof() : p.getZ();
-                path.add(new Coordinate(p.x, p.y, z));
-            }
-            conductors.add(new SiteSurface.PlacedConductor(c, path));
+            conductors.add(ConductorPlacement.place(withoutParts, c));
         }
         return new SiteSurface(faces, edges, walls, corners, rods, conductors);
+    }
+
+    /**
+     * Where a part given at (x, y) stands: on a parapet's line (and its top) when within
+     * {@link SiteSurface#PARAPET_SNAP} of it, otherwise at (x, y) on the top surface beneath.
+     */
+    static Coordinate footOf(SiteSurface surface, double x, double y) {
+        Coordinate on = surface.onParapet(x, y);
+        if (on != null) {
+            return new Coordinate(on.x, on.y, surface.standHeight(on.x, on.y));
+        }
+        return new Coordinate(x, y, surface.topHeight(x, y));
     }
 
     private void addStructure(Structure s) {

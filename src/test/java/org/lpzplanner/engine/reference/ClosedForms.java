@@ -83,4 +83,28 @@ public final class ClosedForms {
         }
         return radius - Math.sqrt(radius * radius - (radius - x) * (radius - x));
     }
+
+    /**
+     * Envelope at plan distance x across a long horizontal wire at height H over open ground, the
+     * wire a thin line with free space beneath it, for 4R/3 ≤ H. Over a column at plan distance u
+     * from the wire, a sphere resting on the ground (centre at height R) clears the wire iff
+     * u² + (H − R)² ≥ R², i.e. |u| ≥ u<sub>0</sub> = √(R² − (H − R)²) (H &lt; 2R); there the lowest
+     * free centre is R, nearer the wire it rests on the wire, at H + √(R² − u²). The ground-resting
+     * spheres reach R − √(R² − (u<sub>0</sub> − |x|)²) over x for |x| &lt; u<sub>0</sub> and the
+     * ground itself beyond; those resting on the wire stay at or above H + √(R² − u<sub>0</sub>²) − R
+     * = 2H − 2R, which is not below 2R − H (the ground-resting value at x = 0, its largest) when
+     * 3H ≥ 4R. From H = 2R on, a sphere passes under the wire on the ground: E = 0 everywhere.
+     * Rolling sphere geometry, closed form.
+     */
+    public static double underHighWire(double radius, double h, double x) {
+        if (3 * h < 4 * radius) {
+            throw new IllegalArgumentException("the closed form holds for H ≥ 4R/3");
+        }
+        if (h >= 2 * radius) {
+            return 0;
+        }
+        double u0 = Math.sqrt(radius * radius - (h - radius) * (h - radius));
+        double ax = Math.abs(x);
+        return ax >= u0 ? 0 : radius - Math.sqrt(radius * radius - (u0 - ax) * (u0 - ax));
+    }
 }

@@ -20,10 +20,12 @@ import org.lpzplanner.engine.model.Structure;
  *
  * <h2>What it computes</h2>
  *
- * Everything is solid down to flat ground at z = 0. With R the sphere radius:
+ * Structures are solid down to flat ground at z = 0; conductors are thin lines in the air with
+ * free space beneath them. With R the sphere radius:
  * <ul>
- *   <li>D(c), the lowest admissible sphere-centre height over column c, is
- *       max(R, max over solid points q with plan distance |c − q| ≤ R of z(q) + √(R² − |c − q|²)).
+ *   <li>D(c), the lowest admissible sphere-centre height over column c, is the lowest z ≥
+ *       max(R, max over solid points q with plan distance |c − q| ≤ R of z(q) + √(R² − |c − q|²))
+ *       that lies at least R from every conductor (see {@link #centreHeight}).
  *   <li>E(p) = inf over columns c with |c − p| ≤ R of F(c), F(c) = D(c) − √(R² − |c − p|²): the
  *       lowest point over column p of any admissible sphere.
  * </ul>
@@ -33,7 +35,7 @@ import org.lpzplanner.engine.model.Structure;
  * <b>D, exactly.</b> The solid's top is decomposed into pieces of constant height: each flat roof
  * is its footprint polygon at wall-top height, a parapet is the footprint boundary at parapet
  * height, a rooftop object is its footprint at its top, a rod is its tip (base = top of whatever
- * it stands on, read from the footprints here), a horizontal conductor leg is a plan segment at
+ * it stands on, read from the footprints here), a horizontal conductor leg (with free space beneath it) is a plan segment at
  * its height. Solid points below these pieces never matter, because for a fixed plan position the
  * highest point gives the largest z(q) + √(R² − d²). For a piece at constant height z over a plan
  * set A the maximum over A is reached at A's point nearest to c, so D<sub>A</sub>(c) =
@@ -112,14 +114,17 @@ public final class ReferenceEnvelope {
     private final double radius;
     private final double r2;
     private final List<Piece> pieces;
+    private final List<Piece> spans;
     private final List<FlatSet> footprints;
     private final int directions;
     private final int candidates;
 
-    private ReferenceEnvelope(double radius, List<Piece> pieces, List<FlatSet> footprints, int directions, int candidates) {
+    private ReferenceEnvelope(double radius, List<Piece> pieces, List<Piece> spans, List<FlatSet> footprints,
+            int directions, int candidates) {
         this.radius = radius;
         this.r2 = radius * radius;
         this.pieces = List.copyOf(pieces);
+        this.spans = List.copyOf(spans);
         this.footprints = List.copyOf(footprints);
         this.directions = directions;
         this.candidates = candidates;
@@ -130,7 +135,7 @@ public final class ReferenceEnvelope {
      * directions refined): used to check that the default effort has converged.
      */
     public ReferenceEnvelope withSearch(int sampledDirections, int refinedMinima) {
-        return new ReferenceEnvelope(radius, pieces, footprints, sampledDirections, refinedMinima);
+        return new ReferenceEnvelope(radius, pieces, spans, footprints, sampledDirections, refinedMinima);
     }
 
     /** The reference for a site with flat roofs, rooftop objects, rods and conductors. */
@@ -159,11 +164,12 @@ public final class ReferenceEnvelope {
             footprints.add(top);
             pieces.add(top);
         }
-        ReferenceEnvelope ground = new ReferenceEnvelope(radius, List.of(), footprints, DIRECTIONS, CANDIDATES);
+        ReferenceEnvelope ground = new ReferenceEnvelope(radius, List.of(), List.of(), footprints, DIRECTIONS, CANDIDATES);
         for (Rod r : site.rods()) {
             double tip = ground.solidTop(r.x(), r.y()) + r.height();
             pieces.add(new FlatSet(PlanShape.point(r.x(), r.y()), tip));
         }
+        List<Piece> spans = new ArrayList<>();
         for (Conductor c : site.conductors()) {
             List<double[]> path = new ArrayList<>();
             for (Coordinate v : c.path()) {
@@ -175,16 +181,21 @@ public final class ReferenceEnvelope {
             }
             for (int i = 1; i < path.size(); i++) {
                 double[] a = path.get(i - 1), b = path.get(i);
+                if (c.followsSurface() && (ground.solidTop(a[0], a[1]) != ground.solidTop(b[0], b[1])
+                        || ground.solidTop((a[0] + b[0]) / 2, (a[1] + b[1]) / 2) != ground.solidTop(a[0], a[1]))) {
+                    throw new UnsupportedOperationException("the reference lays conductors only on one flat surface: "
+                            + c.id());
+                }
                 if (a[2] == b[2]) {
-                    pieces.add(new FlatSet(PlanShape.segment(a[0], a[1], b[0], b[1]), a[2]));
+                    spans.add(new FlatSet(PlanShape.segment(a[0], a[1], b[0], b[1]), a[2]));
                 } else if (a[0] == b[0] && a[1] == b[1]) {
-                    pieces.add(new FlatSet(PlanShape.point(a[0], a[1]), Math.max(a[2], b[2])));
+                    spans.add(new FlatSet(PlanShape.point(a[0], a[1]), Math.max(a[2], b[2])));
                 } else {
-                    pieces.add(new SlopedSegment(a, b));
+                    spans.add(new SlopedSegment(a, b));
                 }
             }
         }
-        return new ReferenceEnvelope(radius, pieces, footprints, DIRECTIONS, CANDIDATES);
+        return new ReferenceEnvelope(radius, pieces, spans, footprints, DIRECTIONS, CANDIDATES);
     }
 
     public double radius() {
@@ -202,11 +213,28 @@ public final class ReferenceEnvelope {
         return top;
     }
 
-    /** D(c): the lowest admissible sphere-centre height over column (cx, cy). */
+    /**
+     * D(c): the lowest admissible sphere-centre height over column (cx, cy). The solid (ground,
+     * roofs, parapets, rods) demands z ≥ its D; a conductor, a thin line in the air, only keeps
+     * centres out of the heights within R of it, one open interval (lo, hi) per leg over the column
+     * (the R-neighbourhood of a segment is convex). The lowest admissible height is found by starting
+     * at the solid's D and moving to the top of every interval it falls in, until none holds it.
+     */
     public double centreHeight(double cx, double cy) {
         double d = radius;
         for (Piece piece : pieces) {
             d = Math.max(d, piece.centreHeight(cx, cy, radius, r2));
+        }
+        boolean moved = true;
+        while (moved) {
+            moved = false;
+            for (Piece span : spans) {
+                double hi = span.centreHeight(cx, cy, radius, r2);
+                if (hi > d && span.lowestClear(cx, cy, radius, r2) < d) {
+                    d = hi;
+                    moved = true;
+                }
+            }
         }
         return d;
     }
@@ -294,6 +322,9 @@ public final class ReferenceEnvelope {
     private interface Piece {
         /** Lowest centre height over (cx, cy) that keeps the sphere out of this piece; −∞ when out of reach. */
         double centreHeight(double cx, double cy, double radius, double r2);
+
+        /** Highest centre height over (cx, cy) that keeps the sphere under this piece; +∞ when out of reach. */
+        double lowestClear(double cx, double cy, double radius, double r2);
     }
 
     /** A plan set (area, outline, segment or point) at one constant height. */
@@ -303,10 +334,23 @@ public final class ReferenceEnvelope {
             double d = shape.distance(cx, cy);
             return d <= radius ? z + Math.sqrt(r2 - d * d) : Double.NEGATIVE_INFINITY;
         }
+
+        @Override
+        public double lowestClear(double cx, double cy, double radius, double r2) {
+            double d = shape.distance(cx, cy);
+            return d <= radius ? z - Math.sqrt(r2 - d * d) : Double.POSITIVE_INFINITY;
+        }
     }
 
     /** A conductor leg whose ends differ in height: maximise z(s) + √(R² − |c − q(s)|²) over the leg. */
     private record SlopedSegment(double[] a, double[] b) implements Piece {
+        /** The highest point below the leg is the lowest point above the leg mirrored in z = 0, negated. */
+        @Override
+        public double lowestClear(double cx, double cy, double radius, double r2) {
+            double[] ma = {a[0], a[1], -a[2]}, mb = {b[0], b[1], -b[2]};
+            return -new SlopedSegment(ma, mb).centreHeight(cx, cy, radius, r2);
+        }
+
         @Override
         public double centreHeight(double cx, double cy, double radius, double r2) {
             double vx = b[0] - a[0], vy = b[1] - a[1];
