@@ -3,6 +3,8 @@
 // summary after each change. Without this module the page
 // stays a read-only plan. All words come from data attributes the server renders from messages.
 
+import { snapToParapet } from './parapet-snap.js';
+
 const root = document.getElementById('plan-editor');
 if (root) {
   setUp(root);
@@ -35,6 +37,7 @@ function setUp(root) {
   let conductorPoints = [];
 
   let version = Number(root.dataset.version);
+  let parapets = [];
   let rods = [];
   let selectedId = null;
   let placing = false;
@@ -140,6 +143,7 @@ function setUp(root) {
   }
 
   function setParts(parts) {
+    parapets = parts.parapets || [];
     conductors = parts.conductors || [];
     const keepConductor = conductorSelect.options[0];
     const chosen = conductorSelect.value;
@@ -195,6 +199,19 @@ function setUp(root) {
   function round(value, places) {
     const factor = 10 ** places;
     return Math.round(value * factor) / factor;
+  }
+
+  /**
+   * A clicked or dropped plan position (local metres) as the part's position: onto a parapet's
+   * line when close to one, said in the status line, so a part meant for the parapet stands on it.
+   */
+  function placedAt(local) {
+    const snap = snapToParapet(local.x, local.y, parapets);
+    if (!snap) {
+      return { x: round(local.x, 2), y: round(local.y, 2) };
+    }
+    show(text('Snapped').replace('{0}', snap.parapet.structure));
+    return { x: round(snap.x, 3), y: round(snap.y, 3) };
   }
 
   function rodCircle(id) {
@@ -775,8 +792,8 @@ function setUp(root) {
       if (drawingConductor) {
         const q = svgPoint(event);
         if (q.y <= frame().drawHeight) {
-          const local = toLocal(q);
-          conductorPoints.push([round(local.x, 2), round(local.y, 2)]);
+          const at = placedAt(toLocal(q));
+          conductorPoints.push([at.x, at.y]);
           conductorForm.elements.count.value = String(conductorPoints.length);
           conductorPreview();
         }
@@ -794,9 +811,9 @@ function setUp(root) {
       if (p.y > frame().drawHeight) {
         return;
       }
-      const local = toLocal(p);
-      newForm.elements.x.value = String(round(local.x, 2));
-      newForm.elements.y.value = String(round(local.y, 2));
+      const at = placedAt(toLocal(p));
+      newForm.elements.x.value = String(at.x);
+      newForm.elements.y.value = String(at.y);
       newForm.hidden = false;
       newForm.elements.heightChoice.focus();
     });
@@ -859,8 +876,8 @@ function setUp(root) {
         circle.focus();
         return;
       }
-      const local = toLocal(svgPoint(e));
-      perform(changeCommand(id, snapshot(rod), { x: round(local.x, 2), y: round(local.y, 2), height: rod.height }));
+      const at = placedAt(toLocal(svgPoint(e)));
+      perform(changeCommand(id, snapshot(rod), { x: at.x, y: at.y, height: rod.height }));
     };
     circle.addEventListener('pointermove', move);
     circle.addEventListener('pointerup', end);

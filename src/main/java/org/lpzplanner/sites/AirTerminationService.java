@@ -10,6 +10,8 @@ import java.util.List;
 import java.util.Set;
 import org.locationtech.jts.geom.Coordinate;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.engine.geom.EdgeKind;
+import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
 import org.lpzplanner.engine.io.LocalProjection;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.model.Conductor;
@@ -53,10 +55,15 @@ public class AirTerminationService {
 
     /**
      * The parts of a site. {@code coordinates} is {@code "lon-lat"} or {@code "local-metres"}, the
-     * file's own; {@code editable} says whether rods can be placed (GeoJSON files only).
+     * file's own; {@code editable} says whether rods can be placed (GeoJSON files only);
+     * {@code parapets} are the parapets' lines, on which a part stands on the parapet's top.
      */
     public record Parts(long siteId, long version, String coordinates, boolean editable, List<RodView> rods,
-            List<ConductorView> conductors) {
+            List<ConductorView> conductors, List<ParapetLine> parapets) {
+    }
+
+    /** A parapet's line in local metres and its top above ground, for placing parts on it. */
+    public record ParapetLine(String structure, double x0, double y0, double x1, double y1, double top) {
     }
 
     /** Values for a new rod or a change; null leaves a value unchanged (or, for a new rod, unset). */
@@ -72,8 +79,13 @@ public class AirTerminationService {
         List<RodView> rods = document.site().rods().stream().map(r -> new RodView(r.id(), r.name(), round(r.x()),
                 round(r.y()), sitePosition(projection, r.x(), r.y()), r.height())).toList();
         List<ConductorView> conductors = document.site().conductors().stream().map(c -> view(c, projection)).toList();
+        List<ParapetLine> parapets = SiteSurfaceBuilder.build(document.site()).edges().stream()
+                .filter(e -> e.kind() == EdgeKind.PARAPET)
+                .map(e -> new ParapetLine(e.ownerName(), e.p0().x, e.p0().y, e.p1().x, e.p1().y,
+                        Math.max(e.p0().getZ(), e.p1().getZ())))
+                .toList();
         return new Parts(site.id(), site.version(), projection == null ? "local-metres" : "lon-lat",
-                sites.isGeoJson(site), rods, conductors);
+                sites.isGeoJson(site), rods, conductors, parapets);
     }
 
     /**

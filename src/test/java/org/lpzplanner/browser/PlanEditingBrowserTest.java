@@ -100,6 +100,33 @@ class PlanEditingBrowserTest extends BrowserTestBase {
         assertThat(sites.fileVersions(site.id())).hasSize(3);
     }
 
+    @Test
+    void aRodClickedBesideTheParapetIsPlacedOnItsLineAndStandsOnItsTop() throws Exception {
+        // the warehouse's walls are 10 m with a 1 m parapet along its outline (x 0–80, y 0–40)
+        StoredSite site = sites.create("harbour-warehouse.geojson",
+                Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Quay shed", "II", null);
+        analyses.run(site.id(), null, null, null);
+        browser.get("http://localhost:" + port + "/sites/" + site.id());
+        waitUpTo(10).until(b -> b.findElement(By.id("plan-editor")).isDisplayed());
+
+        browser.findElement(By.id("place-rod")).click();
+        long[] beside = viewportPoint(40, 39.85);
+        new Actions(browser).moveToLocation((int) beside[0], (int) beside[1]).click().perform();
+        WebElement form = browser.findElement(By.id("new-rod-form"));
+        waitUpTo(5).until(b -> form.isDisplayed());
+        assertThat(Double.parseDouble(form.findElement(By.name("y")).getAttribute("value"))).isEqualTo(40.0);
+        assertThat(browser.findElement(By.id("editor-status")).getText()).contains("parapet of Warehouse");
+        new Select(form.findElement(By.name("heightChoice"))).selectByValue("2");
+        browser.findElement(By.id("confirm-rod")).click();
+
+        waitUpTo(20).until(b -> !storedRods(site.id()).isEmpty());
+        Rod rod = storedRods(site.id()).get(0);
+        assertThat(rod.y()).isCloseTo(40, within(0.001));
+        // on the parapet's top: 10 m wall + 1 m parapet + 2 m rod (the site's own geometry)
+        assertThat(org.lpzplanner.engine.geom.SiteSurfaceBuilder.build(sites.document(sites.get(site.id())).site())
+                .rods().get(0).tip().getZ()).isCloseTo(13, within(1e-9));
+    }
+
     private void saveScreenshot() throws Exception {
         Path target = Path.of("target", "screenshots");
         Files.createDirectories(target);

@@ -31,8 +31,8 @@ import org.lpzplanner.engine.model.Structure;
  * 0.3 m of a rooftop object, and nothing where it would not stand on the roof it was meant for.
  *
  * <p>Spacing: along edges R/20 clamped to 0.5..2 m, on the open roof R/8 clamped to 2..6 m, masts
- * R/6 clamped to 3..8 m, 2 m out from the walls. Rods on edges are set
- * {@value #INSET} m in from the outline so that they stand on the roof (or the parapet).
+ * R/6 clamped to 3..8 m, 2 m out from the walls. Rods on parapets stand on the parapet's line; rods
+ * on other edges are set {@value #INSET} m in from the outline so that they stand on the roof.
  */
 final class CandidateGenerator {
 
@@ -67,7 +67,8 @@ final class CandidateGenerator {
         // corners first, then edges, then ridges, then the open roof: the order breaks ties in the choice
         for (SiteSurface.Corner c : surface.corners()) {
             if (structureIds.contains(c.ownerId())) {
-                Coordinate p = insetCorner(surface, c.point());
+                Coordinate p = surface.onParapet(c.point().x, c.point().y) != null ? c.point()
+                        : insetCorner(surface, c.point());
                 if (p != null) {
                     addRods(out, seen, surface, options, keepOut, objects, p.x, p.y, c.point().getZ(),
                             ProposedPart.Place.CORNER, c.ownerId());
@@ -87,7 +88,9 @@ final class CandidateGenerator {
                 double t = (double) k / steps;
                 double x = e.p0().x + t * (e.p1().x - e.p0().x), y = e.p0().y + t * (e.p1().y - e.p0().y);
                 double z = e.p0().getZ() + t * (e.p1().getZ() - e.p0().getZ());
-                Coordinate p = ridge ? new Coordinate(x + 0.01 * nx, y + 0.01 * ny) : insetEdge(surface, x, y, nx, ny, z);
+                // on a parapet a rod stands on its line; elsewhere a little in from the edge, on the roof
+                Coordinate p = ridge ? new Coordinate(x + 0.01 * nx, y + 0.01 * ny)
+                        : e.kind() == EdgeKind.PARAPET ? new Coordinate(x, y) : insetEdge(surface, x, y, nx, ny, z);
                 if (p != null) {
                     addRods(out, seen, surface, options, keepOut, objects, p.x, p.y, z, place, e.ownerId());
                 }

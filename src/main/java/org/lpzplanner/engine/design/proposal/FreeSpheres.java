@@ -23,6 +23,9 @@ final class FreeSpheres {
 
     static final int RINGS = 10;
 
+    /** Half the spacing of points sampled along a line: the stretch each point stands for, metres. */
+    static final double STRETCH = ExposedPoints.LINE_SPACING / 2;
+
     /** Finest step of the search for a free sphere between the samples, metres. */
     static final double SEARCH_STEP = 0.01;
 
@@ -67,6 +70,16 @@ final class FreeSpheres {
                     double cx = x + d * nx, cy = y + d * ny, cz = z + Math.sqrt(radius * radius - d * d);
                     if (isFree(cx, cy, cz)) {
                         out = put(out, n++, cx, cy, cz);
+                    }
+                }
+                // the sphere grazing the line level with it (beside a wall taller than R), at both ends
+                // of the stretch the point stands for: only a part along the line stops those, not
+                // one standing at the point itself
+                double d = radius * (1 - 1e-9), lift = Math.sqrt(radius * radius - d * d);
+                for (int end = -1; end <= 1; end += 2) {
+                    double ax = x + end * STRETCH * p.dx(), ay = y + end * STRETCH * p.dy();
+                    if (isFree(ax + d * nx, ay + d * ny, z + lift)) {
+                        out = put(out, n++, ax + d * nx, ay + d * ny, z + lift);
                     }
                 }
             }
@@ -163,7 +176,12 @@ final class FreeSpheres {
         }
         double cz = z + Math.sqrt(radius * radius - d2);
         double lower = lowestCentre(cx, cy) - cz;
-        return lower > FREE_SLACK ? lower : Math.max(lower, exact.centreHeight(cx, cy) - cz);
+        if (lower > FREE_SLACK) {
+            return lower;
+        }
+        double depth = Math.max(lower, exact.centreHeight(cx, cy) - cz);
+        // at or above the lowest free centre, but inside the space a wire keeps clear
+        return depth <= FREE_SLACK && !exact.isFree(cx, cy, cz, FREE_SLACK) ? 2 * FREE_SLACK : depth;
     }
 
     private double lift(double x, double y, double cx, double cy) {
@@ -171,7 +189,7 @@ final class FreeSpheres {
     }
 
     private boolean isFree(double cx, double cy, double cz) {
-        return lowestCentre(cx, cy) - cz <= FREE_SLACK && exact.centreHeight(cx, cy) - cz <= FREE_SLACK;
+        return lowestCentre(cx, cy) - cz <= FREE_SLACK && exact.isFree(cx, cy, cz, FREE_SLACK);
     }
 
     private static double[] put(double[] out, int n, double cx, double cy, double cz) {
