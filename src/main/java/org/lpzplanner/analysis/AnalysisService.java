@@ -104,17 +104,16 @@ public class AnalysisService {
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
         }
-        String geoJson = ResultGeoJson.write(document, result);
+        RevisionResult computed = RevisionResult.of(document, result);
         return transactions.execute(status -> {
             var now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
             Optional<AnalysisRevision> previous = analyses.latest(site.id());
             AnalysisRevision revision = analyses.insert(new AnalysisRevision(0, site.id(),
-                    analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), result.resolution(),
-                    sha256(site.sourceText()), result.totalExposedRoofArea(), result.totalExposedEdgeLength(),
-                    result.corners().size(), result.facades().size(), result.protectedGround().planArea(),
-                    result.isFullyProtected(), geoJson, now, result.totalMillis()),
-                    new RevisionInputs(site.name(), site.sourceName(), site.sourceText(),
-                            result.tolerance()));
+                    analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), computed.resolution(),
+                    sha256(site.sourceText()), computed.exposedRoofArea(), computed.exposedEdgeLength(),
+                    computed.exposedCorners(), computed.facadeBands(), computed.protectedGroundArea(),
+                    computed.fullyProtected(), computed.resultGeoJson(), now, computed.engineMillis()),
+                    new RevisionInputs(site.name(), site.sourceName(), site.sourceText(), computed.tolerance()));
             siteRows.touch(site.id(), site.version(), now);
             previous.ifPresent(p -> carryOverAcceptances(p, revision, now));
             audit.record(site.id(), "analysis", String.format(java.util.Locale.ROOT,
@@ -169,6 +168,53 @@ public class AnalysisService {
                     new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE));
         } catch (IllegalArgumentException e) {
             throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
+        }
+    }
+
+    /**
+     * Analyses a site file with the sphere and grid resolution a stored revision records, with the
+     * engine options {@link #run} uses and within this instance's {@link AnalysisCapacity}, and
+     * stores nothing: for revisions whose results are computed again here, such as those of an
+     * imported site export. Always a fresh analysis, so the result depends on nothing but the file
+     * and the settings.
+     *
+     * @throws InvalidInputException when the engine cannot analyse with these settings
+     * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException when the grid would not fit
+     * @throws AnalysisBusyException when no place came free within the wait
+     */
+    public RevisionResult analyse(SiteDocument document, SphereSpec sphere, double resolution) {
+        AnalysisOptions options = options(sphere, resolution);
+        return capacity.run(() -> {
+            try {
+                return RevisionResult.of(document, ExposureAnalysis.analyze(document.site(), options));
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException("site", "the analysis cannot run with these inputs: "
+                        + e.getMessage());
+            }
+        });
+    }
+
+    /**
+     * Checks what {@link #analyse(SiteDocument, SphereSpec, double)} would analyse, without analysing.
+     *
+     * @throws InvalidInputException when the engine cannot analyse with these settings
+     * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException when the grid would not fit
+     */
+    public void check(SiteDocument document, SphereSpec sphere, double resolution) {
+        AnalysisOptions options = options(sphere, resolution);
+        try {
+            ExposureAnalysis.checkSize(document.site(), options);
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("site", "the analysis cannot run with these inputs: " + e.getMessage());
+        }
+    }
+
+    private static AnalysisOptions options(SphereSpec sphere, double resolution) {
+        try {
+            return new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE);
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException("resolution", "the analysis cannot run with these inputs: "
+                    + e.getMessage());
         }
     }
 

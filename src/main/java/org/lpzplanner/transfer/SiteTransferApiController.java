@@ -23,8 +23,9 @@ import org.springframework.web.multipart.MultipartFile;
 
 /**
  * Site export ({@code GET /api/sites/{id}/export}: one JSON file with everything stored for the
- * site) and import ({@code POST /api/sites/import}, multipart {@code file}: stores it as a new site,
- * 201 with its id; a bad file answers 400 naming the member and stores nothing).
+ * site) and import ({@code POST /api/sites/import}, multipart {@code file}: stores it as a new site
+ * with every revision's results computed here, 201 with its id; a bad file answers 400 naming the
+ * member and stores nothing).
  */
 @RestController
 @Tag(name = "Sites")
@@ -51,10 +52,14 @@ public class SiteTransferApiController {
                 .body(file.content());
     }
 
-    @Operation(summary = "Import a site export as a new site", description = "All or nothing: a bad file stores nothing")
+    @Operation(summary = "Import a site export as a new site",
+            description = "All or nothing: a bad file stores nothing. Every site file inside is checked as an upload"
+                    + " is, and every revision's results are computed again here from the site file and settings it"
+                    + " records (the results in the file are not stored); one analysis per revision")
     @ApiResponse(responseCode = "201", description = "Stored; Location names the new site")
-    @ApiResponse(responseCode = "400", description = "Not a usable site export; the member at fault is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "Not a usable site export; the member at fault is named (for a revision's site file, checksum or settings, with the revision's number)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "413", description = "The file is larger than the upload limit", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "429", description = "Every analysis place is taken; try again after Retry-After seconds", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/api/sites/import", consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     public ResponseEntity<Map<String, Object>> importSite(@RequestParam("file") MultipartFile file) throws IOException {
         long id = transfers.importSite(file.getBytes());

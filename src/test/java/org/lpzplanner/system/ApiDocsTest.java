@@ -82,6 +82,7 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "delete", List.of("204", "403", "404"));
         hasResponses(doc, "/api/sites/{siteId}/revisions/{revision}/report", "get",
                 List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/import", "post", List.of("201", "400", "413", "429"));
 
         assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
                 "Review", "Air-termination", "Risk", "Report", "Design");

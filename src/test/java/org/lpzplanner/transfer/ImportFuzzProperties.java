@@ -13,6 +13,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.stream.LongStream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -42,10 +44,11 @@ import tools.jackson.databind.node.ObjectNode;
 /**
  * Generated bad site export files through the import API: a real export of a worked site damaged
  * in one place each (cut short; a member of the wrong JSON type; a required member left out; a
- * revision number repeated; the site file inside replaced by one of the generated bad site files).
- * Every one is answered 400 naming the member (or the site file's feature and field) and saying
- * nothing was stored, and the database holds exactly the rows it held before. Replay one seed with
- * {@code -Dlpz.seed=N}.
+ * revision number repeated; the site file inside replaced by one of the generated bad site files;
+ * a revision's own site file or an earlier file cut off or given a NaN or infinite coordinate).
+ * Every one is answered 400 naming the member (or the site file's feature and field; for a file
+ * kept with a revision, the revision's number) and saying nothing was stored, and the database
+ * holds exactly the rows it held before. Replay one seed with {@code -Dlpz.seed=N}.
  */
 @SpringBootTest
 @AutoConfigureMockMvc
@@ -53,6 +56,12 @@ import tools.jackson.databind.node.ObjectNode;
 class ImportFuzzProperties {
 
     private static final int FILES_PER_SEED = 1000;
+    private static final int STORED_FILES_PER_SEED = 30;
+    /** A geometry's coordinates in a site file, and one number among them. */
+    private static final Pattern GEOMETRY = Pattern.compile("\"coordinates\"\\s*:\\s*(\\[[^}]*\\])");
+    private static final Pattern NUMBER = Pattern.compile("-?[0-9]+(\\.[0-9]+)?");
+    /** Not numbers a site file may hold: bare NaN and Infinity are not JSON, 1e999 overflows to infinity. */
+    private static final List<String> NOT_FINITE = List.of("NaN", "\"NaN\"", "1e999", "-1e999", "Infinity");
     private static final JsonMapper JSON = JsonMapper.builder().build();
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
     /**
@@ -230,6 +239,77 @@ class ImportFuzzProperties {
         } catch (java.nio.charset.CharacterCodingException e) {
             return false;
         }
+    }
+
+    /** A site file kept inside the export damaged in one place, and where it sits. */
+    private record FileDamage(String description, String member, String names, ObjectNode archive) {
+    }
+
+    /**
+     * A revision's own site file (or the first earlier file) cut off at a random character, or with
+     * one coordinate made NaN or infinite; a revision's checksum is made to match its damaged file,
+     * so that the reader alone has to find the damage.
+     */
+    private static FileDamage damageStoredFile(ObjectNode good, Random random) {
+        ObjectNode doc = good.deepCopy();
+        int target = random.nextInt(3);
+        ObjectNode holder = (ObjectNode) (target < 2 ? doc.get("revisions").get(target) : doc.get("earlierFiles").get(0));
+        String textMember = target < 2 ? "sourceText" : "text";
+        String text = holder.get(textMember).stringValue();
+        String damaged;
+        String description;
+        if (random.nextBoolean()) {
+            int cut = 1 + random.nextInt(text.lastIndexOf('}') - 1);
+            damaged = text.substring(0, cut);
+            description = "cut off at character " + cut;
+        } else {
+            List<int[]> numbers = new ArrayList<>();
+            Matcher geometry = GEOMETRY.matcher(text);
+            while (geometry.find()) {
+                Matcher number = NUMBER.matcher(text).region(geometry.start(1), geometry.end(1));
+                while (number.find()) {
+                    numbers.add(new int[] {number.start(), number.end()});
+                }
+            }
+            int[] at = numbers.get(random.nextInt(numbers.size()));
+            String value = NOT_FINITE.get(random.nextInt(NOT_FINITE.size()));
+            damaged = text.substring(0, at[0]) + value + text.substring(at[1]);
+            description = "coordinate at character " + at[0] + " made " + value;
+        }
+        holder.put(textMember, damaged);
+        if (target < 2) {
+            holder.put("inputsSha256", AnalysisService.sha256(damaged));
+            return new FileDamage("revisions[" + target + "] " + description, "revisions[" + target + "].sourceText",
+                    "revision " + holder.get("revision").asInt(), doc);
+        }
+        return new FileDamage("earlierFiles[0] " + description, "earlierFiles[0].text",
+                "file " + holder.get("number").asInt(), doc);
+    }
+
+    @ParameterizedTest
+    @MethodSource("seeds")
+    void cutOffOrNotFiniteSiteFilesInsideTheExportAreRefusedNamingTheirRevision(long seed) throws Exception {
+        ObjectNode good = workedExport();
+        long before = rows();
+        Random random = new Random(seed);
+        List<String> accepted = new ArrayList<>();
+        for (int i = 0; i < STORED_FILES_PER_SEED; i++) {
+            FileDamage d = damageStoredFile(good, random);
+            String label = "seed " + seed + " file " + i + " (" + d.description() + ")";
+            MvcResult result = mvc.perform(multipart("/api/sites/import").file(new MockMultipartFile("file",
+                    "fuzz.site-export.json", "application/json", JSON.writeValueAsBytes(d.archive())))).andReturn();
+            String body = result.getResponse().getContentAsString();
+            JsonNode error = result.getResponse().getStatus() == 400 ? JSON.readTree(body) : null;
+            if (error == null) {
+                accepted.add(label + ": " + result.getResponse().getStatus() + " " + body);
+            } else if (!error.path("field").asString().equals(d.member())
+                    || !error.path("error").asString().contains(d.names())
+                    || !error.path("error").asString().contains("nothing was stored")) {
+                accepted.add(label + ": does not name " + d.member() + " and " + d.names() + ": " + body);
+            }
+        }
+        assertThat(accepted).as("damaged stored site files not refused with 400 naming where they are").isEmpty();
+        assertThat(rows()).isEqualTo(before);
     }
 
     @ParameterizedTest
