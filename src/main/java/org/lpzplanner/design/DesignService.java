@@ -279,9 +279,13 @@ public class DesignService {
         return out;
     }
 
-    /** Down-conductors of one structure: planned or edited positions (local metres). */
+    /**
+     * Down-conductors of one structure: planned or edited positions (local metres) and their labels
+     * (D1, D2, … numbered through the site in this order, as the separation checks and the report name them).
+     */
     public record DownConductors(String structureId, String name, double perimeter, double typicalSpacing,
-            int required, List<double[]> positions, boolean edited, double height, List<String> warnings) {
+            int required, List<double[]> positions, List<String> labels, boolean edited, double height,
+            List<String> warnings) {
     }
 
     public List<DownConductors> downConductors(long siteId) {
@@ -294,6 +298,7 @@ public class DesignService {
         double spacing = stored.sphere().level().downConductorSpacing();
         List<DownConductorLayout> plans = DownConductorPlan.planSite(site, stored.sphere());
         List<DownConductors> out = new ArrayList<>();
+        int number = 0;
         for (int i = 0; i < site.structures().size(); i++) {
             Structure s = site.structures().get(i);
             DownConductorLayout planned = plans.get(i);
@@ -307,6 +312,10 @@ public class DesignService {
                     positions.add(new double[] {round(c.x), round(c.y)});
                 }
             }
+            List<String> labels = new ArrayList<>();
+            for (int k = 0; k < positions.size(); k++) {
+                labels.add("D" + (++number));
+            }
             List<String> warnings = new ArrayList<>();
             if (positions.size() < required) {
                 warnings.add(String.format(Locale.ROOT, "%d down-conductors, fewer than the %d a perimeter of %.1f m needs at"
@@ -317,7 +326,7 @@ public class DesignService {
                         + " spacing of %.0f m", planned.largestSpacing(), spacing));
             }
             out.add(new DownConductors(s.id(), s.name() == null ? s.id() : s.name(), round(planned.perimeter()), spacing,
-                    required, positions, isEdited, s.height(), warnings));
+                    required, positions, labels, isEdited, s.height(), warnings));
         }
         return out;
     }
@@ -360,13 +369,21 @@ public class DesignService {
     /**
      * One separation distance check. {@code length} is l, {@code route} says how it was found
      * ({@code routeBasis}: drawn, assumed-links, grounded-part or none), {@code straightAcross} the
-     * metres of it assumed straight across the roof where no conductor is drawn; {@code status} is
+     * metres of it assumed straight across the roof where no conductor is drawn; {@code downConductors}
+     * the number the current shares between and {@code sharedBy} which (labels as in the
+     * down-conductor list; parts standing on the ground by id), giving {@code kc}; {@code status} is
      * "passes", "fails", "not confirmed" (no down-conductor reached, l only a lower bound) or
      * "connected" (a part touches the object).
      */
     public record Separation(String kind, String name, double[] installation, double[] nearestLps, String partId,
             double actual, double length, String routeBasis, String route, double straightAcross, int downConductors,
-            String material, double required, boolean passes, String status, String note) {
+            List<String> sharedBy, double kc, String material, double required, boolean passes, String status,
+            String note) {
+
+        /** "0.66 (D1, D2)": k<sub>c</sub> and the down-conductors behind it. */
+        public String kcText() {
+            return String.format(Locale.ROOT, "%.2f", kc) + (sharedBy.isEmpty() ? "" : " (" + String.join(", ", sharedBy) + ")");
+        }
     }
 
     /** Height of the equipotential bonding the separation distances run to: ground level (sites store no other). */
@@ -396,12 +413,13 @@ public class DesignService {
         return out;
     }
 
-    /** Every down-conductor with its structure and that structure's count, as the l routes need them. */
+    /** Every down-conductor with its label and structure, as the l routes need them. */
     static List<BondingRoutes.DownConductor> bondingDownConductors(List<DownConductors> downs) {
         List<BondingRoutes.DownConductor> out = new ArrayList<>();
         for (DownConductors d : downs) {
-            for (double[] p : d.positions()) {
-                out.add(new BondingRoutes.DownConductor(d.structureId(), new Coordinate(p[0], p[1]), d.positions().size()));
+            for (int k = 0; k < d.positions().size(); k++) {
+                double[] p = d.positions().get(k);
+                out.add(new BondingRoutes.DownConductor(d.labels().get(k), d.structureId(), new Coordinate(p[0], p[1])));
             }
         }
         return out;
@@ -427,7 +445,8 @@ public class DesignService {
         return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
                 new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), round(c.result().actual()),
                 round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
-                route.describe(), round(route.assumedStraight()), route.downConductors(), c.material().name(),
+                route.describe(), round(route.assumedStraight()), route.downConductors(), route.sharedBy(),
+                SeparationDistance.kc(route.downConductors()), c.material().name(),
                 Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status, note);
     }
 

@@ -16,14 +16,19 @@ import org.lpzplanner.engine.design.SeparationSurvey;
  * s = k<sub>i</sub>·(k<sub>c</sub>/k<sub>m</sub>)·l [IEC 62305-3:2010 6.3], by the same computation as
  * the design page ({@link SeparationSurvey}): l runs from that point along the drawn rods and
  * conductors (or, where none is drawn, straight across the roof: an assumption the row states) to
- * the report's down-conductors and down them to ground level; k<sub>c</sub> follows the number of
- * down-conductors of the structure the route reaches.
+ * the report's down-conductors and down them to ground level; k<sub>c</sub> follows the
+ * down-conductors the part's drawn conductors join at roof level, which the row names.
  */
 final class SeparationSchedule {
 
     static final String TITLE = "Schedule of separation distances";
 
     private SeparationSchedule() {
+    }
+
+    /** "2 (D1, D2)": how many down-conductors share the current, and which. */
+    static String sharing(BondingRoutes.Route route) {
+        return route.downConductors() + (route.sharedBy().isEmpty() ? "" : " (" + String.join(", ", route.sharedBy()) + ")");
     }
 
     static List<ReportBlock> blocks(ReportFacts facts) {
@@ -38,7 +43,7 @@ final class SeparationSchedule {
         List<BondingRoutes.DownConductor> downs = new ArrayList<>();
         for (DownConductorLayout layout : facts.downConductors()) {
             for (Coordinate c : layout.positions()) {
-                downs.add(new BondingRoutes.DownConductor(layout.structureId(), c, layout.count()));
+                downs.add(new BondingRoutes.DownConductor("D" + (downs.size() + 1), layout.structureId(), c));
             }
         }
         List<SeparationSurvey.Installation> installations = new ArrayList<>();
@@ -59,14 +64,16 @@ final class SeparationSchedule {
                     : c.result().actual() < c.result().required() ? "fails" : "not confirmed";
             assumed |= c.route().basis() == BondingRoutes.Basis.ASSUMED_LINKS;
             unusual |= verdict.equals("connected") || verdict.equals("not confirmed");
-            rows.add(List.of(name, insulation, number, String.valueOf(c.route().downConductors()),
+            rows.add(List.of(name, insulation, number, sharing(c.route()),
                     metres(c.result().length()), c.route().describe(), metres(c.result().required()),
                     metres(c.result().actual()), verdict));
         }
         List<String> notes = new ArrayList<>();
         notes.add("s = ki·(kc/km)·l, IEC 62305-3:2010 6.3 (the 2024 edition revised this method); ki from Table 10,"
                 + " km = 1 in air, 0.5 in concrete or brick (Table 11), kc 1 / 0.66 / 0.44 for one, two, three or more"
-                + " down-conductors of the structure the route reaches (Table 12, Annex C, simplified). l runs from"
+                + " down-conductors sharing the current (Table 12, Annex C, simplified): those the part's drawn"
+                + " conductors join at roof level, named in the row (a part joined to one has kc = 1); for a part with"
+                + " no drawn route, every down-conductor of the building its assumed route reaches. l runs from"
                 + " the nearest point of the air-termination along the drawn rods and conductors, joined where they"
                 + " meet, to the down-conductor of the schedule above and down it to bonding at ground level.");
         if (assumed) {

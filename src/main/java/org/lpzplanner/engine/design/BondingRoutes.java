@@ -2,6 +2,7 @@ package org.lpzplanner.engine.design;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -30,7 +31,17 @@ import org.lpzplanner.engine.geom.SiteSurface;
  * different connected groups. That is the shortest possible connection, so where a route uses it
  * the l it gives is a lower bound; {@link Route#assumedStraight()} says how much of l it is. An
  * unconnected part is not used as a bridge straight back into the group the route came from (that
- * would bypass the group's drawn conductors by two assumptions).
+ * would bypass the group's drawn conductors by two assumptions). A group that the drawn pieces do
+ * connect to a down-conductor is routed along them only: its drawn network is the design.
+ *
+ * <p><b>k<sub>c</sub>.</b> The current shares between the down-conductors that a part's conductor
+ * network joins at roof level [IEC 62305-3:2010 Annex C]: k<sub>c</sub> follows the number of
+ * down-conductors (and parts standing on the ground) of the drawn connected group a point lies in,
+ * not the number the building has. A rod or conductor joined to one down-conductor has
+ * k<sub>c</sub> = 1 whatever else stands on the building. For a group joined to none (its l a lower
+ * bound), the count is the largest the assumed connection could reach: every down-conductor of the
+ * building whose down-conductor its routes end at, so that s stays a lower bound too. The count is
+ * the same at every point of a group.
  *
  * <p>Immutable after construction and thread-safe. Cost: a Dijkstra search over the nodes from all
  * down-conductors at once, O(n²) in the roof-level nodes for the assumed links.
@@ -64,12 +75,19 @@ public final class BondingRoutes {
      * @param length              l, metres
      * @param assumedStraight     of it, metres straight across the roof where no conductor is drawn
      * @param downConductor       of it, metres down the down-conductor (top to bonding level)
-     * @param structureId         the structure whose down-conductor the route takes; null for a mast or none
+     * @param via                 the label of the down-conductor the route takes, or the id of the part
+     *                            standing on the ground; null for none
      * @param downConductorTop    the top of that down-conductor, or the foot of the mast; null for none
-     * @param downConductors      the number of down-conductors of that structure (1 for a mast or none), for k<sub>c</sub>
+     * @param downConductors      the number of down-conductors the current shares between, for k<sub>c</sub>
+     *                            (see the class comment; 1 for none)
+     * @param sharedBy            their labels (parts standing on the ground by their ids), in the order given
      */
-    public record Route(double length, double assumedStraight, double downConductor, Basis basis, String structureId,
-            Coordinate downConductorTop, int downConductors) {
+    public record Route(double length, double assumedStraight, double downConductor, Basis basis, String via,
+            Coordinate downConductorTop, int downConductors, List<String> sharedBy) {
+
+        public Route {
+            sharedBy = List.copyOf(sharedBy);
+        }
 
         /** Metres along the air-termination (drawn pieces and their joints). */
         public double alongAirTermination() {
@@ -79,12 +97,12 @@ public final class BondingRoutes {
         /** One line saying how l was found. */
         public String describe() {
             return switch (basis) {
-                case DRAWN -> String.format(Locale.ROOT, "%.2f m along drawn air-termination to the down-conductor at"
-                        + " (%.1f, %.1f), %.2f m down it", alongAirTermination(), downConductorTop.x, downConductorTop.y,
-                        downConductor);
+                case DRAWN -> String.format(Locale.ROOT, "%.2f m along drawn air-termination to down-conductor %s at"
+                        + " (%.1f, %.1f), %.2f m down it", alongAirTermination(), via, downConductorTop.x,
+                        downConductorTop.y, downConductor);
                 case ASSUMED_LINKS -> String.format(Locale.ROOT, "%.2f m along drawn air-termination and %.2f m straight"
-                        + " across the roof where no conductor is drawn (assumed) to the down-conductor at (%.1f, %.1f),"
-                        + " %.2f m down it", alongAirTermination(), assumedStraight, downConductorTop.x,
+                        + " across the roof where no conductor is drawn (assumed) to down-conductor %s at (%.1f, %.1f),"
+                        + " %.2f m down it", alongAirTermination(), assumedStraight, via, downConductorTop.x,
                         downConductorTop.y, downConductor);
                 case GROUNDED_PART -> String.format(Locale.ROOT, "%.2f m down a part standing on the ground at"
                         + " (%.1f, %.1f)", length, downConductorTop.x, downConductorTop.y);
@@ -98,14 +116,18 @@ public final class BondingRoutes {
     public record Piece(String partId, Coordinate a, Coordinate b) {
     }
 
-    /** A down-conductor: its structure, plan position and the number of down-conductors of that structure. */
-    public record DownConductor(String structureId, Coordinate position, int count) {
+    /**
+     * A down-conductor: its label (as page and report number it, e.g. "D3"), the building whose outline
+     * it stands on and its plan position.
+     */
+    public record DownConductor(String label, String building, Coordinate position) {
     }
 
     private record Edge(int to, double length) {
     }
 
-    private record Sink(double cost, String structureId, Coordinate top, int count, boolean grounded) {
+    /** Where a route ends: a down-conductor's top (cost: its length down) or the foot of a part on the ground. */
+    private record Sink(double cost, String label, String building, Coordinate top, boolean grounded) {
     }
 
     private final double bondingLevel;
@@ -122,6 +144,11 @@ public final class BondingRoutes {
     /** The group a node's route was in before its last straight link (-1: none), so that no unconnected part bridges back. */
     private int[] cameFrom;
     private int[] group;
+    /** Per group root: the labels of the sinks the drawn group joins (empty: none, its routes are assumed). */
+    private final Map<Integer, List<String>> joined = new HashMap<>();
+    /** Per group root of a group joined to none: the labels its k<sub>c</sub> counts (see class comment). */
+    private final Map<Integer, List<String>> assumedSharing = new HashMap<>();
+    private final Map<String, List<String>> labelsByBuilding = new HashMap<>();
 
     /**
      * @param structureIds   the ids of the site's structures (whose walls carry down-conductors)
@@ -134,6 +161,9 @@ public final class BondingRoutes {
             throw new IllegalArgumentException("the bonding level must be 0 m or more above ground, got " + bondingLevel);
         }
         this.bondingLevel = bondingLevel;
+        for (DownConductor d : downConductors) {
+            labelsByBuilding.computeIfAbsent(d.building(), b -> new ArrayList<>()).add(d.label());
+        }
         for (SiteSurface.PlacedRod r : surface.rods()) {
             Coordinate foot = new Coordinate(r.tip().x, r.tip().y, r.base());
             addPiece(new Piece(r.rod().id(), foot, r.tip()), r.base() > GROUNDED, false);
@@ -155,12 +185,12 @@ public final class BondingRoutes {
             int n = newNode(top);
             roofNodes.add(n);
             tops.add(n);
-            sinks.put(n, new Sink(Math.max(0, top.getZ() - bondingLevel), d.structureId(), top, d.count(), false));
+            sinks.put(n, new Sink(Math.max(0, top.getZ() - bondingLevel), d.label(), d.building(), top, false));
         }
         for (int n = 0; n < drawnNodes; n++) {
             Coordinate p = nodes.get(n);
             if (p.getZ() <= GROUNDED && !sinks.containsKey(n)) {
-                sinks.put(n, new Sink(0, null, p, 1, true));
+                sinks.put(n, new Sink(0, groundedPart(n), null, p, true));
             }
         }
         List<Integer> joining = new ArrayList<>();
@@ -218,12 +248,36 @@ public final class BondingRoutes {
         if (via < 0 || best == Double.POSITIVE_INFINITY) {
             Coordinate q = new Coordinate(p.a().x + t * (p.b().x - p.a().x), p.a().y + t * (p.b().y - p.a().y),
                     p.a().getZ() + t * (p.b().getZ() - p.a().getZ()));
-            return new Route(Math.max(0, q.getZ() - bondingLevel), 0, 0, Basis.NONE, null, null, 1);
+            return new Route(Math.max(0, q.getZ() - bondingLevel), 0, 0, Basis.NONE, null, null, 1, List.of());
         }
         Sink sink = sinks.get(sinkOf[via]);
-        Basis basis = sink.grounded() ? Basis.GROUNDED_PART : assumed[via] > 1e-9 ? Basis.ASSUMED_LINKS : Basis.DRAWN;
+        List<String> sharing = sharing(via);
+        Basis basis = sink.grounded() && assumed[via] <= 1e-9 ? Basis.GROUNDED_PART
+                : assumed[via] > 1e-9 ? Basis.ASSUMED_LINKS : Basis.DRAWN;
         double down = sink.grounded() ? 0 : sink.cost();
-        return new Route(offset + dist[via], assumed[via], down, basis, sink.structureId(), sink.top(), sink.count());
+        return new Route(offset + dist[via], assumed[via], down, basis, sink.label(), sink.top(),
+                Math.max(1, sharing.size()), sharing);
+    }
+
+    /**
+     * The down-conductors k<sub>c</sub> counts at a node: those its drawn group joins, or for a group
+     * joined to none, every down-conductor of the buildings its routes end at (see class comment).
+     */
+    private List<String> sharing(int node) {
+        List<String> own = joined.getOrDefault(group[node], List.of());
+        return own.isEmpty() ? assumedSharing.getOrDefault(group[node], List.of()) : own;
+    }
+
+    /** The id of the drawn piece a node on the ground belongs to. */
+    private String groundedPart(int node) {
+        for (int i = 0; i < pieces.size(); i++) {
+            for (double[] s : stops.get(i)) {
+                if ((int) s[1] == node) {
+                    return pieces.get(i).partId();
+                }
+            }
+        }
+        return null;
     }
 
     // ---- construction ----
@@ -303,6 +357,13 @@ public final class BondingRoutes {
     private void search() {
         int count = nodes.size();
         group = groups(count);
+        for (int n = 0; n < count; n++) {
+            joined.computeIfAbsent(group[n], g -> new ArrayList<>());
+        }
+        // down-conductors in the order given (their tops are numbered after the drawn nodes), then parts on the ground
+        sinks.entrySet().stream().sorted(Comparator.comparing((Map.Entry<Integer, Sink> e) -> e.getValue().grounded())
+                .thenComparing(Map.Entry::getKey))
+                .forEach(e -> joined.get(group[e.getKey()]).add(e.getValue().label()));
         dist = new double[count];
         assumed = new double[count];
         sinkOf = new int[count];
@@ -333,12 +394,26 @@ public final class BondingRoutes {
             if (isRoof[u]) {
                 Coordinate p = nodes.get(u);
                 for (int v : roof) {
-                    if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v]) {
+                    // a group joined to a down-conductor keeps its drawn routes: links only lead into groups joined to none
+                    if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v] && joined.get(group[v]).isEmpty()) {
                         relax(queue, u, v, p.distance3D(nodes.get(v)), true);
                     }
                 }
             }
         }
+        for (int n = 0; n < count; n++) {
+            if (joined.get(group[n]).isEmpty() && sinkOf[n] >= 0) {
+                List<String> reach = reachable(sinks.get(sinkOf[n]), sinkOf[n]);
+                assumedSharing.merge(group[n], reach, (a, b) -> a.size() >= b.size() ? a : b);
+            }
+        }
+    }
+
+    /** What an assumed connection to this sink could share the current with: its building's down-conductors, or its own group's. */
+    private List<String> reachable(Sink sink, int node) {
+        List<String> building = sink.building() == null ? List.of() : labelsByBuilding.getOrDefault(sink.building(), List.of());
+        List<String> own = joined.get(group[node]);
+        return building.size() >= own.size() ? building : own;
     }
 
     private void relax(PriorityQueue<double[]> queue, int u, int v, double length, boolean straight) {

@@ -27,10 +27,10 @@ class SeparationSurveyTest {
     private static final Structure BLOCK = new Structure("S1", "Block", rectangle(0, 0, 20, 10), 6, new RoofShape.Flat(0));
 
     private static final List<BondingRoutes.DownConductor> FOUR_CORNERS = List.of(
-            new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 4),
-            new BondingRoutes.DownConductor("S1", new Coordinate(20, 0), 4),
-            new BondingRoutes.DownConductor("S1", new Coordinate(20, 10), 4),
-            new BondingRoutes.DownConductor("S1", new Coordinate(0, 10), 4));
+            new BondingRoutes.DownConductor("D1", "S1", new Coordinate(0, 0)),
+            new BondingRoutes.DownConductor("D2", "S1", new Coordinate(20, 0)),
+            new BondingRoutes.DownConductor("D3", "S1", new Coordinate(20, 10)),
+            new BondingRoutes.DownConductor("D4", "S1", new Coordinate(0, 10)));
 
     private static SeparationSurvey.Check one(Site site, List<BondingRoutes.DownConductor> downs,
             SeparationSurvey.Installation installation, ProtectionLevel level, double bonding) {
@@ -60,7 +60,10 @@ class SeparationSurveyTest {
         assertThat(c.route().length()).isCloseTo(8 + Math.sqrt(125), within(1e-9));
         assertThat(c.route().assumedStraight()).isCloseTo(Math.sqrt(125), within(1e-9));
         assertThat(c.route().downConductor()).isCloseTo(6, within(1e-9));
+        // joined to none: kc counts every down-conductor of the building its route reaches (the least kc
+        // the connection yet to be drawn could give, so that s stays a lower bound)
         assertThat(c.route().downConductors()).isEqualTo(4);
+        assertThat(c.route().sharedBy()).containsExactly("D1", "D2", "D3", "D4");
         // class III, four down-conductors, air: s = 0.04 · 0.44 / 1 · 19.1803 = 0.33757 m < 2 m actual
         assertThat(c.result().required()).isCloseTo(0.04 * 0.44 * (8 + Math.sqrt(125)), within(1e-9));
         assertThat(c.result().required()).isCloseTo(0.33757, within(1e-5));
@@ -99,6 +102,8 @@ class SeparationSurveyTest {
         assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.DRAWN);
         assertThat(c.route().length()).isCloseTo(23.0, within(1e-9));
         assertThat(c.route().downConductor()).isCloseTo(6.15, within(1e-9));
+        // the ring joins all four down-conductors: kc = 0.44 [IEC 62305-3:2010 Annex C, simplified]
+        assertThat(c.route().sharedBy()).containsExactly("D1", "D2", "D3", "D4");
         // s = 0.04 · 0.44 · 23 = 0.4048 m
         assertThat(c.result().required()).isCloseTo(0.4048, within(1e-9));
         assertThat(c.passes()).isTrue();
@@ -115,8 +120,8 @@ class SeparationSurveyTest {
         // brick: s = 0.04 · 0.66 / 0.5 · 16.15 = 0.85272 m
         Conductor edge = new Conductor("edge", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(20, 0, 6.15)), null);
         Site site = site(List.of(), List.of(), List.of(edge));
-        List<BondingRoutes.DownConductor> two = List.of(new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 2),
-                new BondingRoutes.DownConductor("S1", new Coordinate(20, 0), 2));
+        List<BondingRoutes.DownConductor> two = List.of(new BondingRoutes.DownConductor("D1", "S1", new Coordinate(0, 0)),
+                new BondingRoutes.DownConductor("D2", "S1", new Coordinate(20, 0)));
 
         SeparationSurvey.Check far = one(site, two, pipe(10, 1.5, 6.15, Material.CONCRETE_OR_BRICK), ProtectionLevel.III, 0);
         assertThat(far.route().length()).isCloseTo(16.15, within(1e-9));
@@ -138,6 +143,7 @@ class SeparationSurveyTest {
         assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.GROUNDED_PART);
         assertThat(c.route().length()).isCloseTo(10, within(1e-9));
         assertThat(c.route().downConductors()).isEqualTo(1);
+        assertThat(c.route().sharedBy()).containsExactly("m1");
         assertThat(c.result().required()).isCloseTo(0.8, within(1e-12));
         assertThat(c.passes()).isTrue();
     }
@@ -171,7 +177,7 @@ class SeparationSurveyTest {
         Conductor round = new Conductor("round", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(0, 10, 6.15),
                 new Coordinate(20, 10, 6.15), new Coordinate(19, 1, 6.15)), null);
         Site site = site(List.of(), List.of(new Rod("r1", null, 19, 1, 2), new Rod("r2", null, 10, 1, 1)), List.of(round));
-        List<BondingRoutes.DownConductor> one = List.of(new BondingRoutes.DownConductor("S1", new Coordinate(0, 0), 1));
+        List<BondingRoutes.DownConductor> one = List.of(new BondingRoutes.DownConductor("D1", "S1", new Coordinate(0, 0)));
         SeparationSurvey.Check c = one(site, one, pipe(17, 1, 8, Material.AIR), ProtectionLevel.III, 0);
 
         assertThat(c.partId()).isEqualTo("r1");
@@ -180,5 +186,44 @@ class SeparationSurveyTest {
         // class III, one down-conductor: s = 0.04 · 1 · 47.055 = 1.882 m < 2 m actual
         assertThat(c.result().required()).isCloseTo(0.04 * (1.85 + Math.sqrt(82) + 36.15), within(1e-9));
         assertThat(c.passes()).isTrue();
+    }
+
+    @Test
+    void aRodJoinedToOneDownConductorCarriesTheWholeCurrent() {
+        // a conductor 0.15 m above the roof from the corner (0, 0) along the south edge to (10, 0) and north
+        // to a 2 m rod at (10, 5): it joins the down-conductor at (0, 0) only, the other three are 10 m or
+        // more away. One current path: kc = 1 [IEC 62305-3:2010 Annex C], not the 0.44 of the building's
+        // four. l from the tip: 1.85 m down the rod, 5 m, 10 m, 6.15 m down: 23 m [closed form];
+        // class III, air: s = 0.04 · 1 · 23 = 0.92 m > 0.6 m (with kc = 0.44 it would be 0.405 m and pass)
+        Conductor spur = new Conductor("spur", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(10, 0, 6.15),
+                new Coordinate(10, 5, 6.15)), null);
+        Site site = site(List.of(), List.of(new Rod("r1", null, 10, 5, 2)), List.of(spur));
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(10, 5.6, 8, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.DRAWN);
+        assertThat(c.route().length()).isCloseTo(23.0, within(1e-9));
+        assertThat(c.route().downConductors()).isEqualTo(1);
+        assertThat(c.route().sharedBy()).containsExactly("D1");
+        assertThat(c.route().via()).isEqualTo("D1");
+        assertThat(c.result().required()).isCloseTo(0.92, within(1e-9));
+        assertThat(c.passes()).isFalse();
+    }
+
+    @Test
+    void aConductorJoiningTwoDownConductorsSharesTheCurrentBetweenThem() {
+        // the same conductor carried on to the corner (20, 0): it joins two of the four down-conductors,
+        // kc = 0.66 [IEC 62305-3:2010 Annex C, simplified]; l = 23 m as before (the way to (0, 0) and
+        // to (20, 0) are equally long): s = 0.04 · 0.66 · 23 = 0.6072 m > 0.6 m
+        Conductor spur = new Conductor("spur", null, List.of(new Coordinate(0, 0, 6.15), new Coordinate(10, 0, 6.15),
+                new Coordinate(20, 0, 6.15)), null);
+        Conductor north = new Conductor("north", null, List.of(new Coordinate(10, 0, 6.15), new Coordinate(10, 5, 6.15)), null);
+        Site site = site(List.of(), List.of(new Rod("r1", null, 10, 5, 2)), List.of(spur, north));
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(10, 5.6, 8, Material.AIR), ProtectionLevel.III, 0);
+
+        assertThat(c.route().length()).isCloseTo(23.0, within(1e-9));
+        assertThat(c.route().downConductors()).isEqualTo(2);
+        assertThat(c.route().sharedBy()).containsExactly("D1", "D2");
+        assertThat(c.result().required()).isCloseTo(0.6072, within(1e-9));
+        assertThat(c.passes()).isFalse();
     }
 }
