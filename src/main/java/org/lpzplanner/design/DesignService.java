@@ -367,18 +367,21 @@ public class DesignService {
     }
 
     /**
-     * One separation distance check. {@code length} is l, {@code route} says how it was found
+     * One separation distance check, at the worst point of the system ({@code lpsPoint}, on part
+     * {@code partId}: a rod, conductor or down-conductor; where distance − s is least), with the
+     * installation's point nearest it. {@code length} is l there, {@code route} says how it was found
      * ({@code routeBasis}: drawn, assumed-links, grounded-part or none), {@code straightAcross} the
      * metres of it assumed straight across the roof where no conductor is drawn; {@code downConductors}
      * the number the current shares between and {@code sharedBy} which (labels as in the
      * down-conductor list; parts standing on the ground by id), giving {@code kc}; {@code status} is
-     * "passes", "fails", "not confirmed" (no down-conductor reached, l only a lower bound) or
-     * "connected" (a part touches the object).
+     * "passes", "fails", "not confirmed" (it clears, but l is only a lower bound somewhere: at the worst
+     * point, or on the part {@code unconfirmedPartId} that has no drawn route) or "connected" (a part
+     * touches the object).
      */
-    public record Separation(String kind, String name, double[] installation, double[] nearestLps, String partId,
+    public record Separation(String kind, String name, double[] installation, double[] lpsPoint, String partId,
             double actual, double length, String routeBasis, String route, double straightAcross, int downConductors,
             List<String> sharedBy, double kc, String material, double required, boolean passes, String status,
-            String note) {
+            String unconfirmedPartId, String note) {
 
         /** "0.66 (D1, D2)": k<sub>c</sub> and the down-conductors behind it. */
         public String kcText() {
@@ -427,6 +430,7 @@ public class DesignService {
 
     private static Separation separation(String kind, SeparationSurvey.Check c) {
         BondingRoutes.Route route = c.route();
+        SeparationSurvey.Point u = c.unconfirmed();
         String note;
         if (c.connected()) {
             note = "a part touches it: it is connected to the air-termination, so it must be fit to carry lightning"
@@ -436,18 +440,27 @@ public class DesignService {
                     + " route can be: l is a lower bound, so the check can fail but not pass until the route is drawn";
         } else if (route.basis() == BondingRoutes.Basis.NONE) {
             note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
+        } else if (c.status() == SeparationSurvey.Status.NOT_CONFIRMED) {
+            note = String.format(Locale.ROOT, "it clears s at every point, but %s has no drawn route to a down-conductor"
+                    + " (there l is at least %.2f m): not confirmed until its route is drawn", u.partId(),
+                    u.result().length());
         } else {
             note = "l along the drawn air-termination and down the down-conductor";
         }
-        String status = c.connected() ? "connected" : c.passes() ? "passes"
-                : c.result().actual() < c.result().required() ? "fails" : "not confirmed";
+        if (c.status() == SeparationSurvey.Status.FAILS && c.result().actual() >= c.result().required()) {
+            note += String.format(Locale.ROOT, "; within %.0f mm of s, which counts as failing",
+                    SeparationSurvey.TOLERANCE * 1000);
+        }
+        note = "the point of the system (rods, conductors, down-conductors) where the distance less s is least; " + note;
+        String status = c.status().name().toLowerCase(Locale.ROOT).replace('_', ' ');
         Coordinate p = c.installation(), q = c.lpsPoint();
         return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
                 new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), round(c.result().actual()),
                 round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
                 route.describe(), round(route.assumedStraight()), route.downConductors(), route.sharedBy(),
                 SeparationDistance.kc(route.downConductors()), c.material().name(),
-                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status, note);
+                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status,
+                u == null ? null : u.partId(), note);
     }
 
     public DesignRepository.Installation addInstallation(long siteId, String name, Double x, Double y, Double z,

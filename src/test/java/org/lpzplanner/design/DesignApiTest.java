@@ -184,13 +184,17 @@ class DesignApiTest {
                     .isEqualTo(drawn && c.path("actual").asDouble() >= c.path("required").asDouble());
         }
         JsonNode pipe = checks.get(1);
-        // nearest LPS point to (15, 8, 9): the rod shaft (15, 6, 8..10) at z = 9, 2 m away
+        // worst point for (15, 8, 9): on the rod shaft (15, 6, 8..10), 2 m away level with the pipe and a little
+        // higher, where l is longer: at u = k·a / √(1 − k²) = 3.5 cm above [closed form, a = 2 m,
+        // k = 0.04 · 0.44 = 0.0176], √(4 + u²) = 2.0003 m away
         assertThat(pipe.path("actual").asDouble()).isCloseTo(2.0, within(0.01));
-        // l: 1 m down the rod to its foot (15, 6, 8), no conductor drawn, so straight across the roof to
+        assertThat(pipe.path("lpsPoint").get(2).asDouble()).isBetween(9.0, 9.2);
+        // l: z − 8 m down the rod to its foot (15, 6, 8), no conductor drawn, so straight across the roof to
         // the nearest planned down-conductor and 8 m down the wall; that down-conductor is where the
         // route ends, so the straight part is its 3D distance from the foot [closed form]
         assertThat(pipe.path("routeBasis").asString()).isEqualTo("assumed-links");
-        assertThat(pipe.path("length").asDouble()).isCloseTo(1 + pipe.path("straightAcross").asDouble() + 8, within(0.02));
+        assertThat(pipe.path("length").asDouble()).isCloseTo(pipe.path("lpsPoint").get(2).asDouble() - 8
+                + pipe.path("straightAcross").asDouble() + 8, within(0.02));
         assertThat(pipe.path("route").asString()).contains("straight across the roof where no conductor is drawn");
 
         JsonNode noName = send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)

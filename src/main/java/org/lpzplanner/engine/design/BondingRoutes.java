@@ -96,6 +96,10 @@ public final class BondingRoutes {
 
         /** One line saying how l was found. */
         public String describe() {
+            if (basis == Basis.DRAWN && assumedStraight == 0 && Math.abs(length - downConductor) < 1e-9) {
+                return String.format(Locale.ROOT, "on down-conductor %s at (%.1f, %.1f), %.2f m down it", via,
+                        downConductorTop.x, downConductorTop.y, downConductor);
+            }
             return switch (basis) {
                 case DRAWN -> String.format(Locale.ROOT, "%.2f m along drawn air-termination to down-conductor %s at"
                         + " (%.1f, %.1f), %.2f m down it", alongAirTermination(), via, downConductorTop.x,
@@ -114,6 +118,10 @@ public final class BondingRoutes {
 
     /** A straight drawn piece of the air-termination: a rod from foot to tip, or a conductor leg. */
     public record Piece(String partId, Coordinate a, Coordinate b) {
+    }
+
+    /** A down-conductor as part of the system: its label, its top and the height it runs down to. */
+    public record DownRun(String label, Coordinate top, double bottom) {
     }
 
     /**
@@ -138,6 +146,8 @@ public final class BondingRoutes {
     private final List<List<double[]>> stops = new ArrayList<>();
     private final Map<Integer, Sink> sinks = new HashMap<>();
     private final List<Integer> roofNodes = new ArrayList<>();
+    /** The node of each down-conductor's top, in the order the down-conductors were given (those with a top). */
+    private final List<Integer> tops = new ArrayList<>();
     private double[] dist;
     private double[] assumed;
     private int[] sinkOf;
@@ -176,7 +186,6 @@ public final class BondingRoutes {
             }
         }
         int drawnNodes = nodes.size();
-        List<Integer> tops = new ArrayList<>();
         for (DownConductor d : downConductors) {
             Coordinate top = DownConductorTops.top(surface, structureIds, d.position());
             if (top == null) {
@@ -210,9 +219,32 @@ public final class BondingRoutes {
         search();
     }
 
-    /** The drawn pieces of the air-termination, for finding the point nearest an installation. */
+    /** The drawn pieces of the air-termination (rods and conductor legs), in the order {@link #at} numbers them. */
     public List<Piece> pieces() {
         return List.copyOf(pieces);
+    }
+
+    /** The down-conductors, each from its top straight down to the bonding level, in the order {@link #down} numbers them. */
+    public List<DownRun> downRuns() {
+        List<DownRun> out = new ArrayList<>();
+        for (int n : tops) {
+            Sink sink = sinks.get(n);
+            out.add(new DownRun(sink.label(), sink.top(), Math.min(bondingLevel, sink.top().getZ())));
+        }
+        return out;
+    }
+
+    /**
+     * The route of l from a point of a down-conductor at height z: straight down it to the bonding
+     * level (l = z − bonding level, at least 0); k<sub>c</sub> counts the down-conductors its top's
+     * drawn group joins (itself alone when no drawn part reaches its top).
+     */
+    public Route down(int run, double z) {
+        int n = tops.get(run);
+        Sink sink = sinks.get(n);
+        double l = Math.max(0, Math.min(z, sink.top().getZ()) - bondingLevel);
+        List<String> sharing = sharing(n);
+        return new Route(l, 0, l, Basis.DRAWN, sink.label(), sink.top(), Math.max(1, sharing.size()), sharing);
     }
 
     /**
@@ -223,8 +255,17 @@ public final class BondingRoutes {
      */
     public Route from(int piece, Coordinate point) {
         Piece p = pieces.get(piece);
+        return at(piece, parameter(p.a(), p.b(), point));
+    }
+
+    /**
+     * The route of l from the point at fraction t ∈ [0, 1] along a piece (a to b, 3D). Along a piece l
+     * changes by at most the distance moved: a route from one point can run along the piece to the
+     * other and on along its route.
+     */
+    public Route at(int piece, double t) {
+        Piece p = pieces.get(piece);
         double length = p.a().distance3D(p.b());
-        double t = parameter(p.a(), p.b(), point);
         List<double[]> s = stops.get(piece);
         int below = 0;
         for (int k = 0; k < s.size(); k++) {
