@@ -131,21 +131,13 @@ public final class BondingRoutes {
     public record DownConductor(String label, String building, Coordinate position) {
     }
 
-    private record Edge(int to, double length) {
-    }
-
     /** Where a route ends: a down-conductor's top (cost: its length down) or the foot of a part on the ground. */
     private record Sink(double cost, String label, String building, Coordinate top, boolean grounded) {
     }
 
     private final double bondingLevel;
-    private final List<Piece> pieces = new ArrayList<>();
-    private final List<Coordinate> nodes = new ArrayList<>();
-    private final Map<String, Integer> nodeIndex = new HashMap<>();
-    private final List<List<Edge>> edges = new ArrayList<>();
-    private final List<List<double[]>> stops = new ArrayList<>();
+    private final DrawnNetwork net = new DrawnNetwork();
     private final Map<Integer, Sink> sinks = new HashMap<>();
-    private final List<Integer> roofNodes = new ArrayList<>();
     /** The node of each down-conductor's top, in the order the down-conductors were given (those with a top). */
     private final List<Integer> tops = new ArrayList<>();
     private double[] dist;
@@ -176,30 +168,30 @@ public final class BondingRoutes {
         }
         for (SiteSurface.PlacedRod r : surface.rods()) {
             Coordinate foot = new Coordinate(r.tip().x, r.tip().y, r.base());
-            addPiece(new Piece(r.rod().id(), foot, r.tip()), r.base() > GROUNDED, false);
+            net.addPiece(new Piece(r.rod().id(), foot, r.tip()), r.base() > GROUNDED, false);
         }
         for (SiteSurface.PlacedConductor c : surface.conductors()) {
             for (int i = 1; i < c.path().size(); i++) {
                 Coordinate a = c.path().get(i - 1), b = c.path().get(i);
                 boolean roof = DownConductorTops.isRoofLeg(surface, a, b);
-                addPiece(new Piece(c.conductor().id(), a, b), roof, roof);
+                net.addPiece(new Piece(c.conductor().id(), a, b), roof, roof);
             }
         }
-        int drawnNodes = nodes.size();
+        int drawnNodes = net.nodes.size();
         for (DownConductor d : downConductors) {
             Coordinate top = DownConductorTops.top(surface, structureIds, d.position());
             if (top == null) {
                 continue;
             }
-            int n = newNode(top);
-            roofNodes.add(n);
+            int n = net.newNode(top);
+            net.roofNodes.add(n);
             tops.add(n);
             sinks.put(n, new Sink(Math.max(0, top.getZ() - bondingLevel), d.label(), d.building(), top, false));
         }
         for (int n = 0; n < drawnNodes; n++) {
-            Coordinate p = nodes.get(n);
+            Coordinate p = net.nodes.get(n);
             if (p.getZ() <= GROUNDED && !sinks.containsKey(n)) {
-                sinks.put(n, new Sink(0, groundedPart(n), null, p, true));
+                sinks.put(n, new Sink(0, net.partAt(n), null, p, true));
             }
         }
         List<Integer> joining = new ArrayList<>();
@@ -207,21 +199,14 @@ public final class BondingRoutes {
             joining.add(n);
         }
         joining.addAll(tops);
-        join(joining);
-        for (int i = 0; i < pieces.size(); i++) {
-            List<double[]> s = stops.get(i);
-            s.sort((u, v) -> Double.compare(u[0], v[0]));
-            double length = pieces.get(i).a().distance3D(pieces.get(i).b());
-            for (int k = 1; k < s.size(); k++) {
-                link((int) s.get(k - 1)[1], (int) s.get(k)[1], length * (s.get(k)[0] - s.get(k - 1)[0]));
-            }
-        }
+        net.join(joining);
+        net.linkAlongPieces();
         search();
     }
 
     /** The drawn pieces of the air-termination (rods and conductor legs), in the order {@link #at} numbers them. */
     public List<Piece> pieces() {
-        return List.copyOf(pieces);
+        return List.copyOf(net.pieces);
     }
 
     /** The down-conductors, each from its top straight down to the bonding level, in the order {@link #down} numbers them. */
@@ -254,8 +239,8 @@ public final class BondingRoutes {
      * @param point a point on that piece (it is projected onto it)
      */
     public Route from(int piece, Coordinate point) {
-        Piece p = pieces.get(piece);
-        return at(piece, parameter(p.a(), p.b(), point));
+        Piece p = net.pieces.get(piece);
+        return at(piece, DrawnNetwork.parameter(p.a(), p.b(), point));
     }
 
     /**
@@ -264,9 +249,9 @@ public final class BondingRoutes {
      * other and on along its route.
      */
     public Route at(int piece, double t) {
-        Piece p = pieces.get(piece);
+        Piece p = net.pieces.get(piece);
         double length = p.a().distance3D(p.b());
-        List<double[]> s = stops.get(piece);
+        List<double[]> s = net.stops.get(piece);
         int below = 0;
         for (int k = 0; k < s.size(); k++) {
             if (s.get(k)[0] <= t) {
@@ -309,95 +294,12 @@ public final class BondingRoutes {
         return own.isEmpty() ? assumedSharing.getOrDefault(group[node], List.of()) : own;
     }
 
-    /** The id of the drawn piece a node on the ground belongs to. */
-    private String groundedPart(int node) {
-        for (int i = 0; i < pieces.size(); i++) {
-            for (double[] s : stops.get(i)) {
-                if ((int) s[1] == node) {
-                    return pieces.get(i).partId();
-                }
-            }
-        }
-        return null;
-    }
 
-    // ---- construction ----
-
-    private void addPiece(Piece piece, boolean footOnRoof, boolean bothOnRoof) {
-        int a = node(piece.a());
-        int b = node(piece.b());
-        if (footOnRoof) {
-            roofNodes.add(a);
-        }
-        if (bothOnRoof) {
-            roofNodes.add(b);
-        }
-        pieces.add(piece);
-        List<double[]> s = new ArrayList<>();
-        s.add(new double[] {0, a});
-        s.add(new double[] {1, b});
-        stops.add(s);
-    }
-
-    /** The node at this point (shared by pieces meeting within a millimetre). */
-    private int node(Coordinate p) {
-        String key = String.format(Locale.ROOT, "%.3f|%.3f|%.3f", p.x, p.y, p.getZ());
-        Integer n = nodeIndex.get(key);
-        if (n == null) {
-            n = newNode(p);
-            nodeIndex.put(key, n);
-        }
-        return n;
-    }
-
-    private int newNode(Coordinate p) {
-        nodes.add(new Coordinate(p.x, p.y, p.getZ()));
-        edges.add(new ArrayList<>());
-        return nodes.size() - 1;
-    }
-
-    private void link(int u, int v, double length) {
-        if (u == v) {
-            return;
-        }
-        edges.get(u).add(new Edge(v, length));
-        edges.get(v).add(new Edge(u, length));
-    }
-
-    /** Joins each node to the pieces passing near it, splitting them there. */
-    private void join(List<Integer> joining) {
-        for (int n : joining) {
-            Coordinate p = nodes.get(n);
-            for (int i = 0; i < pieces.size(); i++) {
-                Piece piece = pieces.get(i);
-                List<double[]> s = stops.get(i);
-                if ((int) s.get(0)[1] == n || (int) s.get(1)[1] == n) {
-                    continue;
-                }
-                double t = parameter(piece.a(), piece.b(), p);
-                Coordinate q = new Coordinate(piece.a().x + t * (piece.b().x - piece.a().x),
-                        piece.a().y + t * (piece.b().y - piece.a().y), piece.a().getZ() + t * (piece.b().getZ() - piece.a().getZ()));
-                if (Math.hypot(q.x - p.x, q.y - p.y) > JOIN_REACH || Math.abs(q.getZ() - p.getZ()) > JOIN_RISE) {
-                    continue;
-                }
-                int at;
-                if (q.distance3D(piece.a()) < 1e-3) {
-                    at = (int) s.get(0)[1];
-                } else if (q.distance3D(piece.b()) < 1e-3) {
-                    at = (int) s.get(1)[1];
-                } else {
-                    at = newNode(q);
-                    s.add(new double[] {t, at});
-                }
-                link(n, at, p.distance3D(q));
-            }
-        }
-    }
 
     /** Dijkstra from every sink at once; assumed straight links join roof-level nodes of different groups. */
     private void search() {
-        int count = nodes.size();
-        group = groups(count);
+        int count = net.nodes.size();
+        group = net.groups();
         for (int n = 0; n < count; n++) {
             joined.computeIfAbsent(group[n], g -> new ArrayList<>());
         }
@@ -413,8 +315,8 @@ public final class BondingRoutes {
         Arrays.fill(sinkOf, -1);
         Arrays.fill(cameFrom, -1);
         boolean[] isRoof = new boolean[count];
-        roofNodes.forEach(n -> isRoof[n] = true);
-        int[] roof = roofNodes.stream().distinct().mapToInt(Integer::intValue).toArray();
+        net.roofNodes.forEach(n -> isRoof[n] = true);
+        int[] roof = net.roofNodes.stream().distinct().mapToInt(Integer::intValue).toArray();
         PriorityQueue<double[]> queue = new PriorityQueue<>((u, v) -> Double.compare(u[0], v[0]));
         sinks.forEach((n, s) -> {
             dist[n] = s.cost();
@@ -429,15 +331,15 @@ public final class BondingRoutes {
                 continue;
             }
             done[u] = true;
-            for (Edge e : edges.get(u)) {
+            for (DrawnNetwork.Edge e : net.edges.get(u)) {
                 relax(queue, u, e.to(), e.length(), false);
             }
             if (isRoof[u]) {
-                Coordinate p = nodes.get(u);
+                Coordinate p = net.nodes.get(u);
                 for (int v : roof) {
                     // a group joined to a down-conductor keeps its drawn routes: links only lead into groups joined to none
                     if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v] && joined.get(group[v]).isEmpty()) {
-                        relax(queue, u, v, p.distance3D(nodes.get(v)), true);
+                        relax(queue, u, v, p.distance3D(net.nodes.get(v)), true);
                     }
                 }
             }
@@ -468,43 +370,5 @@ public final class BondingRoutes {
         }
     }
 
-    /** Connected groups of the drawn network (union-find over drawn edges). */
-    private int[] groups(int count) {
-        int[] parent = new int[count];
-        for (int i = 0; i < count; i++) {
-            parent[i] = i;
-        }
-        for (int u = 0; u < count; u++) {
-            for (Edge e : edges.get(u)) {
-                int a = find(parent, u), b = find(parent, e.to());
-                if (a != b) {
-                    parent[a] = b;
-                }
-            }
-        }
-        int[] out = new int[count];
-        for (int i = 0; i < count; i++) {
-            out[i] = find(parent, i);
-        }
-        return out;
-    }
 
-    private static int find(int[] parent, int i) {
-        while (parent[i] != i) {
-            parent[i] = parent[parent[i]];
-            i = parent[i];
-        }
-        return i;
-    }
-
-    /** Fraction along a→b (3D) of the point nearest p, in [0, 1]. */
-    static double parameter(Coordinate a, Coordinate b, Coordinate p) {
-        double vx = b.x - a.x, vy = b.y - a.y, vz = b.getZ() - a.getZ();
-        double len2 = vx * vx + vy * vy + vz * vz;
-        if (len2 == 0) {
-            return 0;
-        }
-        double t = ((p.x - a.x) * vx + (p.y - a.y) * vy + (p.getZ() - a.getZ()) * vz) / len2;
-        return Math.max(0, Math.min(1, t));
-    }
 }
