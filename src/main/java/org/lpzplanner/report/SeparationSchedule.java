@@ -44,7 +44,7 @@ final class SeparationSchedule {
         List<BondingRoutes.DownConductor> downs = new ArrayList<>();
         for (DownConductorLayout layout : facts.downConductors()) {
             for (Coordinate c : layout.positions()) {
-                downs.add(new BondingRoutes.DownConductor("D" + (downs.size() + 1), layout.structureId(), c));
+                downs.add(new BondingRoutes.DownConductor("D" + (downs.size() + 1), layout.buildingId(), c));
             }
         }
         List<SeparationSurvey.Installation> installations = new ArrayList<>();

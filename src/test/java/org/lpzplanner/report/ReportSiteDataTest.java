@@ -20,6 +20,7 @@ import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.DownConductorService;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.risk.RiskService;
 import org.lpzplanner.sites.AirTerminationService;
@@ -52,6 +53,8 @@ class ReportSiteDataTest {
     @Autowired
     DesignService design;
     @Autowired
+    DownConductorService downConductors;
+    @Autowired
     RiskService risk;
     @Autowired
     ReportService reports;
@@ -69,8 +72,8 @@ class ReportSiteDataTest {
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
                         .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1}"))
                 .andExpect(status().isOk());
-        String structure = design.downConductors(id).get(0).structureId();
-        design.saveDownConductors(id, structure, List.of(new double[] {0, 0}, new double[] {80, 0},
+        String building = downConductors.list(id).get(0).buildingId();
+        downConductors.save(id, building, List.of(new double[] {0, 0}, new double[] {80, 0},
                 new double[] {80, 40}, new double[] {0, 40}));
         design.addInstallation(id, "Vent pipe", 5.0, 6.0, 12.0, "CONCRETE_OR_BRICK");
         return id;
@@ -150,7 +153,7 @@ class ReportSiteDataTest {
         assertThat(l).isCloseTo(along + Math.sqrt(26) + 11, org.assertj.core.data.Offset.offset(0.011));
         assertThat(s).isCloseTo(k * l, org.assertj.core.data.Offset.offset(0.006));
         assertThat(text).contains("Metal installations: marked by the designer for the site, as stored for the site on");
-        assertThat(text).contains("Down-conductors 4, placed by the designer on 1 of 1 structures");
+        assertThat(text).contains("Down-conductors 4, placed by the designer on 1 of 1 buildings");
 
         Path dir = Path.of("target/report-pages");
         Files.createDirectories(dir);
