@@ -353,7 +353,9 @@ public class DesignService {
             note += String.format(Locale.ROOT, "; within %.0f mm of s, which counts as failing",
                     SeparationSurvey.TOLERANCE * 1000);
         }
-        note = "the point of the system (rods, conductors, down-conductors) where the distance less s is least; " + note;
+        if (!c.connected()) {
+            note = "worst point of the system (on " + c.partId() + "): " + note;
+        }
         String status = c.status().name().toLowerCase(Locale.ROOT).replace('_', ' ');
         Coordinate p = c.installation(), q = c.lpsPoint();
         return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
