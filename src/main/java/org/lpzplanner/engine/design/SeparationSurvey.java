@@ -36,8 +36,10 @@ import org.lpzplanner.engine.model.Site;
  * fail on such a point, never pass. A check passes only when it clears at every point and every
  * point's l rests on drawn parts (or a part standing on the ground); otherwise, when it clears,
  * it is "not confirmed" and names the lower-bound point that came nearest to failing
- * ({@link Check#unconfirmed()}). An object a part touches is connected to the air-termination: no
- * clearance to check, and no pass either (it must be fit to carry the current).
+ * ({@link Check#unconfirmed()}). A down-conductor that no drawn part joins counts with
+ * k<sub>c</sub> = 1 (the whole current) until the roof network that joins it is drawn: that can
+ * only raise s. An object a part touches is connected to the air-termination: no clearance to
+ * check, and no pass either (it must be fit to carry the current).
  *
  * <p>Stateless and thread-safe.
  */
