@@ -156,6 +156,24 @@ class SeparationSurveyTest {
     }
 
     @Test
+    void twoMastsJoinedByAWireShareTheCurrent() {
+        // 10 m masts at (30, 0) and (40, 0), east of the block, a wire between their tips; pipe 1 m from the
+        // wire's middle. The wire joins two paths to ground: kc = 0.66 [IEC 62305-3:2010 Annex C,
+        // simplified]. At the middle l = 5 + 10 = 15 m and the margin 1 − 0.08 · 0.66 · 15 = 0.208 m is least
+        // (l falls and the distance grows either way) [closed form]: s = 0.792 m, passes (with kc = 1,
+        // 1.2 m would fail)
+        Conductor wire = new Conductor("w1", null, List.of(new Coordinate(30, 0, 10), new Coordinate(40, 0, 10)), null);
+        Site site = site(List.of(), List.of(new Rod("m1", null, 30, 0, 10), new Rod("m2", null, 40, 0, 10)), List.of(wire));
+        SeparationSurvey.Check c = one(site, FOUR_CORNERS, pipe(35, 1, 10, Material.AIR), ProtectionLevel.I, 0);
+
+        assertThat(c.route().basis()).isEqualTo(BondingRoutes.Basis.GROUNDED_PART);
+        assertThat(c.route().sharedBy()).containsExactly("m1", "m2");
+        assertThat(c.result().actual() - c.result().required())
+                .isCloseTo(1 - 0.08 * 0.66 * 15, within(SeparationSurvey.TOLERANCE));
+        assertThat(c.status()).isEqualTo(SeparationSurvey.Status.PASSES);
+    }
+
+    @Test
     void aRooftopObjectBesideARodIsCheckedJustAboveItsTopWhereTheMarginIsLeast() {
         // box 1 × 1 m, top 7 m, its west face 2 m east of a 2 m rod at (10, 5) (foot 6 m, tip 8 m). Along the
         // rod l = z + √125 (no conductor: straight across to a corner, assumed); the distance is 2 m up to
