@@ -35,8 +35,10 @@ import tools.jackson.databind.JsonNode;
  *     masts and conductors into the site in one change; {@code POST …/undo} with the {@code version}
  *     accepting answered removes them again in one change.</li>
  * <li>{@code GET /api/sites/{id}/method-checks}: angle and mesh methods against the rolling sphere per structure.</li>
- * <li>{@code GET /api/sites/{id}/down-conductors}; {@code PUT …/down-conductors/{structure}} with
- *     {@code positions}; {@code DELETE} returns to the planned layout.</li>
+ * <li>{@code GET /api/sites/{id}/down-conductors}: per building (structures whose footprints overlap
+ *     or touch, on the outline of the whole), {@code buildings}; {@code PUT …/down-conductors/{building}}
+ *     with {@code positions} (the building's id or the id of any of its structures); {@code DELETE}
+ *     returns to the planned layout.</li>
  * <li>{@code GET /api/sites/{id}/separation-distances}; {@code GET/POST /api/sites/{id}/metal-installations},
  *     {@code DELETE …/metal-installations/{n}}.</li>
  * <li>{@code GET /api/sites/{id}/quantities?fixingsPerMetre=1} as a table; {@code GET …/quantities.csv}.</li>
@@ -49,9 +51,11 @@ import tools.jackson.databind.JsonNode;
 public class DesignApiController {
 
     private final DesignService design;
+    private final DownConductorService downConductors;
 
-    public DesignApiController(DesignService design) {
+    public DesignApiController(DesignService design, DownConductorService downConductors) {
         this.design = design;
+        this.downConductors = downConductors;
     }
 
     @PostMapping(value = "/proposals", consumes = MediaType.APPLICATION_JSON_VALUE)
@@ -114,23 +118,23 @@ public class DesignApiController {
 
     @GetMapping("/down-conductors")
     public Map<String, Object> downConductors(@PathVariable long id) {
-        return withCautions("structures", design.downConductors(id));
+        return withCautions("buildings", downConductors.list(id));
     }
 
-    @PutMapping(value = "/down-conductors/{structureId}", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public Map<String, Object> saveDownConductors(@PathVariable long id, @PathVariable String structureId,
+    @PutMapping(value = "/down-conductors/{buildingId}", consumes = MediaType.APPLICATION_JSON_VALUE)
+    public Map<String, Object> saveDownConductors(@PathVariable long id, @PathVariable String buildingId,
             @RequestBody JsonNode body) {
         List<List<double[]>> rings = polygons(body.path("positions").isMissingNode() ? null
                 : wrap(body.path("positions")), "positions");
         if (rings.isEmpty()) {
             throw new InvalidInputException("positions", "positions is required: a list of [x, y] in local metres");
         }
-        return withCautions("structures", design.saveDownConductors(id, structureId, rings.get(0)));
+        return withCautions("buildings", downConductors.save(id, buildingId, rings.get(0)));
     }
 
-    @DeleteMapping("/down-conductors/{structureId}")
-    public Map<String, Object> resetDownConductors(@PathVariable long id, @PathVariable String structureId) {
-        return withCautions("structures", design.resetDownConductors(id, structureId));
+    @DeleteMapping("/down-conductors/{buildingId}")
+    public Map<String, Object> resetDownConductors(@PathVariable long id, @PathVariable String buildingId) {
+        return withCautions("buildings", downConductors.reset(id, buildingId));
     }
 
     @GetMapping("/separation-distances")

@@ -39,10 +39,12 @@ public class DesignPageController {
     private final DesignService design;
     private final MessageSource messages;
     private final KeepOutAreaService keepOut;
+    private final DownConductorService downConductors;
 
     DesignPageController(SiteService sites, AnalysisService analyses, ReviewService reviews, DesignService design,
-            MessageSource messages, KeepOutAreaService keepOut) {
+            MessageSource messages, KeepOutAreaService keepOut, DownConductorService downConductors) {
         this.keepOut = keepOut;
+        this.downConductors = downConductors;
         this.sites = sites;
         this.analyses = analyses;
         this.reviews = reviews;
@@ -77,15 +79,15 @@ public class DesignPageController {
         rate = Math.max(0, Math.min(20, rate));
         model.addAttribute("fixingsPerMetre", rate);
         model.addAttribute("checks", design.methodChecks(id));
-        List<DesignService.DownConductors> downs = design.downConductors(id);
+        List<DownConductorService.DownConductors> downs = downConductors.list(id);
         model.addAttribute("downConductors", downs);
         Map<String, String> positionsText = new LinkedHashMap<>();
-        for (DesignService.DownConductors d : downs) {
+        for (DownConductorService.DownConductors d : downs) {
             List<String> lines = new ArrayList<>();
             for (double[] p : d.positions()) {
                 lines.add(String.format(Locale.ROOT, "%.2f, %.2f", p[0], p[1]));
             }
-            positionsText.put(d.structureId(), String.join("\n", lines));
+            positionsText.put(d.buildingId(), String.join("\n", lines));
         }
         model.addAttribute("positionsText", positionsText);
         model.addAttribute("separations", design.separations(id));
@@ -107,15 +109,15 @@ public class DesignPageController {
         }
     }
 
-    @PostMapping("/sites/{id}/design/down-conductors/{structureId}")
-    public String saveDownConductors(@PathVariable long id, @PathVariable String structureId,
+    @PostMapping("/sites/{id}/design/down-conductors/{buildingId}")
+    public String saveDownConductors(@PathVariable long id, @PathVariable String buildingId,
             @RequestParam(defaultValue = "") String positions, @RequestParam(required = false) String reset,
             RedirectAttributes redirect) {
         try {
             if (reset != null) {
-                design.resetDownConductors(id, structureId);
+                downConductors.reset(id, buildingId);
             } else {
-                design.saveDownConductors(id, structureId, parsePositions(positions));
+                downConductors.save(id, buildingId, parsePositions(positions));
             }
         } catch (InvalidInputException e) {
             redirect.addFlashAttribute("downError", e.getMessage());

@@ -15,8 +15,6 @@ import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.engine.design.AngleCoverage;
 import org.lpzplanner.engine.design.BondingRoutes;
 import org.lpzplanner.engine.design.AngleMethodCheck;
-import org.lpzplanner.engine.design.DownConductorLayout;
-import org.lpzplanner.engine.design.DownConductorPlan;
 import org.lpzplanner.engine.design.MeshFaceResult;
 import org.lpzplanner.engine.design.MeshMethodCheck;
 import org.lpzplanner.engine.design.SeparationDistance;
@@ -47,8 +45,8 @@ import tools.jackson.databind.JsonNode;
 
 /**
  * The design of a stored site: proposals (run by {@link ProposalJobs}) and their acceptance into
- * the site file, the angle and mesh method cross-checks, down-conductors (planned, or as edited),
- * separation distances and the bill of quantities.
+ * the site file, the angle and mesh method cross-checks, separation distances and the bill of
+ * quantities, both over the site's down-conductors ({@link DownConductorService}).
  */
 @Service
 public class DesignService {
@@ -64,10 +62,13 @@ public class DesignService {
     private final ProposalJobs jobs;
     private final Clock clock;
     private final KeepOutAreaService storedKeepOut;
+    private final DownConductorService downConductors;
 
     public DesignService(SiteService sites, AirTerminationService parts, AnalysisService analyses, ReviewService reviews,
-            DesignRepository store, ProposalJobs jobs, Clock clock, KeepOutAreaService storedKeepOut) {
+            DesignRepository store, ProposalJobs jobs, Clock clock, KeepOutAreaService storedKeepOut,
+            DownConductorService downConductors) {
         this.storedKeepOut = storedKeepOut;
+        this.downConductors = downConductors;
         this.sites = sites;
         this.parts = parts;
         this.analyses = analyses;
@@ -279,94 +280,27 @@ public class DesignService {
         return out;
     }
 
-    /** Down-conductors of one structure: planned or edited positions (local metres). */
-    public record DownConductors(String structureId, String name, double perimeter, double typicalSpacing,
-            int required, List<double[]> positions, boolean edited, double height, List<String> warnings) {
-    }
-
-    public List<DownConductors> downConductors(long siteId) {
-        StoredSite stored = sites.get(siteId);
-        Site site = sites.document(stored).site();
-        return downConductors(site, stored, store.downConductors(siteId));
-    }
-
-    private List<DownConductors> downConductors(Site site, StoredSite stored, Map<String, List<double[]>> edited) {
-        double spacing = stored.sphere().level().downConductorSpacing();
-        List<DownConductorLayout> plans = DownConductorPlan.planSite(site, stored.sphere());
-        List<DownConductors> out = new ArrayList<>();
-        for (int i = 0; i < site.structures().size(); i++) {
-            Structure s = site.structures().get(i);
-            DownConductorLayout planned = plans.get(i);
-            int required = Math.max(2, (int) Math.ceil(planned.perimeter() / spacing - 1e-9));
-            List<double[]> positions = new ArrayList<>();
-            boolean isEdited = edited.containsKey(s.id());
-            if (isEdited) {
-                positions.addAll(edited.get(s.id()));
-            } else {
-                for (Coordinate c : planned.positions()) {
-                    positions.add(new double[] {round(c.x), round(c.y)});
-                }
-            }
-            List<String> warnings = new ArrayList<>();
-            if (positions.size() < required) {
-                warnings.add(String.format(Locale.ROOT, "%d down-conductors, fewer than the %d a perimeter of %.1f m needs at"
-                        + " %.0f m typical spacing", positions.size(), required, planned.perimeter(), spacing));
-            }
-            if (!isEdited && planned.exceedsTypicalSpacing()) {
-                warnings.add(String.format(Locale.ROOT, "one gap along the outline is %.1f m, longer than the typical"
-                        + " spacing of %.0f m", planned.largestSpacing(), spacing));
-            }
-            out.add(new DownConductors(s.id(), s.name() == null ? s.id() : s.name(), round(planned.perimeter()), spacing,
-                    required, positions, isEdited, s.height(), warnings));
-        }
-        return out;
-    }
-
-    /** Stores edited positions of one structure's down-conductors (at least two). */
-    public List<DownConductors> saveDownConductors(long siteId, String structureId, List<double[]> positions) {
-        StoredSite stored = sites.get(siteId);
-        Site site = sites.document(stored).site();
-        Structure structure = site.structures().stream().filter(s -> s.id().equals(structureId)).findFirst()
-                .orElseThrow(() -> new SiteNotFoundException(siteId, "site " + siteId + " has no structure \"" + structureId + "\""));
-        if (positions == null || positions.size() < 2) {
-            throw new InvalidInputException("positions", "a structure needs at least two down-conductors"
-                    + " (IEC 62305-3 5.3); give two or more [x, y] positions");
-        }
-        if (positions.size() > 500) {
-            throw new InvalidInputException("positions", "at most 500 down-conductors per structure");
-        }
-        Geometry near = structure.footprint().getBoundary().buffer(2.0);
-        var gf = new org.locationtech.jts.geom.GeometryFactory();
-        for (int i = 0; i < positions.size(); i++) {
-            double[] p = positions.get(i);
-            if (p == null || p.length != 2 || !Double.isFinite(p[0]) || !Double.isFinite(p[1])) {
-                throw new InvalidInputException("positions[" + i + "]", "every position must be [x, y] in local metres");
-            }
-            if (!near.contains(gf.createPoint(new Coordinate(p[0], p[1])))) {
-                throw new InvalidInputException("positions[" + i + "]", "the position is more than 2 m from the outline of "
-                        + structureId);
-            }
-        }
-        store.saveDownConductors(siteId, structureId, positions, clock.instant());
-        return downConductors(siteId);
-    }
-
-    public List<DownConductors> resetDownConductors(long siteId, String structureId) {
-        sites.get(siteId);
-        store.resetDownConductors(siteId, structureId);
-        return downConductors(siteId);
-    }
-
     /**
-     * One separation distance check. {@code length} is l, {@code route} says how it was found
+     * One separation distance check, at the worst point of the system ({@code lpsPoint}, on part
+     * {@code partId}: a rod, conductor or down-conductor; where distance − s is least), with the
+     * installation's point nearest it. {@code length} is l there, {@code route} says how it was found
      * ({@code routeBasis}: drawn, assumed-links, grounded-part or none), {@code straightAcross} the
-     * metres of it assumed straight across the roof where no conductor is drawn; {@code status} is
-     * "passes", "fails", "not confirmed" (no down-conductor reached, l only a lower bound) or
-     * "connected" (a part touches the object).
+     * metres of it assumed straight across the roof where no conductor is drawn; {@code downConductors}
+     * the number the current shares between and {@code sharedBy} which (labels as in the
+     * down-conductor list; parts standing on the ground by id), giving {@code kc}; {@code status} is
+     * "passes", "fails", "not confirmed" (it clears, but l is only a lower bound somewhere: at the worst
+     * point, or on the part {@code unconfirmedPartId} that has no drawn route) or "connected" (a part
+     * touches the object).
      */
-    public record Separation(String kind, String name, double[] installation, double[] nearestLps, String partId,
+    public record Separation(String kind, String name, double[] installation, double[] lpsPoint, String partId,
             double actual, double length, String routeBasis, String route, double straightAcross, int downConductors,
-            String material, double required, boolean passes, String status, String note) {
+            List<String> sharedBy, double kc, String material, double required, boolean passes, String status,
+            String unconfirmedPartId, String note) {
+
+        /** "0.66 (D1, D2)": k<sub>c</sub> and the down-conductors behind it. */
+        public String kcText() {
+            return String.format(Locale.ROOT, "%.2f", kc) + (sharedBy.isEmpty() ? "" : " (" + String.join(", ", sharedBy) + ")");
+        }
     }
 
     /** Height of the equipotential bonding the separation distances run to: ground level (sites store no other). */
@@ -382,8 +316,8 @@ public class DesignService {
                     SeparationDistance.Material.valueOf(i.material())));
         }
         List<SeparationSurvey.Check> checks = SeparationSurvey.survey(site, SiteSurfaceBuilder.build(site),
-                stored.sphere().level(), bondingDownConductors(downConductors(site, stored, store.downConductors(siteId))),
-                metals, BONDING_LEVEL);
+                stored.sphere().level(), DownConductorService.forRoutes(downConductors.list(site, stored)), metals,
+                BONDING_LEVEL);
         List<Separation> out = new ArrayList<>();
         int metal = 0;
         for (SeparationSurvey.Check c : checks) {
@@ -396,19 +330,9 @@ public class DesignService {
         return out;
     }
 
-    /** Every down-conductor with its structure and that structure's count, as the l routes need them. */
-    static List<BondingRoutes.DownConductor> bondingDownConductors(List<DownConductors> downs) {
-        List<BondingRoutes.DownConductor> out = new ArrayList<>();
-        for (DownConductors d : downs) {
-            for (double[] p : d.positions()) {
-                out.add(new BondingRoutes.DownConductor(d.structureId(), new Coordinate(p[0], p[1]), d.positions().size()));
-            }
-        }
-        return out;
-    }
-
     private static Separation separation(String kind, SeparationSurvey.Check c) {
         BondingRoutes.Route route = c.route();
+        SeparationSurvey.Point u = c.unconfirmed();
         String note;
         if (c.connected()) {
             note = "a part touches it: it is connected to the air-termination, so it must be fit to carry lightning"
@@ -418,17 +342,29 @@ public class DesignService {
                     + " route can be: l is a lower bound, so the check can fail but not pass until the route is drawn";
         } else if (route.basis() == BondingRoutes.Basis.NONE) {
             note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
+        } else if (c.status() == SeparationSurvey.Status.NOT_CONFIRMED) {
+            note = String.format(Locale.ROOT, "it clears s at every point, but %s has no drawn route to a down-conductor"
+                    + " (there l is at least %.2f m): not confirmed until its route is drawn", u.partId(),
+                    u.result().length());
         } else {
             note = "l along the drawn air-termination and down the down-conductor";
         }
-        String status = c.connected() ? "connected" : c.passes() ? "passes"
-                : c.result().actual() < c.result().required() ? "fails" : "not confirmed";
+        if (c.status() == SeparationSurvey.Status.FAILS && c.result().actual() >= c.result().required()) {
+            note += String.format(Locale.ROOT, "; within %.0f mm of s, which counts as failing",
+                    SeparationSurvey.TOLERANCE * 1000);
+        }
+        if (!c.connected()) {
+            note = "worst point of the system (on " + c.partId() + "): " + note;
+        }
+        String status = c.status().name().toLowerCase(Locale.ROOT).replace('_', ' ');
         Coordinate p = c.installation(), q = c.lpsPoint();
         return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
                 new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), round(c.result().actual()),
                 round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
-                route.describe(), round(route.assumedStraight()), route.downConductors(), c.material().name(),
-                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status, note);
+                route.describe(), round(route.assumedStraight()), route.downConductors(), route.sharedBy(),
+                SeparationDistance.kc(route.downConductors()), c.material().name(),
+                Math.round(c.result().required() * 1000) / 1000.0, c.passes(), status,
+                u == null ? null : u.partId(), note);
     }
 
     public DesignRepository.Installation addInstallation(long siteId, String name, Double x, Double y, Double z,
@@ -474,7 +410,7 @@ public class DesignService {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
         List<Coordinate> positions = new ArrayList<>();
-        for (DownConductors d : downConductors(site, stored, store.downConductors(siteId))) {
+        for (DownConductorService.DownConductors d : downConductors.list(site, stored)) {
             d.positions().forEach(p -> positions.add(new Coordinate(p[0], p[1])));
         }
         return BillOfQuantities.table(BillOfQuantities.compute(site, positions, fixingsPerMetre));

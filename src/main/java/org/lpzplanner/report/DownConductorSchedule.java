@@ -6,12 +6,12 @@ import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
 import org.lpzplanner.engine.design.DownConductorLayout;
-import org.lpzplanner.engine.model.Structure;
 
 /**
- * Down-conductors per structure: the designer's edited positions where the site stores them, else
+ * Down-conductors per building (structures whose footprints overlap or touch, on the outline of the
+ * whole): the designer's edited positions where the site stores them, else
  * {@link org.lpzplanner.engine.design.DownConductorPlan} at the level's typical spacing, exposed
- * corners first; their positions numbered D1, D2, … as on the plan.
+ * corners first; their positions numbered D1, D2, … as on the plan and the design page.
  */
 final class DownConductorSchedule {
 
@@ -27,33 +27,38 @@ final class DownConductorSchedule {
         int number = 0;
         boolean anyEdited = false;
         for (int i = 0; i < facts.downConductors().size(); i++) {
-            Structure s = facts.site().structures().get(i);
             DownConductorLayout layout = facts.downConductors().get(i);
+            String name = layout.building().name();
             boolean edited = facts.edited(i);
             anyEdited |= edited;
-            int required = Math.max(2, (int) Math.ceil(layout.perimeter() / layout.typicalSpacing() - 1e-9));
-            summary.add(List.of(s.name(), edited ? "edited" : "planned", metres(layout.perimeter()),
+            int required = layout.required();
+            summary.add(List.of(name, edited ? "edited" : "planned", metres(layout.perimeter()),
                     metres(layout.typicalSpacing()), layout.count()
                             + (layout.count() < required ? " (fewer than " + required + ": check)" : ""),
                     metres(layout.meanSpacing()), metres(layout.largestSpacing()) + overTypical(layout)));
             for (Coordinate c : layout.positions()) {
                 number++;
-                positions.add(List.of("D" + number, s.name(), metres(c.x), metres(c.y)));
+                positions.add(List.of("D" + number, name, metres(c.x), metres(c.y)));
             }
         }
         List<String> notes = new ArrayList<>();
-        notes.add("At least two per structure, no further apart than the typical spacing of the level"
-                + " (IEC 62305-3:2010 5.3 and Table 4). Planned: outside corners the sphere reaches on the bare"
-                + " structures first. Courtyards get none here; routes, access and fixings are for the designer.");
+        notes.add("Per building: structures whose footprints overlap or touch are one building, with its"
+                + " down-conductors on the outline of the whole (none on a wall between its parts). At least two, no"
+                + " further apart than the typical spacing of the level (IEC 62305-3:2010 5.3 and Table 4); a courtyard"
+                + " of more than 30 m perimeter gets its own at that spacing (IEC 62305-3:2010 Annex E, from memory)."
+                + " Planned: outside corners the sphere reaches on the bare structures first. Routes, access and"
+                + " fixings are for the designer.");
         if (anyEdited) {
             notes.add("Edited: the designer's positions, " + facts.design().asStored() + "; they belong to the"
-                    + " site, not to this revision, and print as they stand whenever the revision is printed.");
+                    + " site, not to this revision, and print as they stand whenever the revision is printed. Positions"
+                    + " stored for any structure of a building count for the building; one more than 2 m from the"
+                    + " outline of the whole (by a wall now inside it) is left out.");
         }
         return List.of(
-                new Schedule(TITLE, List.of("Structure", "Positions", "Perimeter (m)", "Typical spacing (m)",
+                new Schedule(TITLE, List.of("Building", "Positions", "Perimeter (m)", "Typical spacing (m)",
                         "Count", "Mean spacing (m)", "Largest gap (m)"), List.of(2.0, 0.8, 1.0, 1.0, 1.0, 1.0, 1.4),
                         summary, notes),
-                new Schedule(POSITIONS_TITLE, List.of("No.", "Structure", "x (m)", "y (m)"),
+                new Schedule(POSITIONS_TITLE, List.of("No.", "Building", "x (m)", "y (m)"),
                         List.of(0.6, 2.6, 1.0, 1.0), positions, List.of()));
     }
 

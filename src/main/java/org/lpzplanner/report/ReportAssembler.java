@@ -145,7 +145,7 @@ public final class ReportAssembler {
         long bands = facts.items().stream().filter(i -> i.kind().equals("facade-band")).count();
         double roofArea = facts.stored().roofAreas().values().stream().mapToDouble(Double::doubleValue).sum();
         int downConductors = facts.downConductors().stream().mapToInt(d -> d.count()).sum();
-        long editedStructures = java.util.stream.IntStream.range(0, facts.downConductors().size())
+        long editedBuildings = java.util.stream.IntStream.range(0, facts.downConductors().size())
                 .filter(facts::edited).count();
         blocks.add(new ReportBlock.Facts(List.of(
                 new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
@@ -154,10 +154,10 @@ public final class ReportAssembler {
                         + " facade bands; " + facts.acceptedCount() + " accepted"),
                 new ReportBlock.Fact("Air-termination parts", facts.partNumbers().size() + " ("
                         + facts.stored().intercepting().size() + " intercepting)"),
-                new ReportBlock.Fact("Down-conductors", downConductors + (editedStructures == 0
+                new ReportBlock.Fact("Down-conductors", downConductors + (editedBuildings == 0
                         ? " planned at the level's typical spacing"
-                        : ", placed by the designer on " + editedStructures + " of "
-                                + facts.downConductors().size() + " structures")))));
+                        : ", placed by the designer on " + editedBuildings + " of "
+                                + facts.downConductors().size() + " buildings")))));
         blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
                 + " air-termination parts, exposed items, down-conductors and separation distances; bill of"
                 + " quantities;" + (appendix ? " appendix (risk estimate);" : "") + " review and approval."));

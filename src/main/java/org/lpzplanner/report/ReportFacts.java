@@ -8,6 +8,7 @@ import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.lpzplanner.analysis.ReviewItems;
+import org.lpzplanner.engine.design.Building;
 import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.design.DownConductorPlan;
 import org.lpzplanner.engine.envelope.EnvelopeField;
@@ -29,8 +30,9 @@ import org.lpzplanner.engine.model.Structure;
  * @param field           the protection envelope at the revision's sphere and resolution
  * @param items           the review items of the stored result, numbered as the review list numbers them
  * @param partNumbers     "A1", "A2", … by part id: rods in file order, then conductors
- * @param downConductors  the down-conductors of each structure, in structure order: the designer's
- *                        edited positions where the site stores them, else the planned layout
+ * @param downConductors  the down-conductors of each building (structures whose footprints overlap or
+ *                        touch), in order of their first structures: the designer's edited positions
+ *                        where the site stores them, else the planned layout
  * @param design          the site's stored design data (edited down-conductors, metal installations)
  */
 public record ReportFacts(ReportSource source, Site site, SiteSurface surface, EnvelopeField field,
@@ -54,21 +56,22 @@ public record ReportFacts(ReportSource source, Site site, SiteSurface surface, E
         for (Conductor c : site.conductors()) {
             numbers.put(c.id(), "A" + (numbers.size() + 1));
         }
-        // planned as the design page plans them, so the report and the page show the same positions
+        // planned as the design page plans them, so the report and the page show the same positions; edits
+        // stored per structure are read for the building as a whole, as the page reads them
         List<DownConductorLayout> layouts = new ArrayList<>(DownConductorPlan.planSite(site, source.sphere()));
         for (int i = 0; i < layouts.size(); i++) {
-            Structure s = site.structures().get(i);
-            List<Coordinate> edited = design.downConductors().get(s.id());
-            if (edited != null && !edited.isEmpty()) {
-                layouts.set(i, DownConductorPlan.edited(s, layouts.get(i).typicalSpacing(), edited));
+            Building b = layouts.get(i).building();
+            Building.StoredPositions edited = b.storedPositions(design.downConductors());
+            if (edited.edited()) {
+                layouts.set(i, DownConductorPlan.edited(b, layouts.get(i).typicalSpacing(), edited.positions()));
             }
         }
         return new ReportFacts(source, site, surface, field, stored, stored.items(), numbers, layouts, design);
     }
 
-    /** True when the designer's edited positions stand for the structure at this index. */
-    public boolean edited(int structure) {
-        return design.downConductors().containsKey(site.structures().get(structure).id());
+    /** True when the designer's edited positions stand for the building at this index of {@link #downConductors}. */
+    public boolean edited(int building) {
+        return downConductors.get(building).building().storedPositions(design.downConductors()).edited();
     }
 
     /** The number of items a designer accepted. */

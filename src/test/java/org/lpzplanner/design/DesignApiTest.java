@@ -46,13 +46,29 @@ class DesignApiTest {
     @Autowired
     SiteService sites;
 
+    @Autowired
+    DesignRepository store;
+
+    /** Two 30 × 10 m flat-roofed parts, 10 m high, overlapping in a 10 × 10 m corner: an L (invented). */
+    private static final String ELL = """
+            {"type": "FeatureCollection", "name": "Test L", "coordinates": "local-metres", "features": [
+              {"type": "Feature", "properties": {"kind": "structure", "name": "East arm", "height": 10, "roof": "flat"},
+               "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [30, 0], [30, 10], [0, 10], [0, 0]]]}},
+              {"type": "Feature", "properties": {"kind": "structure", "name": "North arm", "height": 10, "roof": "flat"},
+               "geometry": {"type": "Polygon", "coordinates": [[[0, 0], [10, 0], [10, 30], [0, 30], [0, 0]]]}}
+            ]}""";
+
     private long upload() throws Exception {
         return upload("III");
     }
 
     private long upload(String level) throws Exception {
+        return upload(BLOCK, level);
+    }
+
+    private long upload(String file, String level) throws Exception {
         String body = mvc.perform(multipart("/api/sites").file(new MockMultipartFile("file", "block.geojson",
-                "application/geo+json", BLOCK.getBytes(StandardCharsets.UTF_8))).param("level", level))
+                "application/geo+json", file.getBytes(StandardCharsets.UTF_8))).param("level", level))
                 .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
         return JSON.readTree(body).path("id").asLong();
     }
@@ -131,7 +147,7 @@ class DesignApiTest {
     @Test
     void downConductorsArePlannedEditedAndReset() throws Exception {
         long id = upload();
-        JsonNode planned = send(get("/api/sites/" + id + "/down-conductors"), 200).path("structures").get(0);
+        JsonNode planned = send(get("/api/sites/" + id + "/down-conductors"), 200).path("buildings").get(0);
         // perimeter 2 · (30 + 12) = 84 m at class III, typical spacing 15 m [IEC 62305-3:2010 Table 4]:
         // ⌈84 / 15⌉ = 6
         assertThat(planned.path("perimeter").asDouble()).isCloseTo(84, within(1e-9));
@@ -139,26 +155,66 @@ class DesignApiTest {
         assertThat(planned.path("positions").size()).isEqualTo(6);
         assertThat(planned.path("edited").asBoolean()).isFalse();
 
-        JsonNode edited = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString())
+        JsonNode edited = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("buildingId").asString())
                 .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0], [30, 12]]}"), 200)
-                .path("structures").get(0);
+                .path("buildings").get(0);
         assertThat(edited.path("edited").asBoolean()).isTrue();
         assertThat(edited.path("positions").size()).isEqualTo(2);
         assertThat(edited.path("warnings").get(0).asString()).contains("fewer than the 6");
 
-        JsonNode one = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString())
+        JsonNode one = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("buildingId").asString())
                 .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0]]}"), 400);
         assertThat(one.path("error").asString()).contains("at least two");
-        JsonNode far = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString())
+        JsonNode far = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("buildingId").asString())
                 .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0], [100, 100]]}"), 400);
         assertThat(far.path("field").asString()).isEqualTo("positions[1]");
         send(put("/api/sites/" + id + "/down-conductors/nosuch").contentType(MediaType.APPLICATION_JSON)
                 .content("{\"positions\": [[0, 0], [30, 12]]}"), 404);
 
-        JsonNode reset = send(delete("/api/sites/" + id + "/down-conductors/" + planned.path("structureId").asString()), 200)
-                .path("structures").get(0);
+        JsonNode reset = send(delete("/api/sites/" + id + "/down-conductors/" + planned.path("buildingId").asString()), 200)
+                .path("buildings").get(0);
         assertThat(reset.path("edited").asBoolean()).isFalse();
         assertThat(reset.path("positions").size()).isEqualTo(6);
+    }
+
+    @Test
+    void overlappingStructuresShareOneSetOfDownConductorsAndEarlierEditsPerStructureStayReadable() throws Exception {
+        long id = upload(ELL, "III");
+        JsonNode buildings = send(get("/api/sites/" + id + "/down-conductors"), 200).path("buildings");
+        // one building: the union is the L of perimeter 30 + 10 + 20 + 20 + 10 + 30 = 120 m; class III typical
+        // spacing 15 m [IEC 62305-3:2010 Table 4]: ⌈120 / 15⌉ = 8 [IEC 62305-3:2010 5.3]
+        assertThat(buildings.size()).isEqualTo(1);
+        JsonNode ell = buildings.get(0);
+        assertThat(ell.path("name").asString()).isEqualTo("East arm + North arm");
+        assertThat(ell.path("structureIds").size()).isEqualTo(2);
+        String east = ell.path("structureIds").get(0).asString(), north = ell.path("structureIds").get(1).asString();
+        assertThat(ell.path("buildingId").asString()).isEqualTo(east);
+        assertThat(ell.path("perimeter").asDouble()).isCloseTo(120, within(1e-9));
+        assertThat(ell.path("required").asInt()).isEqualTo(8);
+        assertThat(ell.path("positions").size()).isEqualTo(8);
+        assertThat(ell.path("labels").get(7).asString()).isEqualTo("D8");
+
+        // positions stored per structure by an earlier release: read for the building as a whole; (0, 0) stored
+        // under both counts once; (5, 10) stood on the east arm's north wall, now 5 m inside the L: left out
+        store.saveDownConductors(id, east, java.util.List.of(new double[] {0, 0}, new double[] {30, 0},
+                new double[] {30, 10}, new double[] {5, 10}), java.time.Instant.now());
+        store.saveDownConductors(id, north, java.util.List.of(new double[] {0, 0}, new double[] {10, 30}),
+                java.time.Instant.now());
+        JsonNode read = send(get("/api/sites/" + id + "/down-conductors"), 200).path("buildings").get(0);
+        assertThat(read.path("edited").asBoolean()).isTrue();
+        assertThat(read.path("positions").size()).isEqualTo(4);
+        assertThat(read.path("warnings").toString()).contains("(5.00, 10.00)").contains("fewer than the 8");
+
+        // saved through either structure's id: stored once, under the building's id
+        send(put("/api/sites/" + id + "/down-conductors/" + north).contentType(MediaType.APPLICATION_JSON)
+                .content("{\"positions\": [[0, 0], [30, 0], [30, 10], [10, 30], [0, 30]]}"), 200);
+        assertThat(store.downConductors(id).keySet()).containsExactly(east);
+        JsonNode inside = send(put("/api/sites/" + id + "/down-conductors/" + east).contentType(MediaType.APPLICATION_JSON)
+                .content("{\"positions\": [[0, 0], [5, 5]]}"), 400);
+        assertThat(inside.path("field").asString()).isEqualTo("positions[1]");
+        assertThat(send(delete("/api/sites/" + id + "/down-conductors/" + north), 200).path("buildings").get(0)
+                .path("edited").asBoolean()).isFalse();
+        assertThat(store.downConductors(id)).isEmpty();
     }
 
     @Test
@@ -184,13 +240,17 @@ class DesignApiTest {
                     .isEqualTo(drawn && c.path("actual").asDouble() >= c.path("required").asDouble());
         }
         JsonNode pipe = checks.get(1);
-        // nearest LPS point to (15, 8, 9): the rod shaft (15, 6, 8..10) at z = 9, 2 m away
+        // worst point for (15, 8, 9): on the rod shaft (15, 6, 8..10), 2 m away level with the pipe and a little
+        // higher, where l is longer: at u = k·a / √(1 − k²) = 3.5 cm above [closed form, a = 2 m,
+        // k = 0.04 · 0.44 = 0.0176], √(4 + u²) = 2.0003 m away
         assertThat(pipe.path("actual").asDouble()).isCloseTo(2.0, within(0.01));
-        // l: 1 m down the rod to its foot (15, 6, 8), no conductor drawn, so straight across the roof to
+        assertThat(pipe.path("lpsPoint").get(2).asDouble()).isBetween(9.0, 9.2);
+        // l: z − 8 m down the rod to its foot (15, 6, 8), no conductor drawn, so straight across the roof to
         // the nearest planned down-conductor and 8 m down the wall; that down-conductor is where the
         // route ends, so the straight part is its 3D distance from the foot [closed form]
         assertThat(pipe.path("routeBasis").asString()).isEqualTo("assumed-links");
-        assertThat(pipe.path("length").asDouble()).isCloseTo(1 + pipe.path("straightAcross").asDouble() + 8, within(0.02));
+        assertThat(pipe.path("length").asDouble()).isCloseTo(pipe.path("lpsPoint").get(2).asDouble() - 8
+                + pipe.path("straightAcross").asDouble() + 8, within(0.02));
         assertThat(pipe.path("route").asString()).contains("straight across the roof where no conductor is drawn");
 
         JsonNode noName = send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)

@@ -20,6 +20,7 @@ import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.DownConductorService;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.risk.RiskService;
 import org.lpzplanner.sites.AirTerminationService;
@@ -52,6 +53,8 @@ class ReportSiteDataTest {
     @Autowired
     DesignService design;
     @Autowired
+    DownConductorService downConductors;
+    @Autowired
     RiskService risk;
     @Autowired
     ReportService reports;
@@ -69,8 +72,8 @@ class ReportSiteDataTest {
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
                         .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1}"))
                 .andExpect(status().isOk());
-        String structure = design.downConductors(id).get(0).structureId();
-        design.saveDownConductors(id, structure, List.of(new double[] {0, 0}, new double[] {80, 0},
+        String building = downConductors.list(id).get(0).buildingId();
+        downConductors.save(id, building, List.of(new double[] {0, 0}, new double[] {80, 0},
                 new double[] {80, 40}, new double[] {0, 40}));
         design.addInstallation(id, "Vent pipe", 5.0, 6.0, 12.0, "CONCRETE_OR_BRICK");
         return id;
@@ -126,22 +129,31 @@ class ReportSiteDataTest {
         assertThat(text).containsPattern("Edited: the designer's positions, as stored for the site on \\d{4}-");
 
         // s = ki·(kc/km)·l [IEC 62305-3:2010 6.3]: ki = 0.04 at level III (Table 10), kc = 0.44 for four
-        // down-conductors (Table 12, simplified), km = 0.5 in concrete or brick (Table 11). Closed form of
-        // l: the installation (5, 6, 12) is nearest the rod (3, 4) at 12 m, √8 = 2.828 m away; 2 m down
-        // the rod to its foot on the 10 m roof, no conductor drawn, so straight across to the top of D1
-        // at the parapet (0, 0, 11): √(3² + 4² + 1²) = √26 m; 11 m down: l = 13 + √26 = 18.099 m,
-        // s = 0.04 · 0.44 / 0.5 · 18.099 = 0.637 m < 2.828 m; the straight link is assumed (the
-        // shortest route there can be), so the row is "not confirmed" rather than a pass
-        double l = 13 + Math.sqrt(26);
-        Matcher m = Pattern.compile("Metal installation: Vent pipe concrete or brick A1 4 ([0-9.]+) 2\\.00 m along drawn"
-                + " air-termination and 5\\.10 m straight across the roof where no conductor is drawn \\(assumed\\) to the"
-                + " down-conductor at \\(0\\.0, 0\\.0\\), 11\\.00 m down it ([0-9.]+) ([0-9.]+) not confirmed").matcher(text);
+        // down-conductors (Table 12, simplified), km = 0.5 in concrete or brick (Table 11): k = 0.0352.
+        // The installation (5, 6, 12) is √8 = 2.828 m in plan from the rod (3, 4), foot on the 10 m roof,
+        // tip 12.5 m. From height z on the rod: z − 10 m down the rod, no conductor drawn, so straight
+        // across to the top of D1 at the parapet (0, 0, 11): √(3² + 4² + 1²) = √26 m; 11 m down:
+        // l = z + 1 + √26. Every point counts; with u = z − 12 the margin √(8 + u²) − k·(13 + √26 + u)
+        // is least, a·√(1 − k²) − k·(13 + √26) with a = √8, at u = k·a / √(1 − k²) = 0.0996 m
+        // [closed form]: l = 18.20 m, s = 0.641 m < 2.830 m; the straight link is assumed (the shortest
+        // route there can be), so the row is "not confirmed" rather than a pass
+        double k = 0.04 * 0.44 / 0.5, a = Math.sqrt(8), u = k * a / Math.sqrt(1 - k * k);
+        // the rod is joined to no down-conductor: kc counts the four of the building its route reaches
+        Matcher m = Pattern.compile("Metal installation: Vent pipe concrete or brick A1 4 \\(D1, D2, D3, D4\\) ([0-9.]+)"
+                + " ([0-9.]+) m along drawn air-termination and 5\\.10 m straight across the roof where no conductor is"
+                + " drawn \\(assumed\\) to down-conductor D1 at \\(0\\.0, 0\\.0\\), 11\\.00 m down it ([0-9.]+) ([0-9.]+)"
+                + " not confirmed").matcher(text);
         assertThat(m.find()).as(text).isTrue();
-        assertThat(Double.parseDouble(m.group(1))).isCloseTo(l, org.assertj.core.data.Offset.offset(0.006));
-        assertThat(Double.parseDouble(m.group(2))).isCloseTo(0.04 * 0.44 / 0.5 * l, org.assertj.core.data.Offset.offset(0.006));
-        assertThat(Double.parseDouble(m.group(3))).isCloseTo(Math.sqrt(8), org.assertj.core.data.Offset.offset(0.006));
+        double l = Double.parseDouble(m.group(1)), along = Double.parseDouble(m.group(2));
+        double s = Double.parseDouble(m.group(3)), d = Double.parseDouble(m.group(4));
+        // printed to the centimetre; the margin is found to 1 mm, its place (where the margin is flat,
+        // curvature 1 / a) to √(2 · 0.001 · a) = 7.5 cm
+        assertThat(d - s).isCloseTo(a * Math.sqrt(1 - k * k) - k * (13 + Math.sqrt(26)), org.assertj.core.data.Offset.offset(0.011));
+        assertThat(along).isCloseTo(2 + u, org.assertj.core.data.Offset.offset(0.08));
+        assertThat(l).isCloseTo(along + Math.sqrt(26) + 11, org.assertj.core.data.Offset.offset(0.011));
+        assertThat(s).isCloseTo(k * l, org.assertj.core.data.Offset.offset(0.006));
         assertThat(text).contains("Metal installations: marked by the designer for the site, as stored for the site on");
-        assertThat(text).contains("Down-conductors 4, placed by the designer on 1 of 1 structures");
+        assertThat(text).contains("Down-conductors 4, placed by the designer on 1 of 1 buildings");
 
         Path dir = Path.of("target/report-pages");
         Files.createDirectories(dir);

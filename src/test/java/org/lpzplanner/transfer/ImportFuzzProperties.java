@@ -87,6 +87,8 @@ class ImportFuzzProperties {
     @Autowired
     DesignService design;
     @Autowired
+    org.lpzplanner.design.DownConductorService downConductors;
+    @Autowired
     CommentService comments;
     @Autowired
     SiteCutService cuts;
@@ -111,8 +113,8 @@ class ImportFuzzProperties {
         reviews.accept(id, reviews.latest(id).orElseThrow().items().get(0).key(), "covered by the steel gutter");
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
                 .content("{\"flashDensity\": \"4\", \"lineCount\": 2}")).andExpect(status().isOk());
-        DesignService.DownConductors planned = design.downConductors(id).get(0);
-        design.saveDownConductors(id, planned.structureId(), planned.positions());
+        org.lpzplanner.design.DownConductorService.DownConductors planned = downConductors.list(id).get(0);
+        downConductors.save(id, planned.buildingId(), planned.positions());
         design.addInstallation(id, "Vent pipe", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
         cuts.save(id, "Quay section", new String[] {"-10", "20", "90.25", "20"});
         comments.comment(id, "Check the gutter bonding");

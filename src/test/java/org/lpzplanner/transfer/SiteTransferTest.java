@@ -54,6 +54,8 @@ class SiteTransferTest {
     @Autowired
     DesignService design;
     @Autowired
+    org.lpzplanner.design.DownConductorService downConductors;
+    @Autowired
     CommentService comments;
     @Autowired
     SiteCutService cuts;
@@ -76,11 +78,11 @@ class SiteTransferTest {
                         + "/risk").contentType(org.springframework.http.MediaType.APPLICATION_JSON)
                         .content("{\"flashDensity\": \"4\", \"location\": \"surrounded_by_higher\", \"lineCount\": 2}"))
                 .andExpect(status().isOk());
-        // design edits: one structure's down-conductors moved, one metal installation marked
-        DesignService.DownConductors planned = design.downConductors(site.id()).get(0);
+        // design edits: one building's down-conductors moved, one metal installation marked
+        org.lpzplanner.design.DownConductorService.DownConductors planned = downConductors.list(site.id()).get(0);
         java.util.List<double[]> moved = new java.util.ArrayList<>(planned.positions());
         moved.set(0, new double[] {moved.get(0)[0] + 0.5, moved.get(0)[1]});
-        design.saveDownConductors(site.id(), planned.structureId(), moved);
+        downConductors.save(site.id(), planned.buildingId(), moved);
         design.addInstallation(site.id(), "Vent pipe \u00e9", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
         cuts.save(site.id(), "Quay \u00e9 section", new String[] {"-10", "20", "90.25", "20"});
         keepOut.save(site.id(), "Skylight \u00e9 north", java.util.List.of(new double[] {10, 30}, new double[] {14.5, 30},
@@ -134,7 +136,7 @@ class SiteTransferTest {
         assertThat(copied.path("comments")).isEmpty();
         // the original keeps its own rows
         assertThat(JSON.readTree(export(id)).path("keepOutAreas")).isEqualTo(original.path("keepOutAreas"));
-        assertThat(design.downConductors(copy).get(0).edited()).isTrue();
+        assertThat(downConductors.list(copy).get(0).edited()).isTrue();
     }
 
     @Test
@@ -176,9 +178,9 @@ class SiteTransferTest {
         assertThat(withoutTimes(beforeTrail(second))).isEqualTo(withoutTimes(beforeTrail(first)));
         assertThat(sites.get(copy).sourceText()).isEqualTo(sites.get(id).sourceText());
         assertThat(reviews.latest(copy).orElseThrow().acceptedCount()).isEqualTo(1);
-        assertThat(design.downConductors(copy).get(0).edited()).isTrue();
-        assertThat(design.downConductors(copy).get(0).positions().get(0))
-                .containsExactly(design.downConductors(id).get(0).positions().get(0));
+        assertThat(downConductors.list(copy).get(0).edited()).isTrue();
+        assertThat(downConductors.list(copy).get(0).positions().get(0))
+                .containsExactly(downConductors.list(id).get(0).positions().get(0));
         assertThat(design.separations(copy)).hasSameSizeAs(design.separations(id));
         assertThat(comments.comments(copy)).hasSize(1);
         assertThat(cuts.cuts(copy)).singleElement().satisfies(c -> {

@@ -2,6 +2,7 @@ package org.lpzplanner.engine.design;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -30,7 +31,17 @@ import org.lpzplanner.engine.geom.SiteSurface;
  * different connected groups. That is the shortest possible connection, so where a route uses it
  * the l it gives is a lower bound; {@link Route#assumedStraight()} says how much of l it is. An
  * unconnected part is not used as a bridge straight back into the group the route came from (that
- * would bypass the group's drawn conductors by two assumptions).
+ * would bypass the group's drawn conductors by two assumptions). A group that the drawn pieces do
+ * connect to a down-conductor is routed along them only: its drawn network is the design.
+ *
+ * <p><b>k<sub>c</sub>.</b> The current shares between the down-conductors that a part's conductor
+ * network joins at roof level [IEC 62305-3:2010 Annex C]: k<sub>c</sub> follows the number of
+ * down-conductors (and parts standing on the ground) of the drawn connected group a point lies in,
+ * not the number the building has. A rod or conductor joined to one down-conductor has
+ * k<sub>c</sub> = 1 whatever else stands on the building. For a group joined to none (its l a lower
+ * bound), the count is the largest the assumed connection could reach: every down-conductor of the
+ * building whose down-conductor its routes end at, so that s stays a lower bound too. The count is
+ * the same at every point of a group.
  *
  * <p>Immutable after construction and thread-safe. Cost: a Dijkstra search over the nodes from all
  * down-conductors at once, O(n²) in the roof-level nodes for the assumed links.
@@ -64,12 +75,19 @@ public final class BondingRoutes {
      * @param length              l, metres
      * @param assumedStraight     of it, metres straight across the roof where no conductor is drawn
      * @param downConductor       of it, metres down the down-conductor (top to bonding level)
-     * @param structureId         the structure whose down-conductor the route takes; null for a mast or none
+     * @param via                 the label of the down-conductor the route takes, or the id of the part
+     *                            standing on the ground; null for none
      * @param downConductorTop    the top of that down-conductor, or the foot of the mast; null for none
-     * @param downConductors      the number of down-conductors of that structure (1 for a mast or none), for k<sub>c</sub>
+     * @param downConductors      the number of down-conductors the current shares between, for k<sub>c</sub>
+     *                            (see the class comment; 1 for none)
+     * @param sharedBy            their labels (parts standing on the ground by their ids), in the order given
      */
-    public record Route(double length, double assumedStraight, double downConductor, Basis basis, String structureId,
-            Coordinate downConductorTop, int downConductors) {
+    public record Route(double length, double assumedStraight, double downConductor, Basis basis, String via,
+            Coordinate downConductorTop, int downConductors, List<String> sharedBy) {
+
+        public Route {
+            sharedBy = List.copyOf(sharedBy);
+        }
 
         /** Metres along the air-termination (drawn pieces and their joints). */
         public double alongAirTermination() {
@@ -78,13 +96,17 @@ public final class BondingRoutes {
 
         /** One line saying how l was found. */
         public String describe() {
+            if (basis == Basis.DRAWN && assumedStraight == 0 && Math.abs(length - downConductor) < 1e-9) {
+                return String.format(Locale.ROOT, "on down-conductor %s at (%.1f, %.1f), %.2f m down it", via,
+                        downConductorTop.x, downConductorTop.y, downConductor);
+            }
             return switch (basis) {
-                case DRAWN -> String.format(Locale.ROOT, "%.2f m along drawn air-termination to the down-conductor at"
-                        + " (%.1f, %.1f), %.2f m down it", alongAirTermination(), downConductorTop.x, downConductorTop.y,
-                        downConductor);
+                case DRAWN -> String.format(Locale.ROOT, "%.2f m along drawn air-termination to down-conductor %s at"
+                        + " (%.1f, %.1f), %.2f m down it", alongAirTermination(), via, downConductorTop.x,
+                        downConductorTop.y, downConductor);
                 case ASSUMED_LINKS -> String.format(Locale.ROOT, "%.2f m along drawn air-termination and %.2f m straight"
-                        + " across the roof where no conductor is drawn (assumed) to the down-conductor at (%.1f, %.1f),"
-                        + " %.2f m down it", alongAirTermination(), assumedStraight, downConductorTop.x,
+                        + " across the roof where no conductor is drawn (assumed) to down-conductor %s at (%.1f, %.1f),"
+                        + " %.2f m down it", alongAirTermination(), assumedStraight, via, downConductorTop.x,
                         downConductorTop.y, downConductor);
                 case GROUNDED_PART -> String.format(Locale.ROOT, "%.2f m down a part standing on the ground at"
                         + " (%.1f, %.1f)", length, downConductorTop.x, downConductorTop.y);
@@ -98,30 +120,37 @@ public final class BondingRoutes {
     public record Piece(String partId, Coordinate a, Coordinate b) {
     }
 
-    /** A down-conductor: its structure, plan position and the number of down-conductors of that structure. */
-    public record DownConductor(String structureId, Coordinate position, int count) {
+    /** A down-conductor as part of the system: its label, its top and the height it runs down to. */
+    public record DownRun(String label, Coordinate top, double bottom) {
     }
 
-    private record Edge(int to, double length) {
+    /**
+     * A down-conductor: its label (as page and report number it, e.g. "D3"), the building whose outline
+     * it stands on and its plan position.
+     */
+    public record DownConductor(String label, String building, Coordinate position) {
     }
 
-    private record Sink(double cost, String structureId, Coordinate top, int count, boolean grounded) {
+    /** Where a route ends: a down-conductor's top (cost: its length down) or the foot of a part on the ground. */
+    private record Sink(double cost, String label, String building, Coordinate top, boolean grounded) {
     }
 
     private final double bondingLevel;
-    private final List<Piece> pieces = new ArrayList<>();
-    private final List<Coordinate> nodes = new ArrayList<>();
-    private final Map<String, Integer> nodeIndex = new HashMap<>();
-    private final List<List<Edge>> edges = new ArrayList<>();
-    private final List<List<double[]>> stops = new ArrayList<>();
+    private final DrawnNetwork net = new DrawnNetwork();
     private final Map<Integer, Sink> sinks = new HashMap<>();
-    private final List<Integer> roofNodes = new ArrayList<>();
+    /** The node of each down-conductor's top, in the order the down-conductors were given (those with a top). */
+    private final List<Integer> tops = new ArrayList<>();
     private double[] dist;
     private double[] assumed;
     private int[] sinkOf;
     /** The group a node's route was in before its last straight link (-1: none), so that no unconnected part bridges back. */
     private int[] cameFrom;
     private int[] group;
+    /** Per group root: the labels of the sinks the drawn group joins (empty: none, its routes are assumed). */
+    private final Map<Integer, List<String>> joined = new HashMap<>();
+    /** Per group root of a group joined to none: the labels its k<sub>c</sub> counts (see class comment). */
+    private final Map<Integer, List<String>> assumedSharing = new HashMap<>();
+    private final Map<String, List<String>> labelsByBuilding = new HashMap<>();
 
     /**
      * @param structureIds   the ids of the site's structures (whose walls carry down-conductors)
@@ -134,33 +163,35 @@ public final class BondingRoutes {
             throw new IllegalArgumentException("the bonding level must be 0 m or more above ground, got " + bondingLevel);
         }
         this.bondingLevel = bondingLevel;
+        for (DownConductor d : downConductors) {
+            labelsByBuilding.computeIfAbsent(d.building(), b -> new ArrayList<>()).add(d.label());
+        }
         for (SiteSurface.PlacedRod r : surface.rods()) {
             Coordinate foot = new Coordinate(r.tip().x, r.tip().y, r.base());
-            addPiece(new Piece(r.rod().id(), foot, r.tip()), r.base() > GROUNDED, false);
+            net.addPiece(new Piece(r.rod().id(), foot, r.tip()), r.base() > GROUNDED, false);
         }
         for (SiteSurface.PlacedConductor c : surface.conductors()) {
             for (int i = 1; i < c.path().size(); i++) {
                 Coordinate a = c.path().get(i - 1), b = c.path().get(i);
                 boolean roof = DownConductorTops.isRoofLeg(surface, a, b);
-                addPiece(new Piece(c.conductor().id(), a, b), roof, roof);
+                net.addPiece(new Piece(c.conductor().id(), a, b), roof, roof);
             }
         }
-        int drawnNodes = nodes.size();
-        List<Integer> tops = new ArrayList<>();
+        int drawnNodes = net.nodes.size();
         for (DownConductor d : downConductors) {
             Coordinate top = DownConductorTops.top(surface, structureIds, d.position());
             if (top == null) {
                 continue;
             }
-            int n = newNode(top);
-            roofNodes.add(n);
+            int n = net.newNode(top);
+            net.roofNodes.add(n);
             tops.add(n);
-            sinks.put(n, new Sink(Math.max(0, top.getZ() - bondingLevel), d.structureId(), top, d.count(), false));
+            sinks.put(n, new Sink(Math.max(0, top.getZ() - bondingLevel), d.label(), d.building(), top, false));
         }
         for (int n = 0; n < drawnNodes; n++) {
-            Coordinate p = nodes.get(n);
+            Coordinate p = net.nodes.get(n);
             if (p.getZ() <= GROUNDED && !sinks.containsKey(n)) {
-                sinks.put(n, new Sink(0, null, p, 1, true));
+                sinks.put(n, new Sink(0, net.partAt(n), null, p, true));
             }
         }
         List<Integer> joining = new ArrayList<>();
@@ -168,21 +199,37 @@ public final class BondingRoutes {
             joining.add(n);
         }
         joining.addAll(tops);
-        join(joining);
-        for (int i = 0; i < pieces.size(); i++) {
-            List<double[]> s = stops.get(i);
-            s.sort((u, v) -> Double.compare(u[0], v[0]));
-            double length = pieces.get(i).a().distance3D(pieces.get(i).b());
-            for (int k = 1; k < s.size(); k++) {
-                link((int) s.get(k - 1)[1], (int) s.get(k)[1], length * (s.get(k)[0] - s.get(k - 1)[0]));
-            }
-        }
+        net.join(joining);
+        net.linkAlongPieces();
         search();
     }
 
-    /** The drawn pieces of the air-termination, for finding the point nearest an installation. */
+    /** The drawn pieces of the air-termination (rods and conductor legs), in the order {@link #at} numbers them. */
     public List<Piece> pieces() {
-        return List.copyOf(pieces);
+        return List.copyOf(net.pieces);
+    }
+
+    /** The down-conductors, each from its top straight down to the bonding level, in the order {@link #down} numbers them. */
+    public List<DownRun> downRuns() {
+        List<DownRun> out = new ArrayList<>();
+        for (int n : tops) {
+            Sink sink = sinks.get(n);
+            out.add(new DownRun(sink.label(), sink.top(), Math.min(bondingLevel, sink.top().getZ())));
+        }
+        return out;
+    }
+
+    /**
+     * The route of l from a point of a down-conductor at height z: straight down it to the bonding
+     * level (l = z − bonding level, at least 0); k<sub>c</sub> counts the down-conductors its top's
+     * drawn group joins (itself alone when no drawn part reaches its top).
+     */
+    public Route down(int run, double z) {
+        int n = tops.get(run);
+        Sink sink = sinks.get(n);
+        double l = Math.max(0, Math.min(z, sink.top().getZ()) - bondingLevel);
+        List<String> sharing = sharing(n);
+        return new Route(l, 0, l, Basis.DRAWN, sink.label(), sink.top(), Math.max(1, sharing.size()), sharing);
     }
 
     /**
@@ -192,10 +239,19 @@ public final class BondingRoutes {
      * @param point a point on that piece (it is projected onto it)
      */
     public Route from(int piece, Coordinate point) {
-        Piece p = pieces.get(piece);
+        Piece p = net.pieces.get(piece);
+        return at(piece, DrawnNetwork.parameter(p.a(), p.b(), point));
+    }
+
+    /**
+     * The route of l from the point at fraction t ∈ [0, 1] along a piece (a to b, 3D). Along a piece l
+     * changes by at most the distance moved: a route from one point can run along the piece to the
+     * other and on along its route.
+     */
+    public Route at(int piece, double t) {
+        Piece p = net.pieces.get(piece);
         double length = p.a().distance3D(p.b());
-        double t = parameter(p.a(), p.b(), point);
-        List<double[]> s = stops.get(piece);
+        List<double[]> s = net.stops.get(piece);
         int below = 0;
         for (int k = 0; k < s.size(); k++) {
             if (s.get(k)[0] <= t) {
@@ -218,91 +274,39 @@ public final class BondingRoutes {
         if (via < 0 || best == Double.POSITIVE_INFINITY) {
             Coordinate q = new Coordinate(p.a().x + t * (p.b().x - p.a().x), p.a().y + t * (p.b().y - p.a().y),
                     p.a().getZ() + t * (p.b().getZ() - p.a().getZ()));
-            return new Route(Math.max(0, q.getZ() - bondingLevel), 0, 0, Basis.NONE, null, null, 1);
+            return new Route(Math.max(0, q.getZ() - bondingLevel), 0, 0, Basis.NONE, null, null, 1, List.of());
         }
         Sink sink = sinks.get(sinkOf[via]);
-        Basis basis = sink.grounded() ? Basis.GROUNDED_PART : assumed[via] > 1e-9 ? Basis.ASSUMED_LINKS : Basis.DRAWN;
+        List<String> sharing = sharing(via);
+        Basis basis = sink.grounded() && assumed[via] <= 1e-9 ? Basis.GROUNDED_PART
+                : assumed[via] > 1e-9 ? Basis.ASSUMED_LINKS : Basis.DRAWN;
         double down = sink.grounded() ? 0 : sink.cost();
-        return new Route(offset + dist[via], assumed[via], down, basis, sink.structureId(), sink.top(), sink.count());
+        return new Route(offset + dist[via], assumed[via], down, basis, sink.label(), sink.top(),
+                Math.max(1, sharing.size()), sharing);
     }
 
-    // ---- construction ----
-
-    private void addPiece(Piece piece, boolean footOnRoof, boolean bothOnRoof) {
-        int a = node(piece.a());
-        int b = node(piece.b());
-        if (footOnRoof) {
-            roofNodes.add(a);
-        }
-        if (bothOnRoof) {
-            roofNodes.add(b);
-        }
-        pieces.add(piece);
-        List<double[]> s = new ArrayList<>();
-        s.add(new double[] {0, a});
-        s.add(new double[] {1, b});
-        stops.add(s);
+    /**
+     * The down-conductors k<sub>c</sub> counts at a node: those its drawn group joins, or for a group
+     * joined to none, every down-conductor of the buildings its routes end at (see class comment).
+     */
+    private List<String> sharing(int node) {
+        List<String> own = joined.getOrDefault(group[node], List.of());
+        return own.isEmpty() ? assumedSharing.getOrDefault(group[node], List.of()) : own;
     }
 
-    /** The node at this point (shared by pieces meeting within a millimetre). */
-    private int node(Coordinate p) {
-        String key = String.format(Locale.ROOT, "%.3f|%.3f|%.3f", p.x, p.y, p.getZ());
-        Integer n = nodeIndex.get(key);
-        if (n == null) {
-            n = newNode(p);
-            nodeIndex.put(key, n);
-        }
-        return n;
-    }
 
-    private int newNode(Coordinate p) {
-        nodes.add(new Coordinate(p.x, p.y, p.getZ()));
-        edges.add(new ArrayList<>());
-        return nodes.size() - 1;
-    }
-
-    private void link(int u, int v, double length) {
-        if (u == v) {
-            return;
-        }
-        edges.get(u).add(new Edge(v, length));
-        edges.get(v).add(new Edge(u, length));
-    }
-
-    /** Joins each node to the pieces passing near it, splitting them there. */
-    private void join(List<Integer> joining) {
-        for (int n : joining) {
-            Coordinate p = nodes.get(n);
-            for (int i = 0; i < pieces.size(); i++) {
-                Piece piece = pieces.get(i);
-                List<double[]> s = stops.get(i);
-                if ((int) s.get(0)[1] == n || (int) s.get(1)[1] == n) {
-                    continue;
-                }
-                double t = parameter(piece.a(), piece.b(), p);
-                Coordinate q = new Coordinate(piece.a().x + t * (piece.b().x - piece.a().x),
-                        piece.a().y + t * (piece.b().y - piece.a().y), piece.a().getZ() + t * (piece.b().getZ() - piece.a().getZ()));
-                if (Math.hypot(q.x - p.x, q.y - p.y) > JOIN_REACH || Math.abs(q.getZ() - p.getZ()) > JOIN_RISE) {
-                    continue;
-                }
-                int at;
-                if (q.distance3D(piece.a()) < 1e-3) {
-                    at = (int) s.get(0)[1];
-                } else if (q.distance3D(piece.b()) < 1e-3) {
-                    at = (int) s.get(1)[1];
-                } else {
-                    at = newNode(q);
-                    s.add(new double[] {t, at});
-                }
-                link(n, at, p.distance3D(q));
-            }
-        }
-    }
 
     /** Dijkstra from every sink at once; assumed straight links join roof-level nodes of different groups. */
     private void search() {
-        int count = nodes.size();
-        group = groups(count);
+        int count = net.nodes.size();
+        group = net.groups();
+        for (int n = 0; n < count; n++) {
+            joined.computeIfAbsent(group[n], g -> new ArrayList<>());
+        }
+        // down-conductors in the order given (their tops are numbered after the drawn nodes), then parts on the ground
+        sinks.entrySet().stream().sorted(Comparator.comparing((Map.Entry<Integer, Sink> e) -> e.getValue().grounded())
+                .thenComparing(Map.Entry::getKey))
+                .forEach(e -> joined.get(group[e.getKey()]).add(e.getValue().label()));
         dist = new double[count];
         assumed = new double[count];
         sinkOf = new int[count];
@@ -311,8 +315,8 @@ public final class BondingRoutes {
         Arrays.fill(sinkOf, -1);
         Arrays.fill(cameFrom, -1);
         boolean[] isRoof = new boolean[count];
-        roofNodes.forEach(n -> isRoof[n] = true);
-        int[] roof = roofNodes.stream().distinct().mapToInt(Integer::intValue).toArray();
+        net.roofNodes.forEach(n -> isRoof[n] = true);
+        int[] roof = net.roofNodes.stream().distinct().mapToInt(Integer::intValue).toArray();
         PriorityQueue<double[]> queue = new PriorityQueue<>((u, v) -> Double.compare(u[0], v[0]));
         sinks.forEach((n, s) -> {
             dist[n] = s.cost();
@@ -327,18 +331,32 @@ public final class BondingRoutes {
                 continue;
             }
             done[u] = true;
-            for (Edge e : edges.get(u)) {
+            for (DrawnNetwork.Edge e : net.edges.get(u)) {
                 relax(queue, u, e.to(), e.length(), false);
             }
             if (isRoof[u]) {
-                Coordinate p = nodes.get(u);
+                Coordinate p = net.nodes.get(u);
                 for (int v : roof) {
-                    if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v]) {
-                        relax(queue, u, v, p.distance3D(nodes.get(v)), true);
+                    // a group joined to a down-conductor keeps its drawn routes: links only lead into groups joined to none
+                    if (group[v] != group[u] && group[v] != cameFrom[u] && !done[v] && joined.get(group[v]).isEmpty()) {
+                        relax(queue, u, v, p.distance3D(net.nodes.get(v)), true);
                     }
                 }
             }
         }
+        for (int n = 0; n < count; n++) {
+            if (joined.get(group[n]).isEmpty() && sinkOf[n] >= 0) {
+                List<String> reach = reachable(sinks.get(sinkOf[n]), sinkOf[n]);
+                assumedSharing.merge(group[n], reach, (a, b) -> a.size() >= b.size() ? a : b);
+            }
+        }
+    }
+
+    /** What an assumed connection to this sink could share the current with: its building's down-conductors, or its own group's. */
+    private List<String> reachable(Sink sink, int node) {
+        List<String> building = sink.building() == null ? List.of() : labelsByBuilding.getOrDefault(sink.building(), List.of());
+        List<String> own = joined.get(group[node]);
+        return building.size() >= own.size() ? building : own;
     }
 
     private void relax(PriorityQueue<double[]> queue, int u, int v, double length, boolean straight) {
@@ -352,43 +370,5 @@ public final class BondingRoutes {
         }
     }
 
-    /** Connected groups of the drawn network (union-find over drawn edges). */
-    private int[] groups(int count) {
-        int[] parent = new int[count];
-        for (int i = 0; i < count; i++) {
-            parent[i] = i;
-        }
-        for (int u = 0; u < count; u++) {
-            for (Edge e : edges.get(u)) {
-                int a = find(parent, u), b = find(parent, e.to());
-                if (a != b) {
-                    parent[a] = b;
-                }
-            }
-        }
-        int[] out = new int[count];
-        for (int i = 0; i < count; i++) {
-            out[i] = find(parent, i);
-        }
-        return out;
-    }
 
-    private static int find(int[] parent, int i) {
-        while (parent[i] != i) {
-            parent[i] = parent[parent[i]];
-            i = parent[i];
-        }
-        return i;
-    }
-
-    /** Fraction along a→b (3D) of the point nearest p, in [0, 1]. */
-    static double parameter(Coordinate a, Coordinate b, Coordinate p) {
-        double vx = b.x - a.x, vy = b.y - a.y, vz = b.getZ() - a.getZ();
-        double len2 = vx * vx + vy * vy + vz * vz;
-        if (len2 == 0) {
-            return 0;
-        }
-        double t = ((p.x - a.x) * vx + (p.y - a.y) * vy + (p.getZ() - a.getZ()) * vz) / len2;
-        return Math.max(0, Math.min(1, t));
-    }
 }

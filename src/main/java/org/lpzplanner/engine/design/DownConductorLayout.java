@@ -4,19 +4,26 @@ import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
 
 /**
- * Planned down-conductors of one structure.
+ * Planned (or edited) down-conductors of one building.
  *
- * @param structureId     the structure
- * @param perimeter       total length of the footprint's outer rings, metres
+ * @param building        the building (its structures and outline)
+ * @param perimeter       total length of the rings that carry down-conductors (outer rings, courtyards
+ *                        over 30 m), metres
  * @param typicalSpacing  the level's typical spacing, metres
- * @param positions       plan points on the outer rings, ring by ring, in ring order
+ * @param required        the count the rule asks for: per ring max(2, ⌈length / typical spacing⌉), summed
+ * @param positions       plan points on those rings, ring by ring, in ring order
  * @param largestSpacing  longest distance along a ring between neighbouring positions, metres
  */
-public record DownConductorLayout(String structureId, double perimeter, double typicalSpacing,
+public record DownConductorLayout(Building building, double perimeter, double typicalSpacing, int required,
         List<Coordinate> positions, double largestSpacing) {
 
     public DownConductorLayout {
         positions = List.copyOf(positions);
+    }
+
+    /** The building's id (its first structure's id). */
+    public String buildingId() {
+        return building.id();
     }
 
     public int count() {

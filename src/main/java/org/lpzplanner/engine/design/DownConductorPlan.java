@@ -16,57 +16,80 @@ import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.engine.model.Structure;
 
 /**
- * Number and positions of down-conductors round a structure [IEC 62305-3:2010 5.3]: at least two,
+ * Number and positions of down-conductors round a building [IEC 62305-3:2010 5.3]: at least two,
  * spread round the perimeter, at exposed corners first, no further apart than the typical spacing of
  * the level (Table 4: 10, 10, 15, 20 m for I to IV).
  *
- * <p><b>Count.</b> Per outer ring of the footprint (each separate part of a multipolygon is its own
- * outline): n = max(2, ⌈perimeter / typical spacing⌉).
+ * <p><b>Outline.</b> Down-conductors stand on the outline of the {@link Building} as a whole: the
+ * union of the footprints of the structures that overlap or touch. A wall between two parts of one
+ * building lies inside it and gets none, and a corner two parts share is counted once.
  *
- * <p><b>Positions.</b> Outside (convex) corners first. When there are more corners than n, the corners
- * nearest the given exposed points are taken; without exposed points the corners are spread: the
- * first outside corner in ring order, then repeatedly the corner farthest along the ring from those
- * already taken (ties in ring order). The remaining positions go into the gaps between chosen
- * positions, each time into the gap whose share would be longest, and are spaced evenly within each
- * gap. Distances are measured along the ring. Because corners stay fixed, an irregular outline can
- * leave one gap longer than the typical spacing although the count suffices on average; the layout
- * reports it ({@link DownConductorLayout#exceedsTypicalSpacing()}) and the designer decides whether
- * to add one.
+ * <p><b>Count.</b> Per outer ring of the outline (each separate part is its own outline):
+ * n = max(2, ⌈perimeter / typical spacing⌉). A courtyard (a hole of the outline) whose perimeter is
+ * more than {@value #COURTYARD_PERIMETER} m gets down-conductors of its own round it the same way
+ * [IEC 62305-3:2010 Annex E, from memory: inner courtyards over 30 m in perimeter get down-conductors
+ * at the typical spacing]; a smaller one gets none.
  *
- * <p><b>Limits.</b> Courtyards (footprint holes) get no down-conductors here; access, windows and
- * the actual conductor routes are for the designer. Stateless and thread-safe.
+ * <p><b>Positions.</b> Outside (convex) corners first — for a courtyard, the corners of the yard.
+ * When there are more corners than n, the corners nearest the given exposed points are taken;
+ * without exposed points the corners are spread: the first corner in ring order, then repeatedly the
+ * corner farthest along the ring from those already taken (ties in ring order). The remaining
+ * positions go into the gaps between chosen positions, each time into the gap whose share would be
+ * longest, and are spaced evenly within each gap. Distances are measured along the ring. Because
+ * corners stay fixed, an irregular outline can leave one gap longer than the typical spacing
+ * although the count suffices on average; the layout reports it
+ * ({@link DownConductorLayout#exceedsTypicalSpacing()}) and the designer decides whether to add one.
+ *
+ * <p><b>Limits.</b> Access, windows and the actual conductor routes are for the designer; a part
+ * rising above another (a tower on a podium) gets no down-conductor on walls standing inside the
+ * building's outline: its conductors run down to the lower roof and on to the outline. Stateless
+ * and thread-safe.
  */
 public final class DownConductorPlan {
+
+    /** A courtyard with a longer perimeter than this, metres, gets down-conductors of its own. */
+    public static final double COURTYARD_PERIMETER = 30;
+
+    /** How far from the outline an edited position may stand, metres. */
+    public static final double EDIT_REACH = 2.0;
 
     private static final double EPS = 1e-9;
 
     private DownConductorPlan() {
     }
 
-    /** Layout for the structure at the level's typical spacing, corners taken in spread order. */
+    /** Layout for one structure on its own at the level's typical spacing, corners taken in spread order. */
     public static DownConductorLayout plan(Structure structure, ProtectionLevel level) {
-        return plan(structure, level.downConductorSpacing(), List.of());
+        return plan(Building.of(structure), level.downConductorSpacing(), List.of());
+    }
+
+    /** Layout for one structure on its own; see {@link #plan(Building, double, List)}. */
+    public static DownConductorLayout plan(Structure structure, double typicalSpacing, List<Coordinate> exposedPoints) {
+        return plan(Building.of(structure), typicalSpacing, exposedPoints);
     }
 
     /**
-     * Layout for the structure at the given typical spacing, preferring the corners nearest
+     * Layout for the building at the given typical spacing, preferring the corners nearest
      * {@code exposedPoints} (may be empty).
      */
-    public static DownConductorLayout plan(Structure structure, double typicalSpacing, List<Coordinate> exposedPoints) {
+    public static DownConductorLayout plan(Building building, double typicalSpacing, List<Coordinate> exposedPoints) {
         if (!(typicalSpacing > 0)) {
             throw new IllegalArgumentException("typical down-conductor spacing must be positive, got " + typicalSpacing);
         }
-        Geometry footprint = structure.footprint();
         List<Coordinate> positions = new ArrayList<>();
         double perimeter = 0;
         double largest = 0;
-        for (int k = 0; k < footprint.getNumGeometries(); k++) {
-            Polygon part = (Polygon) footprint.getGeometryN(k);
-            Ring ring = new Ring(part.getExteriorRing().getCoordinates());
+        int required = 0;
+        for (Ring ring : rings(building)) {
             int n = Math.max(2, (int) Math.ceil(ring.length / typicalSpacing - EPS));
+            required += n;
             List<Double> stations = ring.stations(n, exposedPoints);
             for (double s : stations) {
-                positions.add(ring.pointAt(s));
+                Coordinate c = ring.pointAt(s);
+                // parts touching at a corner only: the shared corner is one position
+                if (positions.stream().noneMatch(p -> p.distance(c) < 1e-3)) {
+                    positions.add(c);
+                }
             }
             for (int i = 0; i < stations.size(); i++) {
                 double next = i + 1 < stations.size() ? stations.get(i + 1) : stations.get(0) + ring.length;
@@ -74,11 +97,11 @@ public final class DownConductorPlan {
             }
             perimeter += ring.length;
         }
-        return new DownConductorLayout(structure.id(), perimeter, typicalSpacing, positions, largest);
+        return new DownConductorLayout(building, perimeter, typicalSpacing, required, positions, largest);
     }
 
     /**
-     * Layouts of every structure of a site at the level's typical spacing, preferring the outside
+     * Layouts of every building of a site at the level's typical spacing, preferring the outside
      * corners the sphere reaches on the bare structures (air-termination left out, 1 m grid): where
      * down-conductors go does not move when parts are added. The design page and the printed report
      * both plan this way, so they show the same positions.
@@ -90,27 +113,31 @@ public final class DownConductorPlan {
             exposedCorners.add(c.point());
         }
         List<DownConductorLayout> out = new ArrayList<>();
-        for (Structure s : site.structures()) {
-            out.add(plan(s, sphere.level().downConductorSpacing(), exposedCorners));
+        for (Building b : Building.of(site)) {
+            out.add(plan(b, sphere.level().downConductorSpacing(), exposedCorners));
         }
         return out;
     }
 
-    /**
-     * The layout of positions a designer chose: perimeter as {@link #plan}, largest spacing measured
-     * along the outline between neighbouring positions (each position counts on the outer ring
-     * nearest to it; a ring with none counts its whole length as one gap).
-     */
+    /** {@link #edited(Building, double, List)} for one structure on its own. */
     public static DownConductorLayout edited(Structure structure, double typicalSpacing, List<Coordinate> positions) {
-        Geometry footprint = structure.footprint();
-        List<Ring> rings = new ArrayList<>();
+        return edited(Building.of(structure), typicalSpacing, positions);
+    }
+
+    /**
+     * The layout of positions a designer chose: perimeter and required count as {@link #plan},
+     * largest spacing measured along the outline between neighbouring positions (each position
+     * counts on the ring nearest to it; a ring with none counts its whole length as one gap).
+     */
+    public static DownConductorLayout edited(Building building, double typicalSpacing, List<Coordinate> positions) {
+        List<Ring> rings = rings(building);
         List<List<Double>> stations = new ArrayList<>();
         double perimeter = 0;
-        for (int k = 0; k < footprint.getNumGeometries(); k++) {
-            Ring ring = new Ring(((Polygon) footprint.getGeometryN(k)).getExteriorRing().getCoordinates());
-            rings.add(ring);
+        int required = 0;
+        for (Ring ring : rings) {
             stations.add(new ArrayList<>());
             perimeter += ring.length;
+            required += Math.max(2, (int) Math.ceil(ring.length / typicalSpacing - EPS));
         }
         for (Coordinate p : positions) {
             int best = 0;
@@ -137,10 +164,32 @@ public final class DownConductorPlan {
                 largest = Math.max(largest, next - at.get(i));
             }
         }
-        return new DownConductorLayout(structure.id(), perimeter, typicalSpacing, positions, largest);
+        return new DownConductorLayout(building, perimeter, typicalSpacing, required, positions, largest);
     }
 
-    /** A closed ring, counter-clockwise, with the distance along it of each vertex. */
+    /** The rings that carry down-conductors: every outer ring of the outline, then its courtyards over 30 m. */
+    private static List<Ring> rings(Building building) {
+        Geometry outline = building.outline();
+        List<Ring> outer = new ArrayList<>();
+        List<Ring> yards = new ArrayList<>();
+        for (int k = 0; k < outline.getNumGeometries(); k++) {
+            Polygon part = (Polygon) outline.getGeometryN(k);
+            outer.add(new Ring(part.getExteriorRing().getCoordinates()));
+            for (int h = 0; h < part.getNumInteriorRing(); h++) {
+                Ring yard = new Ring(part.getInteriorRingN(h).getCoordinates());
+                if (yard.length > COURTYARD_PERIMETER + EPS) {
+                    yards.add(yard);
+                }
+            }
+        }
+        outer.addAll(yards);
+        return outer;
+    }
+
+    /**
+     * A closed ring, counter-clockwise, with the distance along it of each vertex. A courtyard's ring
+     * is taken as the yard's own outline, so its convex corners are the corners of the yard.
+     */
     private static final class Ring {
         final Coordinate[] cs;
         final double[] at;

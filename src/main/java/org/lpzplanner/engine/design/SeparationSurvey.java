@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import org.locationtech.jts.densify.Densifier;
+import java.util.stream.IntStream;
 import org.locationtech.jts.geom.Coordinate;
 import org.lpzplanner.engine.design.SeparationDistance.Material;
 import org.lpzplanner.engine.geom.SiteSurface;
@@ -15,23 +15,38 @@ import org.lpzplanner.engine.model.Site;
 
 /**
  * Separation distance checks of a site [IEC 62305-3:2010 6.3]: every rooftop object (in air) and
- * every metal installation a designer marked, against the nearest point of the air-termination.
+ * every metal installation a designer marked, against every point of the protection system.
  *
- * <p>The nearest point is found in 3D on rods (foot to tip) and conductor legs; a rooftop object
- * is its outline (sampled every {@value #OUTLINE_STEP} m) from its base to its top, so a rod beside
- * its wall is measured level with it. l runs from that point along the air-termination and down
- * the down-conductor to the bonding level ({@link BondingRoutes}); k<sub>c</sub> follows the number
- * of down-conductors of the structure that route takes. A check passes when the actual distance is
- * at least s and l was found along drawn parts (or down a mast); where the route assumes a straight
- * link across the roof, or reaches no down-conductor, l is a lower bound and the check can fail but
- * not pass ("not confirmed" when the distance clears that lower bound). An object that a part touches is connected to the
- * air-termination: no clearance to check, and no pass either (it must be fit to carry the current).
- * Stateless and thread-safe.
+ * <p><b>Every point.</b> s = k<sub>i</sub>·(k<sub>c</sub>/k<sub>m</sub>)·l must hold at every point
+ * of the system, each with its own l. The system is the drawn rods (foot to tip), conductor legs
+ * and the down-conductors (from the top down to the bonding level); l and k<sub>c</sub> at each
+ * point come from {@link BondingRoutes}. A rooftop object is the solid from its base (the roof under
+ * it) to its top over its footprint; a metal installation is its point. The check reports the
+ * <em>worst</em> point, where distance − s is least, with its l and s: along a roof conductor that
+ * is usually not the nearest point but the one farthest along the conductors from a down-conductor.
+ *
+ * <p><b>Tolerance.</b> {@link LeastMarginSearch} finds the least margin by halving the stretches of
+ * the system where it could lie: the reported worst margin is at most {@value #TOLERANCE} m above
+ * the true least, and a check passes only when the search shows the true least is not below zero.
+ * A check whose worst margin lies within that tolerance above zero therefore fails (errs toward
+ * "fails").
+ *
+ * <p><b>Lower bounds.</b> Where a part has no drawn route to a down-conductor (a straight link
+ * across the roof is assumed, or none is reachable), its l and s are lower bounds: the check can
+ * fail on such a point, never pass. A check passes only when it clears at every point and every
+ * point's l rests on drawn parts (or a part standing on the ground); otherwise, when it clears,
+ * it is "not confirmed" and names the lower-bound point that came nearest to failing
+ * ({@link Check#unconfirmed()}). A down-conductor that no drawn part joins counts with
+ * k<sub>c</sub> = 1 (the whole current) until the roof network that joins it is drawn: that can
+ * only raise s. An object a part touches is connected to the air-termination: no clearance to
+ * check, and no pass either (it must be fit to carry the current).
+ *
+ * <p>Stateless and thread-safe.
  */
 public final class SeparationSurvey {
 
-    /** Spacing of the sample points along a rooftop object's outline, metres. */
-    public static final double OUTLINE_STEP = 0.25;
+    /** How far the reported worst margin may lie above the true least, metres. */
+    public static final double TOLERANCE = 0.001;
 
     /** Closer than this, metres, a part touches the object. */
     static final double TOUCHING = 1e-3;
@@ -43,30 +58,86 @@ public final class SeparationSurvey {
     public record Installation(String name, Coordinate point, Material material) {
     }
 
-    /**
-     * One check.
-     *
-     * @param kind         "rooftop object" or "metal installation"
-     * @param installation the object's or installation's point nearest the air-termination
-     * @param lpsPoint     the nearest point of the air-termination
-     * @param partId       the part that point lies on
-     * @param route        how l was found
-     * @param result       s, the actual distance and l
-     * @param connected    true when a part touches the object (no clearance)
-     */
-    public record Check(String kind, String name, Material material, Coordinate installation, Coordinate lpsPoint,
-            String partId, BondingRoutes.Route route, SeparationDistance.Result result, boolean connected) {
+    /** The outcome of a check. */
+    public enum Status {
+        /** At least s at every point, every l along drawn parts. */
+        PASSES,
+        /** Less than s at some point (or within the tolerance of it). */
+        FAILS,
+        /** At least s at every point, but some l is only a lower bound (no drawn route). */
+        NOT_CONFIRMED,
+        /** A part touches the object. */
+        CONNECTED
+    }
 
-        public boolean passes() {
-            // an assumed straight link across the roof is the shortest a route can be: with it, l and
-            // s are lower bounds, enough to fail a check but never to pass one
-            return !connected && (route.basis() == BondingRoutes.Basis.DRAWN
-                    || route.basis() == BondingRoutes.Basis.GROUNDED_PART) && result.passes();
+    /**
+     * One point of the system checked against an installation.
+     *
+     * @param installation the installation's point nearest {@code lpsPoint}
+     * @param lpsPoint     the point of the system
+     * @param partId       the part it lies on (a down-conductor by its label)
+     * @param route        how l was found there
+     * @param result       s, the distance and l there
+     */
+    public record Point(Coordinate installation, Coordinate lpsPoint, String partId, BondingRoutes.Route route,
+            SeparationDistance.Result result) {
+
+        /** Distance − s, metres: negative where the point fails. */
+        public double margin() {
+            return result.actual() - result.required();
+        }
+
+        /** True when l there is only a lower bound (no drawn route to a down-conductor). */
+        public boolean lowerBound() {
+            return isLowerBound(route);
         }
     }
 
     /**
-     * @param downConductors every down-conductor of the site with its structure and that structure's count
+     * One check.
+     *
+     * @param kind        "rooftop object" or "metal installation"
+     * @param worst       the point of the system with the least margin
+     * @param unconfirmed of the points whose l is only a lower bound, the one with the least margin; null when
+     *                    every route is drawn
+     * @param clears      true when the search shows no point of the system closer than its s
+     * @param connected   true when a part touches the object (no clearance)
+     */
+    public record Check(String kind, String name, Material material, Point worst, Point unconfirmed, boolean clears,
+            boolean connected) {
+
+        public Status status() {
+            return connected ? Status.CONNECTED : !clears ? Status.FAILS
+                    : unconfirmed != null ? Status.NOT_CONFIRMED : Status.PASSES;
+        }
+
+        public boolean passes() {
+            return status() == Status.PASSES;
+        }
+
+        public Coordinate installation() {
+            return worst.installation();
+        }
+
+        public Coordinate lpsPoint() {
+            return worst.lpsPoint();
+        }
+
+        public String partId() {
+            return worst.partId();
+        }
+
+        public BondingRoutes.Route route() {
+            return worst.route();
+        }
+
+        public SeparationDistance.Result result() {
+            return worst.result();
+        }
+    }
+
+    /**
+     * @param downConductors every down-conductor of the site
      * @param bondingLevel   height of the equipotential bonding above ground, metres (0 for ground level)
      * @return the checks, rooftop objects first; none when the site has no air-termination
      */
@@ -75,11 +146,11 @@ public final class SeparationSurvey {
         Set<String> structures = new HashSet<>();
         site.structures().forEach(s -> structures.add(s.id()));
         BondingRoutes routes = new BondingRoutes(surface, structures, downConductors, bondingLevel);
-        List<BondingRoutes.Piece> pieces = routes.pieces();
         List<Check> out = new ArrayList<>();
-        if (pieces.isEmpty()) {
+        if (routes.pieces().isEmpty()) {
             return out;
         }
+        SystemStretches system = new SystemStretches(routes);
         for (RooftopObject o : site.rooftopObjects()) {
             double base = o.top();
             for (Wall w : surface.walls()) {
@@ -87,46 +158,69 @@ public final class SeparationSurvey {
                     base = Math.min(base, w.base());
                 }
             }
-            Nearest best = null;
-            for (Coordinate c : Densifier.densify(o.footprint().getExteriorRing(), OUTLINE_STEP).getCoordinates()) {
-                Coordinate bottom = new Coordinate(c.x, c.y, base), top = new Coordinate(c.x, c.y, o.top());
-                for (int i = 0; i < pieces.size(); i++) {
-                    Coordinate[] pq = closest(bottom, top, pieces.get(i).a(), pieces.get(i).b());
-                    double d = pq[0].distance3D(pq[1]);
-                    if (best == null || d < best.distance) {
-                        best = new Nearest(pq[0], pq[1], i, d);
-                    }
-                }
-            }
-            boolean touching = best.distance < TOUCHING || touches(o, pieces);
-            out.add(check(routes, level, "rooftop object", o.name() == null || o.name().isBlank() ? o.id() : o.name(),
-                    Material.AIR, best, touching));
+            InstallationShape shape = InstallationShape.solid(o.footprint(), base, o.top());
+            boolean touching = touches(o, routes.pieces()) || nearest(system, shape) < TOUCHING;
+            out.add(check(system, level, "rooftop object", o.name() == null || o.name().isBlank() ? o.id() : o.name(),
+                    Material.AIR, shape, touching));
         }
         for (Installation m : installations) {
-            Nearest best = null;
-            for (int i = 0; i < pieces.size(); i++) {
-                Coordinate[] pq = closest(m.point(), m.point(), pieces.get(i).a(), pieces.get(i).b());
-                double d = pq[0].distance3D(pq[1]);
-                if (best == null || d < best.distance) {
-                    best = new Nearest(m.point(), pq[1], i, d);
-                }
-            }
-            out.add(check(routes, level, "metal installation", m.name(), m.material(), best, best.distance < TOUCHING));
+            InstallationShape shape = InstallationShape.point(m.point());
+            out.add(check(system, level, "metal installation", m.name(), m.material(), shape,
+                    nearest(system, shape) < TOUCHING));
         }
         return out;
     }
 
-    private record Nearest(Coordinate installation, Coordinate lps, int piece, double distance) {
+    private static Check check(SystemStretches system, ProtectionLevel level, String kind, String name,
+            Material material, InstallationShape shape, boolean connected) {
+        int n = system.size();
+        double[] slope = new double[n];
+        boolean anyLowerBound = false;
+        for (int i = 0; i < n; i++) {
+            BondingRoutes.Route r = system.route(i, 0);
+            double k = level.ki() * SeparationDistance.kc(r.downConductors()) / material.km();
+            slope[i] = (1 + k) * system.length(i);
+            anyLowerBound |= isLowerBound(r);
+        }
+        LeastMarginSearch.Margin margin = (i, t) -> point(system, level, material, shape, i, t).margin();
+        LeastMarginSearch.Least least = LeastMarginSearch.minimise(slope, margin, TOLERANCE);
+        Point worst = point(system, level, material, shape, least.stretch(), least.t());
+        Point unconfirmed = null;
+        if (anyLowerBound) {
+            int[] ids = IntStream.range(0, n).filter(i -> isLowerBound(system.route(i, 0))).toArray();
+            double[] sub = new double[ids.length];
+            for (int j = 0; j < ids.length; j++) {
+                sub[j] = slope[ids[j]];
+            }
+            LeastMarginSearch.Least u = LeastMarginSearch.minimise(sub, (j, t) -> margin.at(ids[j], t), TOLERANCE);
+            unconfirmed = point(system, level, material, shape, ids[u.stretch()], u.t());
+        }
+        return new Check(kind, name, material, worst, unconfirmed, least.lowerBound() >= 0, connected);
     }
 
-    private static Check check(BondingRoutes routes, ProtectionLevel level, String kind, String name, Material material,
-            Nearest n, boolean connected) {
-        BondingRoutes.Route route = routes.from(n.piece(), n.lps());
-        Double length = route.basis() == BondingRoutes.Basis.NONE ? null : route.length();
-        SeparationDistance.Result r = SeparationDistance.check(level, route.downConductors(), material, n.installation(),
-                n.lps(), length);
-        return new Check(kind, name, material, n.installation(), n.lps(), routes.pieces().get(n.piece()).partId(), route,
-                r, connected);
+    private static boolean isLowerBound(BondingRoutes.Route r) {
+        return r.basis() == BondingRoutes.Basis.ASSUMED_LINKS || r.basis() == BondingRoutes.Basis.NONE;
+    }
+
+    private static Point point(SystemStretches system, ProtectionLevel level, Material material,
+            InstallationShape shape, int stretch, double t) {
+        Coordinate p = system.at(stretch, t);
+        Coordinate q = shape.nearestTo(p);
+        BondingRoutes.Route route = system.route(stretch, t);
+        double l = route.length();
+        SeparationDistance.Result r = new SeparationDistance.Result(
+                SeparationDistance.required(level, route.downConductors(), material, l), q.distance3D(p), l,
+                route.basis() == BondingRoutes.Basis.NONE);
+        return new Point(q, p, system.partId(stretch), route, r);
+    }
+
+    /** The least distance between the installation and the system, to a tenth of {@link #TOUCHING}. */
+    private static double nearest(SystemStretches system, InstallationShape shape) {
+        double[] slope = new double[system.size()];
+        for (int i = 0; i < slope.length; i++) {
+            slope[i] = system.length(i);
+        }
+        return LeastMarginSearch.minimise(slope, (i, t) -> shape.distanceTo(system.at(i, t)), TOUCHING / 10).value();
     }
 
     /** True when a piece stands on the object: its lower end inside the footprint at the object's top. */
@@ -140,90 +234,5 @@ public final class SeparationSurvey {
             }
         }
         return false;
-    }
-
-    /**
-     * Closest points of segments p1→q1 and p2→q2 in 3D (Ericson, Real-Time Collision Detection,
-     * 5.1.9): [point on the first, point on the second].
-     */
-    static Coordinate[] closest(Coordinate p1, Coordinate q1, Coordinate p2, Coordinate q2) {
-        double[] d1 = sub(q1, p1), d2 = sub(q2, p2), r = sub(p1, p2);
-        double a = dot(d1, d1), e = dot(d2, d2), f = dot(d2, r);
-        double s, t;
-        if (a <= 1e-12 && e <= 1e-12) {
-            s = 0;
-            t = 0;
-        } else if (a <= 1e-12) {
-            s = 0;
-            t = clamp(f / e);
-        } else {
-            double c = dot(d1, r);
-            if (e <= 1e-12) {
-                t = 0;
-                s = clamp(-c / a);
-            } else {
-                double b = dot(d1, d2), denom = a * e - b * b;
-                if (denom <= 1e-9 * a * e) {
-                    return parallel(p1, q1, p2, q2);
-                }
-                s = clamp((b * f - c * e) / denom);
-                t = (b * s + f) / e;
-                if (t < 0) {
-                    t = 0;
-                    s = clamp(-c / a);
-                } else if (t > 1) {
-                    t = 1;
-                    s = clamp((b - c) / a);
-                }
-            }
-        }
-        return new Coordinate[] {at(p1, d1, s), at(p2, d2, t)};
-    }
-
-    /**
-     * Parallel segments are equally near along their overlap: of the ends of the overlap, the one
-     * highest on the second segment (the air-termination), whose route down is the longest.
-     */
-    private static Coordinate[] parallel(Coordinate p1, Coordinate q1, Coordinate p2, Coordinate q2) {
-        List<Coordinate[]> pairs = new ArrayList<>();
-        for (Coordinate c : new Coordinate[] {p1, q1}) {
-            pairs.add(new Coordinate[] {c, at(p2, sub(q2, p2), parameter(p2, q2, c))});
-        }
-        for (Coordinate c : new Coordinate[] {p2, q2}) {
-            pairs.add(new Coordinate[] {at(p1, sub(q1, p1), parameter(p1, q1, c)), c});
-        }
-        double least = Double.POSITIVE_INFINITY;
-        for (Coordinate[] pq : pairs) {
-            least = Math.min(least, pq[0].distance3D(pq[1]));
-        }
-        Coordinate[] best = null;
-        for (Coordinate[] pq : pairs) {
-            if (pq[0].distance3D(pq[1]) <= least + 1e-6 && (best == null || pq[1].getZ() > best[1].getZ())) {
-                best = pq;
-            }
-        }
-        return best;
-    }
-
-    private static double parameter(Coordinate a, Coordinate b, Coordinate p) {
-        double[] d = sub(b, a), r = sub(p, a);
-        double len2 = dot(d, d);
-        return len2 == 0 ? 0 : clamp(dot(r, d) / len2);
-    }
-
-    private static double clamp(double v) {
-        return Math.max(0, Math.min(1, v));
-    }
-
-    private static double[] sub(Coordinate a, Coordinate b) {
-        return new double[] {a.x - b.x, a.y - b.y, a.getZ() - b.getZ()};
-    }
-
-    private static double dot(double[] u, double[] v) {
-        return u[0] * v[0] + u[1] * v[1] + u[2] * v[2];
-    }
-
-    private static Coordinate at(Coordinate p, double[] d, double s) {
-        return new Coordinate(p.x + s * d[0], p.y + s * d[1], p.getZ() + s * d[2]);
     }
 }

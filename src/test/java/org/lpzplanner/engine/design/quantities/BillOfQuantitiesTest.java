@@ -118,4 +118,26 @@ class BillOfQuantitiesTest {
         assertThatThrownBy(() -> BillOfQuantities.compute(site(List.of(), List.of()), List.of(), -1))
                 .hasMessageContaining("fixings per metre");
     }
+
+    @Test
+    void anLOfTwoPartsCountsTheDownConductorsOfTheBuildingOnce() {
+        // two 30 × 10 m parts, walls 10 m, overlapping in a corner: one L-shaped building of perimeter 120 m,
+        // class III: ⌈120 / 15⌉ = 8 down-conductors [IEC 62305-3:2010 5.3, Table 4], each 10 m from the wall
+        // top to ground [closed form]: 80 m, 8 test joints and earth terminations (one each, common practice)
+        Site site = new Site("L", List.of(
+                new Structure("S1", "East arm", rectangle(0, 0, 30, 10), 10, new RoofShape.Flat(0)),
+                new Structure("S2", "North arm", rectangle(0, 0, 10, 30), 10, new RoofShape.Flat(0))),
+                List.of(), List.of(), List.of());
+        List<Coordinate> downs = new java.util.ArrayList<>();
+        org.lpzplanner.engine.design.DownConductorPlan.planSite(site,
+                org.lpzplanner.engine.model.SphereSpec.of(org.lpzplanner.engine.model.ProtectionLevel.III))
+                .forEach(l -> downs.addAll(l.positions()));
+
+        BillOfQuantities.Quantities q = BillOfQuantities.compute(site, downs, 1);
+
+        assertThat(q.downConductors()).isEqualTo(8);
+        assertThat(q.downConductor()).isCloseTo(80, within(1e-9));
+        assertThat(q.testJoints()).isEqualTo(8);
+        assertThat(q.earthTerminations()).isEqualTo(8);
+    }
 }
