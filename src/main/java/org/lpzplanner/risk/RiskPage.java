@@ -169,7 +169,7 @@ class RiskPage {
             return text(locale, "risk.suggestion.empty", factor);
         }
         return text(locale, "risk.suggestion.basis", factor, s.structureName(), RiskFormat.metres(s.height()),
-                RiskFormat.metres(s.reach()), s.near(), s.higher());
+                RiskFormat.metres(s.reach()), s.near(), s.higher(), s.parts() - 1);
     }
 
     private String text(Locale locale, String key, Object... args) {

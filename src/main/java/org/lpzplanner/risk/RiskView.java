@@ -36,9 +36,12 @@ public record RiskView(long siteId, boolean saved, Inputs inputs, Suggestion sug
         }
     }
 
-    /** The suggested location class, and on what it rests. */
-    public record Suggestion(String factor, double value, String structure, double height, double reach,
-            int structuresNear, int structuresHigher) {
+    /**
+     * The suggested location class, and on what it rests: the building of the tallest structure
+     * ({@code buildingParts} structures touching or overlapping) against the other buildings of the file.
+     */
+    public record Suggestion(String factor, double value, String structure, int buildingParts, double height,
+            double reach, int buildingsNear, int buildingsHigher) {
     }
 
     /** R1 for one option; {@code level} null means no LPS. */
@@ -60,8 +63,8 @@ public record RiskView(long siteId, boolean saved, Inputs inputs, Suggestion sug
         LocationSuggestion s = a.suggestion();
         RiskAssessment.LineFlashes l = a.lines();
         return new RiskView(a.site().id(), a.saved(), Inputs.of(a.settings()),
-                new Suggestion(s.factor().name(), s.factor().value(), s.structureName(), s.height(), s.reach(), s.near(),
-                        s.higher()),
+                new Suggestion(s.factor().name(), s.factor().value(), s.structureName(), s.parts(), s.height(),
+                        s.reach(), s.near(), s.higher()),
                 a.events().flashDensity(), a.area().upperBound(), a.area().maxRelativeError(), a.location().name(),
                 a.location().value(), a.events().perYear(), LifeRiskEstimate.TOLERABLE_RISK,
                 a.choice().options().stream().map(Option::of).toList(),
