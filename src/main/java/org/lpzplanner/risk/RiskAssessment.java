@@ -13,25 +13,44 @@ import org.lpzplanner.sites.StoredSite;
  *
  * @param site        the stored site
  * @param geometry    the site read from its file, local metres
- * @param settings    the inputs used: the saved ones, or the defaults while none are saved
+ * @param settings    the inputs used: the saved ones, or {@link RiskSettings#initial()} while none are saved
  * @param saved       whether {@code settings} were saved by a user
  * @param area        A_D with its outline
  * @param suggestion  the app's suggestion for C_D
- * @param events      N_G, A_D and the C_D used, giving N_D
- * @param choice      R1 for no LPS and levels IV to I, and the lowest sufficient option
- * @param lines       flashes to the connected lines, or null when none are entered
+ * @param events      N_G, A_D and the C_D used, giving N_D; null while N_G or C_D is not chosen
+ * @param choice      R1 for no LPS and levels IV to I, and the lowest sufficient option; null while
+ *                    an input is missing ({@link #missing()}): no verdict is given then
+ * @param lines       flashes to the connected lines, or null when none are entered (or N_G is not)
  */
 public record RiskAssessment(StoredSite site, Site geometry, RiskSettings settings, boolean saved,
         CollectionArea area, LocationSuggestion suggestion, DangerousEvents events, LevelChoice choice,
         LineFlashes lines) {
 
-    /** The C_D used: the user's choice, or the suggestion. */
-    public LocationFactor location() {
-        return events.location();
+    /** Whether every input is entered, so that {@link #choice()} holds a verdict. */
+    public boolean complete() {
+        return choice != null;
     }
 
-    /** R1 without an LPS (the first option tried). */
+    /** The inputs still to be entered, by field name; empty when {@link #complete()}. */
+    public java.util.List<String> missing() {
+        return settings.missing();
+    }
+
+    /** The C_D used: the user's choice, or the suggestion when the user chose it; null when neither. */
+    public LocationFactor location() {
+        return settings.location() != null ? settings.location()
+                : settings.useSuggestedLocation() ? suggestion.factor() : null;
+    }
+
+    /**
+     * R1 without an LPS (the first option tried).
+     *
+     * @throws IllegalStateException while an input is missing
+     */
     public LifeRisk withoutLps() {
+        if (choice == null) {
+            throw new IllegalStateException("no estimate while risk inputs are missing: " + missing());
+        }
         return choice.options().get(0);
     }
 

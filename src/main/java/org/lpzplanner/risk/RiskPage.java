@@ -20,9 +20,11 @@ import org.springframework.context.MessageSource;
 import org.springframework.stereotype.Component;
 
 /**
- * What the risk page shows: every input as a plain choice with its meaning and default, the
- * collection area on the plan, N_D, the components, R1 against the tolerable risk, the dominant
- * component, the lowest sufficient protection level and the cautions.
+ * What the risk page shows: every input as a plain choice with its meaning and default (or that it
+ * has none), the collection area on the plan, N_D, the components, R1 against the tolerable risk,
+ * the dominant component, the lowest sufficient protection level and the cautions. While an input
+ * without a default is missing, the page names it and shows no verdict: no table of options, no
+ * outcome, no level.
  */
 @Component
 class RiskPage {
@@ -60,18 +62,20 @@ class RiskPage {
         model.put("assessment", a);
         model.put("saved", a.saved());
         model.put("fields", fields(a, values, locale));
+        boolean complete = a.complete();
+        model.put("complete", complete);
         model.put("outcome", risk.outcome(a, locale));
-        model.put("tolerable", a.withoutLps().isTolerable());
+        model.put("tolerable", complete && a.withoutLps().isTolerable());
         model.put("figures", risk.figures(a, locale));
         model.put("dominance", risk.dominance(a, locale));
-        model.put("table", risk.section(a, locale));
-        model.put("explanation", a.choice().summary());
+        model.put("table", complete ? risk.section(a, locale) : null);
+        model.put("explanation", complete ? a.choice().summary() : List.of());
         model.put("suggestion", suggestion(a.suggestion(), locale));
         model.put("lines", a.lines() == null ? null : text(locale, "risk.lines.figures", a.lines().count(),
                 RiskFormat.metres(a.lines().length()), RiskFormat.area(a.lines().collectionAreaPerLine()),
                 RiskFormat.scientific(a.lines().flashesPerLine())) + " " + text(locale, "risk.lines.near",
                 RiskFormat.area(a.lines().nearAreaPerLine()), RiskFormat.scientific(a.lines().flashesNearLine())));
-        ProtectionLevel level = a.choice().level().orElse(null);
+        ProtectionLevel level = complete ? a.choice().level().orElse(null) : null;
         model.put("chosenLevel", level == null ? null : level.name());
         model.put("levelAlreadySet", level != null && a.site().level() == level && a.site().customRadius() == null);
         // levels are declared I to IV, strictest first
@@ -83,18 +87,18 @@ class RiskPage {
         return model;
     }
 
-    /** The form's text of each field for stored (or default) settings. */
+    /** The form's text of each field for stored (or initial) settings; empty where nothing is chosen. */
     static Map<String, String> values(RiskSettings s) {
         Map<String, String> v = new LinkedHashMap<>();
-        v.put("flashDensitySource", s.flashDensitySource().name());
+        v.put("flashDensitySource", name(s.flashDensitySource()));
         v.put("flashDensity", s.flashDensity() == null ? "" : RiskFormat.significant(s.flashDensity()));
         v.put("thunderstormDays", s.thunderstormDays() == null ? "" : RiskFormat.significant(s.thunderstormDays()));
-        v.put("location", s.location() == null ? RiskSettingsParser.SUGGESTED : s.location().name());
+        v.put("location", s.useSuggestedLocation() ? RiskSettingsParser.SUGGESTED : name(s.location()));
         v.put("surface", s.surface().name());
-        v.put("fireRisk", s.fireRisk().name());
+        v.put("fireRisk", name(s.fireRisk()));
         v.put("fireProvisions", s.fireProvisions().name());
-        v.put("specialHazard", s.specialHazard().name());
-        v.put("structureUse", s.use().name());
+        v.put("specialHazard", name(s.specialHazard()));
+        v.put("structureUse", name(s.use()));
         v.put("touchStep", s.touchStep().name());
         v.put("personsInZone", RiskFormat.significant(s.occupancy().personsInZone()));
         v.put("personsTotal", RiskFormat.significant(s.occupancy().personsTotal()));
@@ -104,17 +108,22 @@ class RiskPage {
         return v;
     }
 
+    private static String name(Enum<?> choice) {
+        return choice == null ? "" : choice.name();
+    }
+
     private List<Field> fields(RiskAssessment a, Map<String, String> values, Locale locale) {
         List<Field> fields = new ArrayList<>();
         List<Option> sources = new ArrayList<>();
+        sources.add(unchosen(locale));
         for (FlashDensitySource s : FlashDensitySource.values()) {
             sources.add(new Option(s.name(), text(locale, "risk.source." + s.name())));
         }
         fields.add(field("flashDensitySource", sources, values, locale, "", null));
         fields.add(field("flashDensity", List.of(), values, locale, "", "risk.unit.flashDensity"));
-        fields.add(field("thunderstormDays", List.of(), values, locale,
-                RiskFormat.significant(RiskSettings.DEFAULT_THUNDERSTORM_DAYS), "risk.unit.days"));
+        fields.add(field("thunderstormDays", List.of(), values, locale, "", "risk.unit.days"));
         List<Option> locations = new ArrayList<>();
+        locations.add(unchosen(locale));
         locations.add(new Option(RiskSettingsParser.SUGGESTED, text(locale, "risk.location.suggestedOption",
                 text(locale, "risk.location." + a.suggestion().factor().name()),
                 RiskFormat.significant(a.suggestion().factor().value()))));
@@ -125,14 +134,14 @@ class RiskPage {
         fields.add(field("location", locations, values, locale, "", null));
         fields.add(field("surface", options(SurfaceType.values(), "r_t", SurfaceType::description, SurfaceType::rt,
                 locale), values, locale, SurfaceType.AGRICULTURAL_OR_CONCRETE.description(), null));
-        fields.add(field("fireRisk", options(FireRisk.values(), "r_f", FireRisk::description, FireRisk::rf, locale),
-                values, locale, FireRisk.ORDINARY.description(), null));
+        fields.add(field("fireRisk", unchosen(options(FireRisk.values(), "r_f", FireRisk::description, FireRisk::rf,
+                locale), locale), values, locale, "", null));
         fields.add(field("fireProvisions", options(FireProvisions.values(), "r_p", FireProvisions::description,
                 FireProvisions::rp, locale), values, locale, FireProvisions.NONE.description(), null));
-        fields.add(field("specialHazard", options(SpecialHazard.values(), "h_z", SpecialHazard::description,
-                SpecialHazard::hz, locale), values, locale, SpecialHazard.NONE.description(), null));
-        fields.add(field("structureUse", options(StructureUse.values(), "L_F", StructureUse::description,
-                StructureUse::lf, locale), values, locale, StructureUse.OTHER.description(), null));
+        fields.add(field("specialHazard", unchosen(options(SpecialHazard.values(), "h_z", SpecialHazard::description,
+                SpecialHazard::hz, locale), locale), values, locale, "", null));
+        fields.add(field("structureUse", unchosen(options(StructureUse.values(), "L_F", StructureUse::description,
+                StructureUse::lf, locale), locale), values, locale, "", null));
         fields.add(field("touchStep", options(TouchStepProtection.values(), "P_TA", TouchStepProtection::description,
                 TouchStepProtection::pta, locale), values, locale, TouchStepProtection.NONE.description(), null));
         fields.add(field("personsInZone", List.of(), values, locale, "1", null));
@@ -142,6 +151,18 @@ class RiskPage {
         fields.add(field("lineLength", List.of(), values, locale,
                 RiskFormat.significant(RiskSettings.DEFAULT_LINE_LENGTH), "risk.unit.metres"));
         return fields;
+    }
+
+    /** The option shown while a choice without a default is not made: sent as an empty value. */
+    private Option unchosen(Locale locale) {
+        return new Option("", text(locale, "risk.choice.unchosen"));
+    }
+
+    private List<Option> unchosen(List<Option> options, Locale locale) {
+        List<Option> all = new ArrayList<>();
+        all.add(unchosen(locale));
+        all.addAll(options);
+        return all;
     }
 
     private <E extends Enum<E>> List<Option> options(E[] constants, String symbol,
@@ -158,8 +179,9 @@ class RiskPage {
     private Field field(String name, List<Option> options, Map<String, String> values, Locale locale,
             String defaultValue, String unitKey) {
         String prefix = "risk.field." + name + ".";
+        String value = values.getOrDefault(name, "");
         return new Field(name, text(locale, prefix + "label"), text(locale, prefix + "meaning"),
-                text(locale, prefix + "default", defaultValue), options, values.getOrDefault(name, ""),
+                text(locale, prefix + "default", defaultValue), options, value == null ? "" : value,
                 unitKey == null ? null : text(locale, unitKey));
     }
 

@@ -18,7 +18,13 @@ import org.springframework.context.event.EventListener;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Repository;
 
-/** Reads and writes the {@code site_risk_inputs} table (one row per site). Stores checked settings only. */
+/**
+ * Reads and writes the {@code site_risk_inputs} table (one row per site). Stores checked settings
+ * only. A choice not made yet is stored as null; the location factor is stored as its class name,
+ * as {@value RiskSettingsParser#SUGGESTED} when the user chose the app's suggestion, or null when
+ * nothing is chosen (rows of earlier releases, where null meant the suggestion pre-filled in the
+ * form, thus read as not chosen: migration V15).
+ */
 @Repository
 class RiskRepository {
 
@@ -35,9 +41,9 @@ class RiskRepository {
 
     /** Replaces the site's inputs (update, or insert when there were none); portable SQL, no upsert. */
     void save(long siteId, RiskSettings s, Instant now) {
-        Object[] values = {s.flashDensitySource().name(), s.flashDensity(), s.thunderstormDays(),
-            s.location() == null ? null : s.location().name(), s.surface().name(), s.fireRisk().name(),
-            s.fireProvisions().name(), s.specialHazard().name(), s.use().name(), s.touchStep().name(),
+        Object[] values = {name(s.flashDensitySource()), s.flashDensity(), s.thunderstormDays(),
+            s.useSuggestedLocation() ? RiskSettingsParser.SUGGESTED : name(s.location()), s.surface().name(),
+            name(s.fireRisk()), s.fireProvisions().name(), name(s.specialHazard()), name(s.use()), s.touchStep().name(),
             s.occupancy().personsInZone(), s.occupancy().personsTotal(), s.occupancy().hoursPerYear(),
             s.lineCount(), s.lineLength(), Timestamp.from(now), siteId};
         int rows = jdbc.sql("UPDATE site_risk_inputs SET flash_density_source = ?, flash_density = ?,"
@@ -55,17 +61,26 @@ class RiskRepository {
         }
     }
 
+    private static String name(Enum<?> choice) {
+        return choice == null ? null : choice.name();
+    }
+
+    private static <E extends Enum<E>> E choice(ResultSet rs, String column, Class<E> type) throws SQLException {
+        String value = rs.getString(column);
+        return value == null ? null : Enum.valueOf(type, value);
+    }
+
     private static RiskSettings row(ResultSet rs, int rowNum) throws SQLException {
         String location = rs.getString("location_factor");
+        boolean suggested = RiskSettingsParser.SUGGESTED.equals(location);
         int lines = rs.getInt("line_count");
         Integer lineCount = rs.wasNull() ? null : lines;
-        return new RiskSettings(FlashDensitySource.valueOf(rs.getString("flash_density_source")),
+        return new RiskSettings(choice(rs, "flash_density_source", FlashDensitySource.class),
                 nullableDouble(rs, "flash_density"), nullableDouble(rs, "thunderstorm_days"),
-                location == null ? null : LocationFactor.valueOf(location),
-                SurfaceType.valueOf(rs.getString("surface_type")), FireRisk.valueOf(rs.getString("fire_risk")),
+                location == null || suggested ? null : LocationFactor.valueOf(location), suggested,
+                SurfaceType.valueOf(rs.getString("surface_type")), choice(rs, "fire_risk", FireRisk.class),
                 FireProvisions.valueOf(rs.getString("fire_provisions")),
-                SpecialHazard.valueOf(rs.getString("special_hazard")),
-                StructureUse.valueOf(rs.getString("structure_use")),
+                choice(rs, "special_hazard", SpecialHazard.class), choice(rs, "structure_use", StructureUse.class),
                 TouchStepProtection.valueOf(rs.getString("touch_step")),
                 new Occupancy(rs.getDouble("persons_in_zone"), rs.getDouble("persons_total"),
                         rs.getDouble("hours_per_year")),

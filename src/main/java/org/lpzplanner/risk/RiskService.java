@@ -46,7 +46,8 @@ public class RiskService {
     }
 
     /**
-     * The assessment with the saved inputs, or with the defaults while none are saved.
+     * The assessment with the saved inputs, or with {@link RiskSettings#initial()} while none are
+     * saved; without a verdict while an input is missing ({@link RiskAssessment#complete()}).
      *
      * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
      */
@@ -54,11 +55,12 @@ public class RiskService {
     public RiskAssessment assess(long siteId) {
         StoredSite site = sites.get(siteId);
         Optional<RiskSettings> saved = inputs.find(siteId);
-        return assess(site, saved.orElse(RiskSettings.defaults()), saved.isPresent());
+        return assess(site, saved.orElse(RiskSettings.initial()), saved.isPresent());
     }
 
     /**
-     * Checks and saves the inputs of a site; a missing field takes its default.
+     * Checks and saves the inputs of a site; a missing field takes its default, or stays unchosen
+     * where it has none (the inputs are saved all the same, and the result names what is missing).
      *
      * @param values each field's text by name (see {@link RiskSettingsParser#FIELDS})
      * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id (nothing is saved)
@@ -79,12 +81,16 @@ public class RiskService {
      *
      * @param expectedVersion the site's version as last read
      * @return the level set
-     * @throws InvalidInputException when no LPS is needed, or none of the levels is sufficient
+     * @throws InvalidInputException when inputs are missing, no LPS is needed, or none of the levels is sufficient
      * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed meanwhile
      */
     @Transactional
     public ProtectionLevel selectLevel(long siteId, long expectedVersion) {
         RiskAssessment assessment = assess(siteId);
+        if (!assessment.complete()) {
+            throw new InvalidInputException("level", "risk inputs are missing (" + String.join(", ",
+                    assessment.missing()) + "), so there is no estimate to take a level from; enter them first");
+        }
         ProtectionLevel level = assessment.choice().level().orElseThrow(() -> new InvalidInputException("level",
                 assessment.choice().chosen().isPresent()
                         ? "R1 is tolerable without an LPS, so there is no protection level to select"
@@ -108,6 +114,14 @@ public class RiskService {
 
     /** The report section of an assessment already made; see {@link #reportSection(long, Locale)}. */
     public ReportSection section(RiskAssessment a, Locale locale) {
+        if (!a.complete()) {
+            List<String> notes = new ArrayList<>();
+            notes.add(outcome(a, locale));
+            notes.addAll(figures(a, locale));
+            notes.add(text(locale, "risk.limits.components"));
+            notes.add(text(locale, "risk.limits.edition"));
+            return new ReportSection(text(locale, "risk.report.title"), List.of(), List.of(), notes);
+        }
         List<String> columns = List.of(text(locale, "risk.table.option"), text(locale, "risk.table.pb"),
                 text(locale, "risk.table.ra"), text(locale, "risk.table.rb"), text(locale, "risk.table.r1"),
                 text(locale, "risk.table.tolerable"));
@@ -132,8 +146,11 @@ public class RiskService {
         return new ReportSection(text(locale, "risk.report.title"), columns, rows, notes);
     }
 
-    /** The outcome in one sentence. */
+    /** The outcome in one sentence; while inputs are missing, which ones, and no verdict. */
     String outcome(RiskAssessment a, Locale locale) {
+        if (!a.complete()) {
+            return text(locale, "risk.outcome.missing", missingText(a, locale));
+        }
         LevelChoice choice = a.choice();
         if (choice.chosen().isEmpty()) {
             return text(locale, "risk.outcome.none", RiskFormat.scientific(choice.options().get(4).r1()));
@@ -146,24 +163,41 @@ public class RiskService {
                 RiskFormat.scientific(chosen.r1()));
     }
 
-    /** N_G, A_D, C_D and N_D in words, one line each. */
+    /** The labels of the missing inputs, joined in the form's order. */
+    String missingText(RiskAssessment a, Locale locale) {
+        return String.join("; ", a.missing().stream().map(f -> "flashDensity".equals(f)
+                && a.settings().flashDensitySource() == null ? text(locale, "risk.missing.groundFlashDensity")
+                : text(locale, "risk.field." + f + ".label")).toList());
+    }
+
+    /** N_G, A_D, C_D and N_D in words, one line each, as far as they are known. */
     List<String> figures(RiskAssessment a, Locale locale) {
         RiskSettings s = a.settings();
         List<String> lines = new ArrayList<>();
-        lines.add(s.flashDensitySource() == FlashDensitySource.MEASURED
-                ? text(locale, "risk.figure.ngMeasured", RiskFormat.significant(s.groundFlashDensity()))
-                : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
-                        RiskFormat.significant(s.thunderstormDays())));
+        if (s.hasGroundFlashDensity()) {
+            lines.add(s.flashDensitySource() == FlashDensitySource.MEASURED
+                    ? text(locale, "risk.figure.ngMeasured", RiskFormat.significant(s.groundFlashDensity()))
+                    : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
+                            RiskFormat.significant(s.thunderstormDays())));
+        }
         lines.add(text(locale, "risk.figure.ad", RiskFormat.area(a.area().upperBound()),
                 RiskFormat.percent(a.area().maxRelativeError() * 100), RiskFormat.area(a.area().area())));
-        lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
-                RiskFormat.significant(a.location().value()), text(locale, "risk.location." + a.location().name())));
-        lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
+        if (a.location() != null) {
+            lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
+                    RiskFormat.significant(a.location().value()),
+                    text(locale, "risk.location." + a.location().name())));
+        }
+        if (a.events() != null) {
+            lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
+        }
         return lines;
     }
 
-    /** Which component dominates without an LPS, and its share of R1. */
+    /** Which component dominates without an LPS, and its share of R1; null while inputs are missing. */
     String dominance(RiskAssessment a, Locale locale) {
+        if (!a.complete()) {
+            return null;
+        }
         LifeRisk none = a.withoutLps();
         if (none.r1() == 0) {
             return text(locale, "risk.dominant.zero");
@@ -181,12 +215,16 @@ public class RiskService {
         Site geometry = sites.document(site).site();
         CollectionArea area = CollectionAreaOp.of(geometry);
         LocationSuggestion suggestion = LocationSuggestion.of(geometry);
-        LocationFactor location = settings.location() == null ? suggestion.factor() : settings.location();
-        double ng = settings.groundFlashDensity();
-        DangerousEvents events = new DangerousEvents(ng, area.upperBound(), location);
-        LevelChoice choice = LifeRiskEstimate.choose(settings.lifeRiskInputs(events.perYear()));
-        RiskAssessment.LineFlashes lines = settings.lineCount() == null || settings.lineCount() == 0 ? null
-                : RiskAssessment.LineFlashes.of(settings.lineCount(), settings.lineLength(), ng);
+        LocationFactor location = settings.location() != null ? settings.location()
+                : settings.useSuggestedLocation() ? suggestion.factor() : null;
+        DangerousEvents events = location == null || !settings.hasGroundFlashDensity() ? null
+                : new DangerousEvents(settings.groundFlashDensity(), area.upperBound(), location);
+        LevelChoice choice = settings.complete()
+                ? LifeRiskEstimate.choose(settings.lifeRiskInputs(events.perYear())) : null;
+        RiskAssessment.LineFlashes lines = settings.lineCount() == null || settings.lineCount() == 0
+                || !settings.hasGroundFlashDensity() ? null
+                : RiskAssessment.LineFlashes.of(settings.lineCount(), settings.lineLength(),
+                        settings.groundFlashDensity());
         return new RiskAssessment(site, geometry, settings, saved, area, suggestion, events, choice, lines);
     }
 

@@ -18,8 +18,10 @@ import org.lpzplanner.system.InvalidInputException;
 
 /**
  * Reads risk inputs typed in the page form or sent to the API, by field name. A missing or blank
- * field takes its default ({@link RiskSettings#defaults()}); a value that cannot be used throws
- * {@link InvalidInputException} naming the field, so nothing half-read is ever stored.
+ * field takes its default where it has one ({@link RiskSettings#initial()}: each table's most
+ * conservative value) and stays unchosen where it has none (the estimate then names it as missing);
+ * a value that cannot be used throws {@link InvalidInputException} naming the field, so nothing
+ * half-read is ever stored.
  */
 final class RiskSettingsParser {
 
@@ -29,7 +31,7 @@ final class RiskSettingsParser {
             "personsTotal", "hoursPerYear", "lineCount", "lineLength");
 
     /** Choice value meaning "use the app's suggestion" for the location factor. */
-    static final String SUGGESTED = "SUGGESTED";
+    static final String SUGGESTED = RiskSettings.SUGGESTED_LOCATION;
 
     static final double MAX_FLASH_DENSITY = 100;
     static final int MAX_LINES = 20;
@@ -46,7 +48,7 @@ final class RiskSettingsParser {
      * @throws InvalidInputException for the first field that cannot be used
      */
     static RiskSettings parse(Function<String, String> values) {
-        RiskSettings d = RiskSettings.defaults();
+        RiskSettings d = RiskSettings.initial();
         Double flashDensity = number(values, "flashDensity", false, MAX_FLASH_DENSITY, false);
         Double days = number(values, "thunderstormDays", false, 366, false);
         FlashDensitySource source = choice(values, "flashDensitySource", FlashDensitySource.class, null);
@@ -55,20 +57,17 @@ final class RiskSettingsParser {
                 throw new InvalidInputException("flashDensitySource", "give either flashDensity or thunderstormDays,"
                         + " or say which one counts with flashDensitySource (MEASURED or THUNDERSTORM_DAYS)");
             }
-            source = flashDensity != null ? FlashDensitySource.MEASURED : FlashDensitySource.THUNDERSTORM_DAYS;
+            source = flashDensity != null ? FlashDensitySource.MEASURED
+                    : days != null ? FlashDensitySource.THUNDERSTORM_DAYS : null;
         }
         if (source == FlashDensitySource.MEASURED) {
-            if (flashDensity == null) {
-                throw new InvalidInputException("flashDensity", "flashDensity is missing: give the ground flash"
-                        + " density in flashes per km² per year, e.g. 2.5");
-            }
             days = null;
         } else {
             flashDensity = null;
-            days = days == null ? d.thunderstormDays() : days;
         }
         String locationText = text(values, "location");
-        LocationFactor location = locationText == null || locationText.equalsIgnoreCase(SUGGESTED) ? null
+        boolean suggested = locationText != null && locationText.equalsIgnoreCase(SUGGESTED);
+        LocationFactor location = locationText == null || suggested ? null
                 : choice(values, "location", LocationFactor.class, null);
         Occupancy occupancy = occupancy(values, d.occupancy());
         Double lineCountValue = number(values, "lineCount", true, MAX_LINES, true);
@@ -79,7 +78,7 @@ final class RiskSettingsParser {
         } else if (lineLength == null) {
             lineLength = RiskSettings.DEFAULT_LINE_LENGTH;
         }
-        return new RiskSettings(source, flashDensity, days, location,
+        return new RiskSettings(source, flashDensity, days, location, suggested,
                 choice(values, "surface", SurfaceType.class, d.surface()),
                 choice(values, "fireRisk", FireRisk.class, d.fireRisk()),
                 choice(values, "fireProvisions", FireProvisions.class, d.fireProvisions()),

@@ -35,6 +35,7 @@ import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
 import org.lpzplanner.risk.FlashDensitySource;
+import org.lpzplanner.risk.RiskSettings;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.keepout.KeepOutOutline;
 import org.lpzplanner.sites.CoverDetails;
@@ -338,17 +339,35 @@ final class SiteArchiveCodec {
     private static SiteArchive.RiskInputs riskInputs(JsonNode node) {
         String p = "riskInputs";
         JsonNode lines = node.get("lineCount");
-        return new SiteArchive.RiskInputs(choice(node, p, "flashDensitySource", FlashDensitySource.class),
+        return new SiteArchive.RiskInputs(optionalChoice(node, p, "flashDensitySource", FlashDensitySource.class),
                 optionalPositive(node, p, "flashDensity"), optionalPositive(node, p, "thunderstormDays"),
-                node.hasNonNull("locationFactor") ? choice(node, p, "locationFactor", LocationFactor.class) : null,
-                choice(node, p, "surfaceType", SurfaceType.class), choice(node, p, "fireRisk", FireRisk.class),
+                locationFactor(node, p), choice(node, p, "surfaceType", SurfaceType.class),
+                optionalChoice(node, p, "fireRisk", FireRisk.class),
                 choice(node, p, "fireProvisions", FireProvisions.class),
-                choice(node, p, "specialHazard", SpecialHazard.class),
-                choice(node, p, "structureUse", StructureUse.class),
+                optionalChoice(node, p, "specialHazard", SpecialHazard.class),
+                optionalChoice(node, p, "structureUse", StructureUse.class),
                 choice(node, p, "touchStep", TouchStepProtection.class), nonNegative(node, p, "personsInZone"),
                 nonNegative(node, p, "personsTotal"), nonNegative(node, p, "hoursPerYear"),
                 lines == null || lines.isNull() ? null : (int) whole(node, p, "lineCount", 0, 1000),
                 optionalPositive(node, p, "lineLength"), instant(node, p, "updatedAt"));
+    }
+
+    /** A location class, "SUGGESTED" (the user chose the app's suggestion) or null (not chosen). */
+    private static String locationFactor(JsonNode node, String path) {
+        if (!node.hasNonNull("locationFactor")) {
+            return null;
+        }
+        JsonNode value = node.get("locationFactor");
+        if (value.isString() && RiskSettings.SUGGESTED_LOCATION.equals(value.stringValue())) {
+            return value.stringValue();
+        }
+        return choice(node, path, "locationFactor", LocationFactor.class);
+    }
+
+    /** A choice that may be left empty (null or absent: not chosen yet). */
+    private static <E extends Enum<E>> String optionalChoice(JsonNode node, String path, String name,
+            Class<E> choices) {
+        return node.hasNonNull(name) ? choice(node, path, name, choices) : null;
     }
 
     private static <E extends Enum<E>> String choice(JsonNode node, String path, String name, Class<E> choices) {

@@ -48,7 +48,7 @@ class RiskPageBrowserTest extends BrowserTestBase {
 
         browser.findElement(By.id("risk-link")).click();
         new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.urlMatches(".*/sites/\\d+/risk$"));
-        assertThat(browser.findElement(By.id("risk-defaults")).getText()).contains("defaults");
+        assertThat(browser.findElement(By.id("risk-defaults")).getText()).contains("No risk inputs are saved");
         WebElement svg = browser.findElement(By.cssSelector("svg.collection-area"));
         assertThat(svg.findElements(By.cssSelector("path.collection-zone"))).hasSize(1);
         assertThat(browser.findElement(By.id("location-suggestion")).getText()).contains("Ward block");
@@ -56,6 +56,10 @@ class RiskPageBrowserTest extends BrowserTestBase {
         WebElement days = browser.findElement(By.name("thunderstormDays"));
         days.clear();
         days.sendKeys("20");
+        // no verdict before the inputs without a default are chosen
+        assertThat(browser.findElements(By.id("risk-options"))).isEmpty();
+        assertThat(browser.findElement(By.id("risk-missing")).getText()).contains("Location factor C_D", "Fire risk r_f");
+        new Select(browser.findElement(By.name("location"))).selectByValue("SUGGESTED");
         new Select(browser.findElement(By.name("structureUse"))).selectByValue("HOSPITAL_HOTEL_SCHOOL_CIVIC");
         new Select(browser.findElement(By.name("fireRisk"))).selectByValue("HIGH");
         new Select(browser.findElement(By.name("fireProvisions"))).selectByValue("AUTOMATIC");

@@ -38,8 +38,8 @@ import tools.jackson.databind.JsonNode;
 class RiskApiTest {
 
     static final String HOSPITAL = """
-            {"thunderstormDays": 20, "structureUse": "HOSPITAL_HOTEL_SCHOOL_CIVIC", "fireRisk": "HIGH",
-             "fireProvisions": "AUTOMATIC", "specialHazard": "DIFFICULT_EVACUATION"}
+            {"thunderstormDays": 20, "location": "SUGGESTED", "structureUse": "HOSPITAL_HOTEL_SCHOOL_CIVIC",
+             "fireRisk": "HIGH", "fireProvisions": "AUTOMATIC", "specialHazard": "DIFFICULT_EVACUATION"}
             """;
 
     /** N_D of the worked example, from the exact rectangle area. */
@@ -63,28 +63,83 @@ class RiskApiTest {
         return RiskSites.JSON.readTree(answer);
     }
 
+    private static java.util.List<String> texts(JsonNode array) {
+        java.util.List<String> out = new java.util.ArrayList<>();
+        array.forEach(n -> out.add(n.asString()));
+        return out;
+    }
+
     @Test
-    void withoutSavedInputsTheDefaultsAndTheRectangleAreaAreUsed() throws Exception {
+    void withoutTheInputsThatHaveNoSafeDefaultThereIsNoVerdictAndTheAnswerNamesThem() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Defaults block");
 
         JsonNode risk = json("/api/sites/" + id + "/risk", 200);
 
         assertThat(risk.path("saved").asBoolean()).isFalse();
+        assertThat(risk.path("complete").isBoolean()).as("complete is answered").isTrue();
+        assertThat(risk.path("complete").asBoolean()).isFalse();
+        // no table gives the most conservative value of these a meaning as a default: the user chooses
+        assertThat(texts(risk.path("missingInputs"))).contains("flashDensity", "location", "fireRisk",
+                "specialHazard", "structureUse");
+        // no verdict of any kind until they are entered
+        assertThat(risk.path("options").isArray()).isTrue();
+        assertThat(risk.path("options")).isEmpty();
+        assertThat(risk.path("lowestSufficientLevel").isNull()).isTrue();
+        assertThat(risk.path("tolerableWithoutLps").isNull()).isTrue();
+        assertThat(risk.path("anyOptionTolerable").isNull()).isTrue();
+        assertThat(risk.path("outcome").asString()).contains("ground flash density", "Fire risk r_f")
+                .doesNotContain("tolerable");
+        JsonNode inputs = risk.path("inputs");
+        for (String none : java.util.List.of("flashDensity", "thunderstormDays", "location", "fireRisk",
+                "specialHazard", "structureUse")) {
+            assertThat(inputs.path(none).isNull()).as(none).isTrue();
+        }
+        // the defaults kept are each table's most conservative value: r_t = 10⁻² the highest of
+        // IEC 62305-2:2010 Table C.3, r_p = 1 (Table C.4), P_TA = 1 (Table B.1), and
+        // n_z/n_t · t_z/8760 = 1, the largest the occupancy can be (Annex C)
+        assertThat(inputs.path("surface").asString()).isEqualTo("AGRICULTURAL_OR_CONCRETE");
+        assertThat(inputs.path("fireProvisions").asString()).isEqualTo("NONE");
+        assertThat(inputs.path("touchStep").asString()).isEqualTo("NONE");
+        assertThat(inputs.path("personsInZone").asDouble()).isEqualTo(inputs.path("personsTotal").asDouble());
+        assertThat(inputs.path("hoursPerYear").asDouble()).isEqualTo(8760.0);
+        // the geometry needs no input: A_D, the upper bound of the buffer's area, never below the
+        // exact area, at most twice the stated bound above it
         double area = risk.path("collectionArea").asDouble();
-        // the upper bound of the buffer's area: never below the exact area, at most twice the stated
-        // bound above it (inscribed zone ≥ exact·(1 − bound), raised by 1 / (1 − bound))
         assertThat(area).isGreaterThanOrEqualTo(RiskSites.BLOCK_AREA * (1 - 1e-12))
                 .isLessThanOrEqualTo(RiskSites.BLOCK_AREA * (1 + 2 * CollectionAreaOp.MAX_RELATIVE_ERROR));
-        // one structure alone: isolated (C_D = 1, IEC 62305-2:2010 Table A.1)
+        // one structure alone: isolated (C_D = 1, IEC 62305-2:2010 Table A.1), offered, not applied
         assertThat(risk.path("suggestedLocation").path("factor").asString()).isEqualTo("ISOLATED");
-        assertThat(risk.path("locationFactorValue").asDouble()).isEqualTo(1.0);
-        // default placeholder T_d = 25 gives N_G = 2.5 (0.1 · T_d)
-        assertThat(risk.path("groundFlashDensity").asDouble()).isCloseTo(2.5, within(1e-12));
-        assertThat(risk.path("dangerousEventsPerYear").asDouble()).isCloseTo(2.5 * area * 1e-6, within(1e-12));
+        assertThat(risk.path("dangerousEventsPerYear").isNull()).isTrue();
         assertThat(risk.path("tolerableRisk").asDouble()).isEqualTo(1e-5);
-        assertThat(risk.path("options")).hasSize(5);
-        assertThat(risk.path("inputs").path("location").isNull()).isTrue();
         assertThat(risk.path("cautions")).hasSize(Cautions.lines().size());
+    }
+
+    @Test
+    void partInputsAreSavedAndTheAnswerStillNamesWhatIsMissing() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Part block");
+
+        JsonNode risk = send("/api/sites/" + id + "/risk",
+                "{\"thunderstormDays\": 20, \"fireRisk\": \"HIGH\", \"location\": \"SUGGESTED\"}", 200);
+
+        assertThat(risk.path("saved").asBoolean()).isTrue();
+        assertThat(risk.path("complete").isBoolean()).isTrue();
+        assertThat(risk.path("complete").asBoolean()).isFalse();
+        assertThat(texts(risk.path("missingInputs"))).contains("specialHazard", "structureUse")
+                .doesNotContain("thunderstormDays", "flashDensity", "fireRisk", "location");
+        assertThat(risk.path("options")).isEmpty();
+        assertThat(risk.path("lowestSufficientLevel").isNull()).isTrue();
+        // N_D is known: N_G = 0.1 · 20 = 2 (Annex A), C_D = 1 as suggested (Table A.1)
+        assertThat(risk.path("dangerousEventsPerYear").asDouble()).isCloseTo(ND, within(ND * 2 * CollectionAreaOp.MAX_RELATIVE_ERROR));
+
+        JsonNode again = json("/api/sites/" + id + "/risk", 200);
+        assertThat(again.path("inputs").path("fireRisk").asString()).isEqualTo("HIGH");
+        assertThat(again.path("inputs").path("location").asString()).isEqualTo("SUGGESTED");
+        assertThat(again.path("inputs").path("structureUse").isNull()).isTrue();
+
+        // measured N_G chosen but not entered yet: saved as it is, and named
+        risk = send("/api/sites/" + id + "/risk", "{\"flashDensitySource\": \"MEASURED\"}", 200);
+        assertThat(texts(risk.path("missingInputs"))).contains("flashDensity").doesNotContain("thunderstormDays");
+        assertThat(risk.path("groundFlashDensity").isNull()).isTrue();
     }
 
     @Test
@@ -167,8 +222,6 @@ class RiskApiTest {
         assertThat(e.path("field").asString()).isEqualTo("hoursPerYear");
         e = send(url, "{\"flashDensity\": 3, \"thunderstormDays\": 20}", 400);
         assertThat(e.path("field").asString()).isEqualTo("flashDensitySource");
-        e = send(url, "{\"flashDensitySource\": \"MEASURED\"}", 400);
-        assertThat(e.path("field").asString()).isEqualTo("flashDensity");
         e = send(url, "{\"colour\": \"red\"}", 400);
         assertThat(e.path("field").asString()).isEqualTo("colour");
         e = send(url, "{\"surface\": [1]}", 400);

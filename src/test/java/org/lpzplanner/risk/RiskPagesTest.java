@@ -74,29 +74,43 @@ class RiskPagesTest {
     }
 
     @Test
-    void pageShowsEveryInputWithMeaningAndDefaultTheDrawingTheResultAndTheCautions() throws Exception {
+    void pageShowsEveryInputWithMeaningAndDefaultTheDrawingAndTheCautionsButNoVerdictWithoutTheInputs()
+            throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Page <block> & co");
 
         String html = page(get("/sites/" + id + "/risk"), 200);
 
         assertThat(html).contains("Page <block> & co", "IEC 62305-2:2010", "No risk inputs are saved",
                 "class=\"plan collection-area\"", "class=\"collection-zone\"", "Block (10 m)",
-                "R1 for each option", "No LPS", "LPS of protection level I", "tolerable",
                 "Location factor C_D", "isolated, no other objects nearby", "Suggestion: isolated",
-                "Dangerous events N_D", "Collection area A_D", "Without an LPS, R_");
+                "Collection area A_D");
         for (String field : RiskSettingsParser.FIELDS) {
             assertThat(html).contains("name=\"" + field + "\"");
         }
         assertThat(html).contains("Floor or ground surface r_t", "Default: agricultural ground or concrete",
-                "Fire provisions r_p", "Default: no fire provisions", "Thunderstorm days T_d", "Default: 25 days");
+                "Fire provisions r_p", "Default: no fire provisions", "Thunderstorm days T_d");
+        // the inputs without a safe default are named, and nothing is judged until they are entered
+        assertThat(html).contains("id=\"risk-missing\"", "Fire risk r_f", "Special hazard h_z",
+                "Type of structure L_F", "No default: choose");
+        assertThat(html).doesNotContain("id=\"risk-options\"", "id=\"select-level\"", "id=\"risk-dominance\"",
+                "R1 for each option", "is tolerable", "lowest protection level", "Tolerable (R1");
         for (String caution : Cautions.lines()) {
             assertThat(html).contains(caution);
         }
         // the site name in the drawing is escaped
         assertThat(mvc.perform(get("/sites/" + id + "/risk")).andReturn().getResponse()
                 .getContentAsString(StandardCharsets.UTF_8)).doesNotContain("<block>");
-        // defaults: R1 tolerable without an LPS, so no level is offered
-        assertThat(html).doesNotContain("id=\"select-level\"");
+    }
+
+    @Test
+    void levelButtonIsRefusedWhileInputsAreMissing() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Unfinished block");
+        long version = api("/api/sites/" + id).path("version").asLong();
+
+        String html = page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400);
+
+        assertThat(html).contains("The level was not changed", "inputs are missing");
+        assertThat(api("/api/sites/" + id).path("level").asString()).isEqualTo("IV");
     }
 
     @Test
@@ -241,6 +255,11 @@ class RiskPagesTest {
     @Test
     void levelButtonIsRefusedWhenNoLevelIsNeeded() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Calm block");
+        // other structure (L_F 10⁻²), low fire risk (r_f 10⁻³), no special hazard (h_z 1), automatic
+        // fire provisions (r_p 0.2) [IEC 62305-2:2010 Tables C.2, C.5, C.6, C.4; from memory]:
+        // L_B = 0.2 · 10⁻³ · 10⁻² = 2·10⁻⁶, L_A = 10⁻⁴; R1 = 0.01445 · 1.02·10⁻⁴ = 1.5·10⁻⁶ ≤ 10⁻⁵ (hand)
+        mvc.perform(hospitalForm(id, java.util.Map.of("structureUse", "OTHER", "fireRisk", "LOW",
+                "specialHazard", "NONE"))).andExpect(status().is3xxRedirection());
         long version = api("/api/sites/" + id).path("version").asLong();
 
         String html = page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400);
