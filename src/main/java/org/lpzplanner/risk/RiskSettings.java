@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.lpzplanner.engine.risk.DangerousEvents;
 import org.lpzplanner.engine.risk.FireProvisions;
 import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.IncomingLine;
 import org.lpzplanner.engine.risk.LifeRiskInputs;
 import org.lpzplanner.engine.risk.LocationFactor;
 import org.lpzplanner.engine.risk.Occupancy;
@@ -29,16 +30,22 @@ import org.lpzplanner.engine.risk.TouchStepProtection;
  * @param fireRisk            r_f; null until chosen
  * @param specialHazard       h_z; null until chosen
  * @param use                 L_T and L_F; null until chosen
- * @param lineCount           incoming lines (power, telecom) the user entered, or null when not entered
- * @param lineLength          length L_L of each line in metres, null when no lines are entered
+ * @param lifeCriticalSystems whether a failure of internal systems immediately endangers life; null until answered
+ * @param lines               the incoming lines (power, telecom), empty for none; null until the user says how many
  */
 public record RiskSettings(FlashDensitySource flashDensitySource, Double flashDensity, Double thunderstormDays,
         LocationFactor location, boolean useSuggestedLocation, SurfaceType surface, FireRisk fireRisk,
         FireProvisions fireProvisions, SpecialHazard specialHazard, StructureUse use, TouchStepProtection touchStep,
-        Occupancy occupancy, Integer lineCount, Double lineLength) {
+        Occupancy occupancy, Boolean lifeCriticalSystems, List<IncomingLine> lines) {
 
     /** The stored and typed value meaning "the user chose the app's suggestion" for the location factor. */
     public static final String SUGGESTED_LOCATION = "SUGGESTED";
+
+    /** The most incoming lines the inputs hold. */
+    public static final int MAX_LINES = 20;
+
+    /** The longest line section taken, metres. */
+    public static final double MAX_LINE_LENGTH = 100_000;
 
     /** L_L assumed when the length of a line is not known, metres [IEC 62305-2:2010 Annex A; from memory]. */
     public static final double DEFAULT_LINE_LENGTH = 1000;
@@ -47,17 +54,25 @@ public record RiskSettings(FlashDensitySource flashDensitySource, Double flashDe
         if (location != null && useSuggestedLocation) {
             throw new IllegalArgumentException("either a location class or the suggestion, not both");
         }
+        lines = lines == null ? null : List.copyOf(lines);
     }
 
     /**
      * The inputs before the user saves any: nothing chosen where no default is safe (N_G, C_D, fire
-     * risk, special hazard, type of structure); elsewhere each table's most conservative value: the
-     * most conducting ground (r_t = 10⁻²), no fire provisions (r_p = 1), no touch and step protection
-     * (P_TA = 1), everyone present all year round (n_z/n_t · t_z/8760 = 1); no lines entered.
+     * risk, special hazard, type of structure, whether internal systems are life-critical, how many
+     * lines enter); elsewhere each table's most conservative value: the most conducting ground
+     * (r_t = 10⁻²), no fire provisions (r_p = 1), no touch and step protection (P_TA = 1), everyone
+     * present all year round (n_z/n_t · t_z/8760 = 1). A line, once counted, starts at
+     * {@link StoredLine#conservative(double)}.
      */
     public static RiskSettings initial() {
         return new RiskSettings(null, null, null, null, false, SurfaceType.AGRICULTURAL_OR_CONCRETE, null,
                 FireProvisions.NONE, null, null, TouchStepProtection.NONE, Occupancy.always(), null, null);
+    }
+
+    /** The number of incoming lines entered; null until the user says. */
+    public Integer lineCount() {
+        return lines == null ? null : lines.size();
     }
 
     /**
@@ -79,6 +94,12 @@ public record RiskSettings(FlashDensitySource flashDensitySource, Double flashDe
         }
         if (use == null) {
             missing.add("structureUse");
+        }
+        if (lifeCriticalSystems == null) {
+            missing.add("lifeCriticalSystems");
+        }
+        if (lines == null) {
+            missing.add("lineCount");
         }
         return missing;
     }
@@ -117,15 +138,15 @@ public record RiskSettings(FlashDensitySource flashDensitySource, Double flashDe
     }
 
     /**
-     * The engine's inputs for the given number of dangerous events per year.
+     * The engine's inputs for the dangerous events to the structure (N_G, A_D, C_D).
      *
      * @throws IllegalStateException when an input is missing ({@link #missing()})
      */
-    public LifeRiskInputs lifeRiskInputs(double dangerousEventsPerYear) {
+    public LifeRiskInputs lifeRiskInputs(DangerousEvents events) {
         if (!complete()) {
             throw new IllegalStateException("risk inputs missing: " + String.join(", ", missing()));
         }
-        return new LifeRiskInputs(dangerousEventsPerYear, surface, fireRisk, fireProvisions, specialHazard, use,
-                touchStep, occupancy);
+        return new LifeRiskInputs(events, surface, fireRisk, fireProvisions, specialHazard, use, touchStep, occupancy,
+                lines, lifeCriticalSystems);
     }
 }

@@ -1,5 +1,6 @@
 package org.lpzplanner.risk;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
@@ -7,13 +8,21 @@ import java.util.function.Function;
 import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 import org.lpzplanner.engine.risk.FireProvisions;
+import org.lpzplanner.engine.risk.EntrySurgeProtection;
 import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.IncomingLine;
+import org.lpzplanner.engine.risk.LineEnvironment;
+import org.lpzplanner.engine.risk.LineInstallation;
+import org.lpzplanner.engine.risk.LineShielding;
+import org.lpzplanner.engine.risk.LineTouchProtection;
+import org.lpzplanner.engine.risk.LineTransformer;
 import org.lpzplanner.engine.risk.LocationFactor;
 import org.lpzplanner.engine.risk.Occupancy;
 import org.lpzplanner.engine.risk.SpecialHazard;
 import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.engine.risk.WithstandVoltage;
 import org.lpzplanner.system.InvalidInputException;
 
 /**
@@ -25,18 +34,32 @@ import org.lpzplanner.system.InvalidInputException;
  */
 final class RiskSettingsParser {
 
-    /** Every field name the form and the API know. */
+    /** The fields of the whole structure, as the form shows them. */
     static final List<String> FIELDS = List.of("flashDensitySource", "flashDensity", "thunderstormDays", "location",
-            "surface", "fireRisk", "fireProvisions", "specialHazard", "structureUse", "touchStep", "personsInZone",
-            "personsTotal", "hoursPerYear", "lineCount", "lineLength");
+            "surface", "fireRisk", "fireProvisions", "specialHazard", "structureUse", "lifeCriticalSystems",
+            "touchStep", "personsInZone", "personsTotal", "hoursPerYear", "lineCount");
+
+    /**
+     * Fields only the API takes: {@code lineLength}, the length of each line given only by the
+     * count (earlier clients), and {@code lines}, the array of lines with the {@link #LINE_FIELDS}.
+     */
+    static final List<String> API_FIELDS = List.of("lineLength", "lines");
+
+    /** The fields of one incoming line; typed as {@code lines[i].field}, i from 0. */
+    static final List<String> LINE_FIELDS = List.of("installation", "length", "environment", "transformer",
+            "surgeProtection", "shielding", "withstandVoltage", "touchProtection");
+
+    /** Answers to a yes-or-no question. */
+    static final String YES = "YES";
+    static final String NO = "NO";
 
     /** Choice value meaning "use the app's suggestion" for the location factor. */
     static final String SUGGESTED = RiskSettings.SUGGESTED_LOCATION;
 
     static final double MAX_FLASH_DENSITY = 100;
-    static final int MAX_LINES = 20;
+    static final int MAX_LINES = RiskSettings.MAX_LINES;
     static final double MAX_PERSONS = 1e7;
-    static final double MAX_LINE_LENGTH = 100_000;
+    static final double MAX_LINE_LENGTH = RiskSettings.MAX_LINE_LENGTH;
 
     private static final Pattern DECIMAL = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
@@ -70,13 +93,14 @@ final class RiskSettingsParser {
         LocationFactor location = locationText == null || suggested ? null
                 : choice(values, "location", LocationFactor.class, null);
         Occupancy occupancy = occupancy(values, d.occupancy());
-        Double lineCountValue = number(values, "lineCount", true, MAX_LINES, true);
-        Integer lineCount = lineCountValue == null ? null : lineCountValue.intValue();
+        Double lineCount = number(values, "lineCount", true, MAX_LINES, true);
         Double lineLength = number(values, "lineLength", false, MAX_LINE_LENGTH, false);
-        if (lineCount == null || lineCount == 0) {
-            lineLength = null;
-        } else if (lineLength == null) {
-            lineLength = RiskSettings.DEFAULT_LINE_LENGTH;
+        List<IncomingLine> lines = null;
+        if (lineCount != null) {
+            lines = new ArrayList<>();
+            for (int i = 0; i < lineCount; i++) {
+                lines.add(line(values, i, lineLength == null ? RiskSettings.DEFAULT_LINE_LENGTH : lineLength));
+            }
         }
         return new RiskSettings(source, flashDensity, days, location, suggested,
                 choice(values, "surface", SurfaceType.class, d.surface()),
@@ -85,7 +109,41 @@ final class RiskSettingsParser {
                 choice(values, "specialHazard", SpecialHazard.class, d.specialHazard()),
                 choice(values, "structureUse", StructureUse.class, d.use()),
                 choice(values, "touchStep", TouchStepProtection.class, d.touchStep()),
-                occupancy, lineCount, lineLength);
+                occupancy, yesOrNo(values, "lifeCriticalSystems"), lines);
+    }
+
+    /** The name a line's field is typed under, e.g. {@code lines[0].length}. */
+    static String lineField(int index, String field) {
+        return "lines[" + index + "]." + field;
+    }
+
+    /** Line {@code i}; a field not given takes its most conservative value, the length {@code length}. */
+    private static IncomingLine line(Function<String, String> values, int i, double length) {
+        IncomingLine d = StoredLine.conservative(length);
+        Double typed = number(values, lineField(i, "length"), false, MAX_LINE_LENGTH, false);
+        return new IncomingLine(choice(values, lineField(i, "installation"), LineInstallation.class, d.installation()),
+                typed == null ? length : typed,
+                choice(values, lineField(i, "environment"), LineEnvironment.class, d.environment()),
+                choice(values, lineField(i, "transformer"), LineTransformer.class, d.transformer()),
+                choice(values, lineField(i, "surgeProtection"), EntrySurgeProtection.class, d.surgeProtection()),
+                choice(values, lineField(i, "shielding"), LineShielding.class, d.shielding()),
+                choice(values, lineField(i, "withstandVoltage"), WithstandVoltage.class, d.withstand()),
+                choice(values, lineField(i, "touchProtection"), LineTouchProtection.class, d.touchProtection()));
+    }
+
+    /** YES, NO (or true, false); null when not given. */
+    private static Boolean yesOrNo(Function<String, String> values, String field) {
+        String text = text(values, field);
+        if (text == null) {
+            return null;
+        }
+        if (text.equalsIgnoreCase(YES) || text.equalsIgnoreCase("true")) {
+            return true;
+        }
+        if (text.equalsIgnoreCase(NO) || text.equalsIgnoreCase("false")) {
+            return false;
+        }
+        throw new InvalidInputException(field, field + " must be " + YES + " or " + NO + ", got \"" + text + "\"");
     }
 
     private static Occupancy occupancy(Function<String, String> values, Occupancy d) {

@@ -69,7 +69,7 @@ class ReportSiteDataTest {
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
                         .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1,"
                                 + " \"fireRisk\": \"ORDINARY\", \"specialHazard\": \"NONE\","
-                                + " \"structureUse\": \"INDUSTRIAL_COMMERCIAL\"}"))
+                                + " \"structureUse\": \"INDUSTRIAL_COMMERCIAL\", \"lifeCriticalSystems\": \"NO\"}"))
                 .andExpect(status().isOk());
         String structure = design.downConductors(id).get(0).structureId();
         design.saveDownConductors(id, structure, List.of(new double[] {0, 0}, new double[] {80, 0},

@@ -21,6 +21,7 @@ import org.springframework.jdbc.datasource.DriverManagerDataSource;
  * have no default (fire risk, special hazard, type of structure, the location factor, the ground
  * flash density) were pre-filled then: a value equal to that former default may never have been
  * chosen, so it is cleared and must be chosen again; a value that differs was chosen and is kept.
+ * Lines were a count and one length: they load as that many lines at the most conservative values.
  */
 class RiskInputsMigrationTest {
 
@@ -66,8 +67,9 @@ class RiskInputsMigrationTest {
         assertThat(cleared.thunderstormDays()).isNull();
         assertThat(cleared.location()).isNull();
         assertThat(cleared.useSuggestedLocation()).isFalse();
-        assertThat(cleared.missing()).contains("thunderstormDays", "location", "fireRisk", "specialHazard",
-                "structureUse");
+        assertThat(cleared.missing()).containsExactly("thunderstormDays", "location", "fireRisk", "specialHazard",
+                "structureUse", "lifeCriticalSystems", "lineCount");
+        assertThat(cleared.lines()).isNull();
         // the former defaults that were already the most conservative stay
         assertThat(cleared.surface()).isEqualTo(SurfaceType.AGRICULTURAL_OR_CONCRETE);
         assertThat(cleared.fireProvisions()).isEqualTo(FireProvisions.NONE);
@@ -84,8 +86,13 @@ class RiskInputsMigrationTest {
         assertThat(kept.use()).isEqualTo(StructureUse.HOSPITAL_HOTEL_SCHOOL_CIVIC);
         assertThat(kept.touchStep()).isEqualTo(TouchStepProtection.WARNING_NOTICES);
         assertThat(kept.occupancy().personsTotal()).isEqualTo(40.0);
-        assertThat(kept.missing()).doesNotContain("flashDensity", "location", "fireRisk", "specialHazard",
-                "structureUse");
+        assertThat(kept.missing()).containsExactly("lifeCriticalSystems");
+        // two lines of 600 m stored as a count and one length: two lines at the most conservative
+        // values, the ones the form starts a line with
+        assertThat(kept.lines()).hasSize(2).allSatisfy(l -> {
+            assertThat(l.length()).isEqualTo(600.0);
+            assertThat(l).isEqualTo(StoredLine.conservative(600));
+        });
     }
 
     private static long site(JdbcClient jdbc, long team, String name) {

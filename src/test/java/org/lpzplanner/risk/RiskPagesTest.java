@@ -66,7 +66,7 @@ class RiskPagesTest {
                 .param("fireProvisions", "AUTOMATIC").param("specialHazard", "DIFFICULT_EVACUATION")
                 .param("structureUse", "HOSPITAL_HOTEL_SCHOOL_CIVIC").param("touchStep", "NONE")
                 .param("personsInZone", "1").param("personsTotal", "1").param("hoursPerYear", "8760")
-                .param("lineCount", "").param("lineLength", "");
+                .param("lifeCriticalSystems", "NO").param("lineCount", "0");
         java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
         form.buildRequest(new org.springframework.mock.web.MockServletContext()).getParameterMap()
                 .forEach((k, v) -> values.put(k, v[0]));
@@ -276,6 +276,47 @@ class RiskPagesTest {
     }
 
     @Test
+    void linesCountedInTheFormGetTheirOwnFieldsAndComponents() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Line form block");
+
+        mvc.perform(hospitalForm(id, java.util.Map.of("lineCount", "1"))).andExpect(status().is3xxRedirection());
+        String html = page(get("/sites/" + id + "/risk"), 200);
+        // the new line at its most conservative values, its fields named for the form
+        assertThat(html).contains("id=\"line-1\"", "Incoming line 1", "name=\"lines[0].installation\"",
+                "name=\"lines[0].shielding\"", "name=\"lines[0].surgeProtection\"", "value=\"1000\"",
+                "<option value=\"OVERHEAD\" selected");
+        assertThat(html).contains("R_U", "R_V", "Line 1 (overhead, 1000 m, rural");
+
+        mvc.perform(hospitalForm(id, java.util.Map.of("lineCount", "1", "lines[0].installation", "BURIED",
+                "lines[0].length", "250"))).andExpect(status().is3xxRedirection());
+        JsonNode inputs = api("/api/sites/" + id + "/risk").path("inputs");
+        assertThat(inputs.path("lines").get(0).path("installation").asString()).isEqualTo("BURIED");
+        assertThat(inputs.path("lines").get(0).path("length").asDouble()).isEqualTo(250.0);
+        // a bad line value is named and shown again, nothing saved
+        html = page(hospitalForm(id, java.util.Map.of("lineCount", "1", "lines[0].length", "far")), 400);
+        assertThat(html).contains("lines[0].length must be a number", "value=\"far\"");
+        assertThat(api("/api/sites/" + id + "/risk").path("inputs").path("lines").get(0).path("length").asDouble())
+                .isEqualTo(250.0);
+    }
+
+    @Test
+    void aStructureOutsideTheEstimateGetsNoVerdictNorLevel() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Life support block");
+        mvc.perform(hospitalForm(id, java.util.Map.of("lifeCriticalSystems", "YES")))
+                .andExpect(status().is3xxRedirection());
+
+        String html = page(get("/sites/" + id + "/risk"), 200);
+
+        assertThat(html).contains("id=\"risk-outside\"", "does not cover the structure", "life-saving equipment",
+                "full method of IEC 62305-2");
+        assertThat(html).doesNotContain("id=\"risk-options\"", "id=\"select-level\"", "lowest protection level");
+        long version = api("/api/sites/" + id).path("version").asLong();
+        assertThat(page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400))
+                .contains("The level was not changed", "does not cover the structure");
+        assertThat(page(get("/sites/" + id), 200)).contains("does not cover this structure");
+    }
+
+    @Test
     void reportSectionHasOneRowPerOptionAndTheOutcome() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Report block");
         mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
@@ -283,12 +324,14 @@ class RiskPagesTest {
         ReportSection section = risk.reportSection(id, Locale.ENGLISH);
 
         assertThat(section.title()).contains("Risk of loss of human life", "IEC 62305-2:2010");
-        assertThat(section.columns()).hasSize(6);
+        assertThat(section.columns()).containsExactly("Option", "P_B", "R_A", "R_B", "R_U", "R_V", "R1",
+                "Tolerable (R1 \u2264 10\u207b\u2075)");
         assertThat(section.rows()).hasSize(5);
         assertThat(section.rows().get(0)).first().isEqualTo("No LPS");
         assertThat(section.rows().get(3)).containsExactly("LPS of protection level II", "0.05",
-                "7.23 × 10⁻⁸", "7.23 × 10⁻⁶", "7.3 × 10⁻⁶", "yes");
+                "7.23 × 10⁻⁸", "7.23 × 10⁻⁶", "0", "0", "7.3 × 10⁻⁶", "yes");
         assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("lowest protection level", "is II"));
-        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("Only R_A and R_B are counted"));
+        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("R1 here is R_A + R_B + R_U + R_V"));
+        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("No incoming lines"));
     }
 }

@@ -64,7 +64,7 @@ class ImportFuzzProperties {
             "downConductors", "metalInstallations", "savedCuts", "comments", "auditTrail", "flashDensity",
             "thunderstormDays", "lineLength", "siteName", "sourceName", "sourceText", "locationFactor", "lineCount",
             "address", "designer", "keepOutAreas", "flashDensitySource", "fireRisk", "specialHazard",
-            "structureUse");
+            "structureUse", "lifeCriticalSystems", "lines");
 
     @Autowired
     MockMvc mvc;
