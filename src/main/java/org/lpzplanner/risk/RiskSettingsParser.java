@@ -146,12 +146,16 @@ final class RiskSettingsParser {
         throw new InvalidInputException(field, field + " must be " + YES + " or " + NO + ", got \"" + text + "\"");
     }
 
+    /**
+     * n_z, n_t and t_z; one left out is taken so that the share exposed stays the largest it can be
+     * with the others: n_z = n_t (the whole structure one zone), n_t = n_z, t_z = 8760 h.
+     */
     private static Occupancy occupancy(Function<String, String> values, Occupancy d) {
         Double total = number(values, "personsTotal", false, MAX_PERSONS, false);
         Double inZone = number(values, "personsInZone", true, MAX_PERSONS, false);
         Double hours = number(values, "hoursPerYear", true, Occupancy.HOURS_PER_YEAR, false);
-        double t = total == null ? d.personsTotal() : total;
-        double z = inZone == null ? Math.min(t, d.personsInZone()) : inZone;
+        double t = total != null ? total : inZone != null && inZone > 0 ? inZone : d.personsTotal();
+        double z = inZone == null ? t : inZone;
         if (z > t) {
             throw new InvalidInputException("personsInZone", "personsInZone (" + plain(z) + ") cannot be more than"
                     + " personsTotal (" + plain(t) + ")");

@@ -117,6 +117,22 @@ class RiskApiTest {
     }
 
     @Test
+    void occupancyLeftPartlyOutKeepsTheWholeStructureExposed() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Occupied block");
+
+        // n_z/n_t · t_z/8760 [IEC 62305-2:2010 Annex C] is at its largest, 1, with n_z = n_t and
+        // t_z = 8760 h: a value left out must not shrink it
+        JsonNode inputs = send("/api/sites/" + id + "/risk", "{\"personsTotal\": 40}", 200).path("inputs");
+        assertThat(inputs.path("personsInZone").asDouble()).isEqualTo(40.0);
+        assertThat(inputs.path("hoursPerYear").asDouble()).isEqualTo(8760.0);
+        inputs = send("/api/sites/" + id + "/risk", "{\"personsInZone\": 30}", 200).path("inputs");
+        assertThat(inputs.path("personsTotal").asDouble()).isEqualTo(30.0);
+        inputs = send("/api/sites/" + id + "/risk", "{\"personsInZone\": 10, \"personsTotal\": 40}", 200)
+                .path("inputs");
+        assertThat(inputs.path("personsInZone").asDouble()).isEqualTo(10.0);
+    }
+
+    @Test
     void partInputsAreSavedAndTheAnswerStillNamesWhatIsMissing() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Part block");
 
