@@ -67,6 +67,14 @@ public class RiskPageController {
     public ModelAndView save(@PathVariable long id, @RequestParam Map<String, String> form, Locale locale) {
         Map<String, String> entered = new LinkedHashMap<>();
         RiskSettingsParser.FIELDS.forEach(f -> entered.put(f, form.getOrDefault(f, "")));
+        for (int i = 0; i < RiskSettingsParser.MAX_LINES; i++) {
+            for (String f : RiskSettingsParser.LINE_FIELDS) {
+                String name = RiskSettingsParser.lineField(i, f);
+                if (form.containsKey(name)) {
+                    entered.put(name, form.get(name));
+                }
+            }
+        }
         try {
             risk.save(id, entered::get);
             return new ModelAndView("redirect:/sites/" + id + "/risk?saved=true");

@@ -19,8 +19,9 @@ import org.springframework.stereotype.Component;
  * why, and the collection area as a layer the user can switch on.
  *
  * <p>The form starts at the lowest sufficient level of the saved risk inputs, unless the site's own
- * level is stricter (a smaller sphere: kept, on the safe side). While no inputs are saved, the
- * defaults' placeholder flash density means nothing, so the form keeps the site's level. When even
+ * level is stricter (a smaller sphere: kept, on the safe side). While no inputs are saved, an input
+ * without a default is missing, or the structure is outside the estimate, there is no estimate, so
+ * the form keeps the site's level. When even
  * level I is not enough, it starts at level I.
  */
 @Component
@@ -47,11 +48,15 @@ class RiskPlanContribution implements PlanContribution {
             return Map.of();
         }
         Map<String, Object> model = new LinkedHashMap<>();
-        String r1 = RiskFormat.scientific(a.withoutLps().r1());
         ProtectionLevel start = site.level();
+        String r1 = a.hasVerdict() ? RiskFormat.scientific(a.withoutLps().r1()) : null;
         String note;
         if (!a.saved()) {
             note = text(locale, "plan.riskLevel.unsaved", site.level().name());
+        } else if (!a.complete()) {
+            note = text(locale, "plan.riskLevel.incomplete", site.level().name(), risk.missingText(a, locale));
+        } else if (!a.hasVerdict()) {
+            note = text(locale, "plan.riskLevel.outside", site.level().name());
         } else if (a.choice().chosen().isEmpty()) {
             start = ProtectionLevel.I;
             note = text(locale, "plan.riskLevel.insufficient", r1);

@@ -4,9 +4,12 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Timestamp;
 import java.time.Instant;
+import java.util.Collections;
+import java.util.List;
 import java.util.Optional;
 import org.lpzplanner.engine.risk.FireProvisions;
 import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.IncomingLine;
 import org.lpzplanner.engine.risk.LocationFactor;
 import org.lpzplanner.engine.risk.Occupancy;
 import org.lpzplanner.engine.risk.SpecialHazard;
@@ -18,7 +21,17 @@ import org.springframework.context.event.EventListener;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.stereotype.Repository;
 
-/** Reads and writes the {@code site_risk_inputs} table (one row per site). Stores checked settings only. */
+/**
+ * Reads and writes the {@code site_risk_inputs} table (one row per site). Stores checked settings
+ * only. A choice not made yet is stored as null; the location factor is stored as its class name,
+ * as {@value RiskSettingsParser#SUGGESTED} when the user chose the app's suggestion, or null when
+ * nothing is chosen (rows of earlier releases, where null meant the suggestion pre-filled in the
+ * form, thus read as not chosen: migration V15). The lines are {@code line_count} (null until the
+ * user says how many) and {@code line_details}, a JSON array of {@link StoredLine}; rows of earlier
+ * releases hold only a count and one length ({@code line_length}), read as that many lines of that
+ * length with every other factor at its most conservative value ({@link StoredLine#conservative}).
+ * {@code life_critical_systems} is YES, NO or null (not answered).
+ */
 @Repository
 class RiskRepository {
 
@@ -35,41 +48,69 @@ class RiskRepository {
 
     /** Replaces the site's inputs (update, or insert when there were none); portable SQL, no upsert. */
     void save(long siteId, RiskSettings s, Instant now) {
-        Object[] values = {s.flashDensitySource().name(), s.flashDensity(), s.thunderstormDays(),
-            s.location() == null ? null : s.location().name(), s.surface().name(), s.fireRisk().name(),
-            s.fireProvisions().name(), s.specialHazard().name(), s.use().name(), s.touchStep().name(),
+        Object[] values = {name(s.flashDensitySource()), s.flashDensity(), s.thunderstormDays(),
+            s.useSuggestedLocation() ? RiskSettingsParser.SUGGESTED : name(s.location()), s.surface().name(),
+            name(s.fireRisk()), s.fireProvisions().name(), name(s.specialHazard()), name(s.use()), s.touchStep().name(),
             s.occupancy().personsInZone(), s.occupancy().personsTotal(), s.occupancy().hoursPerYear(),
-            s.lineCount(), s.lineLength(), Timestamp.from(now), siteId};
+            s.lineCount(), null, s.lines() == null ? null : StoredLine.toJson(s.lines().stream().map(StoredLine::of)
+                    .toList()), s.lifeCriticalSystems() == null ? null
+                    : s.lifeCriticalSystems() ? RiskSettingsParser.YES : RiskSettingsParser.NO,
+            Timestamp.from(now), siteId};
         int rows = jdbc.sql("UPDATE site_risk_inputs SET flash_density_source = ?, flash_density = ?,"
                         + " thunderstorm_days = ?, location_factor = ?, surface_type = ?, fire_risk = ?,"
                         + " fire_provisions = ?, special_hazard = ?, structure_use = ?, touch_step = ?,"
                         + " persons_in_zone = ?, persons_total = ?, hours_per_year = ?, line_count = ?,"
-                        + " line_length = ?, updated_at = ? WHERE site_id = ?")
+                        + " line_length = ?, line_details = ?, life_critical_systems = ?, updated_at = ?"
+                        + " WHERE site_id = ?")
                 .params(values).update();
         if (rows == 0) {
             jdbc.sql("INSERT INTO site_risk_inputs (flash_density_source, flash_density, thunderstorm_days,"
                             + " location_factor, surface_type, fire_risk, fire_provisions, special_hazard,"
                             + " structure_use, touch_step, persons_in_zone, persons_total, hours_per_year, line_count,"
-                            + " line_length, updated_at, site_id) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                            + " line_length, line_details, life_critical_systems, updated_at, site_id)"
+                            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
                     .params(values).update();
         }
     }
 
+    private static String name(Enum<?> choice) {
+        return choice == null ? null : choice.name();
+    }
+
+    private static <E extends Enum<E>> E choice(ResultSet rs, String column, Class<E> type) throws SQLException {
+        String value = rs.getString(column);
+        return value == null ? null : Enum.valueOf(type, value);
+    }
+
     private static RiskSettings row(ResultSet rs, int rowNum) throws SQLException {
         String location = rs.getString("location_factor");
-        int lines = rs.getInt("line_count");
-        Integer lineCount = rs.wasNull() ? null : lines;
-        return new RiskSettings(FlashDensitySource.valueOf(rs.getString("flash_density_source")),
+        boolean suggested = RiskSettingsParser.SUGGESTED.equals(location);
+        String lifeCritical = rs.getString("life_critical_systems");
+        return new RiskSettings(choice(rs, "flash_density_source", FlashDensitySource.class),
                 nullableDouble(rs, "flash_density"), nullableDouble(rs, "thunderstorm_days"),
-                location == null ? null : LocationFactor.valueOf(location),
-                SurfaceType.valueOf(rs.getString("surface_type")), FireRisk.valueOf(rs.getString("fire_risk")),
+                location == null || suggested ? null : LocationFactor.valueOf(location), suggested,
+                SurfaceType.valueOf(rs.getString("surface_type")), choice(rs, "fire_risk", FireRisk.class),
                 FireProvisions.valueOf(rs.getString("fire_provisions")),
-                SpecialHazard.valueOf(rs.getString("special_hazard")),
-                StructureUse.valueOf(rs.getString("structure_use")),
+                choice(rs, "special_hazard", SpecialHazard.class), choice(rs, "structure_use", StructureUse.class),
                 TouchStepProtection.valueOf(rs.getString("touch_step")),
                 new Occupancy(rs.getDouble("persons_in_zone"), rs.getDouble("persons_total"),
                         rs.getDouble("hours_per_year")),
-                lineCount, nullableDouble(rs, "line_length"));
+                lifeCritical == null ? null : RiskSettingsParser.YES.equals(lifeCritical), lines(rs));
+    }
+
+    /** The stored lines; the count and one length of earlier rows as that many conservative lines. */
+    private static List<IncomingLine> lines(ResultSet rs) throws SQLException {
+        String details = rs.getString("line_details");
+        if (details != null) {
+            return StoredLine.fromJson(details).stream().map(StoredLine::toLine).toList();
+        }
+        int count = rs.getInt("line_count");
+        if (rs.wasNull()) {
+            return null;
+        }
+        Double length = nullableDouble(rs, "line_length");
+        double l = length == null ? RiskSettings.DEFAULT_LINE_LENGTH : length;
+        return Collections.nCopies(count, StoredLine.conservative(l));
     }
 
     private static Double nullableDouble(ResultSet rs, String column) throws SQLException {
@@ -82,7 +123,8 @@ class RiskRepository {
     void copyFor(SiteDuplicated copy) {
         String columns = "flash_density_source, flash_density, thunderstorm_days, location_factor, surface_type, "
                 + "fire_risk, fire_provisions, special_hazard, structure_use, touch_step, persons_in_zone, "
-                + "persons_total, hours_per_year, line_count, line_length, updated_at";
+                + "persons_total, hours_per_year, line_count, line_length, line_details, life_critical_systems, "
+                + "updated_at";
         jdbc.sql("INSERT INTO site_risk_inputs (site_id, " + columns + ") SELECT ?, " + columns
                 + " FROM site_risk_inputs WHERE site_id = ?").params(copy.to(), copy.from()).update();
     }

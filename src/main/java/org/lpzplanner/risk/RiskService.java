@@ -13,11 +13,14 @@ import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.risk.CollectionArea;
 import org.lpzplanner.engine.risk.CollectionAreaOp;
 import org.lpzplanner.engine.risk.DangerousEvents;
+import org.lpzplanner.engine.risk.IncomingLine;
 import org.lpzplanner.engine.risk.LevelChoice;
 import org.lpzplanner.engine.risk.LifeRisk;
 import org.lpzplanner.engine.risk.LifeRiskEstimate;
+import org.lpzplanner.engine.risk.LifeRiskInputs;
+import org.lpzplanner.engine.risk.LineRisk;
 import org.lpzplanner.engine.risk.LocationFactor;
-import org.lpzplanner.engine.risk.RiskComponent;
+import org.lpzplanner.engine.risk.OutsideEstimate;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
@@ -26,9 +29,11 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
 /**
- * The risk of loss of human life of a site (IEC 62305-2:2010, components due to flashes to the
- * structure): keeps each site's inputs, runs the engine's estimate on the site's real geometry, and
- * hands the lowest sufficient protection level to the site's analysis settings.
+ * The risk of loss of human life of a site (IEC 62305-2:2010, R1 = R_A + R_B + R_U + R_V, flashes
+ * to the structure and to its incoming lines): keeps each site's inputs, runs the engine's estimate
+ * on the site's real geometry, and hands the lowest sufficient protection level to the site's
+ * analysis settings. No verdict while an input without a default is missing, or for a structure
+ * outside the estimate (a risk of explosion, life-critical internal systems).
  */
 @Service
 public class RiskService {
@@ -46,7 +51,8 @@ public class RiskService {
     }
 
     /**
-     * The assessment with the saved inputs, or with the defaults while none are saved.
+     * The assessment with the saved inputs, or with {@link RiskSettings#initial()} while none are
+     * saved; without a verdict while an input is missing ({@link RiskAssessment#complete()}).
      *
      * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
      */
@@ -54,11 +60,12 @@ public class RiskService {
     public RiskAssessment assess(long siteId) {
         StoredSite site = sites.get(siteId);
         Optional<RiskSettings> saved = inputs.find(siteId);
-        return assess(site, saved.orElse(RiskSettings.defaults()), saved.isPresent());
+        return assess(site, saved.orElse(RiskSettings.initial()), saved.isPresent());
     }
 
     /**
-     * Checks and saves the inputs of a site; a missing field takes its default.
+     * Checks and saves the inputs of a site; a missing field takes its default, or stays unchosen
+     * where it has none (the inputs are saved all the same, and the result names what is missing).
      *
      * @param values each field's text by name (see {@link RiskSettingsParser#FIELDS})
      * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id (nothing is saved)
@@ -79,12 +86,21 @@ public class RiskService {
      *
      * @param expectedVersion the site's version as last read
      * @return the level set
-     * @throws InvalidInputException when no LPS is needed, or none of the levels is sufficient
+     * @throws InvalidInputException when inputs are missing, no LPS is needed, or none of the levels is sufficient
      * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed meanwhile
      */
     @Transactional
     public ProtectionLevel selectLevel(long siteId, long expectedVersion) {
         RiskAssessment assessment = assess(siteId);
+        if (!assessment.complete()) {
+            throw new InvalidInputException("level", "risk inputs are missing (" + String.join(", ",
+                    assessment.missing()) + "), so there is no estimate to take a level from; enter them first");
+        }
+        if (!assessment.hasVerdict()) {
+            throw new InvalidInputException("level", "this estimate does not cover the structure ("
+                    + String.join("; ", assessment.outside().stream().map(OutsideEstimate::description).toList())
+                    + "), so there is no level to take from it");
+        }
         ProtectionLevel level = assessment.choice().level().orElseThrow(() -> new InvalidInputException("level",
                 assessment.choice().chosen().isPresent()
                         ? "R1 is tolerable without an LPS, so there is no protection level to select"
@@ -96,8 +112,10 @@ public class RiskService {
 
     /**
      * The risk result of a site as a report section: one row per option (no LPS, levels IV to I)
-     * with R_A, R_B, R1 and whether it is tolerable, and notes with the inputs, the outcome, the
-     * dominant component and the limits of the estimate.
+     * with P_B, R_A, R_B, R_U, R_V, R1 and whether it is tolerable, and notes with the inputs, each
+     * line's figures, the outcome, the dominant component and the limits of the estimate. Without a
+     * verdict (inputs missing, or a structure outside the estimate) it has no table: its notes say
+     * why, with the figures known so far.
      *
      * @throws org.lpzplanner.sites.SiteNotFoundException when no site has this id
      */
@@ -108,23 +126,30 @@ public class RiskService {
 
     /** The report section of an assessment already made; see {@link #reportSection(long, Locale)}. */
     public ReportSection section(RiskAssessment a, Locale locale) {
+        if (!a.hasVerdict()) {
+            List<String> notes = new ArrayList<>();
+            notes.add(outcome(a, locale));
+            notes.addAll(figures(a, locale));
+            notes.add(text(locale, "risk.limits.components"));
+            notes.add(text(locale, "risk.limits.edition"));
+            return new ReportSection(text(locale, "risk.report.title"), List.of(), List.of(), notes);
+        }
         List<String> columns = List.of(text(locale, "risk.table.option"), text(locale, "risk.table.pb"),
-                text(locale, "risk.table.ra"), text(locale, "risk.table.rb"), text(locale, "risk.table.r1"),
-                text(locale, "risk.table.tolerable"));
+                text(locale, "risk.table.ra"), text(locale, "risk.table.rb"), text(locale, "risk.table.ru"),
+                text(locale, "risk.table.rv"), text(locale, "risk.table.r1"), text(locale, "risk.table.tolerable"));
         List<List<String>> rows = new ArrayList<>();
         for (LifeRisk option : a.choice().options()) {
             rows.add(List.of(optionName(option, locale), RiskFormat.significant(option.pb()),
                     RiskFormat.scientific(option.ra()), RiskFormat.scientific(option.rb()),
+                    RiskFormat.scientific(option.ru()), RiskFormat.scientific(option.rv()),
                     RiskFormat.scientific(option.r1()),
                     text(locale, option.isTolerable() ? "risk.table.yes" : "risk.table.no")));
         }
         List<String> notes = new ArrayList<>();
         notes.add(outcome(a, locale));
         notes.addAll(figures(a, locale));
+        notes.addAll(lineResults(a, locale));
         notes.add(dominance(a, locale));
-        if (!a.saved()) {
-            notes.add(text(locale, "risk.defaultsInUse"));
-        }
         notes.add(text(locale, "risk.limits.components"));
         notes.add(text(locale, "risk.limits.edition"));
         notes.add(text(locale, "risk.limits.memory"));
@@ -132,8 +157,18 @@ public class RiskService {
         return new ReportSection(text(locale, "risk.report.title"), columns, rows, notes);
     }
 
-    /** The outcome in one sentence. */
+    /**
+     * The outcome in one sentence; while inputs are missing, which ones; for a structure outside the
+     * estimate, why and what to do; no verdict in either case.
+     */
     String outcome(RiskAssessment a, Locale locale) {
+        if (!a.complete()) {
+            return text(locale, "risk.outcome.missing", missingText(a, locale));
+        }
+        if (!a.hasVerdict()) {
+            return text(locale, "risk.outcome.outside", String.join("; ", a.outside().stream()
+                    .map(o -> text(locale, "risk.outside." + o.name())).toList()));
+        }
         LevelChoice choice = a.choice();
         if (choice.chosen().isEmpty()) {
             return text(locale, "risk.outcome.none", RiskFormat.scientific(choice.options().get(4).r1()));
@@ -142,33 +177,91 @@ public class RiskService {
         if (chosen.level() == null) {
             return text(locale, "risk.outcome.noLps", RiskFormat.scientific(chosen.r1()));
         }
-        return text(locale, "risk.outcome.level", chosen.level().name(), RiskFormat.scientific(a.withoutLps().r1()),
-                RiskFormat.scientific(chosen.r1()));
+        String outcome = text(locale, "risk.outcome.level", chosen.level().name(),
+                RiskFormat.scientific(a.withoutLps().r1()), RiskFormat.scientific(chosen.r1()));
+        return chosen.lines().isEmpty() ? outcome : outcome + " " + text(locale, "risk.outcome.bonding",
+                chosen.level().name());
     }
 
-    /** N_G, A_D, C_D and N_D in words, one line each. */
+    /** The labels of the missing inputs, joined in the form's order. */
+    String missingText(RiskAssessment a, Locale locale) {
+        return String.join("; ", a.missing().stream().map(f -> "flashDensity".equals(f)
+                && a.settings().flashDensitySource() == null ? text(locale, "risk.missing.groundFlashDensity")
+                : text(locale, "risk.field." + f + ".label")).toList());
+    }
+
+    /** N_G, A_D, C_D, N_D and the flashes to each line in words, one line each, as far as they are known. */
     List<String> figures(RiskAssessment a, Locale locale) {
         RiskSettings s = a.settings();
         List<String> lines = new ArrayList<>();
-        lines.add(s.flashDensitySource() == FlashDensitySource.MEASURED
-                ? text(locale, "risk.figure.ngMeasured", RiskFormat.significant(s.groundFlashDensity()))
-                : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
-                        RiskFormat.significant(s.thunderstormDays())));
+        if (s.hasGroundFlashDensity()) {
+            lines.add(s.flashDensitySource() == FlashDensitySource.MEASURED
+                    ? text(locale, "risk.figure.ngMeasured", RiskFormat.significant(s.groundFlashDensity()))
+                    : text(locale, "risk.figure.ngDays", RiskFormat.significant(s.groundFlashDensity()),
+                            RiskFormat.significant(s.thunderstormDays())));
+        }
         lines.add(text(locale, "risk.figure.ad", RiskFormat.area(a.area().upperBound()),
                 RiskFormat.percent(a.area().maxRelativeError() * 100), RiskFormat.area(a.area().area())));
-        lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
-                RiskFormat.significant(a.location().value()), text(locale, "risk.location." + a.location().name())));
-        lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
+        if (a.location() != null) {
+            lines.add(text(locale, s.location() == null ? "risk.figure.cdSuggested" : "risk.figure.cdChosen",
+                    RiskFormat.significant(a.location().value()),
+                    text(locale, "risk.location." + a.location().name())));
+        }
+        if (a.events() != null) {
+            lines.add(text(locale, "risk.figure.nd", RiskFormat.scientific(a.events().perYear())));
+        }
+        if (s.lines() != null && s.lines().isEmpty()) {
+            lines.add(text(locale, "risk.figure.noLines"));
+        }
+        for (int i = 0; i < a.lines().size(); i++) {
+            RiskAssessment.LineFlashes f = a.lines().get(i);
+            IncomingLine l = f.line();
+            lines.add(text(locale, "risk.figure.line", i + 1, l.installation().description(),
+                    RiskFormat.metres(l.length()), l.environment().description(), l.transformer().description(),
+                    RiskFormat.area(f.collectionArea()), RiskFormat.significant(l.lineFactors()),
+                    RiskFormat.scientific(f.flashesPerYear()), RiskFormat.area(f.nearArea()),
+                    RiskFormat.scientific(f.flashesNearPerYear())));
+        }
         return lines;
     }
 
-    /** Which component dominates without an LPS, and its share of R1. */
+    /** For each line: P_LD, C_LD, P_TU and P_EB with R_U and R_V without an LPS and at the level chosen. */
+    List<String> lineResults(RiskAssessment a, Locale locale) {
+        List<String> out = new ArrayList<>();
+        if (!a.hasVerdict()) {
+            return out;
+        }
+        LifeRisk none = a.withoutLps();
+        LifeRisk shown = a.choice().chosen().orElse(a.choice().options().get(a.choice().options().size() - 1));
+        for (int i = 0; i < none.lines().size(); i++) {
+            LineRisk l = none.lines().get(i);
+            LineRisk with = shown.lines().get(i);
+            IncomingLine line = l.line();
+            String result = text(locale, "risk.figure.lineRisk", i + 1,
+                    line.shielding().description(),
+                    RiskFormat.significant(line.pld()), RiskFormat.significant(line.withstand().kilovolts()),
+                    RiskFormat.significant(line.cld()), RiskFormat.significant(line.touchProtection().ptu()),
+                    RiskFormat.significant(l.peb()), RiskFormat.scientific(l.ru()), RiskFormat.scientific(l.rv()));
+            if (shown.level() != null) {
+                result += " " + text(locale, "risk.figure.lineRiskWithLps", shown.level().name(),
+                        RiskFormat.significant(with.peb()), RiskFormat.scientific(with.ru()),
+                        RiskFormat.scientific(with.rv()));
+            }
+            out.add(result);
+        }
+        return out;
+    }
+
+    /** Which component dominates without an LPS, and its share of R1; null without a verdict. */
     String dominance(RiskAssessment a, Locale locale) {
+        if (!a.hasVerdict()) {
+            return null;
+        }
         LifeRisk none = a.withoutLps();
         if (none.r1() == 0) {
             return text(locale, "risk.dominant.zero");
         }
-        double part = none.dominant() == RiskComponent.R_A ? none.ra() : none.rb();
+        double part = none.component(none.dominant());
         return text(locale, "risk.dominant." + none.dominant().name(), RiskFormat.metres(100 * part / none.r1()));
     }
 
@@ -181,13 +274,21 @@ public class RiskService {
         Site geometry = sites.document(site).site();
         CollectionArea area = CollectionAreaOp.of(geometry);
         LocationSuggestion suggestion = LocationSuggestion.of(geometry);
-        LocationFactor location = settings.location() == null ? suggestion.factor() : settings.location();
-        double ng = settings.groundFlashDensity();
-        DangerousEvents events = new DangerousEvents(ng, area.upperBound(), location);
-        LevelChoice choice = LifeRiskEstimate.choose(settings.lifeRiskInputs(events.perYear()));
-        RiskAssessment.LineFlashes lines = settings.lineCount() == null || settings.lineCount() == 0 ? null
-                : RiskAssessment.LineFlashes.of(settings.lineCount(), settings.lineLength(), ng);
-        return new RiskAssessment(site, geometry, settings, saved, area, suggestion, events, choice, lines);
+        LocationFactor location = settings.location() != null ? settings.location()
+                : settings.useSuggestedLocation() ? suggestion.factor() : null;
+        DangerousEvents events = location == null || !settings.hasGroundFlashDensity() ? null
+                : new DangerousEvents(settings.groundFlashDensity(), area.upperBound(), location);
+        List<OutsideEstimate> outside = List.of();
+        LevelChoice choice = null;
+        if (settings.complete()) {
+            LifeRiskInputs inputs = settings.lifeRiskInputs(events);
+            outside = inputs.outsideEstimate();
+            choice = outside.isEmpty() ? LifeRiskEstimate.choose(inputs) : null;
+        }
+        List<RiskAssessment.LineFlashes> lines = settings.lines() == null || !settings.hasGroundFlashDensity()
+                ? List.of() : settings.lines().stream()
+                        .map(l -> RiskAssessment.LineFlashes.of(l, settings.groundFlashDensity())).toList();
+        return new RiskAssessment(site, geometry, settings, saved, area, suggestion, events, outside, choice, lines);
     }
 
     private String text(Locale locale, String key, Object... args) {

@@ -1,40 +1,65 @@
 package org.lpzplanner.risk;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
 import java.util.regex.Pattern;
 import java.util.stream.Collectors;
+import org.lpzplanner.engine.risk.EntrySurgeProtection;
 import org.lpzplanner.engine.risk.FireProvisions;
 import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.IncomingLine;
+import org.lpzplanner.engine.risk.LineEnvironment;
+import org.lpzplanner.engine.risk.LineInstallation;
+import org.lpzplanner.engine.risk.LineShielding;
+import org.lpzplanner.engine.risk.LineTouchProtection;
+import org.lpzplanner.engine.risk.LineTransformer;
 import org.lpzplanner.engine.risk.LocationFactor;
 import org.lpzplanner.engine.risk.Occupancy;
 import org.lpzplanner.engine.risk.SpecialHazard;
 import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.engine.risk.WithstandVoltage;
 import org.lpzplanner.system.InvalidInputException;
 
 /**
  * Reads risk inputs typed in the page form or sent to the API, by field name. A missing or blank
- * field takes its default ({@link RiskSettings#defaults()}); a value that cannot be used throws
- * {@link InvalidInputException} naming the field, so nothing half-read is ever stored.
+ * field takes its default where it has one ({@link RiskSettings#initial()}: each table's most
+ * conservative value) and stays unchosen where it has none (the estimate then names it as missing);
+ * a value that cannot be used throws {@link InvalidInputException} naming the field, so nothing
+ * half-read is ever stored.
  */
 final class RiskSettingsParser {
 
-    /** Every field name the form and the API know. */
+    /** The fields of the whole structure, as the form shows them. */
     static final List<String> FIELDS = List.of("flashDensitySource", "flashDensity", "thunderstormDays", "location",
-            "surface", "fireRisk", "fireProvisions", "specialHazard", "structureUse", "touchStep", "personsInZone",
-            "personsTotal", "hoursPerYear", "lineCount", "lineLength");
+            "surface", "fireRisk", "fireProvisions", "specialHazard", "structureUse", "lifeCriticalSystems",
+            "touchStep", "personsInZone", "personsTotal", "hoursPerYear", "lineCount");
+
+    /**
+     * Fields only the API takes: {@code lineLength}, the length of each line given only by the
+     * count (earlier clients), and {@code lines}, the array of lines with the {@link #LINE_FIELDS}.
+     */
+    static final List<String> API_FIELDS = List.of("lineLength", "lines");
+
+    /** The fields of one incoming line; typed as {@code lines[i].field}, i from 0. */
+    static final List<String> LINE_FIELDS = List.of("installation", "length", "environment", "transformer",
+            "surgeProtection", "shielding", "withstandVoltage", "touchProtection");
+
+    /** Answers to a yes-or-no question. */
+    static final String YES = "YES";
+    static final String NO = "NO";
 
     /** Choice value meaning "use the app's suggestion" for the location factor. */
-    static final String SUGGESTED = "SUGGESTED";
+    static final String SUGGESTED = RiskSettings.SUGGESTED_LOCATION;
 
     static final double MAX_FLASH_DENSITY = 100;
-    static final int MAX_LINES = 20;
+    static final int MAX_LINES = RiskSettings.MAX_LINES;
     static final double MAX_PERSONS = 1e7;
-    static final double MAX_LINE_LENGTH = 100_000;
+    static final double MAX_LINE_LENGTH = RiskSettings.MAX_LINE_LENGTH;
 
     private static final Pattern DECIMAL = Pattern.compile("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
 
@@ -46,7 +71,7 @@ final class RiskSettingsParser {
      * @throws InvalidInputException for the first field that cannot be used
      */
     static RiskSettings parse(Function<String, String> values) {
-        RiskSettings d = RiskSettings.defaults();
+        RiskSettings d = RiskSettings.initial();
         Double flashDensity = number(values, "flashDensity", false, MAX_FLASH_DENSITY, false);
         Double days = number(values, "thunderstormDays", false, 366, false);
         FlashDensitySource source = choice(values, "flashDensitySource", FlashDensitySource.class, null);
@@ -55,46 +80,82 @@ final class RiskSettingsParser {
                 throw new InvalidInputException("flashDensitySource", "give either flashDensity or thunderstormDays,"
                         + " or say which one counts with flashDensitySource (MEASURED or THUNDERSTORM_DAYS)");
             }
-            source = flashDensity != null ? FlashDensitySource.MEASURED : FlashDensitySource.THUNDERSTORM_DAYS;
+            source = flashDensity != null ? FlashDensitySource.MEASURED
+                    : days != null ? FlashDensitySource.THUNDERSTORM_DAYS : null;
         }
         if (source == FlashDensitySource.MEASURED) {
-            if (flashDensity == null) {
-                throw new InvalidInputException("flashDensity", "flashDensity is missing: give the ground flash"
-                        + " density in flashes per km² per year, e.g. 2.5");
-            }
             days = null;
         } else {
             flashDensity = null;
-            days = days == null ? d.thunderstormDays() : days;
         }
         String locationText = text(values, "location");
-        LocationFactor location = locationText == null || locationText.equalsIgnoreCase(SUGGESTED) ? null
+        boolean suggested = locationText != null && locationText.equalsIgnoreCase(SUGGESTED);
+        LocationFactor location = locationText == null || suggested ? null
                 : choice(values, "location", LocationFactor.class, null);
         Occupancy occupancy = occupancy(values, d.occupancy());
-        Double lineCountValue = number(values, "lineCount", true, MAX_LINES, true);
-        Integer lineCount = lineCountValue == null ? null : lineCountValue.intValue();
+        Double lineCount = number(values, "lineCount", true, MAX_LINES, true);
         Double lineLength = number(values, "lineLength", false, MAX_LINE_LENGTH, false);
-        if (lineCount == null || lineCount == 0) {
-            lineLength = null;
-        } else if (lineLength == null) {
-            lineLength = RiskSettings.DEFAULT_LINE_LENGTH;
+        List<IncomingLine> lines = null;
+        if (lineCount != null) {
+            lines = new ArrayList<>();
+            for (int i = 0; i < lineCount; i++) {
+                lines.add(line(values, i, lineLength == null ? RiskSettings.DEFAULT_LINE_LENGTH : lineLength));
+            }
         }
-        return new RiskSettings(source, flashDensity, days, location,
+        return new RiskSettings(source, flashDensity, days, location, suggested,
                 choice(values, "surface", SurfaceType.class, d.surface()),
                 choice(values, "fireRisk", FireRisk.class, d.fireRisk()),
                 choice(values, "fireProvisions", FireProvisions.class, d.fireProvisions()),
                 choice(values, "specialHazard", SpecialHazard.class, d.specialHazard()),
                 choice(values, "structureUse", StructureUse.class, d.use()),
                 choice(values, "touchStep", TouchStepProtection.class, d.touchStep()),
-                occupancy, lineCount, lineLength);
+                occupancy, yesOrNo(values, "lifeCriticalSystems"), lines);
     }
 
+    /** The name a line's field is typed under, e.g. {@code lines[0].length}. */
+    static String lineField(int index, String field) {
+        return "lines[" + index + "]." + field;
+    }
+
+    /** Line {@code i}; a field not given takes its most conservative value, the length {@code length}. */
+    private static IncomingLine line(Function<String, String> values, int i, double length) {
+        IncomingLine d = StoredLine.conservative(length);
+        Double typed = number(values, lineField(i, "length"), false, MAX_LINE_LENGTH, false);
+        return new IncomingLine(choice(values, lineField(i, "installation"), LineInstallation.class, d.installation()),
+                typed == null ? length : typed,
+                choice(values, lineField(i, "environment"), LineEnvironment.class, d.environment()),
+                choice(values, lineField(i, "transformer"), LineTransformer.class, d.transformer()),
+                choice(values, lineField(i, "surgeProtection"), EntrySurgeProtection.class, d.surgeProtection()),
+                choice(values, lineField(i, "shielding"), LineShielding.class, d.shielding()),
+                choice(values, lineField(i, "withstandVoltage"), WithstandVoltage.class, d.withstand()),
+                choice(values, lineField(i, "touchProtection"), LineTouchProtection.class, d.touchProtection()));
+    }
+
+    /** YES, NO (or true, false); null when not given. */
+    private static Boolean yesOrNo(Function<String, String> values, String field) {
+        String text = text(values, field);
+        if (text == null) {
+            return null;
+        }
+        if (text.equalsIgnoreCase(YES) || text.equalsIgnoreCase("true")) {
+            return true;
+        }
+        if (text.equalsIgnoreCase(NO) || text.equalsIgnoreCase("false")) {
+            return false;
+        }
+        throw new InvalidInputException(field, field + " must be " + YES + " or " + NO + ", got \"" + text + "\"");
+    }
+
+    /**
+     * n_z, n_t and t_z; one left out is taken so that the share exposed stays the largest it can be
+     * with the others: n_z = n_t (the whole structure one zone), n_t = n_z, t_z = 8760 h.
+     */
     private static Occupancy occupancy(Function<String, String> values, Occupancy d) {
         Double total = number(values, "personsTotal", false, MAX_PERSONS, false);
         Double inZone = number(values, "personsInZone", true, MAX_PERSONS, false);
         Double hours = number(values, "hoursPerYear", true, Occupancy.HOURS_PER_YEAR, false);
-        double t = total == null ? d.personsTotal() : total;
-        double z = inZone == null ? Math.min(t, d.personsInZone()) : inZone;
+        double t = total != null ? total : inZone != null && inZone > 0 ? inZone : d.personsTotal();
+        double z = inZone == null ? t : inZone;
         if (z > t) {
             throw new InvalidInputException("personsInZone", "personsInZone (" + plain(z) + ") cannot be more than"
                     + " personsTotal (" + plain(t) + ")");

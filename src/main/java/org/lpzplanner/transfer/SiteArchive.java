@@ -76,11 +76,17 @@ public record SiteArchive(Site site, List<EarlierFile> earlierFiles, List<Revisi
     public record AuditEntry(String actor, String action, String detail, Instant createdAt) {
     }
 
-    /** The row of {@code site_risk_inputs}; choices by their names. */
+    /**
+     * The row of {@code site_risk_inputs}; choices by their names, null where not chosen yet.
+     * {@code lines} holds each incoming line (null until the user said how many, or in exports written
+     * before lines had their own factors: those give only {@code lineCount} and one {@code lineLength}).
+     * {@code lifeCriticalSystems} is YES, NO or null.
+     */
     public record RiskInputs(String flashDensitySource, Double flashDensity, Double thunderstormDays,
             String locationFactor, String surfaceType, String fireRisk, String fireProvisions, String specialHazard,
             String structureUse, String touchStep, double personsInZone, double personsTotal, double hoursPerYear,
-            Integer lineCount, Double lineLength, Instant updatedAt) {
+            Integer lineCount, Double lineLength, Instant updatedAt, String lifeCriticalSystems,
+            List<org.lpzplanner.risk.StoredLine> lines) {
     }
 
     public record AcceptedItem(String key, String reason, Instant createdAt) {

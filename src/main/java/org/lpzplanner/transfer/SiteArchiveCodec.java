@@ -27,14 +27,23 @@ import java.util.Set;
 import java.util.regex.Pattern;
 import org.lpzplanner.engine.design.SeparationDistance;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.risk.EntrySurgeProtection;
 import org.lpzplanner.engine.risk.FireProvisions;
 import org.lpzplanner.engine.risk.FireRisk;
+import org.lpzplanner.engine.risk.LineEnvironment;
+import org.lpzplanner.engine.risk.LineInstallation;
+import org.lpzplanner.engine.risk.LineShielding;
+import org.lpzplanner.engine.risk.LineTouchProtection;
+import org.lpzplanner.engine.risk.LineTransformer;
 import org.lpzplanner.engine.risk.LocationFactor;
 import org.lpzplanner.engine.risk.SpecialHazard;
 import org.lpzplanner.engine.risk.StructureUse;
 import org.lpzplanner.engine.risk.SurfaceType;
 import org.lpzplanner.engine.risk.TouchStepProtection;
+import org.lpzplanner.engine.risk.WithstandVoltage;
 import org.lpzplanner.risk.FlashDensitySource;
+import org.lpzplanner.risk.RiskSettings;
+import org.lpzplanner.risk.StoredLine;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.keepout.KeepOutOutline;
 import org.lpzplanner.sites.CoverDetails;
@@ -335,20 +344,97 @@ final class SiteArchiveCodec {
         return out;
     }
 
+    /**
+     * The risk inputs. An export written before incoming lines had their own factors has no member
+     * {@code lines}: its inputs came from a form that pre-filled values since found unsafe as
+     * defaults, so a value equal to such a former default is cleared, as migration V15 clears stored
+     * ones (T_d 25, ordinary fire risk, no special hazard, other structure); its lines are the count
+     * and one length, read like the rows of that time.
+     */
     private static SiteArchive.RiskInputs riskInputs(JsonNode node) {
         String p = "riskInputs";
-        JsonNode lines = node.get("lineCount");
-        return new SiteArchive.RiskInputs(choice(node, p, "flashDensitySource", FlashDensitySource.class),
-                optionalPositive(node, p, "flashDensity"), optionalPositive(node, p, "thunderstormDays"),
-                node.hasNonNull("locationFactor") ? choice(node, p, "locationFactor", LocationFactor.class) : null,
-                choice(node, p, "surfaceType", SurfaceType.class), choice(node, p, "fireRisk", FireRisk.class),
-                choice(node, p, "fireProvisions", FireProvisions.class),
-                choice(node, p, "specialHazard", SpecialHazard.class),
-                choice(node, p, "structureUse", StructureUse.class),
+        boolean earlier = !node.has("lines");
+        JsonNode count = node.get("lineCount");
+        Integer lineCount = count == null || count.isNull() ? null
+                : (int) whole(node, p, "lineCount", 0, RiskSettings.MAX_LINES);
+        List<StoredLine> lines = earlier ? null : lines(node.get("lines"), p + ".lines");
+        if (!earlier && !java.util.Objects.equals(lineCount, lines == null ? null : lines.size())) {
+            throw bad(p + ".lineCount", "must be the number of entries of lines (" + (lines == null ? "null"
+                    : lines.size()) + "), got " + lineCount);
+        }
+        String source = optionalChoice(node, p, "flashDensitySource", FlashDensitySource.class);
+        Double days = optionalPositive(node, p, "thunderstormDays");
+        String fireRisk = optionalChoice(node, p, "fireRisk", FireRisk.class);
+        String hazard = optionalChoice(node, p, "specialHazard", SpecialHazard.class);
+        String use = optionalChoice(node, p, "structureUse", StructureUse.class);
+        if (earlier) {
+            days = "THUNDERSTORM_DAYS".equals(source) && days != null && days == 25 ? null : days;
+            fireRisk = "ORDINARY".equals(fireRisk) ? null : fireRisk;
+            hazard = "NONE".equals(hazard) ? null : hazard;
+            use = "OTHER".equals(use) ? null : use;
+        }
+        String lifeCritical = null;
+        if (node.hasNonNull("lifeCriticalSystems")) {
+            lifeCritical = text(node, p, "lifeCriticalSystems", 40);
+            if (!lifeCritical.equals("YES") && !lifeCritical.equals("NO")) {
+                throw bad(p + ".lifeCriticalSystems", "must be YES or NO, got \"" + lifeCritical + "\"");
+            }
+        }
+        return new SiteArchive.RiskInputs(source, optionalPositive(node, p, "flashDensity"), days,
+                locationFactor(node, p), choice(node, p, "surfaceType", SurfaceType.class), fireRisk,
+                choice(node, p, "fireProvisions", FireProvisions.class), hazard, use,
                 choice(node, p, "touchStep", TouchStepProtection.class), nonNegative(node, p, "personsInZone"),
-                nonNegative(node, p, "personsTotal"), nonNegative(node, p, "hoursPerYear"),
-                lines == null || lines.isNull() ? null : (int) whole(node, p, "lineCount", 0, 1000),
-                optionalPositive(node, p, "lineLength"), instant(node, p, "updatedAt"));
+                nonNegative(node, p, "personsTotal"), nonNegative(node, p, "hoursPerYear"), lineCount,
+                optionalPositive(node, p, "lineLength"), instant(node, p, "updatedAt"), lifeCritical, lines);
+    }
+
+    /** The incoming lines: null (not answered) or an array of at most 20 lines, each member checked. */
+    private static List<StoredLine> lines(JsonNode node, String path) {
+        if (node == null || node.isNull()) {
+            return null;
+        }
+        if (!node.isArray()) {
+            throw bad(path, "must be an array or null");
+        }
+        if (node.size() > RiskSettings.MAX_LINES) {
+            throw bad(path, "must hold at most " + RiskSettings.MAX_LINES + " lines, got " + node.size());
+        }
+        List<StoredLine> out = new ArrayList<>();
+        for (int i = 0; i < node.size(); i++) {
+            String p = path + "[" + i + "]";
+            JsonNode line = object(node.get(i), p);
+            double length = number(line, p, "length");
+            if (!(length > 0) || length > RiskSettings.MAX_LINE_LENGTH) {
+                throw bad(p + ".length", "must be above 0 and at most " + (long) RiskSettings.MAX_LINE_LENGTH
+                        + " m, got " + length);
+            }
+            out.add(new StoredLine(choice(line, p, "installation", LineInstallation.class), length,
+                    choice(line, p, "environment", LineEnvironment.class),
+                    choice(line, p, "transformer", LineTransformer.class),
+                    choice(line, p, "surgeProtection", EntrySurgeProtection.class),
+                    choice(line, p, "shielding", LineShielding.class),
+                    choice(line, p, "withstandVoltage", WithstandVoltage.class),
+                    choice(line, p, "touchProtection", LineTouchProtection.class)));
+        }
+        return out;
+    }
+
+    /** A location class, "SUGGESTED" (the user chose the app's suggestion) or null (not chosen). */
+    private static String locationFactor(JsonNode node, String path) {
+        if (!node.hasNonNull("locationFactor")) {
+            return null;
+        }
+        JsonNode value = node.get("locationFactor");
+        if (value.isString() && RiskSettings.SUGGESTED_LOCATION.equals(value.stringValue())) {
+            return value.stringValue();
+        }
+        return choice(node, path, "locationFactor", LocationFactor.class);
+    }
+
+    /** A choice that may be left empty (null or absent: not chosen yet). */
+    private static <E extends Enum<E>> String optionalChoice(JsonNode node, String path, String name,
+            Class<E> choices) {
+        return node.hasNonNull(name) ? choice(node, path, name, choices) : null;
     }
 
     private static <E extends Enum<E>> String choice(JsonNode node, String path, String name, Class<E> choices) {

@@ -6,6 +6,7 @@ import java.sql.Timestamp;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.lpzplanner.risk.StoredLine;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.jdbc.support.GeneratedKeyHolder;
 import org.springframework.jdbc.support.KeyHolder;
@@ -54,7 +55,9 @@ class SiteArchiveRepository {
                         rs.getString("special_hazard"), rs.getString("structure_use"), rs.getString("touch_step"),
                         rs.getDouble("persons_in_zone"), rs.getDouble("persons_total"), rs.getDouble("hours_per_year"),
                         nullableInt(rs, "line_count"), nullable(rs, "line_length"),
-                        rs.getTimestamp("updated_at").toInstant()))
+                        rs.getTimestamp("updated_at").toInstant(), rs.getString("life_critical_systems"),
+                        rs.getString("line_details") == null ? null
+                                : StoredLine.fromJson(rs.getString("line_details"))))
                 .optional().orElse(null);
         List<SiteArchive.DownConductorEdit> downs = jdbc.sql("SELECT structure_id, positions, updated_at"
                         + " FROM down_conductor_positions WHERE site_id = ? ORDER BY structure_id")
@@ -190,11 +193,13 @@ class SiteArchiveRepository {
             jdbc.sql("INSERT INTO site_risk_inputs (site_id, flash_density_source, flash_density, thunderstorm_days,"
                             + " location_factor, surface_type, fire_risk, fire_provisions, special_hazard, structure_use,"
                             + " touch_step, persons_in_zone, persons_total, hours_per_year, line_count, line_length,"
-                            + " updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
+                            + " updated_at, life_critical_systems, line_details)"
+                            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")
                     .params(siteId, k.flashDensitySource(), k.flashDensity(), k.thunderstormDays(), k.locationFactor(),
                             k.surfaceType(), k.fireRisk(), k.fireProvisions(), k.specialHazard(), k.structureUse(),
                             k.touchStep(), k.personsInZone(), k.personsTotal(), k.hoursPerYear(), k.lineCount(),
-                            k.lineLength(), Timestamp.from(k.updatedAt()))
+                            k.lineLength(), Timestamp.from(k.updatedAt()), k.lifeCriticalSystems(),
+                            k.lines() == null ? null : StoredLine.toJson(k.lines()))
                     .update();
         }
         return siteId;

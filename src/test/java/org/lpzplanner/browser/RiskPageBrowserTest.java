@@ -20,7 +20,8 @@ import org.openqa.selenium.support.ui.WebDriverWait;
  * In a real browser: open the risk page of an uploaded site from its plan, choose the building's
  * factors, save, and set the lowest sufficient protection level with the button. The site is one
  * invented 40 m × 20 m × 10 m block; with T_d = 20, a hospital, high fire risk, automatic fire
- * provisions and difficulty of evacuation, R1 is 1.46 · 10⁻⁴ per year without an LPS and level II
+ * provisions, difficulty of evacuation, no life-critical internal systems and no incoming lines,
+ * R1 is 1.46 · 10⁻⁴ per year without an LPS and level II
  * is the lowest sufficient level (worked out in RiskApiTest from IEC 62305-2:2010's formulas).
  * On the plan page the analysis form then starts at level II with a note, and the collection area
  * is switched on and off as a layer. Saves target/screenshots/risk-page.png and plan-collection-area.png.
@@ -48,7 +49,7 @@ class RiskPageBrowserTest extends BrowserTestBase {
 
         browser.findElement(By.id("risk-link")).click();
         new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.urlMatches(".*/sites/\\d+/risk$"));
-        assertThat(browser.findElement(By.id("risk-defaults")).getText()).contains("defaults");
+        assertThat(browser.findElement(By.id("risk-defaults")).getText()).contains("No risk inputs are saved");
         WebElement svg = browser.findElement(By.cssSelector("svg.collection-area"));
         assertThat(svg.findElements(By.cssSelector("path.collection-zone"))).hasSize(1);
         assertThat(browser.findElement(By.id("location-suggestion")).getText()).contains("Ward block");
@@ -56,10 +57,18 @@ class RiskPageBrowserTest extends BrowserTestBase {
         WebElement days = browser.findElement(By.name("thunderstormDays"));
         days.clear();
         days.sendKeys("20");
+        // no verdict before the inputs without a default are chosen
+        assertThat(browser.findElements(By.id("risk-options"))).isEmpty();
+        assertThat(browser.findElement(By.id("risk-missing")).getText()).contains("Location factor C_D", "Fire risk r_f");
+        new Select(browser.findElement(By.name("location"))).selectByValue("SUGGESTED");
         new Select(browser.findElement(By.name("structureUse"))).selectByValue("HOSPITAL_HOTEL_SCHOOL_CIVIC");
         new Select(browser.findElement(By.name("fireRisk"))).selectByValue("HIGH");
         new Select(browser.findElement(By.name("fireProvisions"))).selectByValue("AUTOMATIC");
         new Select(browser.findElement(By.name("specialHazard"))).selectByValue("DIFFICULT_EVACUATION");
+        new Select(browser.findElement(By.name("lifeCriticalSystems"))).selectByValue("NO");
+        WebElement lines = browser.findElement(By.name("lineCount"));
+        lines.clear();
+        lines.sendKeys("0");
         browser.findElement(By.id("save-risk")).click();
 
         new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.presenceOfElementLocated(By.id("risk-saved")));

@@ -70,7 +70,9 @@ class ReportSiteDataTest {
         parts.addRod(id, sites.get(id).version(), new AirTerminationService.RodInput(null, "Corner rod", 3.0, 4.0, "2.5"));
         analyses.run(id, null, null, null);
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
-                        .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1}"))
+                        .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1,"
+                                + " \"fireRisk\": \"ORDINARY\", \"specialHazard\": \"NONE\","
+                                + " \"structureUse\": \"INDUSTRIAL_COMMERCIAL\", \"lifeCriticalSystems\": \"NO\"}"))
                 .andExpect(status().isOk());
         String building = downConductors.list(id).get(0).buildingId();
         downConductors.save(id, building, List.of(new double[] {0, 0}, new double[] {80, 0},

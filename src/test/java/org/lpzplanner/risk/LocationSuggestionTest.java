@@ -70,4 +70,58 @@ class LocationSuggestionTest {
         assertThat(s.structureName()).isEqualTo("Tower");
         assertThat(s.height()).isEqualTo(10.0);
     }
+
+    /**
+     * A cross-shaped building given as three touching structures: a 60 × 20 m bar 12 m high
+     * (x 0..60, y 20..40) with a 20 × 20 m wing 9 m high on each long side (x 20..40, y 0..20 and
+     * y 40..60). The wings are parts of the assessed structure, already inside its collection area
+     * A_D, not objects around it; C_D counts only objects outside the structure [IEC 62305-2:2010
+     * Annex A, Table A.1]: with nothing else near, the building is isolated, C_D = 1.
+     */
+    private static Structure[] cross() throws Exception {
+        return new Structure[] {box("Hall", "POLYGON ((0 20, 60 20, 60 40, 0 40, 0 20))", 12),
+            box("South wing", "POLYGON ((20 0, 40 0, 40 20, 20 20, 20 0))", 9),
+            box("North wing", "POLYGON ((20 40, 40 40, 40 60, 20 60, 20 40))", 9)};
+    }
+
+    @Test
+    void partsOfACrossShapedBuildingAreNotItsSurroundings() throws Exception {
+        LocationSuggestion s = LocationSuggestion.of(site(cross()));
+
+        // Table A.1: isolated, C_D = 1 (not 0.5, "surrounded by objects of the same or lower height")
+        assertThat(s.factor()).isEqualTo(LocationFactor.ISOLATED);
+        assertThat(s.factor().value()).isEqualTo(1.0);
+        assertThat(s.near()).isZero();
+        assertThat(s.structureName()).isEqualTo("Hall");
+    }
+
+    @Test
+    void overlappingPartsAreOneBuildingAndItsTopIsTheHighestPart() throws Exception {
+        // a 15 m stair tower overlapping the hall's east end by 2 m: part of the building, and the
+        // tallest part, so H = 15 m and 3·H = 45 m (IEC 62305-2:2010 Annex A)
+        List<Structure> parts = new ArrayList<>(List.of(cross()));
+        parts.add(box("Stair tower", "POLYGON ((58 25, 66 25, 66 33, 58 33, 58 25))", 15));
+        LocationSuggestion s = LocationSuggestion.of(site(parts.toArray(Structure[]::new)));
+
+        assertThat(s.factor()).isEqualTo(LocationFactor.ISOLATED);
+        assertThat(s.near()).isZero();
+        assertThat(s.height()).isEqualTo(15.0);
+        assertThat(s.reach()).isCloseTo(45, within(1e-12));
+    }
+
+    @Test
+    void otherBuildingsNearTheCrossStillCountOncePerBuilding() throws Exception {
+        // two separate sheds within 3·H = 36 m of the cross: objects outside the structure, lower,
+        // so "surrounded by objects of the same or lower height", C_D = 0.5 [Table A.1]; each shed
+        // counts once however many parts it has (the east one is two touching boxes)
+        List<Structure> parts = new ArrayList<>(List.of(cross()));
+        parts.add(box("West shed", "POLYGON ((-20 20, -10 20, -10 30, -20 30, -20 20))", 4));
+        parts.add(box("East shed", "POLYGON ((70 20, 80 20, 80 30, 70 30, 70 20))", 5));
+        parts.add(box("East shed annex", "POLYGON ((80 20, 85 20, 85 30, 80 30, 80 20))", 3));
+        LocationSuggestion s = LocationSuggestion.of(site(parts.toArray(Structure[]::new)));
+
+        assertThat(s.factor()).isEqualTo(LocationFactor.SURROUNDED_BY_SAME_OR_LOWER);
+        assertThat(s.near()).isEqualTo(2);
+        assertThat(s.higher()).isZero();
+    }
 }

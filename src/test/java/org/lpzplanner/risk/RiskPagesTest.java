@@ -66,7 +66,7 @@ class RiskPagesTest {
                 .param("fireProvisions", "AUTOMATIC").param("specialHazard", "DIFFICULT_EVACUATION")
                 .param("structureUse", "HOSPITAL_HOTEL_SCHOOL_CIVIC").param("touchStep", "NONE")
                 .param("personsInZone", "1").param("personsTotal", "1").param("hoursPerYear", "8760")
-                .param("lineCount", "").param("lineLength", "");
+                .param("lifeCriticalSystems", "NO").param("lineCount", "0");
         java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
         form.buildRequest(new org.springframework.mock.web.MockServletContext()).getParameterMap()
                 .forEach((k, v) -> values.put(k, v[0]));
@@ -74,29 +74,43 @@ class RiskPagesTest {
     }
 
     @Test
-    void pageShowsEveryInputWithMeaningAndDefaultTheDrawingTheResultAndTheCautions() throws Exception {
+    void pageShowsEveryInputWithMeaningAndDefaultTheDrawingAndTheCautionsButNoVerdictWithoutTheInputs()
+            throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Page <block> & co");
 
         String html = page(get("/sites/" + id + "/risk"), 200);
 
         assertThat(html).contains("Page <block> & co", "IEC 62305-2:2010", "No risk inputs are saved",
                 "class=\"plan collection-area\"", "class=\"collection-zone\"", "Block (10 m)",
-                "R1 for each option", "No LPS", "LPS of protection level I", "tolerable",
                 "Location factor C_D", "isolated, no other objects nearby", "Suggestion: isolated",
-                "Dangerous events N_D", "Collection area A_D", "Without an LPS, R_");
+                "Collection area A_D");
         for (String field : RiskSettingsParser.FIELDS) {
             assertThat(html).contains("name=\"" + field + "\"");
         }
         assertThat(html).contains("Floor or ground surface r_t", "Default: agricultural ground or concrete",
-                "Fire provisions r_p", "Default: no fire provisions", "Thunderstorm days T_d", "Default: 25 days");
+                "Fire provisions r_p", "Default: no fire provisions", "Thunderstorm days T_d");
+        // the inputs without a safe default are named, and nothing is judged until they are entered
+        assertThat(html).contains("id=\"risk-missing\"", "Fire risk r_f", "Special hazard h_z",
+                "Type of structure L_F", "No default: choose");
+        assertThat(html).doesNotContain("id=\"risk-options\"", "id=\"select-level\"", "id=\"risk-dominance\"",
+                "R1 for each option", "is tolerable", "lowest protection level", "Tolerable (R1");
         for (String caution : Cautions.lines()) {
             assertThat(html).contains(caution);
         }
         // the site name in the drawing is escaped
         assertThat(mvc.perform(get("/sites/" + id + "/risk")).andReturn().getResponse()
                 .getContentAsString(StandardCharsets.UTF_8)).doesNotContain("<block>");
-        // defaults: R1 tolerable without an LPS, so no level is offered
-        assertThat(html).doesNotContain("id=\"select-level\"");
+    }
+
+    @Test
+    void levelButtonIsRefusedWhileInputsAreMissing() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Unfinished block");
+        long version = api("/api/sites/" + id).path("version").asLong();
+
+        String html = page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400);
+
+        assertThat(html).contains("The level was not changed", "inputs are missing");
+        assertThat(api("/api/sites/" + id).path("level").asString()).isEqualTo("IV");
     }
 
     @Test
@@ -241,6 +255,11 @@ class RiskPagesTest {
     @Test
     void levelButtonIsRefusedWhenNoLevelIsNeeded() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Calm block");
+        // other structure (L_F 10⁻²), low fire risk (r_f 10⁻³), no special hazard (h_z 1), automatic
+        // fire provisions (r_p 0.2) [IEC 62305-2:2010 Tables C.2, C.5, C.6, C.4; from memory]:
+        // L_B = 0.2 · 10⁻³ · 10⁻² = 2·10⁻⁶, L_A = 10⁻⁴; R1 = 0.01445 · 1.02·10⁻⁴ = 1.5·10⁻⁶ ≤ 10⁻⁵ (hand)
+        mvc.perform(hospitalForm(id, java.util.Map.of("structureUse", "OTHER", "fireRisk", "LOW",
+                "specialHazard", "NONE"))).andExpect(status().is3xxRedirection());
         long version = api("/api/sites/" + id).path("version").asLong();
 
         String html = page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400);
@@ -257,6 +276,47 @@ class RiskPagesTest {
     }
 
     @Test
+    void linesCountedInTheFormGetTheirOwnFieldsAndComponents() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Line form block");
+
+        mvc.perform(hospitalForm(id, java.util.Map.of("lineCount", "1"))).andExpect(status().is3xxRedirection());
+        String html = page(get("/sites/" + id + "/risk"), 200);
+        // the new line at its most conservative values, its fields named for the form
+        assertThat(html).contains("id=\"line-1\"", "Incoming line 1", "name=\"lines[0].installation\"",
+                "name=\"lines[0].shielding\"", "name=\"lines[0].surgeProtection\"", "value=\"1000\"",
+                "<option value=\"OVERHEAD\" selected");
+        assertThat(html).contains("R_U", "R_V", "Line 1 (overhead, 1000 m, rural");
+
+        mvc.perform(hospitalForm(id, java.util.Map.of("lineCount", "1", "lines[0].installation", "BURIED",
+                "lines[0].length", "250"))).andExpect(status().is3xxRedirection());
+        JsonNode inputs = api("/api/sites/" + id + "/risk").path("inputs");
+        assertThat(inputs.path("lines").get(0).path("installation").asString()).isEqualTo("BURIED");
+        assertThat(inputs.path("lines").get(0).path("length").asDouble()).isEqualTo(250.0);
+        // a bad line value is named and shown again, nothing saved
+        html = page(hospitalForm(id, java.util.Map.of("lineCount", "1", "lines[0].length", "far")), 400);
+        assertThat(html).contains("lines[0].length must be a number", "value=\"far\"");
+        assertThat(api("/api/sites/" + id + "/risk").path("inputs").path("lines").get(0).path("length").asDouble())
+                .isEqualTo(250.0);
+    }
+
+    @Test
+    void aStructureOutsideTheEstimateGetsNoVerdictNorLevel() throws Exception {
+        long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Life support block");
+        mvc.perform(hospitalForm(id, java.util.Map.of("lifeCriticalSystems", "YES")))
+                .andExpect(status().is3xxRedirection());
+
+        String html = page(get("/sites/" + id + "/risk"), 200);
+
+        assertThat(html).contains("id=\"risk-outside\"", "does not cover the structure", "life-saving equipment",
+                "full method of IEC 62305-2");
+        assertThat(html).doesNotContain("id=\"risk-options\"", "id=\"select-level\"", "lowest protection level");
+        long version = api("/api/sites/" + id).path("version").asLong();
+        assertThat(page(post("/sites/" + id + "/risk/level").param("version", String.valueOf(version)), 400))
+                .contains("The level was not changed", "does not cover the structure");
+        assertThat(page(get("/sites/" + id), 200)).contains("does not cover this structure");
+    }
+
+    @Test
     void reportSectionHasOneRowPerOptionAndTheOutcome() throws Exception {
         long id = RiskSites.upload(mvc, RiskSites.BLOCK, "Report block");
         mvc.perform(hospitalForm(id)).andExpect(status().is3xxRedirection());
@@ -264,12 +324,14 @@ class RiskPagesTest {
         ReportSection section = risk.reportSection(id, Locale.ENGLISH);
 
         assertThat(section.title()).contains("Risk of loss of human life", "IEC 62305-2:2010");
-        assertThat(section.columns()).hasSize(6);
+        assertThat(section.columns()).containsExactly("Option", "P_B", "R_A", "R_B", "R_U", "R_V", "R1",
+                "Tolerable (R1 \u2264 10\u207b\u2075)");
         assertThat(section.rows()).hasSize(5);
         assertThat(section.rows().get(0)).first().isEqualTo("No LPS");
         assertThat(section.rows().get(3)).containsExactly("LPS of protection level II", "0.05",
-                "7.23 × 10⁻⁸", "7.23 × 10⁻⁶", "7.3 × 10⁻⁶", "yes");
+                "7.23 × 10⁻⁸", "7.23 × 10⁻⁶", "0", "0", "7.3 × 10⁻⁶", "yes");
         assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("lowest protection level", "is II"));
-        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("Only R_A and R_B are counted"));
+        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("R1 here is R_A + R_B + R_U + R_V"));
+        assertThat(section.notes()).anySatisfy(n -> assertThat(n).contains("No incoming lines"));
     }
 }

@@ -67,12 +67,13 @@ class ImportFuzzProperties {
     /**
      * Members a file may leave out: those written after the format's first release (read as empty),
      * what a revision read (revisions stored before that was kept have none) and risk inputs left
-     * at their defaults, cover details left empty, and keep-out areas (none stored).
+     * at their defaults or not chosen yet, cover details left empty, and keep-out areas (none stored).
      */
     private static final List<String> OPTIONAL = List.of("customRadius", "tolerance", "reviews", "riskInputs",
             "downConductors", "metalInstallations", "savedCuts", "comments", "auditTrail", "flashDensity",
             "thunderstormDays", "lineLength", "siteName", "sourceName", "sourceText", "locationFactor", "lineCount",
-            "address", "designer", "keepOutAreas");
+            "address", "designer", "keepOutAreas", "flashDensitySource", "fireRisk", "specialHazard",
+            "structureUse", "lifeCriticalSystems", "lines");
 
     @Autowired
     MockMvc mvc;

@@ -223,6 +223,57 @@ class SiteTransferTest {
     }
 
     @Test
+    void riskInputsWithTheirLinesTravelWithTheExport() throws Exception {
+        long id = workedSite();
+        JsonNode risk = JSON.readTree(export(id)).path("riskInputs");
+        // two lines given by their count: each at the most conservative start, 1000 m
+        assertThat(risk.path("lineCount").asInt()).isEqualTo(2);
+        assertThat(risk.path("lines")).hasSize(2);
+        assertThat(risk.path("lines").get(0).path("installation").stringValue()).isEqualTo("OVERHEAD");
+        assertThat(risk.path("lines").get(0).path("length").asDouble()).isEqualTo(1000.0);
+        assertThat(risk.path("lifeCriticalSystems").isNull()).isTrue();
+
+        long copy = importFile(export(id));
+        JsonNode imported = JSON.readTree(mvc.perform(get("/api/sites/" + copy + "/risk")).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsString()).path("inputs");
+        JsonNode original = JSON.readTree(mvc.perform(get("/api/sites/" + id + "/risk")).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsString()).path("inputs");
+        assertThat(imported).isEqualTo(original);
+    }
+
+    @Test
+    void riskInputsOfAnEarlierExportImportWithTheFormerDefaultsCleared() throws Exception {
+        // as an earlier release wrote them: no lines of their own (a count and one length), no
+        // answer on life-critical systems, and the values that form pre-filled
+        ObjectNode older = (ObjectNode) JSON.readTree(export(workedSite()));
+        ObjectNode risk = (ObjectNode) older.get("riskInputs");
+        risk.remove("lines");
+        risk.remove("lifeCriticalSystems");
+        risk.put("flashDensitySource", "THUNDERSTORM_DAYS").putNull("flashDensity").put("thunderstormDays", 25.0)
+                .put("fireRisk", "ORDINARY").put("specialHazard", "NONE").put("structureUse", "OTHER")
+                .put("fireProvisions", "MANUAL").put("lineCount", 2).put("lineLength", 600.0);
+
+        long copy = importFile(bytes(older));
+
+        JsonNode answer = JSON.readTree(mvc.perform(get("/api/sites/" + copy + "/risk")).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsString());
+        JsonNode inputs = answer.path("inputs");
+        // values equal to a former default may never have been chosen: cleared, as migration V15 does
+        for (String cleared : java.util.List.of("thunderstormDays", "fireRisk", "specialHazard", "structureUse",
+                "lifeCriticalSystems")) {
+            assertThat(inputs.path(cleared).isNull()).as(cleared).isTrue();
+        }
+        assertThat(answer.path("complete").asBoolean()).isFalse();
+        assertThat(answer.path("options")).isEmpty();
+        // a value that differs was chosen: kept; two lines of 600 m at the most conservative values
+        assertThat(inputs.path("fireProvisions").stringValue()).isEqualTo("MANUAL");
+        assertThat(inputs.path("location").stringValue()).isEqualTo("SURROUNDED_BY_HIGHER");
+        assertThat(inputs.path("lines")).hasSize(2);
+        assertThat(inputs.path("lines").get(1).path("length").asDouble()).isEqualTo(600.0);
+        assertThat(inputs.path("lines").get(1).path("shielding").stringValue()).isEqualTo("UNSHIELDED");
+    }
+
+    @Test
     void anotherTeamsSiteIsNotExported() throws Exception {
         long id = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Other shed", "III", null).id();
@@ -280,6 +331,18 @@ class SiteTransferTest {
         ObjectNode badRisk = good.deepCopy();
         ((ObjectNode) badRisk.get("riskInputs")).put("fireRisk", "EXTREME");
         refused(bytes(badRisk), "riskInputs.fireRisk", "must be one of");
+        ObjectNode badLine = good.deepCopy();
+        ((ObjectNode) badLine.get("riskInputs").get("lines").get(1)).put("shielding", "FOIL");
+        refused(bytes(badLine), "riskInputs.lines[1].shielding", "must be one of");
+        ObjectNode shortLine = good.deepCopy();
+        ((ObjectNode) shortLine.get("riskInputs").get("lines").get(0)).put("length", 0);
+        refused(bytes(shortLine), "riskInputs.lines[0].length", "above 0");
+        ObjectNode miscounted = good.deepCopy();
+        ((ObjectNode) miscounted.get("riskInputs")).put("lineCount", 3);
+        refused(bytes(miscounted), "riskInputs.lineCount", "number of entries of lines");
+        ObjectNode badAnswer = good.deepCopy();
+        ((ObjectNode) badAnswer.get("riskInputs")).put("lifeCriticalSystems", "MAYBE");
+        refused(bytes(badAnswer), "riskInputs.lifeCriticalSystems", "YES or NO");
         ObjectNode badMetal = good.deepCopy();
         ((ObjectNode) badMetal.get("metalInstallations").get(0)).put("material", "WOOD");
         refused(bytes(badMetal), "metalInstallations[0].material", "must be one of");

@@ -38,13 +38,16 @@ public record LevelChoice(List<LifeRisk> options) {
         Optional<LifeRisk> c = chosen();
         if (c.isEmpty()) {
             lines.add("Even an LPS of protection level I leaves R1 above the tolerable risk: add further measures "
-                    + "(touch and step protection, fire provisions) and assess again.");
+                    + "(touch and step protection, fire provisions, better SPDs or screened lines at the line entries)"
+                    + " and assess again.");
             lines.addAll(options.get(options.size() - 1).explanation());
         } else if (c.get().level() == null) {
             lines.add("R1 is tolerable without an LPS.");
             lines.addAll(c.get().explanation());
         } else {
-            lines.add("The lowest protection level that makes R1 tolerable is " + c.get().level().name() + ".");
+            lines.add("The lowest protection level that makes R1 tolerable is " + c.get().level().name()
+                    + (c.get().lines().isEmpty() ? "." : ", with every incoming line bonded at its entry through SPDs"
+                            + " for that level (at least)."));
             lines.addAll(c.get().explanation());
         }
         return lines;

@@ -1,19 +1,25 @@
 package org.lpzplanner.engine.risk;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.lpzplanner.engine.model.ProtectionLevel;
 
 /**
- * R1 due to flashes to the structure for one protection option, with every factor kept so a report
- * can show how the figure arises. R1 = R_A + R_B per year.
+ * R1 for one protection option, with every factor kept so a report can show how the figure arises:
+ * R1 = R_A + R_B + R_U + R_V per year, R_U and R_V summed over the incoming lines.
  *
  * @param level the LPS's protection level, or null for no LPS
  * @param inputs the user's choices
  * @param pta P_TA of the touch and step measures
  * @param pb P_B of the option (1 without LPS)
+ * @param lines R_U and R_V of each incoming line for this option, in the order of the inputs
  */
-public record LifeRisk(ProtectionLevel level, LifeRiskInputs inputs, double pta, double pb) {
+public record LifeRisk(ProtectionLevel level, LifeRiskInputs inputs, double pta, double pb, List<LineRisk> lines) {
+
+    public LifeRisk {
+        lines = List.copyOf(lines);
+    }
 
     /** N_D. */
     public double nd() {
@@ -45,9 +51,29 @@ public record LifeRisk(ProtectionLevel level, LifeRiskInputs inputs, double pta,
         return nd() * pb * lb();
     }
 
-    /** R1 = R_A + R_B per year (components due to flashes to the structure only). */
+    /** R_U summed over the lines, per year. */
+    public double ru() {
+        return lines.stream().mapToDouble(LineRisk::ru).sum();
+    }
+
+    /** R_V summed over the lines, per year. */
+    public double rv() {
+        return lines.stream().mapToDouble(LineRisk::rv).sum();
+    }
+
+    /** The value of one component. */
+    public double component(RiskComponent c) {
+        return switch (c) {
+            case R_A -> ra();
+            case R_B -> rb();
+            case R_U -> ru();
+            case R_V -> rv();
+        };
+    }
+
+    /** R1 = R_A + R_B + R_U + R_V per year. */
     public double r1() {
-        return ra() + rb();
+        return ra() + rb() + ru() + rv();
     }
 
     /** Whether R1 is at or below the tolerable risk {@link LifeRiskEstimate#TOLERABLE_RISK}. */
@@ -55,9 +81,15 @@ public record LifeRisk(ProtectionLevel level, LifeRiskInputs inputs, double pta,
         return r1() <= LifeRiskEstimate.TOLERABLE_RISK;
     }
 
-    /** The larger component; R_B when they are equal. */
+    /** The largest component; on a tie the first of R_B, R_V, R_A, R_U. */
     public RiskComponent dominant() {
-        return ra() > rb() ? RiskComponent.R_A : RiskComponent.R_B;
+        RiskComponent best = RiskComponent.R_B;
+        for (RiskComponent c : List.of(RiskComponent.R_V, RiskComponent.R_A, RiskComponent.R_U)) {
+            if (component(c) > component(best)) {
+                best = c;
+            }
+        }
+        return best;
     }
 
     /** "no LPS" or "LPS of protection level III". */
@@ -70,8 +102,8 @@ public record LifeRisk(ProtectionLevel level, LifeRiskInputs inputs, double pta,
         LifeRiskInputs in = inputs;
         double r1 = r1();
         RiskComponent d = dominant();
-        double share = r1 > 0 ? 100 * (d == RiskComponent.R_A ? ra() : rb()) / r1 : 0;
-        return List.of(
+        double share = r1 > 0 ? 100 * component(d) / r1 : 0;
+        List<String> out = new ArrayList<>(List.of(
                 String.format(Locale.ROOT, "With %s, R1 = %.3e per year against the tolerable %.0e: %s.", optionName(), r1,
                         LifeRiskEstimate.TOLERABLE_RISK, isTolerable() ? "tolerable" : "too high"),
                 String.format(Locale.ROOT, "Flashes to the structure: N_D = %.4g dangerous events per year.", nd()),
@@ -84,7 +116,22 @@ public record LifeRisk(ProtectionLevel level, LifeRiskInputs inputs, double pta,
                         RiskComponent.R_B.description(), rb(), pb, lb(), in.fireProvisions().description(),
                         in.fireProvisions().rp(), in.fireRisk().description(), in.fireRisk().rf(),
                         in.specialHazard().description(), in.specialHazard().hz(), in.use().description(),
-                        in.use().lf(), in.occupancy().fraction()),
-                String.format(Locale.ROOT, "%s dominates: %.1f %% of R1.", d.name(), share));
+                        in.use().lf(), in.occupancy().fraction())));
+        if (lines.isEmpty()) {
+            out.add("No incoming lines: R_U = R_V = 0.");
+        }
+        for (int i = 0; i < lines.size(); i++) {
+            LineRisk l = lines.get(i);
+            IncomingLine line = l.line();
+            out.add(String.format(Locale.ROOT, "Line %d (%s, %.0f m, %s, %s): N_L = N_G × 40 × L_L × C_I %.3g × C_E %.3g"
+                    + " × C_T %.3g × 10⁻⁶ = %.4g flashes per year; P_EB %.3g, P_LD %.3g (%s), C_LD %.3g, P_TU %.3g (%s);"
+                    + " R_U = N_L × P_U × L_U = %.3e, R_V = N_L × P_V × L_V = %.3e.", i + 1,
+                    line.installation().description(), line.length(), line.environment().description(),
+                    line.transformer().description(), line.installation().ci(), line.environment().ce(),
+                    line.transformer().ct(), l.nl(), l.peb(), line.pld(), line.shielding().description(), line.cld(),
+                    line.touchProtection().ptu(), line.touchProtection().description(), l.ru(), l.rv()));
+        }
+        out.add(String.format(Locale.ROOT, "%s dominates: %.1f %% of R1.", d.name(), share));
+        return out;
     }
 }

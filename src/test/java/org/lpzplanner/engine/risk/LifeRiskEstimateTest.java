@@ -9,7 +9,8 @@ import org.junit.jupiter.api.Test;
 import org.lpzplanner.engine.model.ProtectionLevel;
 
 /**
- * R1 due to flashes to the structure [IEC 62305-2:2010]. Factor values are those of the enums,
+ * R1 due to flashes to the structure, without incoming lines [IEC 62305-2:2010]; the lines'
+ * components are checked in {@link LineComponentsTest}. Factor values are those of the enums,
  * each from the IEC 62305-2:2010 table named beside it. The factor values and table numbers are
  * [from memory — check against the standard]; the formulas and the arithmetic below are not.
  */
@@ -18,7 +19,8 @@ class LifeRiskEstimateTest {
     private static final Percentage CLOSE = Percentage.withPercentage(1e-6);
 
     /**
-     * Worked example, hospital 40 × 20 × 10 m, isolated, N_G = 4 flashes/km²/yr:
+     * Worked example, hospital 40 × 20 × 10 m, isolated, N_G = 4 flashes/km²/yr, no incoming lines
+     * (R_U = R_V = 0), internal systems not life-critical:
      * <pre>
      * A_D = 800 + 2·30·60 + 900π = 4400 + 900π = 7227.433388 m²     [Annex A rectangle formula]
      * N_D = 4 · 7227.433388 · 1 · 1e-6 = 0.028909734 /yr           [C_D isolated = 1, Table A.1]
@@ -40,10 +42,20 @@ class LifeRiskEstimateTest {
      * </pre>
      */
     private static LifeRiskInputs hospital() {
-        double nd = new DangerousEvents(4, CollectionAreaOp.rectangleFormula(40, 20, 10), LocationFactor.ISOLATED).perYear();
+        DangerousEvents nd = new DangerousEvents(4, CollectionAreaOp.rectangleFormula(40, 20, 10), LocationFactor.ISOLATED);
         return new LifeRiskInputs(nd, SurfaceType.AGRICULTURAL_OR_CONCRETE, FireRisk.ORDINARY, FireProvisions.NONE,
                 SpecialHazard.DIFFICULT_EVACUATION, StructureUse.HOSPITAL_HOTEL_SCHOOL_CIVIC, TouchStepProtection.NONE,
-                Occupancy.always());
+                Occupancy.always(), List.of(), false);
+    }
+
+    /** Events giving N_D per year: N_G 1 flash/km²/year on N_D · 10⁶ m², isolated (C_D 1, Table A.1). */
+    private static DangerousEvents events(double nd) {
+        return new DangerousEvents(1, nd * 1e6, LocationFactor.ISOLATED);
+    }
+
+    private static LifeRiskInputs withTouchStep(LifeRiskInputs b, TouchStepProtection touchStep) {
+        return new LifeRiskInputs(b.events(), b.surface(), b.fireRisk(), b.fireProvisions(), b.specialHazard(), b.use(),
+                touchStep, b.occupancy(), b.lines(), b.lifeCriticalSystems());
     }
 
     @Test
@@ -94,8 +106,9 @@ class LifeRiskEstimateTest {
         // N_D 0.01, other structure (L_F 1e-2, Table C.2), low fire risk r_f 1e-3 (Table C.5), r_t 1e-5
         // (asphalt, Table C.3), everything else 1: L_A = 1e-5·1e-2 = 1e-7, L_B = 1e-3·1e-2 = 1e-5;
         // R1 = 0.01 · (1e-7 + 1e-5) = 1.01e-7 ≤ 1e-5 (hand)
-        LifeRiskInputs in = new LifeRiskInputs(0.01, SurfaceType.ASPHALT_LINOLEUM_OR_WOOD, FireRisk.LOW, FireProvisions.NONE,
-                SpecialHazard.NONE, StructureUse.OTHER, TouchStepProtection.NONE, Occupancy.always());
+        LifeRiskInputs in = new LifeRiskInputs(events(0.01), SurfaceType.ASPHALT_LINOLEUM_OR_WOOD, FireRisk.LOW,
+                FireProvisions.NONE, SpecialHazard.NONE, StructureUse.OTHER, TouchStepProtection.NONE, Occupancy.always(),
+                List.of(), false);
         LevelChoice choice = LifeRiskEstimate.choose(in);
 
         assertThat(choice.chosen().orElseThrow().r1()).isCloseTo(1.01e-7, CLOSE);
@@ -107,9 +120,9 @@ class LifeRiskEstimateTest {
     void whenEvenLevelOneIsNotEnoughNoLevelIsChosen() {
         // N_D 0.1, hospital L_F 1e-1, high fire risk r_f 1e-1, high panic h_z 10, r_p 1, r_t 1e-2:
         // L_B = 1e-1·10·1e-1 = 0.1; with level I (P_B 0.02, Table B.2) R_B = 0.1·0.02·0.1 = 2e-4 > 1e-5 (hand)
-        LifeRiskInputs in = new LifeRiskInputs(0.1, SurfaceType.AGRICULTURAL_OR_CONCRETE, FireRisk.HIGH,
+        LifeRiskInputs in = new LifeRiskInputs(events(0.1), SurfaceType.AGRICULTURAL_OR_CONCRETE, FireRisk.HIGH,
                 FireProvisions.NONE, SpecialHazard.HIGH_PANIC, StructureUse.HOSPITAL_HOTEL_SCHOOL_CIVIC,
-                TouchStepProtection.NONE, Occupancy.always());
+                TouchStepProtection.NONE, Occupancy.always(), List.of(), false);
         LevelChoice choice = LifeRiskEstimate.choose(in);
 
         assertThat(choice.options().get(4).rb()).isCloseTo(2e-4, CLOSE);
@@ -120,10 +133,7 @@ class LifeRiskEstimateTest {
     @Test
     void physicalRestrictionsRemoveInjuryByTouchAndStepVoltage() {
         // P_TA = 0 (Table B.1) → P_A = 0 → R_A = 0 whatever the rest
-        LifeRiskInputs base = hospital();
-        LifeRiskInputs restricted = new LifeRiskInputs(base.dangerousEventsPerYear(), base.surface(), base.fireRisk(),
-                base.fireProvisions(), base.specialHazard(), base.use(), TouchStepProtection.PHYSICAL_RESTRICTIONS,
-                base.occupancy());
+        LifeRiskInputs restricted = withTouchStep(hospital(), TouchStepProtection.PHYSICAL_RESTRICTIONS);
 
         assertThat(LifeRiskEstimate.estimate(restricted, null).ra()).isZero();
         assertThat(LifeRiskEstimate.estimate(restricted, null).rb()).isCloseTo(1.445487e-4, Percentage.withPercentage(1e-4));
@@ -132,10 +142,7 @@ class LifeRiskEstimateTest {
     @Test
     void lpsReducesInjuryProbabilityThroughPb() {
         // P_A = P_TA · P_B: warning notices (P_TA 0.1, Table B.1) with level III (P_B 0.1, Table B.2) → 0.01
-        LifeRiskInputs base = hospital();
-        LifeRiskInputs warned = new LifeRiskInputs(base.dangerousEventsPerYear(), base.surface(), base.fireRisk(),
-                base.fireProvisions(), base.specialHazard(), base.use(), TouchStepProtection.WARNING_NOTICES,
-                base.occupancy());
+        LifeRiskInputs warned = withTouchStep(hospital(), TouchStepProtection.WARNING_NOTICES);
 
         assertThat(LifeRiskEstimate.estimate(warned, ProtectionLevel.III).pa()).isCloseTo(0.01, CLOSE);
     }
@@ -145,8 +152,8 @@ class LifeRiskEstimateTest {
         // 50 of 200 persons for 4380 h: 0.25 · 0.5 = 0.125 (hand); L_B = 5e-3 · 0.125 = 6.25e-4
         Occupancy part = new Occupancy(50, 200, 4380);
         LifeRiskInputs base = hospital();
-        LifeRiskInputs partial = new LifeRiskInputs(base.dangerousEventsPerYear(), base.surface(), base.fireRisk(),
-                base.fireProvisions(), base.specialHazard(), base.use(), base.touchStep(), part);
+        LifeRiskInputs partial = new LifeRiskInputs(base.events(), base.surface(), base.fireRisk(),
+                base.fireProvisions(), base.specialHazard(), base.use(), base.touchStep(), part, base.lines(), false);
 
         assertThat(part.fraction()).isCloseTo(0.125, CLOSE);
         assertThat(partial.lossByPhysicalDamage()).isCloseTo(6.25e-4, CLOSE);
