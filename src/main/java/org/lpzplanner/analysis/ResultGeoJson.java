@@ -11,6 +11,7 @@ import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.CornerExposure;
 import org.lpzplanner.engine.exposure.EdgeExposure;
 import org.lpzplanner.engine.exposure.FacadeBand;
+import org.lpzplanner.engine.exposure.ModelWarning;
 import org.lpzplanner.engine.exposure.PartInterception;
 import org.lpzplanner.engine.exposure.RoofExposure;
 import org.lpzplanner.engine.geom.EdgeKind;
@@ -62,7 +63,13 @@ import tools.jackson.databind.node.ObjectNode;
  *   <li>{@code rod}: its tip with elevation, {@code id}, {@code name}, {@code height} (above what it
  *       stands on), {@code intercepts};</li>
  *   <li>{@code conductor}: its path with elevations as placed, {@code id}, {@code name},
- *       {@code intercepts}.</li>
+ *       {@code intercepts};</li>
+ *   <li>{@code model-warning}: what the designer must know before relying on the result (a
+ *       {@link ModelWarning}), as a MultiLineString in plan of the stretch concerned, {@code kind}
+ *       ({@code free-span}: a conductor more than R above the surface beneath it), {@code part}
+ *       (its id), {@code partName}, {@code heightAboveSurface} (the greatest, m), {@code radius}
+ *       (the limit it exceeds, m) and {@code text}. The summary lists the same warnings; while any
+ *       stands, {@code fullyProtected} is false.</li>
  * </ul>
  *
  * <p>Polygons are MultiPolygons, outer rings counter-clockwise. Areas are plan areas.
@@ -79,7 +86,7 @@ public final class ResultGeoJson {
     public static final String ELEVATIONS = "metres above ground";
 
     public static final List<String> LAYERS = List.of("structure", "rooftop-object", "protected-ground",
-            "exposed-roof", "facade-band", "exposed-edge", "exposed-corner", "rod", "conductor");
+            "exposed-roof", "facade-band", "exposed-edge", "exposed-corner", "rod", "conductor", "model-warning");
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
@@ -206,6 +213,9 @@ public final class ResultGeoJson {
             }
         }
         parts(features, site, result, geometry);
+        for (ModelWarning w : result.warnings()) {
+            warning(feature(features, "model-warning", geometry.multiLineString(w.where(), false)), w);
+        }
         return root;
     }
 
@@ -233,6 +243,21 @@ public final class ResultGeoJson {
             f.put("intercepts", intercepts.getOrDefault(PartInterception.PartKind.CONDUCTOR + "|"
                     + c.conductor().id(), false));
         }
+    }
+
+    /** The properties of a model warning, in its feature and in the summary's list alike. */
+    private static void warning(ObjectNode properties, ModelWarning w) {
+        properties.put("kind", warningKind(w.kind()));
+        properties.put("part", w.partId());
+        properties.put("partName", w.partName());
+        properties.put("heightAboveSurface", round(w.value()));
+        properties.put("radius", round(w.limit()));
+        properties.put("text", w.text());
+    }
+
+    /** A warning kind as written: {@code free-span}. */
+    static String warningKind(ModelWarning.Kind kind) {
+        return kind.name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
     private static ObjectNode analysis(Site site, String sourceName, AnalysisResult result) {
@@ -265,6 +290,8 @@ public final class ResultGeoJson {
         s.put("interceptingParts", totals.interceptingParts());
         s.put("protectedGroundArea", round(totals.protectedGround()));
         s.put("fullyProtected", result.isFullyProtected());
+        ArrayNode warnings = s.putArray("warnings");
+        result.warnings().forEach(w -> warning(warnings.addObject(), w));
         ArrayNode cautions = a.putArray("cautions");
         Cautions.lines().forEach(cautions::add);
         return a;
