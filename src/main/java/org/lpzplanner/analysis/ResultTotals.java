@@ -79,6 +79,11 @@ public record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLeng
         return roofs.stream().mapToDouble(OwnerRoof::exposedArea).sum();
     }
 
+    /** True when some roof area, edge, corner or facade band is exposed (model warnings aside). */
+    public boolean anyExposed() {
+        return exposedRoofArea() > 0 || !edgeLengths.isEmpty() || corners > 0 || facadeBands > 0;
+    }
+
     public double edgeLength() {
         return edgeLengths.values().stream().mapToDouble(Double::doubleValue).sum();
     }

@@ -11,6 +11,7 @@ import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ResultTotals;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.FacadeBand;
+import org.lpzplanner.engine.exposure.ModelWarning;
 import org.lpzplanner.engine.exposure.PartInterception;
 import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SurfaceKind;
@@ -40,10 +41,9 @@ final class SummaryPrinter {
         edges(totals, result);
         facades(result);
         parts(result);
+        warnings(result);
         line("Protected ground (LPZ 0B at ground level): %.1f m2", totals.protectedGround());
-        line("Overall: %s", result.isFullyProtected()
-                ? "no exposed roof, edge, corner or facade band was found"
-                : "parts of the structures are exposed to direct strikes (LPZ 0A)");
+        line("Overall: %s", overall(result, totals));
         line("Time: envelope %d ms, total %d ms", result.envelopeMillis(), result.totalMillis());
         out.println();
         out.println("Cautions:");
@@ -136,6 +136,40 @@ final class SummaryPrinter {
             }
         }
         out.println();
+    }
+
+    /**
+     * The model warnings, each naming its part, before the overall line: while one stands the
+     * analysis gives no verdict of full protection.
+     */
+    private void warnings(AnalysisResult result) {
+        if (result.warnings().isEmpty()) {
+            line("Model warnings: none");
+        } else {
+            line("Model warnings: %d (no verdict of full protection while one stands)", result.warnings().size());
+            for (ModelWarning w : result.warnings()) {
+                String label = w.partName() == null || w.partName().equals(w.partId()) ? w.partId()
+                        : w.partName() + " (" + w.partId() + ")";
+                line("  %s: %s, up to %s m above the surface beneath it, more than the sphere radius %s m", label,
+                        w.kind() == ModelWarning.Kind.FREE_SPAN ? "free span" : w.kind().name(),
+                        number(ResultGeoJson.round(w.value())), number(ResultGeoJson.round(w.limit())));
+                for (String wrapped : wrap(w.text(), WIDTH - 4)) {
+                    out.println("    " + wrapped);
+                }
+            }
+        }
+        out.println();
+    }
+
+    private static String overall(AnalysisResult result, ResultTotals totals) {
+        int warnings = result.warnings().size();
+        if (warnings > 0) {
+            return "no verdict of full protection: " + warnings + " model warning" + (warnings == 1 ? " stands"
+                    : "s stand") + " (see above)" + (totals.anyExposed()
+                            ? "; parts of the structures are also exposed to direct strikes (LPZ 0A)" : "");
+        }
+        return result.isFullyProtected() ? "no exposed roof, edge, corner or facade band was found"
+                : "parts of the structures are exposed to direct strikes (LPZ 0A)";
     }
 
     private void line(String format, Object... args) {
