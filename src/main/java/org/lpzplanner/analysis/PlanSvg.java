@@ -11,15 +11,16 @@ import tools.jackson.databind.json.JsonMapper;
  * Draws the plan of an analysed site as an inline SVG element, from the stored
  * {@link ResultGeoJson}: structures shaded by height (darker is higher) with their names, rooftop
  * objects, protected open ground, exposed roof areas, facade bands, exposed edges and corners,
- * air-termination parts, a scale bar, a north arrow and a legend. North is up (the y axis is
+ * the stretches of parts a model warning is about, air-termination parts, a scale bar, a north
+ * arrow and a legend. North is up (the y axis is
  * flipped). Every text from the site file is escaped; every other text comes from {@link Labels}.
  *
  * <p>The {@code <svg>} element carries its frame so that a script can turn a point of the drawing
  * back into local metres: {@code x = originX + (svgX - margin) / scale} and, the y axis being
  * flipped, {@code y = originY - (svgY - margin) / scale} ({@code data-origin-x},
  * {@code data-origin-y}, {@code data-scale} in SVG units per metre, {@code data-margin},
- * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}, conductors in {@code data-conductor-id}. Exposed edges, corners and
- * facade bands carry their {@link ReviewItems} key in {@code data-item-key}; those a designer
+ * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}, conductors in {@code data-conductor-id}. Exposed edges, corners,
+ * facade bands and model warnings carry their {@link ReviewItems} key in {@code data-item-key}; those a designer
  * accepted also get the class {@code accepted} and a title with the reason (escaped).
  */
 public final class PlanSvg {
@@ -39,6 +40,11 @@ public final class PlanSvg {
     static final String PART = "#1f5fbf";
     /** Hatch of stored keep-out areas (our own: dark teal diagonal lines over what lies below). */
     static final String KEEP_OUT = "#1b6e5a";
+    /**
+     * Stretches of parts a model warning is about (our own: a broad dashed amber band laid under
+     * the part, so the part stays visible on top of it).
+     */
+    static final String WARNING = "#e09b00";
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
     private static final double WIDTH = 820;
@@ -92,13 +98,17 @@ public final class PlanSvg {
         double scale = Math.min((WIDTH - 2 * MARGIN) / dx, (DRAW_HEIGHT - 2 * MARGIN) / dy);
         double drawHeight = dy * scale + 2 * MARGIN;
         Frame frame = new Frame(box[0], box[3], scale);
-        String[] legendKeys = {"plan.legend.structure", "plan.legend.object", "plan.legend.ground",
-            "plan.legend.roof", "plan.legend.facade", "plan.legend.edge", "plan.legend.part"};
-        if (!keepOut.isEmpty()) {
-            legendKeys = java.util.Arrays.copyOf(legendKeys, legendKeys.length + 1);
-            legendKeys[legendKeys.length - 1] = "plan.legend.keepOut";
+        List<LegendRow> legendRows = new ArrayList<>(List.of(new LegendRow("plan.legend.structure", "#9a9a9f"),
+                new LegendRow("plan.legend.object", OBJECT), new LegendRow("plan.legend.ground", GROUND),
+                new LegendRow("plan.legend.roof", EXPOSED_ROOF), new LegendRow("plan.legend.facade", FACADE),
+                new LegendRow("plan.legend.edge", EDGE), new LegendRow("plan.legend.part", PART)));
+        if (features.stream().anyMatch(f -> layer(f).equals("model-warning"))) {
+            legendRows.add(new LegendRow("plan.legend.warning", WARNING));
         }
-        double height = drawHeight + 10 + LEGEND_ROW * legendKeys.length;
+        if (!keepOut.isEmpty()) {
+            legendRows.add(new LegendRow("plan.legend.keepOut", "url(#keep-out-hatch)"));
+        }
+        double height = drawHeight + 10 + LEGEND_ROW * legendRows.size();
         double maxHeight = features.stream().filter(f -> layer(f).equals("structure"))
                 .mapToDouble(f -> f.path("properties").path("height").asDouble(0)).max().orElse(1);
 
@@ -126,19 +136,24 @@ public final class PlanSvg {
                 }
             }
             for (JsonNode f : features) {
-                if (layer(f).equals(layer)) {
-                    draw(svg, f, frame, maxHeight);
-                    String key = keys.get(f);
-                    if (key != null) {
-                        markItem(svg, key, accepted.get(key), labels);
-                    }
+                if (!layer(f).equals(layer)) {
+                    continue;
+                }
+                String key = keys.get(f);
+                if (layer.equals("model-warning")) {
+                    warning(svg, f, frame, key, key == null ? null : accepted.get(key), labels);
+                    continue;
+                }
+                draw(svg, f, frame, maxHeight);
+                if (key != null) {
+                    markItem(svg, key, accepted.get(key), labels);
                 }
             }
         }
         keepOut(svg, keepOut, frame);
         scaleBar(svg, frame, drawHeight, labels);
         northArrow(svg, labels);
-        legend(svg, drawHeight + 10, legendKeys, labels);
+        legend(svg, drawHeight + 10, legendRows, labels);
         return svg.append("</svg>").toString();
     }
 
@@ -296,16 +311,54 @@ public final class PlanSvg {
                 escape(labels.text("plan.north"))));
     }
 
-    private static void legend(StringBuilder svg, double top, String[] keys, Labels labels) {
-        String[] colours = {"#9a9a9f", OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, PART, "url(#keep-out-hatch)"};
+    /** A legend row: the message key of its words and the fill of its swatch. */
+    private record LegendRow(String key, String fill) {
+    }
+
+    private static void legend(StringBuilder svg, double top, List<LegendRow> rows, Labels labels) {
         svg.append("<g class=\"legend\" font-size=\"12\" font-family=\"sans-serif\">");
-        for (int i = 0; i < keys.length; i++) {
+        for (int i = 0; i < rows.size(); i++) {
             double y = top + i * LEGEND_ROW;
             svg.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"18\" height=\"12\" fill=\"%s\""
                     + " stroke=\"#444444\" stroke-width=\"0.5\"/><text x=\"%.1f\" y=\"%.1f\">%s</text>", MARGIN, y,
-                    colours[i], MARGIN + 26, y + 10, escape(labels.text(keys[i]))));
+                    rows.get(i).fill(), MARGIN + 26, y + 10, escape(labels.text(rows.get(i).key()))));
         }
         svg.append("</g>");
+    }
+
+    /**
+     * The stretch a model warning is about: a broad dashed band in its own colour, under the part
+     * (drawn before rods and conductors), with the review key, the warning's words as its title
+     * and, when the designer accepted it, the class {@code accepted} and the reason.
+     */
+    private static void warning(StringBuilder svg, JsonNode f, Frame frame, String key, String reason,
+            Labels labels) {
+        StringBuilder d = new StringBuilder();
+        JsonNode g = f.path("geometry");
+        if ("LineString".equals(g.path("type").asString(""))) {
+            ring(d, g.path("coordinates"), frame, false);
+        } else {
+            for (JsonNode line : g.path("coordinates")) {
+                if (d.length() > 0) {
+                    d.append(' ');
+                }
+                ring(d, line, frame, false);
+            }
+        }
+        if (d.length() == 0) {
+            return;
+        }
+        svg.append("<path class=\"model-warning").append(reason != null ? " accepted" : "").append('"');
+        if (key != null) {
+            svg.append(" data-item-key=\"").append(escape(key)).append('"');
+        }
+        svg.append(" fill=\"none\" stroke=\"").append(WARNING).append("\" stroke-opacity=\"0.8\" stroke-width=\"11\""
+                + " stroke-dasharray=\"9 5\" stroke-linecap=\"butt\" d=\"").append(d).append("\"><title>")
+                .append(escape(text(f, "text")));
+        if (reason != null) {
+            svg.append(' ').append(escape(labels.text("review.status.accepted", reason)));
+        }
+        svg.append("</title></path>");
     }
 
     /** SVG path data of a (Multi)Polygon's rings. */

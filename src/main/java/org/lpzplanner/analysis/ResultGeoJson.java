@@ -85,8 +85,9 @@ public final class ResultGeoJson {
     /** What a position's third value means. */
     public static final String ELEVATIONS = "metres above ground";
 
+    /** Every layer, in the order the plan draws them (bottom to top). */
     public static final List<String> LAYERS = List.of("structure", "rooftop-object", "protected-ground",
-            "exposed-roof", "facade-band", "exposed-edge", "exposed-corner", "rod", "conductor", "model-warning");
+            "exposed-roof", "facade-band", "model-warning", "exposed-edge", "exposed-corner", "rod", "conductor");
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
 

@@ -90,6 +90,42 @@ class PlanSvgTest {
         assertThat(svg).contains("class=\"conductor\"").contains("data-conductor-id=\"ridge &quot;line&quot;\"");
     }
 
+    @Test
+    void aModelWarningsStretchIsDrawnInItsOwnStyleWithItsReviewKeyTextAndALegendRow() throws Exception {
+        // a wire strung at 45 m over a 5 m hut, level I (R = 20 m, IEC 62305-3:2010 Table 2): more
+        // than R above what lies beneath it (IEC 62305-3:2010 Annex A), so the analysis warns
+        Site site = SiteFiles.read(java.nio.file.Files.readString(ResultGeoJsonTest.WIRE_ABOVE_HUT),
+                "wire-above-hut.geojson").site();
+        var result = ExposureAnalysis.analyze(site, AnalysisOptions.of(SphereSpec.of(ProtectionLevel.I)));
+        String geoJson = ResultGeoJson.write(site, result);
+        String key = ReviewItems.of(geoJson).stream().filter(ReviewItems.Item::isModelWarning).findFirst()
+                .orElseThrow().key();
+
+        String svg = PlanSvg.render(geoJson, KEYS);
+
+        int at = svg.indexOf("<path class=\"model-warning\"");
+        assertThat(at).as(svg).isPositive();
+        String element = svg.substring(at, svg.indexOf("</path>", at));
+        assertThat(element).contains("data-item-key=\"" + key + "\"").contains("stroke=\"" + PlanSvg.WARNING + "\"")
+                .contains("<title>").contains("Span wire");
+        assertThat(svg).contains("plan.legend.warning[]");
+        // its own colour: no other layer of the plan uses it
+        assertThat(java.util.List.of(PlanSvg.GROUND, PlanSvg.OBJECT, PlanSvg.EXPOSED_ROOF, PlanSvg.FACADE, PlanSvg.EDGE,
+                PlanSvg.PART, PlanSvg.KEEP_OUT)).doesNotContain(PlanSvg.WARNING);
+
+        // accepted with a reason: still drawn, marked accepted, the reason in its title
+        String accepted = PlanSvg.render(geoJson, KEYS, java.util.Map.of(key, "fenced <off>"));
+        int a = accepted.indexOf("<path class=\"model-warning accepted\"");
+        assertThat(a).isPositive();
+        assertThat(accepted.substring(a, accepted.indexOf("</path>", a))).contains("fenced &lt;off&gt;");
+    }
+
+    @Test
+    void aPlanWithoutWarningsHasNoWarningLegendRow() {
+        String svg = drawing("POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n", "block.wkt");
+        assertThat(svg).doesNotContain("model-warning").doesNotContain("plan.legend.warning");
+    }
+
     private static double attribute(String svg, String name) {
         int start = svg.indexOf(name + "=\"") + name.length() + 2;
         return Double.parseDouble(svg.substring(start, svg.indexOf('"', start)));
