@@ -37,6 +37,8 @@ final class PdfPlanPainter {
     private static final Color DOWN = new Color(0x11, 0x11, 0x11);
     /** Hatch and outline of keep-out areas (our own dark teal). */
     private static final Color KEEP_OUT = new Color(0x1b, 0x6e, 0x5a);
+    /** Stretches of parts a model warning is about: a broad dashed amber band under the part. */
+    private static final Color WARNING = new Color(0xe0, 0x9b, 0x00);
 
     private PdfPlanPainter() {
     }
@@ -159,7 +161,7 @@ final class PdfPlanPainter {
         p.strokeRect(PdfPages.MARGIN, frameBottom, frameW, frameH, PdfReportRenderer.TEXT, 0.8f);
         northArrow(p, PdfPages.MARGIN + frameW - 22, frameTop - 12);
         scaleBar(p, denominator, k, frameBottom + 10);
-        legend(p, frameBottom - 10, plan.has(Layer.KEEP_OUT));
+        legend(p, frameBottom - 10, plan);
     }
 
     private static void shape(PDPageContentStream out, Shape s, float k, float ox, float oy, double cx, double cy)
@@ -185,6 +187,18 @@ final class PdfPlanPainter {
                     out.setNonStrokingColor(layer == Layer.PROTECTED_GROUND ? GROUND : EXPOSED_ROOF);
                     out.fillEvenOdd();
                 }
+            }
+            case MODEL_WARNING -> {
+                for (List<double[]> line : s.paths()) {
+                    if (line.size() > 1) {
+                        path(out, line, k, ox, oy, cx, cy, false);
+                    }
+                }
+                out.setStrokingColor(WARNING);
+                out.setLineWidth(5f);
+                out.setLineDashPattern(new float[] {5, 3}, 0);
+                out.stroke();
+                out.setLineDashPattern(new float[0], 0);
             }
             case FACADE_BAND, EXPOSED_EDGE, ACCEPTED_ITEM, CONDUCTOR -> {
                 List<double[]> line = s.paths().get(0);
@@ -361,17 +375,26 @@ final class PdfPlanPainter {
         p.text("1:" + denominator, x + seg * 4 + 22, y, 6.5f, true, PdfReportRenderer.TEXT);
     }
 
-    private static void legend(PdfPages p, float top, boolean keepOut) {
-        String[] names = {"Structure (darker is higher)", "Rooftop object", "Protected open ground (LPZ 0B)",
-            "Exposed roof area (LPZ 0A)", "Facade band a sphere reaches", "Exposed edge / corner (E1, E2, …)",
-            "Accepted item (dashed grey)", "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)",
-            "Keep-out area, hatched (K1, …)"};
-        Color[] colours = {new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, ACCEPTED, PART,
-            DOWN, null};
+    private static void legend(PdfPages p, float top, PlanDrawing plan) {
+        List<String> names = new ArrayList<>(List.of("Structure (darker is higher)", "Rooftop object",
+                "Protected open ground (LPZ 0B)", "Exposed roof area (LPZ 0A)", "Facade band a sphere reaches",
+                "Exposed edge / corner (E1, E2, …)", "Accepted item (dashed grey)",
+                "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)"));
+        // a null colour is the keep-out hatch
+        List<Color> colours = new ArrayList<>(List.of(new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF,
+                FACADE, EDGE, ACCEPTED, PART, DOWN));
+        if (plan.has(Layer.MODEL_WARNING)) {
+            names.add("Model warning: part > R above surface (E…)");
+            colours.add(WARNING);
+        }
+        if (plan.has(Layer.KEEP_OUT)) {
+            names.add("Keep-out area, hatched (K1, …)");
+            colours.add(null);
+        }
         float colW = PdfPages.CONTENT_WIDTH / 3;
-        for (int i = 0; i < names.length - (keepOut ? 0 : 1); i++) {
+        for (int i = 0; i < names.size(); i++) {
             float x = PdfPages.MARGIN + (i % 3) * colW, y = top - (i / 3) * 14;
-            if (colours[i] == null) {
+            if (colours.get(i) == null) {
                 p.fillRect(x, y - 8, 14, 8, Color.WHITE);
                 try {
                     p.out.saveGraphicsState();
@@ -383,10 +406,10 @@ final class PdfPlanPainter {
                     throw new UncheckedIOException(e);
                 }
             } else {
-                p.fillRect(x, y - 8, 14, 8, colours[i]);
+                p.fillRect(x, y - 8, 14, 8, colours.get(i));
             }
             p.strokeRect(x, y - 8, 14, 8, PdfReportRenderer.MUTED, 0.3f);
-            p.text(names[i], x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
+            p.text(names.get(i), x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
         }
     }
 

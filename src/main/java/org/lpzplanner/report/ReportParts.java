@@ -13,6 +13,7 @@ public final class ReportParts {
 
     public static final List<ReportPart> SCHEDULES = List.of(
             AirTerminationSchedule::blocks,
+            ModelWarningSchedule::blocks,
             ExposedItemSchedule::blocks,
             DownConductorSchedule::blocks,
             SeparationSchedule::blocks,
