@@ -111,7 +111,8 @@ public class AnalysisService {
             AnalysisRevision revision = analyses.insert(new AnalysisRevision(0, site.id(),
                     analyses.nextRevision(site.id()), sphere.level(), sphere.radius(), result.resolution(),
                     sha256(site.sourceText()), result.totalExposedRoofArea(), result.totalExposedEdgeLength(),
-                    result.corners().size(), result.facades().size(), result.protectedGround().planArea(),
+                    result.corners().size(), result.facadePartsNeedingLateral().size(),
+                    result.protectedGround().planArea(),
                     result.isFullyProtected(), geoJson, now, result.totalMillis()),
                     new RevisionInputs(site.name(), site.sourceName(), site.sourceText(),
                             result.tolerance()));

@@ -14,6 +14,7 @@ import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.exposure.ModelWarning;
 import org.lpzplanner.engine.exposure.PartInterception;
 import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.exposure.SideFlashRule;
 import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
@@ -56,7 +57,10 @@ import tools.jackson.databind.node.ObjectNode;
  *       {@code owner}, {@code ownerId}, {@code surface} ({@code roof} or {@code rooftop-object}),
  *       {@code face} (1-based), {@code area} (exposed plan area) and {@code roofArea} (the face's), m²;</li>
  *   <li>{@code facade-band}: along the wall foot, {@code owner}, {@code ownerId}, {@code wall}
- *       (1-based), {@code length}, {@code bottom}, {@code top} (m above ground);</li>
+ *       (1-based), {@code length}, {@code bottom}, {@code top} (m above ground), {@code sideFlash}
+ *       ({@link #SIDE_FLASH_LATERAL} or {@link #SIDE_FLASH_NEGLIGIBLE}, by {@link SideFlashRule},
+ *       IEC 62305-3:2010 5.2.3), {@code sideFlashRule} (the rule in words) and {@code buildingHeight};
+ *       a band that the rule splits is written as two features, one per part, with the same line;</li>
  *   <li>{@code exposed-edge}: with elevations, {@code owner}, {@code ownerId}, {@code kind},
  *       {@code length}, {@code top} (highest elevation along it);</li>
  *   <li>{@code exposed-corner}: a point with its elevation, {@code owner}, {@code ownerId}, {@code top};</li>
@@ -84,6 +88,20 @@ public final class ResultGeoJson {
 
     /** What a position's third value means. */
     public static final String ELEVATIONS = "metres above ground";
+
+    /** {@code sideFlash} of a facade band (or part of one) that needs lateral air-termination. */
+    public static final String SIDE_FLASH_LATERAL = "lateral-air-termination";
+
+    /** {@code sideFlash} of a facade band (or part of one) where flashes to the side are negligible. */
+    public static final String SIDE_FLASH_NEGLIGIBLE = "negligible";
+
+    /** The rule, with its clause, for a band that needs lateral air-termination. */
+    public static final String LATERAL_RULE = "needs lateral air-termination (" + SideFlashRule.CLAUSE
+            + ": the upper 20 % of a structure taller than 60 m, and everything above 120 m)";
+
+    /** The rule, with its clause, for a band where flashes to the side are negligible. */
+    public static final String NEGLIGIBLE_RULE = "flashes to the side negligible (" + SideFlashRule.CLAUSE
+            + " and Annex A: a structure lower than 60 m, or below the upper 20 % of a taller one)";
 
     /** Every layer, in the order the plan draws them (bottom to top). */
     public static final List<String> LAYERS = List.of("structure", "rooftop-object", "protected-ground",
@@ -183,13 +201,19 @@ public final class ResultGeoJson {
                 f.put("roofArea", round(r.planArea()));
             }
         }
-        for (FacadeBand b : result.facades()) {
+        for (SideFlashRule.Part part : result.facadeParts()) {
+            FacadeBand b = part.band();
             ObjectNode f = feature(features, "facade-band", geometry.lineString(b.line(), false));
             owner(f, b.ownerName(), b.ownerId());
             f.put("wall", b.wallIndex() + 1);
             f.put("length", round(b.length()));
-            f.put("bottom", round(b.bottom()));
-            f.put("top", round(b.top()));
+            f.put("bottom", round(part.bottom()));
+            f.put("top", round(part.top()));
+            f.put("sideFlash", part.needsLateralAirTermination() ? SIDE_FLASH_LATERAL : SIDE_FLASH_NEGLIGIBLE);
+            f.put("sideFlashRule", part.needsLateralAirTermination() ? LATERAL_RULE : NEGLIGIBLE_RULE);
+            if (Double.isFinite(part.buildingHeight())) {
+                f.put("buildingHeight", round(part.buildingHeight()));
+            }
         }
         for (EdgeExposure e : result.edges()) {
             ObjectNode f = feature(features, "exposed-edge", geometry.lineString(e.line(), true));
@@ -287,6 +311,8 @@ public final class ResultGeoJson {
         s.put("exposedCorners", totals.corners());
         s.put("facadeBands", totals.facadeBands());
         s.put("facadeBandLength", round(totals.facadeLength()));
+        s.put("negligibleFacadeBands", totals.negligibleBands());
+        s.put("negligibleFacadeBandLength", round(totals.negligibleLength()));
         s.put("airTerminationParts", totals.parts());
         s.put("interceptingParts", totals.interceptingParts());
         s.put("protectedGroundArea", round(totals.protectedGround()));

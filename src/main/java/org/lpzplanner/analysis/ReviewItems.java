@@ -16,8 +16,11 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The items of a stored {@link ResultGeoJson} a designer reviews one by one: every exposed edge
- * (roof edge, parapet, ridge, hip, rooftop object edge), exposed corner and facade band, and every
- * model warning, in the order the result lists them. Exposed roof areas are not items of this list.
+ * (roof edge, parapet, ridge, hip, rooftop object edge), exposed corner and facade band (or part of
+ * one) that needs lateral air-termination, and every model warning, in the order the result lists
+ * them. Exposed roof areas are not items of this list, nor are facade bands where flashes to the
+ * side are negligible (IEC 62305-3:2010 5.2.3 and Annex A: structures lower than 60 m, and below the
+ * upper 20 % of taller ones): those are drawn and listed apart.
  *
  * <p>A model warning (layer {@code model-warning}) is an item a designer must look at: it names a
  * part the analysis cannot vouch for (a wire more than R above the surface beneath it). It can be
@@ -123,7 +126,7 @@ public final class ReviewItems {
         Map<JsonNode, String> keys = new IdentityHashMap<>();
         Map<String, Integer> seen = new HashMap<>();
         for (JsonNode f : features) {
-            if (!LAYERS.contains(f.path("properties").path("layer").asString(""))) {
+            if (!LAYERS.contains(f.path("properties").path("layer").asString("")) || isNegligibleBand(f)) {
                 continue;
             }
             String kind = kind(f);
@@ -146,6 +149,16 @@ public final class ReviewItems {
         List<JsonNode> features = new ArrayList<>();
         JSON.readTree(resultGeoJson).path("features").forEach(features::add);
         return features;
+    }
+
+    /**
+     * A facade band (or part of one) where flashes to the side are negligible (IEC 62305-3:2010
+     * 5.2.3): drawn and listed, but nothing to accept. A band without {@code sideFlash} (a result
+     * stored before bands were classified) counts as needing lateral air-termination.
+     */
+    static boolean isNegligibleBand(JsonNode f) {
+        return f.path("properties").path("layer").asString("").equals("facade-band")
+                && ResultGeoJson.SIDE_FLASH_NEGLIGIBLE.equals(f.path("properties").path("sideFlash").asString(""));
     }
 
     private static boolean isWarning(JsonNode f) {
