@@ -10,7 +10,8 @@ import tools.jackson.databind.json.JsonMapper;
 /**
  * Draws the plan of an analysed site as an inline SVG element, from the stored
  * {@link ResultGeoJson}: structures shaded by height (darker is higher) with their names, rooftop
- * objects, protected open ground, exposed roof areas, facade bands, exposed edges and corners,
+ * objects, protected open ground, exposed roof areas, facade bands (those where flashes to the side
+ * are negligible, IEC 62305-3:2010 5.2.3, light and dashed), exposed edges and corners,
  * the stretches of parts a model warning is about, air-termination parts, a scale bar, a north
  * arrow and a legend. North is up (the y axis is
  * flipped). Every text from the site file is escaped; every other text comes from {@link Labels}.
@@ -36,6 +37,8 @@ public final class PlanSvg {
     static final String OBJECT = "#b9ad94";
     static final String EXPOSED_ROOF = "#f28c28";
     static final String FACADE = "#7b4fa0";
+    /** Facade bands where flashes to the side are negligible: the band's purple, light and dashed. */
+    static final String FACADE_NEGLIGIBLE = "#c4b0da";
     static final String EDGE = "#c8102e";
     static final String PART = "#1f5fbf";
     /** Hatch of stored keep-out areas (our own: dark teal diagonal lines over what lies below). */
@@ -100,8 +103,11 @@ public final class PlanSvg {
         Frame frame = new Frame(box[0], box[3], scale);
         List<LegendRow> legendRows = new ArrayList<>(List.of(new LegendRow("plan.legend.structure", "#9a9a9f"),
                 new LegendRow("plan.legend.object", OBJECT), new LegendRow("plan.legend.ground", GROUND),
-                new LegendRow("plan.legend.roof", EXPOSED_ROOF), new LegendRow("plan.legend.facade", FACADE),
-                new LegendRow("plan.legend.edge", EDGE), new LegendRow("plan.legend.part", PART)));
+                new LegendRow("plan.legend.roof", EXPOSED_ROOF), new LegendRow("plan.legend.facade", FACADE)));
+        if (features.stream().anyMatch(ReviewItems::isNegligibleBand)) {
+            legendRows.add(new LegendRow("plan.legend.facadeNegligible", FACADE_NEGLIGIBLE));
+        }
+        legendRows.addAll(List.of(new LegendRow("plan.legend.edge", EDGE), new LegendRow("plan.legend.part", PART)));
         if (features.stream().anyMatch(f -> layer(f).equals("model-warning"))) {
             legendRows.add(new LegendRow("plan.legend.warning", WARNING));
         }
@@ -144,7 +150,7 @@ public final class PlanSvg {
                     warning(svg, f, frame, key, key == null ? null : accepted.get(key), labels);
                     continue;
                 }
-                draw(svg, f, frame, maxHeight);
+                draw(svg, f, frame, maxHeight, labels);
                 if (key != null) {
                     markItem(svg, key, accepted.get(key), labels);
                 }
@@ -196,7 +202,7 @@ public final class PlanSvg {
         }
     }
 
-    private static void draw(StringBuilder svg, JsonNode f, Frame frame, double maxHeight) {
+    private static void draw(StringBuilder svg, JsonNode f, Frame frame, double maxHeight, Labels labels) {
         JsonNode properties = f.path("properties");
         JsonNode g = f.path("geometry");
         switch (layer(f)) {
@@ -219,7 +225,17 @@ public final class PlanSvg {
             case "exposed-roof" -> svg.append("<path class=\"exposed-roof\" fill=\"").append(EXPOSED_ROOF)
                     .append("\" fill-opacity=\"0.75\" stroke=\"none\" fill-rule=\"evenodd\" d=\"")
                     .append(polygonPath(g, frame)).append("\"/>");
-            case "facade-band" -> line(svg, "facade-band", g, frame, FACADE, 5, null);
+            case "facade-band" -> {
+                if (ReviewItems.isNegligibleBand(f)) {
+                    // flashes to the side negligible (IEC 62305-3:2010 5.2.3): drawn, not an item
+                    line(svg, "facade-band side-flash-negligible", g, frame, FACADE_NEGLIGIBLE, 5, "3 3");
+                    svg.replace(svg.length() - 2, svg.length(), "><title>" + escape(labels.text(
+                            "plan.negligibleBand", number(properties.path("bottom").asDouble()),
+                            number(properties.path("top").asDouble()))) + "</title></path>");
+                } else {
+                    line(svg, "facade-band", g, frame, FACADE, 5, null);
+                }
+            }
             case "exposed-edge" -> line(svg, "exposed-edge", g, frame, EDGE, 2.5, null);
             case "conductor" -> {
                 line(svg, "conductor", g, frame, PART, 2, "5 3");

@@ -52,10 +52,13 @@ public class ReviewApiController {
     /**
      * The review with what a client needs to show it responsibly. {@code modelWarnings} counts the
      * items that are model warnings: while any stands, accepted or not, the analysis gives no verdict
-     * of full protection.
+     * of full protection. {@code negligibleFacadeBands} counts the facade bands (or their parts)
+     * that are not items because flashes to the side are negligible there ({@code sideFlashRule}
+     * says why, IEC 62305-3:2010 5.2.3).
      */
     public record ReviewView(long siteId, int revision, String method, String level, double radius,
-            int exposedItems, int accepted, int modelWarnings, List<ItemView> items, List<String> cautions) {
+            int exposedItems, int accepted, int modelWarnings, int negligibleFacadeBands, String sideFlashRule,
+            List<ItemView> items, List<String> cautions) {
 
         static ReviewView of(ReviewService.Review review) {
             AnalysisRevision r = review.revision();
@@ -66,7 +69,8 @@ public class ReviewApiController {
             }).toList();
             int warnings = (int) review.items().stream().filter(ReviewItems.Item::isModelWarning).count();
             return new ReviewView(r.siteId(), r.revision(), ResultGeoJson.METHOD, r.level().name(),
-                    ResultGeoJson.round(r.sphereRadius()), items.size(), review.acceptedCount(), warnings, items,
+                    ResultGeoJson.round(r.sphereRadius()), items.size(), review.acceptedCount(), warnings,
+                    ReviewItems.negligibleBands(r.resultGeoJson()), ResultGeoJson.NEGLIGIBLE_RULE, items,
                     Cautions.lines());
         }
     }

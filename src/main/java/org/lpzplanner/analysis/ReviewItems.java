@@ -145,6 +145,14 @@ public final class ReviewItems {
         return keys;
     }
 
+    /**
+     * How many facade bands (or parts of them) of a stored result have flashes to the side
+     * negligible (IEC 62305-3:2010 5.2.3): drawn and listed, not items of the review.
+     */
+    public static int negligibleBands(String resultGeoJson) {
+        return (int) features(resultGeoJson).stream().filter(ReviewItems::isNegligibleBand).count();
+    }
+
     static List<JsonNode> features(String resultGeoJson) {
         List<JsonNode> features = new ArrayList<>();
         JSON.readTree(resultGeoJson).path("features").forEach(features::add);

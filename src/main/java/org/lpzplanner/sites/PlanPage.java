@@ -94,6 +94,9 @@ class PlanPage {
             model.put("radius", SitePageController.number(latest.sphereRadius()));
             ReviewService.Review review = reviews.review(latest);
             List<SummaryRow> summary = new ArrayList<>(summary(latest));
+            int negligible = ReviewItems.negligibleBands(latest.resultGeoJson());
+            summary.add(5, new SummaryRow("summary.negligibleBands", "negligibleFacadeBands", String.valueOf(negligible)));
+            model.put("negligibleBands", negligible);
             summary.add(new SummaryRow("summary.review", null, messages.getMessage("review.counts",
                     new Object[] {review.items().size(), review.acceptedCount()}, locale)));
             model.put("summary", summary);

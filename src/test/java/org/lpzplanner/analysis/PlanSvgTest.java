@@ -126,6 +126,41 @@ class PlanSvgTest {
         assertThat(svg).doesNotContain("model-warning").doesNotContain("plan.legend.warning");
     }
 
+    private static int count(String text, String part) {
+        return text.split(java.util.regex.Pattern.quote(part), -1).length - 1;
+    }
+
+    @Test
+    void facadeBandsAreDrawnApartByTheTallStructureRuleWithLegendRowsStatingIt() {
+        // IEC 62305-3:2010 5.2.3: a 100 m tower needs lateral air-termination on its upper 20 %
+        // (80 m to 100 m); below that, and on a 50 m tower everywhere, flashes to the side are
+        // negligible. Level I, R = 20 m (Table 2): the sphere touches the walls from 20 m up.
+        Site tall = SiteFiles.read("POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0)) 100\n", "tower.wkt").site();
+        String svg = PlanSvg.render(ResultGeoJson.write(tall, ExposureAnalysis.analyze(tall,
+                AnalysisOptions.of(SphereSpec.of(ProtectionLevel.I)))), KEYS);
+
+        assertThat(count(svg, "<path class=\"facade-band side-flash-negligible\"")).isEqualTo(4);
+        assertThat(count(svg, "<path class=\"facade-band\"")).isEqualTo(4);
+        // only the needing parts are review items, keyed for the review list
+        assertThat(svg).doesNotContainPattern("side-flash-negligible\"[^>]*data-item-key");
+        assertThat(count(svg, "data-item-key=\"facade-band-")).isEqualTo(4);
+        assertThat(svg).contains("plan.legend.facade[]").contains("plan.legend.facadeNegligible[]")
+                .contains("stroke=\"" + PlanSvg.FACADE_NEGLIGIBLE + "\"");
+        assertThat(PlanSvg.FACADE_NEGLIGIBLE).isNotEqualTo(PlanSvg.FACADE);
+
+        Site low = SiteFiles.read("POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0)) 50\n", "tower.wkt").site();
+        String lowSvg = PlanSvg.render(ResultGeoJson.write(low, ExposureAnalysis.analyze(low,
+                AnalysisOptions.of(SphereSpec.of(ProtectionLevel.I)))), KEYS);
+        assertThat(count(lowSvg, "<path class=\"facade-band side-flash-negligible\"")).isEqualTo(4);
+        assertThat(lowSvg).doesNotContain("data-item-key=\"facade-band-");
+    }
+
+    @Test
+    void aPlanWithoutNegligibleBandsHasNoLegendRowForThem() {
+        String svg = drawing("POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n", "block.wkt");
+        assertThat(svg).doesNotContain("plan.legend.facadeNegligible");
+    }
+
     private static double attribute(String svg, String name) {
         int start = svg.indexOf(name + "=\"") + name.length() + 2;
         return Double.parseDouble(svg.substring(start, svg.indexOf('"', start)));
