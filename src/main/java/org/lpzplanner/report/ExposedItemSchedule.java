@@ -51,7 +51,10 @@ final class ExposedItemSchedule {
         out.add(new Schedule(TITLE, List.of("No.", "Structure", "Kind", "Length (m)", "From (m)", "Top (m)", "Status"),
                 List.of(0.5, 1.6, 1.1, 0.8, 0.7, 0.7, 2.6), rows,
                 List.of(counts, "Heights above ground; \"From\" is the lowest point of a facade band a sphere"
-                        + " reaches from the side. Numbers as on the plan and in the review list.")));
+                        + " reaches from the side. Numbers as on the plan and in the review list.",
+                        "Facade bands listed here need lateral air-termination (IEC 62305-3:2010 5.2.3: the upper"
+                                + " 20 % of a structure taller than 60 m, and everything above 120 m); those where"
+                                + " flashes to the side are negligible are listed apart and are not exposed items.")));
         return out;
     }
 }

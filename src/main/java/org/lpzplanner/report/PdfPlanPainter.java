@@ -31,6 +31,8 @@ final class PdfPlanPainter {
     private static final Color OBJECT = new Color(0xb9, 0xad, 0x94);
     private static final Color EXPOSED_ROOF = new Color(0xf5, 0xb0, 0x6c);
     private static final Color FACADE = new Color(0x7b, 0x4f, 0xa0);
+    /** Facade bands where flashes to the side are negligible: the band's purple, light and dashed. */
+    private static final Color FACADE_NEGLIGIBLE = new Color(0xc4, 0xb0, 0xda);
     private static final Color EDGE = new Color(0xc8, 0x10, 0x2e);
     private static final Color ACCEPTED = new Color(0x8a, 0x8a, 0x8a);
     private static final Color PART = new Color(0x1f, 0x5f, 0xbf);
@@ -199,6 +201,17 @@ final class PdfPlanPainter {
                 out.setLineDashPattern(new float[] {5, 3}, 0);
                 out.stroke();
                 out.setLineDashPattern(new float[0], 0);
+            }
+            case FACADE_NEGLIGIBLE -> {
+                List<double[]> line = s.paths().get(0);
+                if (line.size() > 1) {
+                    path(out, line, k, ox, oy, cx, cy, false);
+                    out.setStrokingColor(FACADE_NEGLIGIBLE);
+                    out.setLineWidth(3f);
+                    out.setLineDashPattern(new float[] {2, 2}, 0);
+                    out.stroke();
+                    out.setLineDashPattern(new float[0], 0);
+                }
             }
             case FACADE_BAND, EXPOSED_EDGE, ACCEPTED_ITEM, CONDUCTOR -> {
                 List<double[]> line = s.paths().get(0);
@@ -377,12 +390,17 @@ final class PdfPlanPainter {
 
     private static void legend(PdfPages p, float top, PlanDrawing plan) {
         List<String> names = new ArrayList<>(List.of("Structure (darker is higher)", "Rooftop object",
-                "Protected open ground (LPZ 0B)", "Exposed roof area (LPZ 0A)", "Facade band a sphere reaches",
-                "Exposed edge / corner (E1, E2, …)", "Accepted item (dashed grey)",
+                "Protected open ground (LPZ 0B)", "Exposed roof area (LPZ 0A)",
+                "Facade band, lateral air-termination (5.2.3)", "Exposed edge / corner (E1, E2, …)",
+                "Accepted item (dashed grey)",
                 "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)"));
         // a null colour is the keep-out hatch
         List<Color> colours = new ArrayList<>(List.of(new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF,
                 FACADE, EDGE, ACCEPTED, PART, DOWN));
+        if (plan.has(Layer.FACADE_NEGLIGIBLE)) {
+            names.add("Facade band, side flashes negligible (5.2.3)");
+            colours.add(FACADE_NEGLIGIBLE);
+        }
         if (plan.has(Layer.MODEL_WARNING)) {
             names.add("Model warning: part > R above surface (E…)");
             colours.add(WARNING);

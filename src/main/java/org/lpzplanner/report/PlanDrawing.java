@@ -16,7 +16,8 @@ public record PlanDrawing(List<Shape> shapes, List<Label> labels, double minX, d
 
     /** Drawing layers, bottom to top. */
     public enum Layer {
-        PROTECTED_GROUND, STRUCTURE, ROOFTOP_OBJECT, EXPOSED_ROOF, KEEP_OUT, FACADE_BAND, MODEL_WARNING,
+        PROTECTED_GROUND, STRUCTURE, ROOFTOP_OBJECT, EXPOSED_ROOF, KEEP_OUT, FACADE_NEGLIGIBLE, FACADE_BAND,
+        MODEL_WARNING,
         ACCEPTED_ITEM, EXPOSED_EDGE, EXPOSED_CORNER, CONDUCTOR, DOWN_CONDUCTOR, ROD
     }
 

@@ -48,7 +48,9 @@ final class PlanDrawings {
                 case "rooftop-object" -> Layer.ROOFTOP_OBJECT;
                 case "protected-ground" -> Layer.PROTECTED_GROUND;
                 case "exposed-roof" -> Layer.EXPOSED_ROOF;
-                case "facade-band" -> accepted ? Layer.ACCEPTED_ITEM : Layer.FACADE_BAND;
+                case "facade-band" -> org.lpzplanner.analysis.ResultGeoJson.SIDE_FLASH_NEGLIGIBLE.equals(
+                        p.path("sideFlash").asString("")) ? Layer.FACADE_NEGLIGIBLE
+                        : accepted ? Layer.ACCEPTED_ITEM : Layer.FACADE_BAND;
                 case "exposed-edge" -> accepted ? Layer.ACCEPTED_ITEM : Layer.EXPOSED_EDGE;
                 case "exposed-corner" -> accepted ? Layer.ACCEPTED_ITEM : Layer.EXPOSED_CORNER;
                 case "model-warning" -> Layer.MODEL_WARNING; // accepted or not, the warning stands

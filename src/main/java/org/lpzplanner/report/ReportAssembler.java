@@ -121,8 +121,8 @@ public final class ReportAssembler {
         boolean roofs = !facts.stored().roofAreas().isEmpty();
         String exposure;
         if (remaining == 0 && !roofs) {
-            exposure = "every roof area, edge, corner and facade band is protected or accepted by the designer ("
-                    + accepted + " accepted).";
+            exposure = "every roof area, edge and corner, and every facade band needing lateral air-termination"
+                    + " (IEC 62305-3:2010 5.2.3), is protected or accepted by the designer (" + accepted + " accepted).";
         } else {
             exposure = remaining + " edge, corner or facade band item" + (remaining == 1 ? "" : "s")
                     + (roofs ? " and exposed roof areas" : "") + " need air-termination or the designer's acceptance ("
@@ -177,7 +177,11 @@ public final class ReportAssembler {
                 new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
                 new ReportBlock.Fact("Exposed roof area", metres(roofArea) + " m² (plan)"),
                 new ReportBlock.Fact("Exposed items", edges + " edges, " + corners + " corners, " + bands
-                        + " facade bands; " + facts.acceptedExposedCount() + " accepted"),
+                        + " facade bands needing lateral air-termination; " + facts.acceptedExposedCount()
+                        + " accepted"),
+                new ReportBlock.Fact("Negligible facade bands", SideFlashSchedule.negligible(facts).size()
+                        + " where flashes to the side are negligible (IEC 62305-3:2010 5.2.3: structures lower than"
+                        + " 60 m, or below the upper 20 % of taller ones; listed apart, not exposed)"),
                 new ReportBlock.Fact("Model warnings", warningFinding(facts)),
                 new ReportBlock.Fact("Air-termination parts", facts.partNumbers().size() + " ("
                         + facts.stored().intercepting().size() + " intercepting)"),
@@ -187,7 +191,9 @@ public final class ReportAssembler {
                                 + facts.downConductors().size() + " structures")))));
         blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
                 + " air-termination parts, " + (facts.stored().warnings().isEmpty() ? "" : "model warnings, ")
-                + "exposed items, down-conductors and separation distances; bill of"
+                + "exposed items, " + (SideFlashSchedule.negligible(facts).isEmpty() ? ""
+                        : "facade bands where flashes to the side are negligible, ")
+                + "down-conductors and separation distances; bill of"
                 + " quantities;" + (appendix ? " appendix (risk estimate);" : "") + " review and approval."));
     }
 
@@ -260,7 +266,10 @@ public final class ReportAssembler {
                 + " nothing is inferred. Structures that touch or overlap form one solid. Where a conductor or"
                 + " wire runs more than R above what lies beneath it, the analysis warns, naming it (see the"
                 + " schedule of model warnings), and gives no verdict of full protection while the warning"
-                + " stands."));
+                + " stands. A sphere touches every wall taller than R from R up; by IEC 62305-3:2010 5.2.3 and"
+                + " Annex A only the upper part of a building taller than 60 m (from 0.8 H, and everything above"
+                + " 120 m) needs lateral air-termination, where H is the highest point of the structures that"
+                + " touch or overlap; the rest of such bands is listed apart as negligible."));
         List<List<String>> rows = new ArrayList<>();
         for (StructureRow r : StructureRow.of(facts.site().structures())) {
             rows.add(List.of(r.id(), r.name(), metres(r.footprintArea()), metres(r.height()), r.roof(),

@@ -15,6 +15,7 @@ public final class ReportParts {
             AirTerminationSchedule::blocks,
             ModelWarningSchedule::blocks,
             ExposedItemSchedule::blocks,
+            SideFlashSchedule::blocks,
             DownConductorSchedule::blocks,
             SeparationSchedule::blocks,
             KeepOutSchedule::blocks,
