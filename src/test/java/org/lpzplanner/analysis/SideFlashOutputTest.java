@@ -20,7 +20,7 @@ import tools.jackson.databind.json.JsonMapper;
  * Annex A: flashes to the side are negligible on structures lower than 60 m; on taller ones the
  * upper 20 % of the height and everything above 120 m need lateral air-termination. Towers of
  * 10 m × 10 m at level I (R = 20 m, Table 2): the sphere touches their walls from R up to the top
- * (closed form of the sphere geometry, domain notes §4.4).
+ * (closed form 4 of the sphere geometry).
  */
 class SideFlashOutputTest {
 

@@ -10,8 +10,8 @@ import org.junit.jupiter.api.io.TempDir;
  * The printed summary counts and prints facade bands apart by IEC 62305-3:2010 5.2.3 and Annex A:
  * flashes to the side are negligible on structures lower than 60 m; on taller ones the upper 20 %
  * of the height and everything above 120 m need lateral air-termination. Towers of 10 m × 10 m at
- * level I (R = 20 m, Table 2), touched by the sphere from R up to their top (closed form of the
- * sphere geometry, domain notes §4.4).
+ * level I (R = 20 m, Table 2), touched by the sphere from R up to their top (closed form 4 of the
+ * sphere geometry).
  */
 class SideFlashSummaryTest {
 

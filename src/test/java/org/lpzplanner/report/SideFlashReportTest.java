@@ -17,8 +17,8 @@ import org.lpzplanner.engine.model.ProtectionLevel;
 
 /**
  * The printed report of a 100 m tower, 10 m × 10 m, at level I (R = 20 m, IEC 62305-3:2010 Table 2):
- * the sphere touches its walls from 20 m up (closed form of the sphere geometry, domain notes
- * §4.4); by IEC 62305-3:2010 5.2.3 only the upper 20 %, from 80 m, needs lateral air-termination.
+ * the sphere touches its walls from 20 m up (closed form 4 of the sphere geometry); by
+ * IEC 62305-3:2010 5.2.3 only the upper 20 %, from 80 m, needs lateral air-termination.
  * The report lists the two kinds apart and states the rule.
  */
 class SideFlashReportTest {

@@ -16,7 +16,7 @@ import org.springframework.test.web.servlet.MockMvc;
 
 /**
  * The plan page and the review API of a 50 m tower at level I (R = 20 m, IEC 62305-3:2010 Table 2):
- * the sphere touches its walls from 20 m up (closed form of the sphere geometry, domain notes §4.4),
+ * the sphere touches its walls from 20 m up (closed form 4 of the sphere geometry),
  * but on a structure lower than 60 m flashes to the side are negligible (IEC 62305-3:2010 5.2.3 and
  * Annex A), so its bands are not review items and the page says why.
  */

@@ -18,7 +18,7 @@ import org.lpzplanner.engine.reference.TestSites;
  * to the side are negligible on structures lower than 60 m; on taller ones the upper part, typically
  * the top 20 % of the height, needs lateral air-termination, and so does everything above 120 m.
  * The bands themselves follow from the sphere: a wall taller than R is touched from R up to its top
- * (closed form of the sphere geometry, domain notes §4.4), R = 20 m at level I (IEC 62305-3:2010
+ * (closed form 4 of the sphere geometry), R = 20 m at level I (IEC 62305-3:2010
  * Table 2). Band bottoms are at most 0.05 m below R (the engine's stated band tolerance).
  */
 class SideFlashRuleTest {
