@@ -67,11 +67,15 @@ function setUp(section) {
   // The plan editor replaces the drawing after a rod change; that is a new analysis, whose items
   // this list does not show yet.
   const stale = document.getElementById('review-stale');
+  const warningsStale = document.getElementById('model-warnings-stale');
   new MutationObserver(() => {
     selectedKey = null;
     if (stale) {
       stale.textContent = section.dataset.msgStale;
       stale.hidden = false;
+    }
+    if (warningsStale) {
+      warningsStale.hidden = false;
     }
   }).observe(drawing, { childList: true });
 }

@@ -11,8 +11,11 @@ import org.lpzplanner.engine.model.ProtectionLevel;
  * @param resolution        grid spacing the engine used, metres
  * @param inputsSha256      SHA-256 (hex) of the site file text the analysis read
  * @param exposedCorners    number of exposed corners
- * @param facadeBands       number of facade bands a sphere reaches from the side
- * @param fullyProtected    no roof area, edge, corner or facade band is exposed
+ * @param facadeBands       number of facade bands (or their parts) a sphere reaches from the side that
+ *                          need lateral air-termination (IEC 62305-3:2010 5.2.3); revisions stored
+ *                          before bands were classified counted every band
+ * @param fullyProtected    no roof area, edge or corner is exposed, no facade band needs lateral
+ *                          air-termination and no model warning stands (the engine's verdict)
  * @param resultGeoJson     the result drawing data (see {@link ResultGeoJson}); null when a query
  *                          left it out
  * @param engineMillis      time the engine took

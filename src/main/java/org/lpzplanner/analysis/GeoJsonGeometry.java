@@ -45,6 +45,24 @@ final class GeoJsonGeometry {
         return lineString(List.of(line.getCoordinates()), withZ);
     }
 
+    /**
+     * Lines of a geometry (a LineString or MultiLineString; anything else in it is dropped) as one
+     * MultiLineString; lines of fewer than two positions are left out (RFC 7946 3.1.5).
+     */
+    ObjectNode multiLineString(Geometry geometry, boolean withZ) {
+        ObjectNode g = geometry("MultiLineString");
+        ArrayNode coordinates = g.putArray("coordinates");
+        for (int k = 0; k < geometry.getNumGeometries(); k++) {
+            if (geometry.getGeometryN(k) instanceof LineString line && line.getNumPoints() >= 2) {
+                ArrayNode positions = coordinates.addArray();
+                for (Coordinate c : line.getCoordinates()) {
+                    positions.add(position(c, withZ));
+                }
+            }
+        }
+        return g;
+    }
+
     /** The polygons of a geometry (anything else in it is dropped) as one MultiPolygon. */
     ObjectNode multiPolygon(Geometry geometry) {
         ObjectNode g = geometry("MultiPolygon");

@@ -10,16 +10,18 @@ import tools.jackson.databind.json.JsonMapper;
 /**
  * Draws the plan of an analysed site as an inline SVG element, from the stored
  * {@link ResultGeoJson}: structures shaded by height (darker is higher) with their names, rooftop
- * objects, protected open ground, exposed roof areas, facade bands, exposed edges and corners,
- * air-termination parts, a scale bar, a north arrow and a legend. North is up (the y axis is
+ * objects, protected open ground, exposed roof areas, facade bands (those where flashes to the side
+ * are negligible, IEC 62305-3:2010 5.2.3, light and dashed), exposed edges and corners,
+ * the stretches of parts a model warning is about, air-termination parts, a scale bar, a north
+ * arrow and a legend. North is up (the y axis is
  * flipped). Every text from the site file is escaped; every other text comes from {@link Labels}.
  *
  * <p>The {@code <svg>} element carries its frame so that a script can turn a point of the drawing
  * back into local metres: {@code x = originX + (svgX - margin) / scale} and, the y axis being
  * flipped, {@code y = originY - (svgY - margin) / scale} ({@code data-origin-x},
  * {@code data-origin-y}, {@code data-scale} in SVG units per metre, {@code data-margin},
- * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}, conductors in {@code data-conductor-id}. Exposed edges, corners and
- * facade bands carry their {@link ReviewItems} key in {@code data-item-key}; those a designer
+ * {@code data-y-flipped}). Rods carry their id in {@code data-rod-id}, conductors in {@code data-conductor-id}. Exposed edges, corners,
+ * facade bands and model warnings carry their {@link ReviewItems} key in {@code data-item-key}; those a designer
  * accepted also get the class {@code accepted} and a title with the reason (escaped).
  */
 public final class PlanSvg {
@@ -35,10 +37,17 @@ public final class PlanSvg {
     static final String OBJECT = "#b9ad94";
     static final String EXPOSED_ROOF = "#f28c28";
     static final String FACADE = "#7b4fa0";
+    /** Facade bands where flashes to the side are negligible: the band's purple, light and dashed. */
+    static final String FACADE_NEGLIGIBLE = "#c4b0da";
     static final String EDGE = "#c8102e";
     static final String PART = "#1f5fbf";
     /** Hatch of stored keep-out areas (our own: dark teal diagonal lines over what lies below). */
     static final String KEEP_OUT = "#1b6e5a";
+    /**
+     * Stretches of parts a model warning is about (our own: a broad dashed amber band laid under
+     * the part, so the part stays visible on top of it).
+     */
+    static final String WARNING = "#e09b00";
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
     private static final double WIDTH = 820;
@@ -92,13 +101,20 @@ public final class PlanSvg {
         double scale = Math.min((WIDTH - 2 * MARGIN) / dx, (DRAW_HEIGHT - 2 * MARGIN) / dy);
         double drawHeight = dy * scale + 2 * MARGIN;
         Frame frame = new Frame(box[0], box[3], scale);
-        String[] legendKeys = {"plan.legend.structure", "plan.legend.object", "plan.legend.ground",
-            "plan.legend.roof", "plan.legend.facade", "plan.legend.edge", "plan.legend.part"};
-        if (!keepOut.isEmpty()) {
-            legendKeys = java.util.Arrays.copyOf(legendKeys, legendKeys.length + 1);
-            legendKeys[legendKeys.length - 1] = "plan.legend.keepOut";
+        List<LegendRow> legendRows = new ArrayList<>(List.of(new LegendRow("plan.legend.structure", "#9a9a9f"),
+                new LegendRow("plan.legend.object", OBJECT), new LegendRow("plan.legend.ground", GROUND),
+                new LegendRow("plan.legend.roof", EXPOSED_ROOF), new LegendRow("plan.legend.facade", FACADE)));
+        if (features.stream().anyMatch(ReviewItems::isNegligibleBand)) {
+            legendRows.add(new LegendRow("plan.legend.facadeNegligible", FACADE_NEGLIGIBLE));
         }
-        double height = drawHeight + 10 + LEGEND_ROW * legendKeys.length;
+        legendRows.addAll(List.of(new LegendRow("plan.legend.edge", EDGE), new LegendRow("plan.legend.part", PART)));
+        if (features.stream().anyMatch(f -> layer(f).equals("model-warning"))) {
+            legendRows.add(new LegendRow("plan.legend.warning", WARNING));
+        }
+        if (!keepOut.isEmpty()) {
+            legendRows.add(new LegendRow("plan.legend.keepOut", "url(#keep-out-hatch)"));
+        }
+        double height = drawHeight + 10 + LEGEND_ROW * legendRows.size();
         double maxHeight = features.stream().filter(f -> layer(f).equals("structure"))
                 .mapToDouble(f -> f.path("properties").path("height").asDouble(0)).max().orElse(1);
 
@@ -126,19 +142,24 @@ public final class PlanSvg {
                 }
             }
             for (JsonNode f : features) {
-                if (layer(f).equals(layer)) {
-                    draw(svg, f, frame, maxHeight);
-                    String key = keys.get(f);
-                    if (key != null) {
-                        markItem(svg, key, accepted.get(key), labels);
-                    }
+                if (!layer(f).equals(layer)) {
+                    continue;
+                }
+                String key = keys.get(f);
+                if (layer.equals("model-warning")) {
+                    warning(svg, f, frame, key, key == null ? null : accepted.get(key), labels);
+                    continue;
+                }
+                draw(svg, f, frame, maxHeight, labels);
+                if (key != null) {
+                    markItem(svg, key, accepted.get(key), labels);
                 }
             }
         }
         keepOut(svg, keepOut, frame);
         scaleBar(svg, frame, drawHeight, labels);
         northArrow(svg, labels);
-        legend(svg, drawHeight + 10, legendKeys, labels);
+        legend(svg, drawHeight + 10, legendRows, labels);
         return svg.append("</svg>").toString();
     }
 
@@ -181,7 +202,7 @@ public final class PlanSvg {
         }
     }
 
-    private static void draw(StringBuilder svg, JsonNode f, Frame frame, double maxHeight) {
+    private static void draw(StringBuilder svg, JsonNode f, Frame frame, double maxHeight, Labels labels) {
         JsonNode properties = f.path("properties");
         JsonNode g = f.path("geometry");
         switch (layer(f)) {
@@ -204,7 +225,17 @@ public final class PlanSvg {
             case "exposed-roof" -> svg.append("<path class=\"exposed-roof\" fill=\"").append(EXPOSED_ROOF)
                     .append("\" fill-opacity=\"0.75\" stroke=\"none\" fill-rule=\"evenodd\" d=\"")
                     .append(polygonPath(g, frame)).append("\"/>");
-            case "facade-band" -> line(svg, "facade-band", g, frame, FACADE, 5, null);
+            case "facade-band" -> {
+                if (ReviewItems.isNegligibleBand(f)) {
+                    // flashes to the side negligible (IEC 62305-3:2010 5.2.3): drawn, not an item
+                    line(svg, "facade-band side-flash-negligible", g, frame, FACADE_NEGLIGIBLE, 5, "3 3");
+                    svg.replace(svg.length() - 2, svg.length(), "><title>" + escape(labels.text(
+                            "plan.negligibleBand", number(properties.path("bottom").asDouble()),
+                            number(properties.path("top").asDouble()))) + "</title></path>");
+                } else {
+                    line(svg, "facade-band", g, frame, FACADE, 5, null);
+                }
+            }
             case "exposed-edge" -> line(svg, "exposed-edge", g, frame, EDGE, 2.5, null);
             case "conductor" -> {
                 line(svg, "conductor", g, frame, PART, 2, "5 3");
@@ -296,16 +327,54 @@ public final class PlanSvg {
                 escape(labels.text("plan.north"))));
     }
 
-    private static void legend(StringBuilder svg, double top, String[] keys, Labels labels) {
-        String[] colours = {"#9a9a9f", OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, PART, "url(#keep-out-hatch)"};
+    /** A legend row: the message key of its words and the fill of its swatch. */
+    private record LegendRow(String key, String fill) {
+    }
+
+    private static void legend(StringBuilder svg, double top, List<LegendRow> rows, Labels labels) {
         svg.append("<g class=\"legend\" font-size=\"12\" font-family=\"sans-serif\">");
-        for (int i = 0; i < keys.length; i++) {
+        for (int i = 0; i < rows.size(); i++) {
             double y = top + i * LEGEND_ROW;
             svg.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"18\" height=\"12\" fill=\"%s\""
                     + " stroke=\"#444444\" stroke-width=\"0.5\"/><text x=\"%.1f\" y=\"%.1f\">%s</text>", MARGIN, y,
-                    colours[i], MARGIN + 26, y + 10, escape(labels.text(keys[i]))));
+                    rows.get(i).fill(), MARGIN + 26, y + 10, escape(labels.text(rows.get(i).key()))));
         }
         svg.append("</g>");
+    }
+
+    /**
+     * The stretch a model warning is about: a broad dashed band in its own colour, under the part
+     * (drawn before rods and conductors), with the review key, the warning's words as its title
+     * and, when the designer accepted it, the class {@code accepted} and the reason.
+     */
+    private static void warning(StringBuilder svg, JsonNode f, Frame frame, String key, String reason,
+            Labels labels) {
+        StringBuilder d = new StringBuilder();
+        JsonNode g = f.path("geometry");
+        if ("LineString".equals(g.path("type").asString(""))) {
+            ring(d, g.path("coordinates"), frame, false);
+        } else {
+            for (JsonNode line : g.path("coordinates")) {
+                if (d.length() > 0) {
+                    d.append(' ');
+                }
+                ring(d, line, frame, false);
+            }
+        }
+        if (d.length() == 0) {
+            return;
+        }
+        svg.append("<path class=\"model-warning").append(reason != null ? " accepted" : "").append('"');
+        if (key != null) {
+            svg.append(" data-item-key=\"").append(escape(key)).append('"');
+        }
+        svg.append(" fill=\"none\" stroke=\"").append(WARNING).append("\" stroke-opacity=\"0.8\" stroke-width=\"11\""
+                + " stroke-dasharray=\"9 5\" stroke-linecap=\"butt\" d=\"").append(d).append("\"><title>")
+                .append(escape(text(f, "text")));
+        if (reason != null) {
+            svg.append(' ').append(escape(labels.text("review.status.accepted", reason)));
+        }
+        svg.append("</title></path>");
     }
 
     /** SVG path data of a (Multi)Polygon's rings. */

@@ -11,8 +11,10 @@ import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.CornerExposure;
 import org.lpzplanner.engine.exposure.EdgeExposure;
 import org.lpzplanner.engine.exposure.FacadeBand;
+import org.lpzplanner.engine.exposure.ModelWarning;
 import org.lpzplanner.engine.exposure.PartInterception;
 import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.exposure.SideFlashRule;
 import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
@@ -55,14 +57,23 @@ import tools.jackson.databind.node.ObjectNode;
  *       {@code owner}, {@code ownerId}, {@code surface} ({@code roof} or {@code rooftop-object}),
  *       {@code face} (1-based), {@code area} (exposed plan area) and {@code roofArea} (the face's), m²;</li>
  *   <li>{@code facade-band}: along the wall foot, {@code owner}, {@code ownerId}, {@code wall}
- *       (1-based), {@code length}, {@code bottom}, {@code top} (m above ground);</li>
+ *       (1-based), {@code length}, {@code bottom}, {@code top} (m above ground), {@code sideFlash}
+ *       ({@link #SIDE_FLASH_LATERAL} or {@link #SIDE_FLASH_NEGLIGIBLE}, by {@link SideFlashRule},
+ *       IEC 62305-3:2010 5.2.3), {@code sideFlashRule} (the rule in words) and {@code buildingHeight};
+ *       a band that the rule splits is written as two features, one per part, with the same line;</li>
  *   <li>{@code exposed-edge}: with elevations, {@code owner}, {@code ownerId}, {@code kind},
  *       {@code length}, {@code top} (highest elevation along it);</li>
  *   <li>{@code exposed-corner}: a point with its elevation, {@code owner}, {@code ownerId}, {@code top};</li>
  *   <li>{@code rod}: its tip with elevation, {@code id}, {@code name}, {@code height} (above what it
  *       stands on), {@code intercepts};</li>
  *   <li>{@code conductor}: its path with elevations as placed, {@code id}, {@code name},
- *       {@code intercepts}.</li>
+ *       {@code intercepts};</li>
+ *   <li>{@code model-warning}: what the designer must know before relying on the result (a
+ *       {@link ModelWarning}), as a MultiLineString in plan of the stretch concerned, {@code kind}
+ *       ({@code free-span}: a conductor more than R above the surface beneath it), {@code part}
+ *       (its id), {@code partName}, {@code heightAboveSurface} (the greatest, m), {@code radius}
+ *       (the limit it exceeds, m) and {@code text}. The summary lists the same warnings; while any
+ *       stands, {@code fullyProtected} is false.</li>
  * </ul>
  *
  * <p>Polygons are MultiPolygons, outer rings counter-clockwise. Areas are plan areas.
@@ -78,8 +89,23 @@ public final class ResultGeoJson {
     /** What a position's third value means. */
     public static final String ELEVATIONS = "metres above ground";
 
+    /** {@code sideFlash} of a facade band (or part of one) that needs lateral air-termination. */
+    public static final String SIDE_FLASH_LATERAL = "lateral-air-termination";
+
+    /** {@code sideFlash} of a facade band (or part of one) where flashes to the side are negligible. */
+    public static final String SIDE_FLASH_NEGLIGIBLE = "negligible";
+
+    /** The rule, with its clause, for a band that needs lateral air-termination. */
+    public static final String LATERAL_RULE = "needs lateral air-termination (" + SideFlashRule.CLAUSE
+            + ": the upper 20 % of a structure taller than 60 m, and everything above 120 m)";
+
+    /** The rule, with its clause, for a band where flashes to the side are negligible. */
+    public static final String NEGLIGIBLE_RULE = "flashes to the side negligible (" + SideFlashRule.CLAUSE
+            + " and Annex A: a structure lower than 60 m, or below the upper 20 % of a taller one)";
+
+    /** Every layer, in the order the plan draws them (bottom to top). */
     public static final List<String> LAYERS = List.of("structure", "rooftop-object", "protected-ground",
-            "exposed-roof", "facade-band", "exposed-edge", "exposed-corner", "rod", "conductor");
+            "exposed-roof", "facade-band", "model-warning", "exposed-edge", "exposed-corner", "rod", "conductor");
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
@@ -175,13 +201,19 @@ public final class ResultGeoJson {
                 f.put("roofArea", round(r.planArea()));
             }
         }
-        for (FacadeBand b : result.facades()) {
+        for (SideFlashRule.Part part : result.facadeParts()) {
+            FacadeBand b = part.band();
             ObjectNode f = feature(features, "facade-band", geometry.lineString(b.line(), false));
             owner(f, b.ownerName(), b.ownerId());
             f.put("wall", b.wallIndex() + 1);
             f.put("length", round(b.length()));
-            f.put("bottom", round(b.bottom()));
-            f.put("top", round(b.top()));
+            f.put("bottom", round(part.bottom()));
+            f.put("top", round(part.top()));
+            f.put("sideFlash", part.needsLateralAirTermination() ? SIDE_FLASH_LATERAL : SIDE_FLASH_NEGLIGIBLE);
+            f.put("sideFlashRule", part.needsLateralAirTermination() ? LATERAL_RULE : NEGLIGIBLE_RULE);
+            if (Double.isFinite(part.buildingHeight())) {
+                f.put("buildingHeight", round(part.buildingHeight()));
+            }
         }
         for (EdgeExposure e : result.edges()) {
             ObjectNode f = feature(features, "exposed-edge", geometry.lineString(e.line(), true));
@@ -206,6 +238,9 @@ public final class ResultGeoJson {
             }
         }
         parts(features, site, result, geometry);
+        for (ModelWarning w : result.warnings()) {
+            warning(feature(features, "model-warning", geometry.multiLineString(w.where(), false)), w);
+        }
         return root;
     }
 
@@ -235,6 +270,21 @@ public final class ResultGeoJson {
         }
     }
 
+    /** The properties of a model warning, in its feature and in the summary's list alike. */
+    private static void warning(ObjectNode properties, ModelWarning w) {
+        properties.put("kind", warningKind(w.kind()));
+        properties.put("part", w.partId());
+        properties.put("partName", w.partName());
+        properties.put("heightAboveSurface", round(w.value()));
+        properties.put("radius", round(w.limit()));
+        properties.put("text", w.text());
+    }
+
+    /** A warning kind as written: {@code free-span}. */
+    static String warningKind(ModelWarning.Kind kind) {
+        return kind.name().toLowerCase(Locale.ROOT).replace('_', '-');
+    }
+
     private static ObjectNode analysis(Site site, String sourceName, AnalysisResult result) {
         ResultTotals totals = ResultTotals.of(result);
         ObjectNode a = JSON.createObjectNode();
@@ -261,10 +311,14 @@ public final class ResultGeoJson {
         s.put("exposedCorners", totals.corners());
         s.put("facadeBands", totals.facadeBands());
         s.put("facadeBandLength", round(totals.facadeLength()));
+        s.put("negligibleFacadeBands", totals.negligibleBands());
+        s.put("negligibleFacadeBandLength", round(totals.negligibleLength()));
         s.put("airTerminationParts", totals.parts());
         s.put("interceptingParts", totals.interceptingParts());
         s.put("protectedGroundArea", round(totals.protectedGround()));
         s.put("fullyProtected", result.isFullyProtected());
+        ArrayNode warnings = s.putArray("warnings");
+        result.warnings().forEach(w -> warning(warnings.addObject(), w));
         ArrayNode cautions = a.putArray("cautions");
         Cautions.lines().forEach(cautions::add);
         return a;

@@ -8,9 +8,9 @@ import java.util.List;
 import java.util.Map;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.EdgeExposure;
-import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.exposure.PartInterception;
 import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.exposure.SideFlashRule;
 import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SurfaceKind;
 
@@ -21,14 +21,19 @@ import org.lpzplanner.engine.geom.SurfaceKind;
  * @param roofs          roof totals per owner (structure or rooftop object), in the engine's order
  * @param edgeLengths    exposed edge length per kind, only kinds with some exposure, in enum order
  * @param corners        exposed corners
- * @param facadeBands    facade bands
- * @param facadeLength   total length along the walls of all facade bands
+ * @param facadeBands    facade bands (or their upper parts) that need lateral air-termination
+ *                       (IEC 62305-3:2010 5.2.3)
+ * @param facadeLength   total length along the walls of those
  * @param parts          air-termination parts in the site
  * @param interceptingParts parts a sphere can touch
  * @param protectedGround protected open ground
+ * @param negligibleBands facade bands (or their lower parts) where flashes to the side are negligible
+ * @param negligibleLength total length along the walls of those
+ * @param warnings       model warnings
  */
 public record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLengths, int corners, int facadeBands,
-        double facadeLength, int parts, int interceptingParts, double protectedGround) {
+        double facadeLength, int parts, int interceptingParts, double protectedGround, int negligibleBands,
+        double negligibleLength, int warnings) {
 
     public ResultTotals {
         roofs = List.copyOf(roofs);
@@ -64,11 +69,17 @@ public record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLeng
         for (EdgeExposure e : result.edges()) {
             edges.merge(e.kind(), e.length(), Double::sum);
         }
-        double facadeLength = result.facades().stream().mapToDouble(FacadeBand::length).sum();
+        List<SideFlashRule.Part> needing = result.facadePartsNeedingLateral();
+        List<SideFlashRule.Part> negligible = result.facadeParts().stream().filter(p -> !p.needsLateralAirTermination())
+                .toList();
         int intercepting = (int) result.parts().stream().filter(PartInterception::intercepts).count();
         return new ResultTotals(new ArrayList<>(owners.values()), edges, result.corners().size(),
-                result.facades().size(), facadeLength, result.parts().size(), intercepting,
-                result.protectedGround().planArea());
+                needing.size(), length(needing), result.parts().size(), intercepting,
+                result.protectedGround().planArea(), negligible.size(), length(negligible), result.warnings().size());
+    }
+
+    private static double length(List<SideFlashRule.Part> parts) {
+        return parts.stream().mapToDouble(p -> p.band().length()).sum();
     }
 
     public double roofArea() {
@@ -77,6 +88,14 @@ public record ResultTotals(List<OwnerRoof> roofs, Map<EdgeKind, Double> edgeLeng
 
     public double exposedRoofArea() {
         return roofs.stream().mapToDouble(OwnerRoof::exposedArea).sum();
+    }
+
+    /**
+     * True when some roof area, edge or corner is exposed or some facade band needs lateral
+     * air-termination (model warnings aside).
+     */
+    public boolean anyExposed() {
+        return exposedRoofArea() > 0 || !edgeLengths.isEmpty() || corners > 0 || facadeBands > 0;
     }
 
     public double edgeLength() {

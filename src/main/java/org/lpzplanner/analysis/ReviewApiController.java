@@ -22,7 +22,7 @@ import tools.jackson.databind.JsonNode;
 /**
  * JSON API for the review of a site's latest analysis:
  * {@code GET /api/sites/{id}/analyses/latest/items} lists the exposed edges, corners and facade
- * bands with their status; {@code POST /api/sites/{id}/analyses/latest/accepted} with JSON
+ * bands and the model warnings with their status; {@code POST /api/sites/{id}/analyses/latest/accepted} with JSON
  * {@code {"key": ..., "reason": ...}} marks one accepted; {@code DELETE
  * /api/sites/{id}/analyses/latest/accepted/{key}} marks it exposed again. Each answers with the
  * whole review, method, level, radius and cautions. An unknown key answers 404, a missing key or a
@@ -41,31 +41,42 @@ public class ReviewApiController {
 
     /**
      * One item. {@code status} is {@code exposed} or {@code accepted} (then with its
-     * {@code reason}); lengths and heights in metres, {@code bottom} for facade bands only.
+     * {@code reason}); lengths and heights in metres, {@code bottom} for facade bands only. A model
+     * warning (kind {@code free-span}) names its part in {@code owner} and has
+     * {@code heightAboveSurface} and {@code text}; both are null for every other item.
      */
     public record ItemView(int number, String key, String owner, String kind, Double length, Double bottom,
-            Double top, String status, String reason) {
+            Double top, Double heightAboveSurface, String text, String status, String reason) {
     }
 
-    /** The review with what a client needs to show it responsibly. */
+    /**
+     * The review with what a client needs to show it responsibly. {@code modelWarnings} counts the
+     * items that are model warnings: while any stands, accepted or not, the analysis gives no verdict
+     * of full protection. {@code negligibleFacadeBands} counts the facade bands (or their parts)
+     * that are not items because flashes to the side are negligible there ({@code sideFlashRule}
+     * says why, IEC 62305-3:2010 5.2.3).
+     */
     public record ReviewView(long siteId, int revision, String method, String level, double radius,
-            int exposedItems, int accepted, List<ItemView> items, List<String> cautions) {
+            int exposedItems, int accepted, int modelWarnings, int negligibleFacadeBands, String sideFlashRule,
+            List<ItemView> items, List<String> cautions) {
 
         static ReviewView of(ReviewService.Review review) {
             AnalysisRevision r = review.revision();
             List<ItemView> items = review.items().stream().map(i -> {
                 String reason = review.accepted().get(i.key());
                 return new ItemView(i.number(), i.key(), i.owner(), i.kind(), i.length(), i.bottom(), i.top(),
-                        reason == null ? "exposed" : "accepted", reason);
+                        i.heightAboveSurface(), i.text(), reason == null ? "exposed" : "accepted", reason);
             }).toList();
+            int warnings = (int) review.items().stream().filter(ReviewItems.Item::isModelWarning).count();
             return new ReviewView(r.siteId(), r.revision(), ResultGeoJson.METHOD, r.level().name(),
-                    ResultGeoJson.round(r.sphereRadius()), items.size(), review.acceptedCount(), items,
+                    ResultGeoJson.round(r.sphereRadius()), items.size(), review.acceptedCount(), warnings,
+                    ReviewItems.negligibleBands(r.resultGeoJson()), ResultGeoJson.NEGLIGIBLE_RULE, items,
                     Cautions.lines());
         }
     }
 
     @Operation(summary = "Exposed items of the latest analysis",
-            description = "Every exposed edge, corner and facade band with its status.")
+            description = "Every exposed edge, corner and facade band, and every model warning, with its status.")
     @ApiResponse(responseCode = "200", description = "The review")
     @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/items")

@@ -16,8 +16,18 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The items of a stored {@link ResultGeoJson} a designer reviews one by one: every exposed edge
- * (roof edge, parapet, ridge, hip, rooftop object edge), exposed corner and facade band, in the
- * order the result lists them. Exposed roof areas are not items of this list.
+ * (roof edge, parapet, ridge, hip, rooftop object edge), exposed corner and facade band (or part of
+ * one) that needs lateral air-termination, and every model warning, in the order the result lists
+ * them. Exposed roof areas are not items of this list, nor are facade bands where flashes to the
+ * side are negligible (IEC 62305-3:2010 5.2.3 and Annex A: structures lower than 60 m, and below the
+ * upper 20 % of taller ones): those are drawn and listed apart.
+ *
+ * <p>A model warning (layer {@code model-warning}) is an item a designer must look at: it names a
+ * part the analysis cannot vouch for (a wire more than R above the surface beneath it). It can be
+ * accepted with a reason like any other item, which records the designer's answer; the analysis
+ * still gives no verdict of full protection while it stands, accepted or not. Its plan geometry is
+ * never lent to the proposal as accepted (see {@link #geometries}): accepting the warning says
+ * nothing about what lies beneath the part.
  *
  * <p>Each item has a key made of its kind and the first 12 hex digits of the SHA-256 of its owner,
  * kind, plan coordinates and top elevation rounded to the decimetre, so the same edge keeps its key when the numbers
@@ -28,7 +38,8 @@ import tools.jackson.databind.json.JsonMapper;
 public final class ReviewItems {
 
     /** The layers whose features are review items. */
-    public static final Set<String> LAYERS = Set.of("exposed-edge", "exposed-corner", "facade-band");
+    public static final Set<String> LAYERS = Set.of("exposed-edge", "exposed-corner", "facade-band",
+            "model-warning");
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
@@ -37,12 +48,21 @@ public final class ReviewItems {
 
     /**
      * One review item. {@code kind} is the edge kind of the result ({@code roof-edge},
-     * {@code parapet}, {@code ridge}, {@code hip}, {@code rooftop-object-edge}), {@code corner} or
-     * {@code facade-band}. {@code length} is null for corners; {@code bottom} is set for facade bands
-     * only; {@code top} is the highest elevation in metres, null when the result does not give it.
+     * {@code parapet}, {@code ridge}, {@code hip}, {@code rooftop-object-edge}), {@code corner},
+     * {@code facade-band}, or for a model warning its kind ({@code free-span}). {@code length} is null
+     * for corners; {@code bottom} is set for facade bands only; {@code top} is the highest elevation
+     * in metres, null when the result does not give it (and for warnings). For a model warning,
+     * {@code owner} is the part's name, {@code length} the plan length of the stretch concerned,
+     * {@code heightAboveSurface} the part's greatest height above the surface beneath it and
+     * {@code text} the warning in plain words; both are null for every other item.
      */
     public record Item(int number, String key, String owner, String kind, Double length, Double bottom,
-            Double top) {
+            Double top, Double heightAboveSurface, String text) {
+
+        /** True for a model warning, false for an exposed edge, corner or facade band. */
+        public boolean isModelWarning() {
+            return text != null;
+        }
     }
 
     /** The items of a result, numbered from 1. */
@@ -52,10 +72,16 @@ public final class ReviewItems {
         List<Item> items = new ArrayList<>();
         for (JsonNode f : features) {
             String key = keys.get(f);
-            if (key != null) {
-                JsonNode p = f.path("properties");
-                items.add(new Item(items.size() + 1, key, p.path("owner").asString(""), kind(f), number(p, "length"),
-                        number(p, "bottom"), number(p, "top")));
+            if (key == null) {
+                continue;
+            }
+            JsonNode p = f.path("properties");
+            if (isWarning(f)) {
+                items.add(new Item(items.size() + 1, key, owner(f), kind(f), planLength(f.path("geometry")), null,
+                        null, number(p, "heightAboveSurface"), p.path("text").asString("")));
+            } else {
+                items.add(new Item(items.size() + 1, key, owner(f), kind(f), number(p, "length"), number(p, "bottom"),
+                        number(p, "top"), null, null));
             }
         }
         return items;
@@ -63,7 +89,8 @@ public final class ReviewItems {
 
     /**
      * Plan geometries (local metres) of the review items with the given keys: lines for edges and
-     * facade bands, points for corners.
+     * facade bands, points for corners. Model warnings give none: accepting one accepts nothing
+     * that lies beneath its part.
      */
     public static List<org.locationtech.jts.geom.Geometry> geometries(String resultGeoJson, Set<String> wanted) {
         List<JsonNode> features = features(resultGeoJson);
@@ -71,7 +98,8 @@ public final class ReviewItems {
         org.locationtech.jts.geom.GeometryFactory gf = new org.locationtech.jts.geom.GeometryFactory();
         List<org.locationtech.jts.geom.Geometry> out = new ArrayList<>();
         for (JsonNode f : features) {
-            if (!wanted.contains(keys.get(f))) {
+            String key = keys.get(f);
+            if (key == null || !wanted.contains(key) || isWarning(f)) {
                 continue;
             }
             List<org.locationtech.jts.geom.Coordinate> cs = new ArrayList<>();
@@ -98,12 +126,13 @@ public final class ReviewItems {
         Map<JsonNode, String> keys = new IdentityHashMap<>();
         Map<String, Integer> seen = new HashMap<>();
         for (JsonNode f : features) {
-            if (!LAYERS.contains(f.path("properties").path("layer").asString(""))) {
+            if (!LAYERS.contains(f.path("properties").path("layer").asString("")) || isNegligibleBand(f)) {
                 continue;
             }
             String kind = kind(f);
-            StringBuilder identity = new StringBuilder(f.path("properties").path("owner").asString(""))
-                    .append('|').append(kind);
+            // a warning is keyed by its part's id, which a renamed part keeps
+            StringBuilder identity = new StringBuilder(isWarning(f) ? "part:" + f.path("properties").path("part")
+                    .asString("") : f.path("properties").path("owner").asString("")).append('|').append(kind);
             coordinates(f.path("geometry").path("coordinates"), identity);
             JsonNode top = f.path("properties").path("top");
             if (top.isNumber()) {
@@ -116,10 +145,63 @@ public final class ReviewItems {
         return keys;
     }
 
+    /**
+     * How many facade bands (or parts of them) of a stored result have flashes to the side
+     * negligible (IEC 62305-3:2010 5.2.3): drawn and listed, not items of the review.
+     */
+    public static int negligibleBands(String resultGeoJson) {
+        return (int) features(resultGeoJson).stream().filter(ReviewItems::isNegligibleBand).count();
+    }
+
     static List<JsonNode> features(String resultGeoJson) {
         List<JsonNode> features = new ArrayList<>();
         JSON.readTree(resultGeoJson).path("features").forEach(features::add);
         return features;
+    }
+
+    /**
+     * A facade band (or part of one) where flashes to the side are negligible (IEC 62305-3:2010
+     * 5.2.3): drawn and listed, but nothing to accept. A band without {@code sideFlash} (a result
+     * stored before bands were classified) counts as needing lateral air-termination.
+     */
+    static boolean isNegligibleBand(JsonNode f) {
+        return f.path("properties").path("layer").asString("").equals("facade-band")
+                && ResultGeoJson.SIDE_FLASH_NEGLIGIBLE.equals(f.path("properties").path("sideFlash").asString(""));
+    }
+
+    private static boolean isWarning(JsonNode f) {
+        return f.path("properties").path("layer").asString("").equals("model-warning");
+    }
+
+    /** The name shown for an item: its structure's or object's, or a warning's part. */
+    private static String owner(JsonNode f) {
+        JsonNode p = f.path("properties");
+        if (isWarning(f)) {
+            String name = p.path("partName").asString("");
+            return name.isBlank() ? p.path("part").asString("") : name;
+        }
+        return p.path("owner").asString("");
+    }
+
+    /** Plan length of a (Multi)LineString's positions as stored (local metres). */
+    private static Double planLength(JsonNode geometry) {
+        JsonNode c = geometry.path("coordinates");
+        List<JsonNode> lines = new ArrayList<>();
+        if ("LineString".equals(geometry.path("type").asString(""))) {
+            lines.add(c);
+        } else if ("MultiLineString".equals(geometry.path("type").asString(""))) {
+            c.forEach(lines::add);
+        } else {
+            return null;
+        }
+        double length = 0;
+        for (JsonNode line : lines) {
+            for (int k = 1; k < line.size(); k++) {
+                length += Math.hypot(line.get(k).path(0).asDouble() - line.get(k - 1).path(0).asDouble(),
+                        line.get(k).path(1).asDouble() - line.get(k - 1).path(1).asDouble());
+            }
+        }
+        return ResultGeoJson.round(length);
     }
 
     private static String kind(JsonNode f) {

@@ -11,9 +11,11 @@ import org.springframework.stereotype.Service;
 import org.springframework.transaction.support.TransactionTemplate;
 
 /**
- * The review of a site's latest analysis: its exposed edges, corners and facade bands
- * ({@link ReviewItems}) and which of them a designer accepted, with a reason, as needing no
- * air-termination. Acceptances belong to one analysis revision; a new analysis takes over those of
+ * The review of a site's latest analysis: its exposed edges, corners and facade bands and its
+ * model warnings ({@link ReviewItems}) and which of them a designer accepted, with a reason, as
+ * needing no air-termination (for a warning: as looked at and answered). An accepted warning still
+ * stands: the revision's {@code fullyProtected} stays false, and no page or report says that no
+ * exposed items remain while a warning stands. Acceptances belong to one analysis revision; a new analysis takes over those of
  * the revision before for the items that are still exposed unchanged (see {@link AnalysisService}).
  */
 @Service

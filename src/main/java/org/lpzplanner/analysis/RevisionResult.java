@@ -10,7 +10,10 @@ import org.lpzplanner.engine.io.SiteDocument;
  *
  * @param resolution    grid spacing the engine used, metres
  * @param tolerance     tolerance of exact envelope values, metres
- * @param fullyProtected no roof area, edge, corner or facade band is exposed
+ * @param facadeBands   facade bands (or parts of them) that need lateral air-termination
+ *                      (IEC 62305-3:2010 5.2.3); bands where flashes to the side are negligible are not counted
+ * @param fullyProtected no roof area, edge, corner or facade band needing lateral air-termination is
+ *                      exposed and no model warning stands
  * @param resultGeoJson the stored form of the result (see {@link ResultGeoJson#write(SiteDocument, AnalysisResult)})
  * @param engineMillis  time the engine took
  */
@@ -20,7 +23,7 @@ public record RevisionResult(double resolution, double tolerance, double exposed
 
     public static RevisionResult of(SiteDocument document, AnalysisResult result) {
         return new RevisionResult(result.resolution(), result.tolerance(), result.totalExposedRoofArea(),
-                result.totalExposedEdgeLength(), result.corners().size(), result.facades().size(),
+                result.totalExposedEdgeLength(), result.corners().size(), result.facadePartsNeedingLateral().size(),
                 result.protectedGround().planArea(), result.isFullyProtected(), ResultGeoJson.write(document, result),
                 result.totalMillis());
     }

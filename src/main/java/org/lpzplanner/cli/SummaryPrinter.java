@@ -11,7 +11,9 @@ import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ResultTotals;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.FacadeBand;
+import org.lpzplanner.engine.exposure.ModelWarning;
 import org.lpzplanner.engine.exposure.PartInterception;
+import org.lpzplanner.engine.exposure.SideFlashRule;
 import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SurfaceKind;
 import org.lpzplanner.engine.io.SiteDocument;
@@ -40,10 +42,9 @@ final class SummaryPrinter {
         edges(totals, result);
         facades(result);
         parts(result);
+        warnings(result);
         line("Protected ground (LPZ 0B at ground level): %.1f m2", totals.protectedGround());
-        line("Overall: %s", result.isFullyProtected()
-                ? "no exposed roof, edge, corner or facade band was found"
-                : "parts of the structures are exposed to direct strikes (LPZ 0A)");
+        line("Overall: %s", overall(result, totals));
         line("Time: envelope %d ms, total %d ms", result.envelopeMillis(), result.totalMillis());
         out.println();
         out.println("Cautions:");
@@ -107,17 +108,31 @@ final class SummaryPrinter {
         out.println();
     }
 
+    /**
+     * Facade bands in two lists by the tall-structure rule (IEC 62305-3:2010 5.2.3): those that need
+     * lateral air-termination, then those where flashes to the side are negligible.
+     */
     private void facades(AnalysisResult result) {
-        if (result.facades().isEmpty()) {
-            line("Facade bands: none");
-        } else {
-            line("Facade bands: %d", result.facades().size());
-            for (FacadeBand f : result.facades()) {
-                line("  %s, wall %d: %.2f m long, from %.2f m to %.2f m above ground", f.ownerName(),
-                        f.wallIndex() + 1, f.length(), f.bottom(), f.top());
-            }
-        }
+        List<SideFlashRule.Part> needing = result.facadePartsNeedingLateral();
+        List<SideFlashRule.Part> negligible = result.facadeParts().stream()
+                .filter(p -> !p.needsLateralAirTermination()).toList();
+        bands("Facade bands " + ResultGeoJson.LATERAL_RULE.replaceFirst("^needs ", "needing "), needing);
+        bands("Facade bands where " + ResultGeoJson.NEGLIGIBLE_RULE.replaceFirst("^flashes to the side negligible",
+                "flashes to the side are negligible"), negligible);
         out.println();
+    }
+
+    private void bands(String heading, List<SideFlashRule.Part> parts) {
+        if (parts.isEmpty()) {
+            line("%s: none", heading);
+            return;
+        }
+        line("%s: %d", heading, parts.size());
+        for (SideFlashRule.Part p : parts) {
+            FacadeBand f = p.band();
+            line("  %s, wall %d: %.2f m long, from %.2f m to %.2f m above ground (building %.2f m)", f.ownerName(),
+                    f.wallIndex() + 1, f.length(), p.bottom(), p.top(), p.buildingHeight());
+        }
     }
 
     private void parts(AnalysisResult result) {
@@ -136,6 +151,41 @@ final class SummaryPrinter {
             }
         }
         out.println();
+    }
+
+    /**
+     * The model warnings, each naming its part, before the overall line: while one stands the
+     * analysis gives no verdict of full protection.
+     */
+    private void warnings(AnalysisResult result) {
+        if (result.warnings().isEmpty()) {
+            line("Model warnings: none");
+        } else {
+            line("Model warnings: %d (no verdict of full protection while one stands)", result.warnings().size());
+            for (ModelWarning w : result.warnings()) {
+                String label = w.partName() == null || w.partName().equals(w.partId()) ? w.partId()
+                        : w.partName() + " (" + w.partId() + ")";
+                line("  %s: %s, up to %s m above the surface beneath it, more than the sphere radius %s m", label,
+                        w.kind() == ModelWarning.Kind.FREE_SPAN ? "free span" : w.kind().name(),
+                        number(ResultGeoJson.round(w.value())), number(ResultGeoJson.round(w.limit())));
+                for (String wrapped : wrap(w.text(), WIDTH - 4)) {
+                    out.println("    " + wrapped);
+                }
+            }
+        }
+        out.println();
+    }
+
+    private static String overall(AnalysisResult result, ResultTotals totals) {
+        int warnings = result.warnings().size();
+        if (warnings > 0) {
+            return "no verdict of full protection: " + warnings + " model warning" + (warnings == 1 ? " stands"
+                    : "s stand") + " (see above)" + (totals.anyExposed()
+                            ? "; parts of the structures are also exposed to direct strikes (LPZ 0A)" : "");
+        }
+        return result.isFullyProtected() ? "no exposed roof, edge or corner and no facade band needing lateral"
+                + " air-termination was found"
+                : "parts of the structures are exposed to direct strikes (LPZ 0A)";
     }
 
     private void line(String format, Object... args) {

@@ -252,7 +252,8 @@ public class DesignService {
         for (Structure s : site.structures()) {
             int items = (int) (result.edges().stream().filter(e -> e.ownerId().equals(s.id())).count()
                     + result.corners().stream().filter(c -> c.ownerId().equals(s.id())).count()
-                    + result.facades().stream().filter(f -> f.ownerId().equals(s.id())).count());
+                    + result.facadePartsNeedingLateral().stream().filter(f -> f.band().ownerId().equals(s.id()))
+                            .count());
             double roof = result.roofs().stream().filter(r -> r.ownerId().equals(s.id())).mapToDouble(r -> r.exposedPlanArea()).sum();
             AngleCoverage angle = AngleMethodCheck.check(surface, s.id(), sphere.radius());
             int pass = 0, fail = 0, na = 0;

@@ -65,7 +65,7 @@ final class ProposalResultJson {
         out.put("fullyProtected", r.isFullyProtected());
         out.put("exposedEdges", r.edges().size());
         out.put("exposedCorners", r.corners().size());
-        out.put("exposedFacadeBands", r.facades().size());
+        out.put("exposedFacadeBands", r.facadePartsNeedingLateral().size());
         out.put("exposedRoofArea", r.totalExposedRoofArea());
         out.put("exposedEdgeLength", r.totalExposedEdgeLength());
         return out;

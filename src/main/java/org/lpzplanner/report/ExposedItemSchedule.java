@@ -10,7 +10,8 @@ import org.lpzplanner.analysis.ReviewItems;
 /**
  * The exposed items of the stored result: roof areas by structure, then every exposed edge, corner
  * and facade band numbered as in the review list, with its status (exposed, or accepted with the
- * designer's reason), and the counts before and after the acceptances.
+ * designer's reason), and the counts before and after the acceptances. Model warnings, also review
+ * items, have their own schedule ({@link ModelWarningSchedule}).
  */
 final class ExposedItemSchedule {
 
@@ -29,17 +30,18 @@ final class ExposedItemSchedule {
             out.add(new Schedule(ROOF_TITLE, List.of("Structure or object", "Exposed plan area (m²)"),
                     List.of(3.0, 1.5), rows, List.of()));
         }
-        int total = facts.items().size();
-        int accepted = facts.acceptedCount();
+        List<ReviewItems.Item> items = facts.exposedItems();
+        int total = items.size();
+        int accepted = facts.acceptedExposedCount();
         String counts = "Before review: " + total + " exposed item" + (total == 1 ? "" : "s") + ". Accepted by the"
                 + " designer: " + accepted + ". Remaining: " + (total - accepted) + ".";
-        if (facts.items().isEmpty()) {
+        if (items.isEmpty()) {
             out.add(new ReportBlock.Heading(TITLE, 2));
             out.add(new ReportBlock.Paragraph("No edge, corner or facade band is exposed. " + counts));
             return out;
         }
         List<List<String>> rows = new ArrayList<>();
-        for (ReviewItems.Item item : facts.items()) {
+        for (ReviewItems.Item item : items) {
             String reason = facts.source().accepted().get(item.key());
             rows.add(List.of("E" + item.number(), item.owner(), item.kind(),
                     item.length() == null ? "" : metres(item.length()),
@@ -49,7 +51,10 @@ final class ExposedItemSchedule {
         out.add(new Schedule(TITLE, List.of("No.", "Structure", "Kind", "Length (m)", "From (m)", "Top (m)", "Status"),
                 List.of(0.5, 1.6, 1.1, 0.8, 0.7, 0.7, 2.6), rows,
                 List.of(counts, "Heights above ground; \"From\" is the lowest point of a facade band a sphere"
-                        + " reaches from the side. Numbers as on the plan and in the review list.")));
+                        + " reaches from the side. Numbers as on the plan and in the review list.",
+                        "Facade bands listed here need lateral air-termination (IEC 62305-3:2010 5.2.3: the upper"
+                                + " 20 % of a structure taller than 60 m, and everything above 120 m); those where"
+                                + " flashes to the side are negligible are listed apart and are not exposed items.")));
         return out;
     }
 }

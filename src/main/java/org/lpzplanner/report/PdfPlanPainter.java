@@ -31,12 +31,16 @@ final class PdfPlanPainter {
     private static final Color OBJECT = new Color(0xb9, 0xad, 0x94);
     private static final Color EXPOSED_ROOF = new Color(0xf5, 0xb0, 0x6c);
     private static final Color FACADE = new Color(0x7b, 0x4f, 0xa0);
+    /** Facade bands where flashes to the side are negligible: the band's purple, light and dashed. */
+    private static final Color FACADE_NEGLIGIBLE = new Color(0xc4, 0xb0, 0xda);
     private static final Color EDGE = new Color(0xc8, 0x10, 0x2e);
     private static final Color ACCEPTED = new Color(0x8a, 0x8a, 0x8a);
     private static final Color PART = new Color(0x1f, 0x5f, 0xbf);
     private static final Color DOWN = new Color(0x11, 0x11, 0x11);
     /** Hatch and outline of keep-out areas (our own dark teal). */
     private static final Color KEEP_OUT = new Color(0x1b, 0x6e, 0x5a);
+    /** Stretches of parts a model warning is about: a broad dashed amber band under the part. */
+    private static final Color WARNING = new Color(0xe0, 0x9b, 0x00);
 
     private PdfPlanPainter() {
     }
@@ -159,7 +163,7 @@ final class PdfPlanPainter {
         p.strokeRect(PdfPages.MARGIN, frameBottom, frameW, frameH, PdfReportRenderer.TEXT, 0.8f);
         northArrow(p, PdfPages.MARGIN + frameW - 22, frameTop - 12);
         scaleBar(p, denominator, k, frameBottom + 10);
-        legend(p, frameBottom - 10, plan.has(Layer.KEEP_OUT));
+        legend(p, frameBottom - 10, plan);
     }
 
     private static void shape(PDPageContentStream out, Shape s, float k, float ox, float oy, double cx, double cy)
@@ -184,6 +188,29 @@ final class PdfPlanPainter {
                 } else {
                     out.setNonStrokingColor(layer == Layer.PROTECTED_GROUND ? GROUND : EXPOSED_ROOF);
                     out.fillEvenOdd();
+                }
+            }
+            case MODEL_WARNING -> {
+                for (List<double[]> line : s.paths()) {
+                    if (line.size() > 1) {
+                        path(out, line, k, ox, oy, cx, cy, false);
+                    }
+                }
+                out.setStrokingColor(WARNING);
+                out.setLineWidth(5f);
+                out.setLineDashPattern(new float[] {5, 3}, 0);
+                out.stroke();
+                out.setLineDashPattern(new float[0], 0);
+            }
+            case FACADE_NEGLIGIBLE -> {
+                List<double[]> line = s.paths().get(0);
+                if (line.size() > 1) {
+                    path(out, line, k, ox, oy, cx, cy, false);
+                    out.setStrokingColor(FACADE_NEGLIGIBLE);
+                    out.setLineWidth(3f);
+                    out.setLineDashPattern(new float[] {2, 2}, 0);
+                    out.stroke();
+                    out.setLineDashPattern(new float[0], 0);
                 }
             }
             case FACADE_BAND, EXPOSED_EDGE, ACCEPTED_ITEM, CONDUCTOR -> {
@@ -361,17 +388,31 @@ final class PdfPlanPainter {
         p.text("1:" + denominator, x + seg * 4 + 22, y, 6.5f, true, PdfReportRenderer.TEXT);
     }
 
-    private static void legend(PdfPages p, float top, boolean keepOut) {
-        String[] names = {"Structure (darker is higher)", "Rooftop object", "Protected open ground (LPZ 0B)",
-            "Exposed roof area (LPZ 0A)", "Facade band a sphere reaches", "Exposed edge / corner (E1, E2, …)",
-            "Accepted item (dashed grey)", "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)",
-            "Keep-out area, hatched (K1, …)"};
-        Color[] colours = {new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF, FACADE, EDGE, ACCEPTED, PART,
-            DOWN, null};
+    private static void legend(PdfPages p, float top, PlanDrawing plan) {
+        List<String> names = new ArrayList<>(List.of("Structure (darker is higher)", "Rooftop object",
+                "Protected open ground (LPZ 0B)", "Exposed roof area (LPZ 0A)",
+                "Facade band, lateral air-termination (5.2.3)", "Exposed edge / corner (E1, E2, …)",
+                "Accepted item (dashed grey)",
+                "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)"));
+        // a null colour is the keep-out hatch
+        List<Color> colours = new ArrayList<>(List.of(new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF,
+                FACADE, EDGE, ACCEPTED, PART, DOWN));
+        if (plan.has(Layer.FACADE_NEGLIGIBLE)) {
+            names.add("Facade band, side flashes negligible (5.2.3)");
+            colours.add(FACADE_NEGLIGIBLE);
+        }
+        if (plan.has(Layer.MODEL_WARNING)) {
+            names.add("Model warning: part > R above surface (E…)");
+            colours.add(WARNING);
+        }
+        if (plan.has(Layer.KEEP_OUT)) {
+            names.add("Keep-out area, hatched (K1, …)");
+            colours.add(null);
+        }
         float colW = PdfPages.CONTENT_WIDTH / 3;
-        for (int i = 0; i < names.length - (keepOut ? 0 : 1); i++) {
+        for (int i = 0; i < names.size(); i++) {
             float x = PdfPages.MARGIN + (i % 3) * colW, y = top - (i / 3) * 14;
-            if (colours[i] == null) {
+            if (colours.get(i) == null) {
                 p.fillRect(x, y - 8, 14, 8, Color.WHITE);
                 try {
                     p.out.saveGraphicsState();
@@ -383,10 +424,10 @@ final class PdfPlanPainter {
                     throw new UncheckedIOException(e);
                 }
             } else {
-                p.fillRect(x, y - 8, 14, 8, colours[i]);
+                p.fillRect(x, y - 8, 14, 8, colours.get(i));
             }
             p.strokeRect(x, y - 8, 14, 8, PdfReportRenderer.MUTED, 0.3f);
-            p.text(names[i], x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
+            p.text(names.get(i), x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
         }
     }
 

@@ -15,7 +15,8 @@ import tools.jackson.databind.JsonNode;
 /**
  * Builds the {@link PlanDrawing} of a revision from its stored result: structures shaded by height
  * and named, rooftop objects, protected ground, exposed roof areas, facade bands, exposed edges and
- * corners numbered E1, E2, … (accepted ones drawn apart), air-termination parts numbered A1, A2, …,
+ * corners numbered E1, E2, … (accepted ones drawn apart), the stretches of parts a model warning is
+ * about (numbered as review items too), air-termination parts numbered A1, A2, …,
  * planned down-conductors numbered D1, D2, … and the site's stored keep-out areas numbered K1, K2, …
  * (as stored when printed, like the down-conductors edited by the designer).
  */
@@ -47,9 +48,12 @@ final class PlanDrawings {
                 case "rooftop-object" -> Layer.ROOFTOP_OBJECT;
                 case "protected-ground" -> Layer.PROTECTED_GROUND;
                 case "exposed-roof" -> Layer.EXPOSED_ROOF;
-                case "facade-band" -> accepted ? Layer.ACCEPTED_ITEM : Layer.FACADE_BAND;
+                case "facade-band" -> org.lpzplanner.analysis.ResultGeoJson.SIDE_FLASH_NEGLIGIBLE.equals(
+                        p.path("sideFlash").asString("")) ? Layer.FACADE_NEGLIGIBLE
+                        : accepted ? Layer.ACCEPTED_ITEM : Layer.FACADE_BAND;
                 case "exposed-edge" -> accepted ? Layer.ACCEPTED_ITEM : Layer.EXPOSED_EDGE;
                 case "exposed-corner" -> accepted ? Layer.ACCEPTED_ITEM : Layer.EXPOSED_CORNER;
+                case "model-warning" -> Layer.MODEL_WARNING; // accepted or not, the warning stands
                 case "rod" -> Layer.ROD;
                 case "conductor" -> Layer.CONDUCTOR;
                 default -> null;
@@ -121,6 +125,7 @@ final class PlanDrawings {
         switch (g.path("type").asString("")) {
             case "Point" -> out.add(List.of(new double[] {c.path(0).asDouble(), c.path(1).asDouble()}));
             case "LineString" -> out.add(positions(c));
+            case "MultiLineString" -> c.forEach(line -> out.add(positions(line)));
             case "Polygon" -> c.forEach(r -> out.add(positions(r)));
             case "MultiPolygon" -> c.forEach(poly -> poly.forEach(r -> out.add(positions(r))));
             default -> {

@@ -111,19 +111,44 @@ public final class ReportAssembler {
         return new ReportContent("Lightning-protection assessment", footer, Cautions.lines(), blocks);
     }
 
+    /**
+     * The cover's status line. While a model warning stands, accepted or not, it gives no verdict of
+     * protection: it never says that no exposed items remain.
+     */
+    static String status(ReportFacts facts) {
+        int accepted = facts.acceptedExposedCount();
+        int remaining = facts.exposedItems().size() - accepted;
+        boolean roofs = !facts.stored().roofAreas().isEmpty();
+        String exposure;
+        if (remaining == 0 && !roofs) {
+            exposure = "every roof area, edge and corner, and every facade band needing lateral air-termination"
+                    + " (IEC 62305-3:2010 5.2.3), is protected or accepted by the designer (" + accepted + " accepted).";
+        } else {
+            exposure = remaining + " edge, corner or facade band item" + (remaining == 1 ? "" : "s")
+                    + (roofs ? " and exposed roof areas" : "") + " need air-termination or the designer's acceptance ("
+                    + accepted + " accepted).";
+        }
+        List<StoredResult.Warning> warnings = facts.stored().warnings();
+        if (warnings.isEmpty()) {
+            return (remaining == 0 && !roofs ? "No exposed items remain: " : "Exposed items remain: ") + exposure;
+        }
+        String others = remaining == 0 && !roofs
+                ? "no other exposed roof area, edge, corner or facade band remains unaccepted (" + accepted
+                        + " accepted)."
+                : exposure;
+        long acceptedWarnings = warnings.stream().filter(w -> facts.source().accepted().containsKey(w.item().key()))
+                .count();
+        String parts = String.join(", ", warnings.stream().map(w -> w.item().owner()).distinct().toList());
+        return "No verdict of full protection: " + warnings.size() + " model warning" + (warnings.size() == 1
+                ? " stands" : "s stand") + " (" + parts + "; see the schedule of model warnings)"
+                + (acceptedWarnings == 0 ? "" : ", " + acceptedWarnings + " accepted by the designer, which records"
+                        + " the answer but does not lift the warning")
+                + ". Other findings: " + others;
+    }
+
     private static void cover(ReportFacts facts, List<ReportBlock> blocks, boolean appendix) {
         ReportSource s = facts.source();
-        int remaining = facts.items().size() - facts.acceptedCount();
-        boolean roofs = !facts.stored().roofAreas().isEmpty();
-        String status;
-        if (remaining == 0 && !roofs) {
-            status = "No exposed items remain: every roof area, edge, corner and facade band is protected or"
-                    + " accepted by the designer (" + facts.acceptedCount() + " accepted).";
-        } else {
-            status = "Exposed items remain: " + remaining + " edge, corner or facade band item"
-                    + (remaining == 1 ? "" : "s") + (roofs ? " and exposed roof areas" : "")
-                    + " need air-termination or the designer's acceptance (" + facts.acceptedCount() + " accepted).";
-        }
+        String status = status(facts);
         blocks.add(new ReportBlock.Heading("Lightning-protection assessment", 1));
         blocks.add(new ReportBlock.Facts(List.of(
                 new ReportBlock.Fact("Site", s.siteName()),
@@ -139,10 +164,11 @@ public final class ReportAssembler {
         blocks.add(new ReportBlock.Paragraph(coverNote(s.cover())));
         blocks.add(new ReportBlock.CautionsBox("Read before use", Cautions.lines()));
         blocks.add(new ReportBlock.Heading("Findings", 2));
-        long edges = facts.items().stream().filter(i -> !i.kind().equals("corner") && !i.kind().equals("facade-band"))
+        List<org.lpzplanner.analysis.ReviewItems.Item> exposed = facts.exposedItems();
+        long edges = exposed.stream().filter(i -> !i.kind().equals("corner") && !i.kind().equals("facade-band"))
                 .count();
-        long corners = facts.items().stream().filter(i -> i.kind().equals("corner")).count();
-        long bands = facts.items().stream().filter(i -> i.kind().equals("facade-band")).count();
+        long corners = exposed.stream().filter(i -> i.kind().equals("corner")).count();
+        long bands = exposed.stream().filter(i -> i.kind().equals("facade-band")).count();
         double roofArea = facts.stored().roofAreas().values().stream().mapToDouble(Double::doubleValue).sum();
         int downConductors = facts.downConductors().stream().mapToInt(d -> d.count()).sum();
         long editedBuildings = java.util.stream.IntStream.range(0, facts.downConductors().size())
@@ -151,7 +177,12 @@ public final class ReportAssembler {
                 new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
                 new ReportBlock.Fact("Exposed roof area", metres(roofArea) + " m² (plan)"),
                 new ReportBlock.Fact("Exposed items", edges + " edges, " + corners + " corners, " + bands
-                        + " facade bands; " + facts.acceptedCount() + " accepted"),
+                        + " facade bands needing lateral air-termination; " + facts.acceptedExposedCount()
+                        + " accepted"),
+                new ReportBlock.Fact("Negligible facade bands", SideFlashSchedule.negligible(facts).size()
+                        + " where flashes to the side are negligible (IEC 62305-3:2010 5.2.3: structures lower than"
+                        + " 60 m, or below the upper 20 % of taller ones; listed apart, not exposed)"),
+                new ReportBlock.Fact("Model warnings", warningFinding(facts)),
                 new ReportBlock.Fact("Air-termination parts", facts.partNumbers().size() + " ("
                         + facts.stored().intercepting().size() + " intercepting)"),
                 new ReportBlock.Fact("Down-conductors", downConductors + (editedBuildings == 0
@@ -159,8 +190,27 @@ public final class ReportAssembler {
                         : ", placed by the designer on " + editedBuildings + " of "
                                 + facts.downConductors().size() + " buildings")))));
         blocks.add(new ReportBlock.Paragraph("Contents: method and inputs; plan to scale; sections; schedules of"
-                + " air-termination parts, exposed items, down-conductors and separation distances; bill of"
+                + " air-termination parts, " + (facts.stored().warnings().isEmpty() ? "" : "model warnings, ")
+                + "exposed items, " + (SideFlashSchedule.negligible(facts).isEmpty() ? ""
+                        : "facade bands where flashes to the side are negligible, ")
+                + "down-conductors and separation distances; bill of"
                 + " quantities;" + (appendix ? " appendix (risk estimate);" : "") + " review and approval."));
+    }
+
+    /** The findings line of the model warnings: none, or how many, each part and its height. */
+    private static String warningFinding(ReportFacts facts) {
+        List<StoredResult.Warning> warnings = facts.stored().warnings();
+        if (warnings.isEmpty()) {
+            return "none";
+        }
+        List<String> each = new ArrayList<>();
+        for (StoredResult.Warning w : warnings) {
+            Double above = w.item().heightAboveSurface();
+            each.add(w.item().owner() + ", up to " + (above == null ? "?" : metres(above)) + " m above the surface"
+                    + " beneath it (" + ModelWarningSchedule.kind(w.item().kind()) + ", E" + w.item().number() + ")");
+        }
+        return warnings.size() + ": " + String.join("; ", each) + ". No verdict of full protection while a"
+                + " warning stands.";
     }
 
     /**
@@ -213,7 +263,13 @@ public final class ReportAssembler {
         blocks.add(new ReportBlock.Paragraph("Every structure and rooftop object is solid from the ground up; no"
                 + " sphere reaches under an overhang or a wire (exact while nothing overhangs by more than R)."
                 + " The ground is flat at height 0. Heights, roof forms and parts are as the site file gives them;"
-                + " nothing is inferred. Structures that touch or overlap form one solid."));
+                + " nothing is inferred. Structures that touch or overlap form one solid. Where a conductor or"
+                + " wire runs more than R above what lies beneath it, the analysis warns, naming it (see the"
+                + " schedule of model warnings), and gives no verdict of full protection while the warning"
+                + " stands. A sphere touches every wall taller than R from R up; by IEC 62305-3:2010 5.2.3 and"
+                + " Annex A only the upper part of a building taller than 60 m (from 0.8 H, and everything above"
+                + " 120 m) needs lateral air-termination, where H is the highest point of the structures that"
+                + " touch or overlap; the rest of such bands is listed apart as negligible."));
         List<List<String>> rows = new ArrayList<>();
         for (StructureRow r : StructureRow.of(facts.site().structures())) {
             rows.add(List.of(r.id(), r.name(), metres(r.footprintArea()), metres(r.height()), r.roof(),

@@ -74,9 +74,19 @@ public record ReportFacts(ReportSource source, Site site, SiteSurface surface, E
         return downConductors.get(building).building().storedPositions(design.downConductors()).edited();
     }
 
-    /** The number of items a designer accepted. */
+    /** The number of items a designer accepted (model warnings included). */
     public int acceptedCount() {
         return (int) items.stream().filter(i -> source.accepted().containsKey(i.key())).count();
+    }
+
+    /** The exposed edges, corners and facade bands among the items (no model warnings). */
+    public List<ReviewItems.Item> exposedItems() {
+        return items.stream().filter(i -> !i.isModelWarning()).toList();
+    }
+
+    /** The number of exposed edges, corners and facade bands a designer accepted. */
+    public int acceptedExposedCount() {
+        return (int) exposedItems().stream().filter(i -> source.accepted().containsKey(i.key())).count();
     }
 
     /** What stands at (x, y): a rooftop object's or structure's name, or null for open ground. */

@@ -13,7 +13,9 @@ public final class ReportParts {
 
     public static final List<ReportPart> SCHEDULES = List.of(
             AirTerminationSchedule::blocks,
+            ModelWarningSchedule::blocks,
             ExposedItemSchedule::blocks,
+            SideFlashSchedule::blocks,
             DownConductorSchedule::blocks,
             SeparationSchedule::blocks,
             KeepOutSchedule::blocks,

@@ -12,7 +12,8 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The stored result of a revision (see {@link org.lpzplanner.analysis.ResultGeoJson}) read once for
- * the report: its features, review items, exposed roof areas, exposed points and intercepting parts.
+ * the report: its features, review items, exposed roof areas, exposed points, intercepting parts and
+ * model warnings.
  * The report prints the stored result, not a new analysis, so that a revision always prints as it
  * was found.
  *
@@ -24,9 +25,18 @@ import tools.jackson.databind.json.JsonMapper;
  *                       exposed roof area (mean of its outer ring, elevation 0), with their owner:
  *                       candidates for the automatic section cuts
  * @param intercepting   ids of the air-termination parts a sphere touches
+ * @param warnings       the model warnings, numbered as the review list numbers them
  */
 public record StoredResult(List<JsonNode> features, List<ReviewItems.Item> items, Map<String, Double> roofAreas,
-        List<Marked> corners, List<Marked> highPoints, Set<String> intercepting) {
+        List<Marked> corners, List<Marked> highPoints, Set<String> intercepting, List<Warning> warnings) {
+
+    /**
+     * A model warning of the stored result: its review item (number, key, part name, height above
+     * the surface beneath, text) with the part's id, and the limit it exceeds (the sphere radius for
+     * a free span), metres.
+     */
+    public record Warning(ReviewItems.Item item, String partId, double limit) {
+    }
 
     private static final JsonMapper JSON = JsonMapper.builder().build();
 
@@ -74,8 +84,20 @@ public record StoredResult(List<JsonNode> features, List<ReviewItems.Item> items
                 }
             }
         }
-        return new StoredResult(List.copyOf(features), ReviewItems.of(resultGeoJson), roofAreas, List.copyOf(corners),
-                List.copyOf(high), Set.copyOf(intercepting));
+        List<ReviewItems.Item> items = ReviewItems.of(resultGeoJson);
+        Map<JsonNode, String> keys = ReviewItems.keys(features);
+        List<Warning> warnings = new ArrayList<>();
+        for (JsonNode f : features) {
+            String key = keys.get(f);
+            JsonNode p = f.path("properties");
+            if (key == null || !p.path("layer").asString("").equals("model-warning")) {
+                continue;
+            }
+            items.stream().filter(i -> i.key().equals(key)).findFirst().ifPresent(i -> warnings.add(
+                    new Warning(i, p.path("part").asString(""), p.path("radius").asDouble(Double.NaN))));
+        }
+        return new StoredResult(List.copyOf(features), items, roofAreas, List.copyOf(corners),
+                List.copyOf(high), Set.copyOf(intercepting), List.copyOf(warnings));
     }
 
     /** The middle of a line's first segment, with the cut running across that segment. */

@@ -222,8 +222,7 @@ public class AirTerminationApiController {
         String basis = messages.getMessage("plan.basis", new Object[] {ResultGeoJson.METHOD, revision.level().name(),
                 SitePageController.number(revision.sphereRadius()), SitePageController.WHEN.format(revision.createdAt())},
                 locale);
-        String status = messages.getMessage(revision.fullyProtected() ? "summary.fullyProtected"
-                : "summary.notFullyProtected", null, locale);
+        String status = PlanStatus.text(revision, messages, locale);
         AirTerminationService.Parts now = parts.parts(id);
         long millis = (System.nanoTime() - start) / 1_000_000;
         return new Change(rodId, before, sites.get(id).version(), AnalysisSummary.of(revision), svg, basis, status,

@@ -94,11 +94,18 @@ class PlanPage {
             model.put("radius", SitePageController.number(latest.sphereRadius()));
             ReviewService.Review review = reviews.review(latest);
             List<SummaryRow> summary = new ArrayList<>(summary(latest));
+            int negligible = ReviewItems.negligibleBands(latest.resultGeoJson());
+            summary.add(5, new SummaryRow("summary.negligibleBands", "negligibleFacadeBands", String.valueOf(negligible)));
+            model.put("negligibleBands", negligible);
             summary.add(new SummaryRow("summary.review", null, messages.getMessage("review.counts",
                     new Object[] {review.items().size(), review.acceptedCount()}, locale)));
             model.put("summary", summary);
             model.put("reviewRows", review.items().stream()
                     .map(i -> ReviewRow.of(i, review.accepted().get(i.key()))).toList());
+            model.put("warnings", review.items().stream().filter(ReviewItems.Item::isModelWarning)
+                    .map(i -> WarningRow.of(i, latest.sphereRadius(), review.accepted().get(i.key()))).toList());
+            model.put("statusText", PlanStatus.text(latest, messages, locale));
+            model.put("statusClass", PlanStatus.cssClass(latest));
             model.put("svg", PlanSvg.render(latest.resultGeoJson(),
                     (key, args) -> messages.getMessage(key, args, locale), review.accepted(), keepOut.forPlan(id)));
         }
@@ -110,23 +117,41 @@ class PlanPage {
      * "-" where the result has none; {@code reason} is null while the item counts as exposed.
      */
     record ReviewRow(int number, String key, String owner, String kind, String length, String height,
-            String reason) {
+            String reason, boolean warning) {
 
         static ReviewRow of(ReviewItems.Item item, String reason) {
             String length = item.length() == null ? "-" : SitePageController.number(item.length());
             String height;
-            if (item.top() == null) {
+            if (item.isModelWarning()) {
+                height = item.heightAboveSurface() == null ? "-" : metres(item.heightAboveSurface());
+            } else if (item.top() == null) {
                 height = "-";
             } else if (item.bottom() != null) {
                 height = metres(item.bottom()) + "\u2013" + metres(item.top());
             } else {
                 height = metres(item.top());
             }
-            return new ReviewRow(item.number(), item.key(), item.owner(), item.kind(), length, height, reason);
+            return new ReviewRow(item.number(), item.key(), item.owner(), item.kind(), length, height, reason,
+                    item.isModelWarning());
         }
 
         private static String metres(double value) {
             return String.format(Locale.ROOT, "%.2f", value);
+        }
+    }
+
+    /**
+     * A model warning as the page's warning box shows it: the part's name, its greatest height above
+     * the surface beneath it and the sphere radius it exceeds, in metres as written; {@code reason}
+     * is the designer's when accepted, else null.
+     */
+    record WarningRow(int number, String key, String kind, String part, String heightAboveSurface, String radius,
+            String reason) {
+
+        static WarningRow of(ReviewItems.Item item, double radius, String reason) {
+            return new WarningRow(item.number(), item.key(), item.kind(), item.owner(),
+                    item.heightAboveSurface() == null ? "-" : SitePageController.number(item.heightAboveSurface()),
+                    SitePageController.number(radius), reason);
         }
     }
 

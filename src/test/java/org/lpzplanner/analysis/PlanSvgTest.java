@@ -90,6 +90,77 @@ class PlanSvgTest {
         assertThat(svg).contains("class=\"conductor\"").contains("data-conductor-id=\"ridge &quot;line&quot;\"");
     }
 
+    @Test
+    void aModelWarningsStretchIsDrawnInItsOwnStyleWithItsReviewKeyTextAndALegendRow() throws Exception {
+        // a wire strung at 45 m over a 5 m hut, level I (R = 20 m, IEC 62305-3:2010 Table 2): more
+        // than R above what lies beneath it (IEC 62305-3:2010 Annex A), so the analysis warns
+        Site site = SiteFiles.read(java.nio.file.Files.readString(ResultGeoJsonTest.WIRE_ABOVE_HUT),
+                "wire-above-hut.geojson").site();
+        var result = ExposureAnalysis.analyze(site, AnalysisOptions.of(SphereSpec.of(ProtectionLevel.I)));
+        String geoJson = ResultGeoJson.write(site, result);
+        String key = ReviewItems.of(geoJson).stream().filter(ReviewItems.Item::isModelWarning).findFirst()
+                .orElseThrow().key();
+
+        String svg = PlanSvg.render(geoJson, KEYS);
+
+        int at = svg.indexOf("<path class=\"model-warning\"");
+        assertThat(at).as(svg).isPositive();
+        String element = svg.substring(at, svg.indexOf("</path>", at));
+        assertThat(element).contains("data-item-key=\"" + key + "\"").contains("stroke=\"" + PlanSvg.WARNING + "\"")
+                .contains("<title>").contains("Span wire");
+        assertThat(svg).contains("plan.legend.warning[]");
+        // its own colour: no other layer of the plan uses it
+        assertThat(java.util.List.of(PlanSvg.GROUND, PlanSvg.OBJECT, PlanSvg.EXPOSED_ROOF, PlanSvg.FACADE, PlanSvg.EDGE,
+                PlanSvg.PART, PlanSvg.KEEP_OUT)).doesNotContain(PlanSvg.WARNING);
+
+        // accepted with a reason: still drawn, marked accepted, the reason in its title
+        String accepted = PlanSvg.render(geoJson, KEYS, java.util.Map.of(key, "fenced <off>"));
+        int a = accepted.indexOf("<path class=\"model-warning accepted\"");
+        assertThat(a).isPositive();
+        assertThat(accepted.substring(a, accepted.indexOf("</path>", a))).contains("fenced &lt;off&gt;");
+    }
+
+    @Test
+    void aPlanWithoutWarningsHasNoWarningLegendRow() {
+        String svg = drawing("POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n", "block.wkt");
+        assertThat(svg).doesNotContain("model-warning").doesNotContain("plan.legend.warning");
+    }
+
+    private static int count(String text, String part) {
+        return text.split(java.util.regex.Pattern.quote(part), -1).length - 1;
+    }
+
+    @Test
+    void facadeBandsAreDrawnApartByTheTallStructureRuleWithLegendRowsStatingIt() {
+        // IEC 62305-3:2010 5.2.3: a 100 m tower needs lateral air-termination on its upper 20 %
+        // (80 m to 100 m); below that, and on a 50 m tower everywhere, flashes to the side are
+        // negligible. Level I, R = 20 m (Table 2): the sphere touches the walls from 20 m up.
+        Site tall = SiteFiles.read("POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0)) 100\n", "tower.wkt").site();
+        String svg = PlanSvg.render(ResultGeoJson.write(tall, ExposureAnalysis.analyze(tall,
+                AnalysisOptions.of(SphereSpec.of(ProtectionLevel.I)))), KEYS);
+
+        assertThat(count(svg, "<path class=\"facade-band side-flash-negligible\"")).isEqualTo(4);
+        assertThat(count(svg, "<path class=\"facade-band\"")).isEqualTo(4);
+        // only the needing parts are review items, keyed for the review list
+        assertThat(svg).doesNotContainPattern("side-flash-negligible\"[^>]*data-item-key");
+        assertThat(count(svg, "data-item-key=\"facade-band-")).isEqualTo(4);
+        assertThat(svg).contains("plan.legend.facade[]").contains("plan.legend.facadeNegligible[]")
+                .contains("stroke=\"" + PlanSvg.FACADE_NEGLIGIBLE + "\"");
+        assertThat(PlanSvg.FACADE_NEGLIGIBLE).isNotEqualTo(PlanSvg.FACADE);
+
+        Site low = SiteFiles.read("POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0)) 50\n", "tower.wkt").site();
+        String lowSvg = PlanSvg.render(ResultGeoJson.write(low, ExposureAnalysis.analyze(low,
+                AnalysisOptions.of(SphereSpec.of(ProtectionLevel.I)))), KEYS);
+        assertThat(count(lowSvg, "<path class=\"facade-band side-flash-negligible\"")).isEqualTo(4);
+        assertThat(lowSvg).doesNotContain("data-item-key=\"facade-band-");
+    }
+
+    @Test
+    void aPlanWithoutNegligibleBandsHasNoLegendRowForThem() {
+        String svg = drawing("POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n", "block.wkt");
+        assertThat(svg).doesNotContain("plan.legend.facadeNegligible");
+    }
+
     private static double attribute(String svg, String name) {
         int start = svg.indexOf(name + "=\"") + name.length() + 2;
         return Double.parseDouble(svg.substring(start, svg.indexOf('"', start)));

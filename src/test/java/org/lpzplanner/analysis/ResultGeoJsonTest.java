@@ -3,6 +3,8 @@ package org.lpzplanner.analysis;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
@@ -188,6 +190,86 @@ class ResultGeoJsonTest {
         // elevations stay metres above ground
         assertThat(layer(result, "exposed-corner")).allSatisfy(f ->
                 assertThat(f.path("geometry").path("coordinates").get(2).asDouble()).isEqualTo(8.0));
+    }
+
+    /**
+     * A 10 m × 10 m hut, 5 m high, under a wire strung at 45 m between two 45 m masts 100 m apart.
+     * At level I (R = 20 m, IEC 62305-3:2010 Table 2) the wire runs more than R above what lies
+     * beneath it, where a sphere can pass under it (rolling sphere method, IEC 62305-3:2010 Annex A).
+     */
+    static final Path WIRE_ABOVE_HUT = Path.of("src/test/resources/sites/wire-above-hut.geojson");
+    static final Path WIRE_ABOVE_HUT_LON_LAT = Path.of("src/test/resources/sites/wire-above-hut-lonlat.geojson");
+
+    @Test
+    void aWireMoreThanTheRadiusAboveWhatLiesBeneathIsAModelWarningFeatureNamingThePart() throws Exception {
+        JsonNode result = published(Files.readString(WIRE_ABOVE_HUT), ProtectionLevel.I);
+
+        List<JsonNode> warnings = layer(result, "model-warning");
+        assertThat(warnings).hasSize(1);
+        JsonNode p = warnings.get(0).path("properties");
+        assertThat(p.path("part").asString()).isEqualTo("wire");
+        assertThat(p.path("partName").asString()).isEqualTo("Span wire");
+        assertThat(p.path("kind").asString()).isEqualTo("free-span");
+        // IEC 62305-3:2010 Table 2: R = 20 m at level I; the wire is at 45 m above the ground,
+        // the lowest surface beneath it, and 40 m above the hut's 5 m roof: more than R either way
+        assertThat(p.path("radius").asDouble()).isEqualTo(20.0);
+        assertThat(p.path("heightAboveSurface").asDouble()).isGreaterThan(20.0).isLessThanOrEqualTo(45.0);
+        assertThat(p.path("text").asString()).contains("Span wire");
+        // RFC 7946 3.1.5: a MultiLineString's members are arrays of two or more positions; here
+        // plan positions along the wire (y = 0, x from 0 to 100), one of them above the hut
+        JsonNode geometry = warnings.get(0).path("geometry");
+        assertThat(geometry.path("type").asString()).isEqualTo("MultiLineString");
+        assertThat(geometry.path("coordinates").size()).isPositive();
+        geometry.path("coordinates").forEach(line -> assertThat(line.size()).isGreaterThanOrEqualTo(2));
+        List<JsonNode> positions = new ArrayList<>();
+        forEachPosition(geometry.path("coordinates"), positions::add);
+        assertThat(positions).allSatisfy(q -> {
+            assertThat(q.get(0).asDouble()).isBetween(0.0, 100.0);
+            assertThat(q.get(1).asDouble()).isCloseTo(0.0, within(0.01));
+        });
+        boolean overHut = false;
+        for (JsonNode line : geometry.path("coordinates")) {
+            for (int k = 1; k < line.size(); k++) {
+                double a = line.get(k - 1).get(0).asDouble(), b = line.get(k).get(0).asDouble();
+                overHut |= Math.min(a, b) <= 50 && Math.max(a, b) >= 50;
+            }
+        }
+        assertThat(overHut).as("a stretch passes over the hut's middle (x = 50)").isTrue();
+
+        JsonNode summary = result.path("analysis").path("summary");
+        assertThat(summary.path("fullyProtected").asBoolean()).isFalse();
+        assertThat(summary.path("warnings").size()).isEqualTo(1);
+        JsonNode listed = summary.path("warnings").get(0);
+        assertThat(listed.path("part").asString()).isEqualTo("wire");
+        assertThat(listed.path("partName").asString()).isEqualTo("Span wire");
+        assertThat(listed.path("kind").asString()).isEqualTo("free-span");
+        assertThat(listed.path("heightAboveSurface").asDouble()).isEqualTo(p.path("heightAboveSurface").asDouble());
+        assertThat(listed.path("radius").asDouble()).isEqualTo(20.0);
+        assertThat(listed.path("text").asString()).isEqualTo(p.path("text").asString());
+    }
+
+    @Test
+    void aSiteWithoutWarningsHasAnEmptyWarningListAndNoWarningFeatures() {
+        JsonNode result = published(LOCAL, ProtectionLevel.II);
+        assertThat(layer(result, "model-warning")).isEmpty();
+        assertThat(result.path("analysis").path("summary").path("warnings").isArray()).isTrue();
+        assertThat(result.path("analysis").path("summary").path("warnings").size()).isZero();
+    }
+
+    @Test
+    void aLonLatSitesModelWarningIsPublishedInLonLatLikeTheOtherLayers() throws Exception {
+        JsonNode result = published(Files.readString(WIRE_ABOVE_HUT_LON_LAT), ProtectionLevel.I);
+        List<JsonNode> warnings = layer(result, "model-warning");
+        assertThat(warnings).hasSize(1);
+        // RFC 7946 section 4: [longitude, latitude]; the wire runs along 51.2 N from 4.5 E to
+        // 4.501434 E (100 m at 51.2 N: 1 degree of longitude = 111.32 km x cos(51.2 degrees));
+        // 1e-6 degree is under 0.1 m
+        List<JsonNode> positions = new ArrayList<>();
+        forEachPosition(warnings.get(0).path("geometry").path("coordinates"), positions::add);
+        assertThat(positions).isNotEmpty().allSatisfy(q -> {
+            assertThat(q.get(0).asDouble()).isBetween(4.5 - 1e-6, 4.501434 + 1e-6);
+            assertThat(q.get(1).asDouble()).isCloseTo(51.2, within(1e-6));
+        });
     }
 
     @Test

@@ -162,6 +162,57 @@ class ReviewApiTest {
         assertThat(accepted.reasons(firstRevision)).hasSize(2);
     }
 
+    /**
+     * A hut under a wire strung at 45 m between two masts, at level I (R = 20 m, IEC 62305-3:2010
+     * Table 2): the wire runs more than R above what lies beneath it (IEC 62305-3:2010 Annex A).
+     */
+    private String analysedWireAboveHut() throws Exception {
+        siteId = sites.create("wire-above-hut.geojson", Files.readAllBytes(ResultGeoJsonTest.WIRE_ABOVE_HUT),
+                "Wire above a hut", "I", null).id();
+        analyses.run(siteId, null, null, null);
+        url = "/api/sites/" + siteId + "/analyses/latest";
+        return url;
+    }
+
+    private static JsonNode warningItem(JsonNode review) {
+        for (JsonNode item : review.path("items")) {
+            if (item.path("kind").asString().equals("free-span")) {
+                return item;
+            }
+        }
+        throw new AssertionError("no model warning among the items: " + review);
+    }
+
+    @Test
+    void aModelWarningIsAnItemToReviewNamingThePartWithTheWarningsText() throws Exception {
+        analysedWireAboveHut();
+        JsonNode review = items();
+
+        assertThat(review.path("modelWarnings").asInt()).isEqualTo(1);
+        JsonNode warning = warningItem(review);
+        assertThat(warning.path("owner").asString()).isEqualTo("Span wire");
+        assertThat(warning.path("status").asString()).isEqualTo("exposed");
+        assertThat(warning.path("text").asString()).contains("Span wire");
+        assertThat(warning.path("heightAboveSurface").asDouble()).isGreaterThan(20.0);
+        // the engine gives no verdict of full protection while a warning stands
+        assertThat(analyses.latest(siteId).orElseThrow().fullyProtected()).isFalse();
+    }
+
+    @Test
+    void aModelWarningIsAcceptedOnlyWithAReasonAndTheRevisionStaysNotFullyProtected() throws Exception {
+        analysedWireAboveHut();
+        String key = warningItem(items()).path("key").asString();
+
+        accept(key, "  ").andExpect(status().isBadRequest()).andExpect(jsonPath("$.field").value("reason"));
+        assertThat(accepted.reasons(revisionId())).isEmpty();
+
+        accept(key, "ground beneath the span is fenced off and holds nothing").andExpect(status().isOk());
+        JsonNode warning = warningItem(items());
+        assertThat(warning.path("status").asString()).isEqualTo("accepted");
+        assertThat(warning.path("reason").asString()).isEqualTo("ground beneath the span is fenced off and holds nothing");
+        assertThat(analyses.latest(siteId).orElseThrow().fullyProtected()).isFalse();
+    }
+
     @Test
     void unknownSiteOrNeverAnalysedSiteAnswers404() throws Exception {
         mvc.perform(get("/api/sites/987654/analyses/latest/items")).andExpect(status().isNotFound());

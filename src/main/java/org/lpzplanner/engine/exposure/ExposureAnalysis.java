@@ -190,7 +190,8 @@ public final class ExposureAnalysis {
         long end = System.nanoTime();
         AnalysisResult result = new AnalysisResult(options.sphere(), h, options.tolerance(), List.of(roofArray), edges,
                 corners, facades, parts, ground.ground(), field, (envelopeDone - start) / 1_000_000,
-                (end - start) / 1_000_000, ctx.refinedQueries(), stages, FreeSpanCheck.warnings(surface, radius));
+                (end - start) / 1_000_000, ctx.refinedQueries(), stages, FreeSpanCheck.warnings(surface, radius),
+                SideFlashRule.classify(site, facades));
         return new AnalysisState(site, options, surface, field, result, edgesByEdge, edgeCells, cornerList,
                 cornerByIndex, bandsByWall, faceCells, roofArray, ground.cells());
     }

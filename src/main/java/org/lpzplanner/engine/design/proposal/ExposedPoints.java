@@ -14,6 +14,7 @@ import org.lpzplanner.engine.exposure.CornerExposure;
 import org.lpzplanner.engine.exposure.EdgeExposure;
 import org.lpzplanner.engine.exposure.FacadeBand;
 import org.lpzplanner.engine.exposure.RoofExposure;
+import org.lpzplanner.engine.exposure.SideFlashRule;
 import org.lpzplanner.engine.geom.Areas;
 import org.lpzplanner.engine.geom.SiteSurface;
 
@@ -109,9 +110,12 @@ final class ExposedPoints {
         for (CornerExposure c : result.corners()) {
             add(out, new Point(c.point().x, c.point().y, c.point().getZ(), c.ownerId(), "corner", 0, 0, 0, 0, 0));
         }
-        for (FacadeBand b : result.facades()) {
-            alongLine(out, b.line(), b.ownerId(), "facade", b.bottom() + (b.top() - b.bottom()) / 4);
-            alongLine(out, b.line(), b.ownerId(), "facade", (b.bottom() + b.top()) / 2);
+        // only what needs lateral air-termination (IEC 62305-3:2010 5.2.3); where flashes to the side
+        // are negligible there is nothing to cover
+        for (SideFlashRule.Part p : result.facadePartsNeedingLateral()) {
+            FacadeBand b = p.band();
+            alongLine(out, b.line(), b.ownerId(), "facade", p.bottom() + (p.top() - p.bottom()) / 4);
+            alongLine(out, b.line(), b.ownerId(), "facade", (p.bottom() + p.top()) / 2);
         }
         return out;
     }

@@ -145,6 +145,20 @@ class AirTerminationProposerTest {
     }
 
     @Test
+    void facadeBandsWhereFlashesToTheSideAreNegligibleAreNotLeftToCover() {
+        // a 50 m tower at class I (R = 20 m): its walls are touched from 20 m up (closed form 4),
+        // but on a structure lower than 60 m flashes to the side are negligible (IEC 62305-3:2010
+        // 5.2.3 and Annex A), so there is nothing on them to cover; its rims still are
+        Site site = new Site("tower", List.of(new Structure("t", "Tower", rectangle(0, 0, 10, 10), 50,
+                new RoofShape.Flat(0))), List.of(), List.of(), List.of());
+        Proposal proposal = AirTerminationProposer.propose(site,
+                ProposalOptions.rods(SphereSpec.of(ProtectionLevel.I), HEIGHTS), ProposalMonitor.NONE);
+
+        assertThat(proposal.verification().facades()).isNotEmpty();
+        assertThat(proposal.left()).doesNotContainKey("facade");
+    }
+
+    @Test
     void progressRisesToTheEndAndCancellingStopsTheProposal() {
         Site site = SiteReader.read(Path.of("sample-sites", "courtyard-block.wkt")).site();
         ProposalOptions options = ProposalOptions.rods(SphereSpec.of(ProtectionLevel.III), HEIGHTS);
