@@ -23,7 +23,8 @@ import tools.jackson.databind.json.JsonMapper;
  * upper 20 % of taller ones): those are drawn and listed apart.
  *
  * <p>A model warning (layer {@code model-warning}) is an item a designer must look at: it names a
- * part the analysis cannot vouch for (a wire more than R above the surface beneath it). It can be
+ * part that protects nothing directly beneath a stretch of it (a wire more than R above the surface
+ * beneath it, which a sphere can pass under). It can be
  * accepted with a reason like any other item, which records the designer's answer; the analysis
  * still gives no verdict of full protection while it stands, accepted or not. Its plan geometry is
  * never lent to the proposal as accepted (see {@link #geometries}): accepting the warning says

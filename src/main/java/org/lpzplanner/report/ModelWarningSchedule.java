@@ -34,10 +34,11 @@ final class ModelWarningSchedule {
         }
         return List.of(new Schedule(TITLE, List.of("No.", "Part", "Kind", "Above surface (m)", "Limit R (m)",
                 "Finding and what to do", "Status"), List.of(0.5, 1.3, 0.8, 0.8, 0.7, 3.2, 1.5), rows, List.of(
-                "The analysis treats everything as solid down to the ground, which holds only while a part is less"
-                        + " than the sphere radius R above what lies beneath it (rolling sphere method, IEC 62305-3:2010"
-                        + " Annex A). Where a part runs higher, a sphere can pass under it and the analysis may claim"
-                        + " protection beneath it that is not there.",
+                "Where a part runs more than the sphere radius R above what lies beneath it, a sphere can pass"
+                        + " under it (rolling sphere method, IEC 62305-3:2010 Annex A). The analysis models that free"
+                        + " space: the part protects nothing directly beneath that stretch, and what lies there is"
+                        + " judged without it. The warning asks the designer to confirm that this is what the design"
+                        + " intends.",
                 "While a model warning stands, accepted or not, this report gives no verdict of full protection:"
                         + " an acceptance records the designer's answer for the reviewer; only a change of the design"
                         + " (other air-termination beneath, or a lower part) removes the warning. \"Above surface\" is"

@@ -24,7 +24,8 @@ import org.lpzplanner.engine.model.Site;
  *
  * <p>Safety: every reported envelope value is a lower bound of the true envelope (at most the
  * stated tolerance below it for exact queries), and every decision is taken with a 1 mm margin
- * toward "exposed". Assumes flat ground and everything solid down to the ground.
+ * toward "exposed". Assumes flat ground; structures, rooftop objects and rods are solid down to the
+ * ground, conductors held clear of the surface have free space beneath them.
  *
  * <p>Edits: {@link #update} redoes an analysis after the air-termination changed. The centre
  * surface changes only within R of a changed part and the envelope only within 2R, so only the
