@@ -55,5 +55,9 @@ public final class PostgresTestDatabase {
         registry.add("spring.datasource.username", PostgresTestDatabase::user);
         registry.add("spring.datasource.password", PostgresTestDatabase::password);
         registry.add("spring.datasource.driver-class-name", () -> "org.postgresql.Driver");
+        // test contexts stay cached for the whole run: keep each one's pool small so that many of
+        // them fit in the server's connection slots
+        registry.add("spring.datasource.hikari.maximum-pool-size", () -> "4");
+        registry.add("spring.datasource.hikari.minimum-idle", () -> "1");
     }
 }
