@@ -1,6 +1,7 @@
 package org.lpzplanner;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
@@ -8,7 +9,10 @@ import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
-/** The engine is a plain library: the rest of the product depends on it, never the reverse. */
+/**
+ * The engine is a plain library: the rest of the product depends on it, never the reverse. The
+ * product's features (top-level packages) form no cycle, and the low packages know no feature.
+ */
 class ArchitectureTest {
 
     private static JavaClasses classes;
@@ -45,6 +49,39 @@ class ArchitectureTest {
                 .check(classes);
         noClasses().that().resideInAPackage("org.lpzplanner.engine.envelope..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.engine.exposure..", "org.lpzplanner.engine.io..")
+                .check(classes);
+    }
+
+    @Test
+    void featurePackagesFormNoCycle() {
+        slices().matching("org.lpzplanner.(*)..").should().beFreeOfCycles().check(classes);
+    }
+
+    @Test
+    void engineSubpackagesFormNoCycle() {
+        slices().matching("org.lpzplanner.engine.(*)..").should().beFreeOfCycles().check(classes);
+    }
+
+    @Test
+    void systemCommonAndJobsKnowNoFeature() {
+        noClasses().that().resideInAnyPackage("org.lpzplanner.system..", "org.lpzplanner.common..",
+                "org.lpzplanner.jobs..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.accounts..",
+                        "org.lpzplanner.airtermination..", "org.lpzplanner.analysis..", "org.lpzplanner.audit..",
+                        "org.lpzplanner.cli..", "org.lpzplanner.comments..", "org.lpzplanner.demo..",
+                        "org.lpzplanner.design..", "org.lpzplanner.keepout..", "org.lpzplanner.plan..",
+                        "org.lpzplanner.report..", "org.lpzplanner.risk..", "org.lpzplanner.sections..",
+                        "org.lpzplanner.sites..", "org.lpzplanner.transfer..")
+                .check(classes);
+    }
+
+    @Test
+    void storedSitesKnowNothingAboveThem() {
+        noClasses().that().resideInAPackage("org.lpzplanner.sites..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.analysis..",
+                        "org.lpzplanner.airtermination..", "org.lpzplanner.plan..", "org.lpzplanner.sections..",
+                        "org.lpzplanner.design..", "org.lpzplanner.report..", "org.lpzplanner.keepout..",
+                        "org.lpzplanner.comments..", "org.lpzplanner.risk..", "org.lpzplanner.transfer..")
                 .check(classes);
     }
 }

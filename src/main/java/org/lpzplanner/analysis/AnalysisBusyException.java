@@ -1,16 +1,13 @@
 package org.lpzplanner.analysis;
 
-/** Every analysis worker is busy and the queue is full: the client should try again later. */
-public final class AnalysisBusyException extends RuntimeException {
+import org.lpzplanner.system.BusyException;
 
-    private final int retryAfterSeconds;
+/** Every analysis worker is busy and the queue is full: the client should try again later. */
+public final class AnalysisBusyException extends BusyException {
+
+    private static final long serialVersionUID = 1L;
 
     public AnalysisBusyException(int retryAfterSeconds) {
-        super("the server is busy with other analyses; try again in " + retryAfterSeconds + " s");
-        this.retryAfterSeconds = retryAfterSeconds;
-    }
-
-    public int retryAfterSeconds() {
-        return retryAfterSeconds;
+        super("the server is busy with other analyses; try again in " + retryAfterSeconds + " s", retryAfterSeconds);
     }
 }

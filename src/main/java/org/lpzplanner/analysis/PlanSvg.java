@@ -35,12 +35,12 @@ public final class PlanSvg {
     /** Colours of the plan, also used by the legend. */
     static final String GROUND = "#cfe9c8";
     static final String OBJECT = "#b9ad94";
-    static final String EXPOSED_ROOF = "#f28c28";
+    public static final String EXPOSED_ROOF = "#f28c28";
     static final String FACADE = "#7b4fa0";
     /** Facade bands where flashes to the side are negligible: the band's purple, light and dashed. */
     static final String FACADE_NEGLIGIBLE = "#c4b0da";
     static final String EDGE = "#c8102e";
-    static final String PART = "#1f5fbf";
+    public static final String PART = "#1f5fbf";
     /** Hatch of stored keep-out areas (our own: dark teal diagonal lines over what lies below). */
     static final String KEEP_OUT = "#1b6e5a";
     /**

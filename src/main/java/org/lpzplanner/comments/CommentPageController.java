@@ -1,6 +1,7 @@
 package org.lpzplanner.comments;
 
 import org.lpzplanner.system.InvalidInputException;
+import org.lpzplanner.system.SitePages;
 import org.springframework.stereotype.Controller;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -12,6 +13,7 @@ import org.springframework.web.servlet.mvc.support.RedirectAttributes;
  * ({@code comment}) and {@code POST /sites/{id}/reviewed} (marks the latest revision reviewed).
  */
 @Controller
+@SitePages
 public class CommentPageController {
 
     private final CommentService comments;

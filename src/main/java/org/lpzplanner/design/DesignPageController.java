@@ -8,14 +8,15 @@ import java.util.Map;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.PlanSvg;
-import org.lpzplanner.keepout.KeepOutArea;
-import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.keepout.KeepOutArea;
+import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
+import org.lpzplanner.system.SitePages;
 import org.springframework.context.MessageSource;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
@@ -31,6 +32,7 @@ import org.springframework.web.servlet.mvc.support.RedirectAttributes;
  * plain form), separation distances with the metal installations, and the bill of quantities.
  */
 @Controller
+@SitePages
 public class DesignPageController {
 
     private final SiteService sites;

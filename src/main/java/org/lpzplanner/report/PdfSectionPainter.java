@@ -5,8 +5,8 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.List;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
-import org.lpzplanner.analysis.SiteSection;
-import org.lpzplanner.analysis.SiteSection.Point;
+import org.lpzplanner.sections.SiteSection;
+import org.lpzplanner.sections.SiteSection.Point;
 
 /**
  * Draws a {@link SiteSection} to a standard scale, the same across and up: the structure profile

@@ -7,7 +7,6 @@ import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.lpzplanner.analysis.SiteSection;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.engine.envelope.EnvelopeField;
@@ -16,6 +15,7 @@ import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.sections.SiteSection;
 import org.lpzplanner.sites.SiteFiles;
 import org.lpzplanner.sites.StructureRow;
 

@@ -1,7 +1,7 @@
 package org.lpzplanner.report;
 
 import java.util.List;
-import org.lpzplanner.analysis.SiteSection;
+import org.lpzplanner.sections.SiteSection;
 
 /**
  * One piece of a report's content, in reading order. The content model knows nothing of pages: the

@@ -2,6 +2,7 @@ package org.lpzplanner.report;
 
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.sites.SiteNotFoundException;
+import org.lpzplanner.system.SitePages;
 import org.springframework.stereotype.Controller;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -11,6 +12,7 @@ import org.springframework.web.bind.annotation.PathVariable;
  * moment of the click, so the link stays right after rods are moved without a page reload.
  */
 @Controller
+@SitePages
 public class ReportPageController {
 
     private final AnalysisService analyses;

@@ -7,19 +7,19 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
-import org.lpzplanner.design.DesignRepository;
 import org.lpzplanner.analysis.AcceptedItemRepository;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.RevisionInputs;
+import org.lpzplanner.design.DesignRepository;
+import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.keepout.KeepOutAreaService;
+import org.lpzplanner.risk.RiskService;
+import org.lpzplanner.sections.SiteCutService;
 import org.lpzplanner.sites.SiteFileVersion;
-import org.lpzplanner.sites.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
-import org.lpzplanner.engine.model.SphereSpec;
-import org.lpzplanner.risk.RiskService;
 import org.springframework.stereotype.Service;
 
 /**

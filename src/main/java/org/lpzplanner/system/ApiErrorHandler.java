@@ -2,13 +2,8 @@ package org.lpzplanner.system;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
-import org.lpzplanner.analysis.AnalysisBusyException;
-import org.lpzplanner.analysis.AnalysisJobNotFoundException;
-import org.lpzplanner.analysis.ReviewItemNotFoundException;
+import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.engine.io.SiteFormatException;
-import org.lpzplanner.report.RevisionInputsMissingException;
-import org.lpzplanner.report.RevisionNotFoundException;
-import org.lpzplanner.sites.SiteNotFoundException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.dao.DuplicateKeyException;
@@ -17,7 +12,6 @@ import org.springframework.http.HttpStatus;
 import org.springframework.http.HttpStatusCode;
 import org.springframework.http.ResponseEntity;
 import org.springframework.web.ErrorResponse;
-import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
@@ -28,9 +22,10 @@ import org.springframework.web.multipart.MultipartException;
 /**
  * Turns every failure of the JSON API into a JSON body {@code {"error": "..."}} with a fitting
  * status, never a stack trace: 400 for unusable input (site files also name {@code file},
- * {@code feature}, {@code featureName}, {@code line} and {@code field} where known), 404 for unknown
- * sites, review items and analysis jobs, 409 for concurrent changes, 429 with {@code Retry-After}
- * when the analysis workers are all busy, 413 for oversized uploads, 500 with a plain message otherwise.
+ * {@code feature}, {@code featureName}, {@code line} and {@code field} where known), 404 for anything
+ * not stored ({@link NotFoundException}), 409 for concurrent changes and {@link ConflictException}s,
+ * 429 with {@code Retry-After} when the workers are all busy ({@link BusyException}), 413 for oversized
+ * uploads, 500 with a plain message otherwise. It knows the features only through these base types.
  */
 @RestControllerAdvice(annotations = RestController.class)
 public class ApiErrorHandler {
@@ -70,40 +65,29 @@ public class ApiErrorHandler {
         return ResponseEntity.badRequest().body(body);
     }
 
-    @ExceptionHandler(SiteNotFoundException.class)
-    ResponseEntity<Map<String, Object>> notFound(SiteNotFoundException e) {
-        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
+    @ExceptionHandler(NotFoundException.class)
+    ResponseEntity<Map<String, Object>> notFound(NotFoundException e) {
+        Map<String, Object> body = error(e.getMessage());
+        if (e.field() != null) {
+            body.put("field", e.field());
+        }
+        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(body);
     }
 
-    @ExceptionHandler(ReviewItemNotFoundException.class)
-    ResponseEntity<Map<String, Object>> noItem(ReviewItemNotFoundException e) {
-        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
-    }
-
-    @ExceptionHandler(AnalysisJobNotFoundException.class)
-    ResponseEntity<Map<String, Object>> noJob(AnalysisJobNotFoundException e) {
-        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(error(e.getMessage()));
-    }
-
-    @ExceptionHandler(AnalysisBusyException.class)
-    ResponseEntity<Map<String, Object>> busy(AnalysisBusyException e) {
+    @ExceptionHandler(BusyException.class)
+    ResponseEntity<Map<String, Object>> busy(BusyException e) {
         Map<String, Object> body = error(e.getMessage());
         body.put("retryAfterSeconds", e.retryAfterSeconds());
         return ResponseEntity.status(HttpStatus.TOO_MANY_REQUESTS)
                 .header("Retry-After", Integer.toString(e.retryAfterSeconds())).body(body);
     }
 
-    @ExceptionHandler(RevisionNotFoundException.class)
-    ResponseEntity<Map<String, Object>> noRevision(RevisionNotFoundException e) {
+    @ExceptionHandler(ConflictException.class)
+    ResponseEntity<Map<String, Object>> stateConflict(ConflictException e) {
         Map<String, Object> body = error(e.getMessage());
-        body.put("field", "revision");
-        return ResponseEntity.status(HttpStatus.NOT_FOUND).body(body);
-    }
-
-    @ExceptionHandler(RevisionInputsMissingException.class)
-    ResponseEntity<Map<String, Object>> inputsMissing(RevisionInputsMissingException e) {
-        Map<String, Object> body = error(e.getMessage());
-        body.put("field", "revision");
+        if (e.field() != null) {
+            body.put("field", e.field());
+        }
         return ResponseEntity.status(HttpStatus.CONFLICT).body(body);
     }
 

@@ -6,7 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import org.junit.jupiter.api.Test;
-import org.lpzplanner.sites.SiteCutService;
+import org.lpzplanner.sections.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;

@@ -1,6 +1,5 @@
 package org.lpzplanner.transfer;
 
-import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
@@ -12,13 +11,14 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.accounts.SignedIn;
+import org.lpzplanner.airtermination.AirTerminationService;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.design.DesignService;
 import org.lpzplanner.keepout.KeepOutAreaService;
-import org.lpzplanner.sites.AirTerminationService;
-import org.lpzplanner.sites.SiteCutService;
+import org.lpzplanner.sections.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.sites.StructureCorrection;

@@ -1,0 +1,6 @@
+/**
+ * The invented demo sites loaded on the first start, stored and analysed as any upload.
+ *
+ * <p>Rules of the package: the top of the product; nothing depends on it.
+ */
+package org.lpzplanner.demo;

@@ -1,0 +1,16 @@
+package org.lpzplanner.plan;
+
+import org.lpzplanner.persistence.OnPostgres;
+import org.lpzplanner.persistence.PostgresTestDatabase;
+import org.springframework.test.context.DynamicPropertyRegistry;
+import org.springframework.test.context.DynamicPropertySource;
+
+/** Every test of {@link StructureCorrectionPagesTest}, against PostgreSQL. */
+@OnPostgres
+class StructureCorrectionPagesOnPostgresTest extends StructureCorrectionPagesTest {
+
+    @DynamicPropertySource
+    static void postgres(DynamicPropertyRegistry registry) {
+        PostgresTestDatabase.register(registry);
+    }
+}
