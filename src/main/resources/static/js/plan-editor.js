@@ -106,6 +106,15 @@ function setUp(root) {
   function apply(data) {
     version = data.version;
     document.querySelectorAll('input[name="version"]').forEach((input) => { input.value = String(version); });
+    if (data.analysisPending) {
+      // the change is stored, its analysis is not: the drawing and summary stay those of the last one
+      const status = document.getElementById('plan-status');
+      status.textContent = data.status;
+      status.className = 'exposed';
+      setParts(data.parts);
+      bindDrawing();
+      return;
+    }
     const hadFocus = drawing.contains(document.activeElement);
     drawing.innerHTML = data.svg;
     document.getElementById('plan-basis').textContent = data.basis;
@@ -375,9 +384,10 @@ function setUp(root) {
       show(text('Working'), false);
       root.setAttribute('aria-busy', 'true');
       try {
-        apply(await step());
+        const data = await step();
+        apply(data);
         onDone();
-        show(message, false);
+        show(data.analysisPending ? text('Pending').replace('{0}', data.pendingReason) : message, false);
       } catch (error) {
         report(error);
         try {

@@ -3,15 +3,23 @@ package org.lpzplanner;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
+import com.tngtech.archunit.base.DescribedPredicate;
 import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.domain.JavaMethodCall;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.plan.SitePageController;
+import org.lpzplanner.sites.SiteRepository;
+import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.sites.StoredSite;
 
 /**
  * The engine is a plain library: the rest of the product depends on it, never the reverse. The
- * product's features (top-level packages) form no cycle, and the low packages know no feature.
+ * product's features (top-level packages) form no cycle, and the low packages know no feature. A
+ * site's file changes only through the edit pipeline, which alone analyses after a change.
  */
 class ArchitectureTest {
 
@@ -69,7 +77,8 @@ class ArchitectureTest {
                 .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.accounts..",
                         "org.lpzplanner.airtermination..", "org.lpzplanner.analysis..", "org.lpzplanner.audit..",
                         "org.lpzplanner.cli..", "org.lpzplanner.comments..", "org.lpzplanner.demo..",
-                        "org.lpzplanner.design..", "org.lpzplanner.keepout..", "org.lpzplanner.plan..",
+                        "org.lpzplanner.design..", "org.lpzplanner.editing..", "org.lpzplanner.keepout..",
+                        "org.lpzplanner.plan..",
                         "org.lpzplanner.report..", "org.lpzplanner.risk..", "org.lpzplanner.sections..",
                         "org.lpzplanner.sites..", "org.lpzplanner.transfer..")
                 .check(classes);
@@ -79,9 +88,30 @@ class ArchitectureTest {
     void storedSitesKnowNothingAboveThem() {
         noClasses().that().resideInAPackage("org.lpzplanner.sites..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.analysis..",
-                        "org.lpzplanner.airtermination..", "org.lpzplanner.plan..", "org.lpzplanner.sections..",
+                        "org.lpzplanner.editing..", "org.lpzplanner.airtermination..", "org.lpzplanner.plan..", "org.lpzplanner.sections..",
                         "org.lpzplanner.design..", "org.lpzplanner.report..", "org.lpzplanner.keepout..",
                         "org.lpzplanner.comments..", "org.lpzplanner.risk..", "org.lpzplanner.transfer..")
+                .check(classes);
+    }
+
+    @Test
+    void onlyTheEditPipelineAndAnalyseAgainRunAnAnalysisOfAStoredSite() {
+        DescribedPredicate<JavaMethodCall> runsAnAnalysis = DescribedPredicate.describe("AnalysisService.run",
+                call -> call.getName().equals("run") && call.getTargetOwner().isAssignableTo(AnalysisService.class));
+        // after a change the edit pipeline analyses; "analyse again" is the page form, the API and its jobs
+        noClasses().that().resideOutsideOfPackages("org.lpzplanner.analysis..", "org.lpzplanner.editing..")
+                .and().doNotHaveFullyQualifiedName(SitePageController.class.getName())
+                .should().callMethodWhere(runsAnAnalysis)
+                .check(classes);
+    }
+
+    @Test
+    void onlyTheEditPipelineReplacesASiteFile() {
+        noClasses().that().resideOutsideOfPackages("org.lpzplanner.sites..", "org.lpzplanner.editing..")
+                .should().callMethod(SiteService.class, "replaceFile", StoredSite.class, String.class,
+                        org.lpzplanner.engine.io.SiteDocument.class)
+                .orShould().callMethod(SiteRepository.class, "replaceFile", long.class, long.class, String.class,
+                        java.time.Instant.class)
                 .check(classes);
     }
 }

@@ -8,19 +8,11 @@ import io.swagger.v3.oas.annotations.media.Content;
 import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
-import org.lpzplanner.analysis.AnalysisRevision;
-import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.AnalysisSummary;
-import org.lpzplanner.analysis.PlanSvg;
-import org.lpzplanner.analysis.ResultGeoJson;
-import org.lpzplanner.common.Cautions;
-import org.lpzplanner.common.Formats;
-import org.lpzplanner.keepout.KeepOutAreaService;
-import org.lpzplanner.plan.PlanStatus;
-import org.lpzplanner.sites.SiteService;
+import org.lpzplanner.editing.Edit;
+import org.lpzplanner.plan.PlanPresenter;
 import org.lpzplanner.system.ApiError;
 import org.lpzplanner.system.InvalidInputException;
-import org.springframework.context.MessageSource;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
@@ -41,8 +33,10 @@ import tools.jackson.databind.JsonNode;
  * {@code y} in local metres, {@code height}, optional {@code name} and {@code id});
  * {@code PUT /api/sites/{id}/rods/{rodId}} moves it ({@code x}, {@code y}) and/or changes its
  * {@code height}; {@code DELETE /api/sites/{id}/rods/{rodId}?version=N} removes it. Each change
- * rewrites the stored file, analyses the site again and answers with the new summary, plan drawing,
- * method, level, radius and cautions. {@code POST /api/sites/{id}/conductors} adds a roof conductor
+ * rewrites the stored file and analyses the site again ({@link org.lpzplanner.editing.EditPipeline})
+ * and answers with the site's new version, the new summary, plan drawing, method, level, radius and
+ * cautions ({@link PlanPresenter}); when the analysis cannot run now, the change is still stored and
+ * the answer says the analysis is pending and why. {@code POST /api/sites/{id}/conductors} adds a roof conductor
  * or catenary wire, {@code PUT /api/sites/{id}/conductors/{conductorId}} gives it a new path
  * ({@code points}, optional {@code heightAboveRoof} and {@code name}) and
  * {@code DELETE /api/sites/{id}/conductors/{conductorId}?version=N} removes one, answering the same way. A stale {@code version} answers 409.
@@ -52,37 +46,36 @@ import tools.jackson.databind.JsonNode;
 @RequestMapping("/api/sites/{id}")
 public class AirTerminationApiController {
 
-    private final AirTerminationService parts;
-    private final AnalysisService analyses;
-    private final SiteService sites;
-    private final MessageSource messages;
-    private final KeepOutAreaService keepOut;
+    private final PartsView parts;
+    private final RodEdits rods;
+    private final ConductorEdits conductors;
+    private final PlanPresenter plan;
 
-    public AirTerminationApiController(AirTerminationService parts, AnalysisService analyses, SiteService sites,
-            MessageSource messages, KeepOutAreaService keepOut) {
-        this.keepOut = keepOut;
+    public AirTerminationApiController(PartsView parts, RodEdits rods, ConductorEdits conductors, PlanPresenter plan) {
         this.parts = parts;
-        this.analyses = analyses;
-        this.sites = sites;
-        this.messages = messages;
+        this.rods = rods;
+        this.conductors = conductors;
+        this.plan = plan;
     }
 
     /**
      * The answer to a change: the rod concerned ({@code rodId}; {@code before} is the rod as it was,
      * null for a new one), the site's new {@code version}, the new analysis ({@code summary},
      * {@code svg}, the worded {@code basis} and {@code status} lines, {@code cautions}), the parts
-     * as they are now, and the server time taken in milliseconds.
+     * as they are now, and the server time taken in milliseconds. While {@code analysisPending}, the
+     * change is stored but not analysed ({@code pendingReason} says why): {@code summary},
+     * {@code svg} and {@code basis} are null and {@code status} gives no verdict.
      */
-    public record Change(String rodId, AirTerminationService.RodView before, long version, AnalysisSummary summary,
-            String svg, String basis, String status, List<String> cautions, AirTerminationService.Parts parts,
-            long serverMillis) {
+    public record Change(String rodId, PartsView.RodView before, long version, AnalysisSummary summary,
+            String svg, String basis, String status, List<String> cautions, PartsView.Parts parts,
+            long serverMillis, boolean analysisPending, String pendingReason) {
     }
 
     @Operation(summary = "Rods and conductors of a site")
     @ApiResponse(responseCode = "200", description = "The parts")
     @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @GetMapping("/parts")
-    public AirTerminationService.Parts parts(@PathVariable long id) {
+    public PartsView.Parts parts(@PathVariable long id) {
         return parts.parts(id);
     }
 
@@ -95,9 +88,10 @@ public class AirTerminationApiController {
     @PostMapping(value = "/rods", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<Change> add(@PathVariable long id, @RequestBody JsonNode body, Locale locale) {
         long start = System.nanoTime();
-        String rodId = parts.addRod(id, version(body), input(body));
-        return ResponseEntity.status(HttpStatus.CREATED).location(URI.create("/api/sites/" + id + "/rods/" + rodId))
-                .body(answer(id, rodId, null, start, locale));
+        Edit<String> edit = rods.add(id, version(body), input(body));
+        return ResponseEntity.status(HttpStatus.CREATED)
+                .location(URI.create("/api/sites/" + id + "/rods/" + edit.outcome()))
+                .body(answer(edit, edit.outcome(), null, start, locale));
     }
 
     @Operation(summary = "Move or change a rod",
@@ -110,8 +104,8 @@ public class AirTerminationApiController {
     public Change change(@PathVariable long id, @PathVariable String rodId, @RequestBody JsonNode body,
             Locale locale) {
         long start = System.nanoTime();
-        AirTerminationService.RodView before = parts.changeRod(id, version(body), rodId, input(body));
-        return answer(id, rodId, before, start, locale);
+        Edit<PartsView.RodView> edit = rods.change(id, version(body), rodId, input(body));
+        return answer(edit, rodId, edit.outcome(), start, locale);
     }
 
     @Operation(summary = "Delete a rod",
@@ -124,14 +118,14 @@ public class AirTerminationApiController {
     public Change remove(@PathVariable long id, @PathVariable String rodId, @RequestParam Long version,
             Locale locale) {
         long start = System.nanoTime();
-        AirTerminationService.RodView before = parts.removeRod(id, version, rodId);
-        return answer(id, rodId, before, start, locale);
+        Edit<PartsView.RodView> edit = rods.remove(id, version, rodId);
+        return answer(edit, rodId, edit.outcome(), start, locale);
     }
 
     /** The answer to a conductor change, as {@link Change} for rods. */
-    public record ConductorChange(String conductorId, AirTerminationService.ConductorView before, long version,
+    public record ConductorChange(String conductorId, PartsView.ConductorView before, long version,
             AnalysisSummary summary, String svg, String basis, String status, List<String> cautions,
-            AirTerminationService.Parts parts, long serverMillis) {
+            PartsView.Parts parts, long serverMillis, boolean analysisPending, String pendingReason) {
     }
 
     /**
@@ -149,12 +143,11 @@ public class AirTerminationApiController {
     public ResponseEntity<ConductorChange> addConductor(@PathVariable long id, @RequestBody JsonNode body,
             Locale locale) {
         long start = System.nanoTime();
-        String conductorId = parts.addConductor(id, version(body), new AirTerminationService.ConductorInput(
-                text(body, "id"), text(body, "name"), points(body), number(body, "heightAboveRoof")));
-        Change change = answer(id, null, null, start, locale);
+        Edit<String> edit = conductors.add(id, version(body), new ConductorInput(text(body, "id"), text(body, "name"),
+                points(body), number(body, "heightAboveRoof")));
         return ResponseEntity.status(HttpStatus.CREATED)
-                .location(URI.create("/api/sites/" + id + "/conductors/" + conductorId))
-                .body(conductorChange(conductorId, null, change));
+                .location(URI.create("/api/sites/" + id + "/conductors/" + edit.outcome()))
+                .body(conductorChange(edit.outcome(), null, answer(edit, null, null, start, locale)));
     }
 
     @Operation(summary = "Move or reshape a roof conductor or catenary wire",
@@ -167,10 +160,9 @@ public class AirTerminationApiController {
     public ConductorChange changeConductor(@PathVariable long id, @PathVariable String conductorId,
             @RequestBody JsonNode body, Locale locale) {
         long start = System.nanoTime();
-        AirTerminationService.ConductorView before = parts.changeConductor(id, version(body), conductorId,
-                new AirTerminationService.ConductorInput(null, text(body, "name"), points(body),
-                        number(body, "heightAboveRoof")));
-        return conductorChange(conductorId, before, answer(id, null, null, start, locale));
+        Edit<PartsView.ConductorView> edit = conductors.change(id, version(body), conductorId,
+                new ConductorInput(null, text(body, "name"), points(body), number(body, "heightAboveRoof")));
+        return conductorChange(conductorId, edit.outcome(), answer(edit, null, null, start, locale));
     }
 
     @Operation(summary = "Delete a conductor", description = "Parameter version is required.")
@@ -182,14 +174,13 @@ public class AirTerminationApiController {
     public ConductorChange removeConductor(@PathVariable long id, @PathVariable String conductorId,
             @RequestParam Long version, Locale locale) {
         long start = System.nanoTime();
-        AirTerminationService.ConductorView before = parts.removeConductor(id, version, conductorId);
-        return conductorChange(conductorId, before, answer(id, null, null, start, locale));
+        Edit<PartsView.ConductorView> edit = conductors.remove(id, version, conductorId);
+        return conductorChange(conductorId, edit.outcome(), answer(edit, null, null, start, locale));
     }
 
-    private static ConductorChange conductorChange(String conductorId, AirTerminationService.ConductorView before,
-            Change c) {
+    private static ConductorChange conductorChange(String conductorId, PartsView.ConductorView before, Change c) {
         return new ConductorChange(conductorId, before, c.version(), c.summary(), c.svg(), c.basis(), c.status(),
-                c.cautions(), c.parts(), c.serverMillis());
+                c.cautions(), c.parts(), c.serverMillis(), c.analysisPending(), c.pendingReason());
     }
 
     private static List<double[]> points(JsonNode body) {
@@ -217,19 +208,12 @@ public class AirTerminationApiController {
         return out;
     }
 
-    private Change answer(long id, String rodId, AirTerminationService.RodView before, long start, Locale locale) {
-        AnalysisRevision revision = analyses.run(id, null, null, null);
-        // the stored keep-out areas stay on the redrawn plan
-        String svg = PlanSvg.render(revision.resultGeoJson(), (key, args) -> messages.getMessage(key, args, locale),
-                java.util.Map.of(), keepOut.forPlan(id));
-        String basis = messages.getMessage("plan.basis", new Object[] {ResultGeoJson.METHOD, revision.level().name(),
-                Formats.oneDecimal(revision.sphereRadius()), Formats.dateTime(revision.createdAt())},
-                locale);
-        String status = PlanStatus.text(revision, messages, locale);
-        AirTerminationService.Parts now = parts.parts(id);
+    private Change answer(Edit<?> edit, String rodId, PartsView.RodView before, long start, Locale locale) {
+        PlanPresenter.Refresh refresh = plan.afterChange(edit.siteId(), edit.analysis(), locale);
+        PartsView.Parts now = parts.parts(edit.siteId());
         long millis = (System.nanoTime() - start) / 1_000_000;
-        return new Change(rodId, before, sites.get(id).version(), AnalysisSummary.of(revision), svg, basis, status,
-                Cautions.lines(), now, millis);
+        return new Change(rodId, before, edit.version(), refresh.summary(), refresh.svg(), refresh.basis(),
+                refresh.status(), refresh.cautions(), now, millis, refresh.analysisPending(), refresh.pendingReason());
     }
 
     private static long version(JsonNode body) {
@@ -243,8 +227,8 @@ public class AirTerminationApiController {
         return version.longValue();
     }
 
-    private static AirTerminationService.RodInput input(JsonNode body) {
-        return new AirTerminationService.RodInput(text(body, "id"), text(body, "name"), coordinate(body, "x"),
+    private static RodInput input(JsonNode body) {
+        return new RodInput(text(body, "id"), text(body, "name"), coordinate(body, "x"),
                 coordinate(body, "y"), number(body, "height"));
     }
 

@@ -5,8 +5,11 @@ import java.math.RoundingMode;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
 import org.lpzplanner.engine.io.LocalProjection;
+import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.model.Conductor;
 import org.lpzplanner.engine.model.Rod;
+import org.lpzplanner.sites.SiteFiles;
+import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
@@ -22,8 +25,8 @@ import tools.jackson.databind.node.ObjectNode;
  * (to 10⁻⁸ degree, about a millimetre) through the site's {@link LocalProjection}; conductor
  * elevations (third values) stay metres above ground. Every rod and conductor of the file is given
  * its id explicitly, so that removing one does not renumber the others. All other
- * features and members are kept as they are. The result is not checked here; the caller reads it
- * back through the engine's reader before storing it.
+ * features and members are kept as they are. The result is not checked here; the edit pipeline
+ * reads it back through the engine's reader before storing it.
  */
 final class PartFileEditor {
 
@@ -32,6 +35,21 @@ final class PartFileEditor {
     private final ObjectNode root;
     private final ArrayNode features;
     private final LocalProjection projection;
+
+    /**
+     * An editor of the stored site's file.
+     *
+     * @param document the site's file as the engine read it
+     * @throws InvalidInputException when the file is WKT, which cannot hold parts
+     */
+    static PartFileEditor open(StoredSite site, SiteDocument document) {
+        if (!SiteFiles.isGeoJson(site.sourceText(), site.sourceName())) {
+            throw new InvalidInputException("file", "a WKT site file cannot hold rods (it holds flat-roofed"
+                    + " structures only); upload the site as GeoJSON to place air-termination");
+        }
+        return new PartFileEditor(site.sourceText(), document.site().rods(), document.site().conductors(),
+                document.projection());
+    }
 
     /**
      * @param rods       the rods the engine read from {@code text}, in file order

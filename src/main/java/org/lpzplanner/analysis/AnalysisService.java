@@ -17,7 +17,6 @@ import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.SphereSpec;
-import org.lpzplanner.sites.SiteRepository;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
@@ -28,13 +27,16 @@ import org.springframework.transaction.support.TransactionTemplate;
 /**
  * Runs the rolling-sphere analysis of a stored site and keeps each run as a numbered revision.
  * The engine does the work; this class picks the settings, stores the summary and the result
- * GeoJSON, and marks the site as changed.
+ * GeoJSON, and marks the site as changed. Each run starts from the last analysis of the site kept
+ * in memory ({@link AnalysisStateCache}) where there is one, so after an edit of the
+ * air-termination only what the edit can change is decided again. Who asks: "analyse again" (page,
+ * API, background job) with chosen settings, and the edit pipeline after every change of a site
+ * ({@link #run(StoredSite)}).
  */
 @Service
 public class AnalysisService {
 
     private final SiteService sites;
-    private final SiteRepository siteRows;
     private final AnalysisRepository analyses;
     private final TransactionTemplate transactions;
     private final Clock clock;
@@ -42,14 +44,15 @@ public class AnalysisService {
     private final AcceptedItemRepository accepted;
     private final AuditTrail audit;
     private final AnalysisCapacity capacity;
+    private final ParsedResults results;
 
-    public AnalysisService(SiteService sites, SiteRepository siteRows, AnalysisRepository analyses,
-            TransactionTemplate transactions, Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted,
-            AuditTrail audit, AnalysisCapacity capacity) {
+    public AnalysisService(SiteService sites, AnalysisRepository analyses, TransactionTemplate transactions,
+            Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted, AuditTrail audit,
+            AnalysisCapacity capacity, ParsedResults results) {
         this.audit = audit;
         this.capacity = capacity;
+        this.results = results;
         this.sites = sites;
-        this.siteRows = siteRows;
         this.analyses = analyses;
         this.transactions = transactions;
         this.clock = clock;
@@ -86,11 +89,29 @@ public class AnalysisService {
         return capacity.run(() -> runNow(siteId, levelText, radiusText, resolutionText, progress));
     }
 
+    /**
+     * Analyses the site as {@code site} holds it, at its own level and radius with the grid the engine
+     * chooses, and stores the result as its next revision: the analysis after a change of the site.
+     *
+     * @throws AnalysisBusyException when no place came free within the wait (nothing is stored)
+     * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException when the grid would not fit
+     * @throws InvalidInputException when the engine cannot analyse the site with its settings
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed or was
+     *         deleted while the analysis ran (nothing is stored)
+     */
+    public AnalysisRevision run(StoredSite site) {
+        return capacity.run(() -> analyse(site, site.sphere(), null, AnalysisProgress.NONE));
+    }
+
     private AnalysisRevision runNow(long siteId, String levelText, String radiusText, String resolutionText,
             AnalysisProgress progress) {
         StoredSite site = sites.get(siteId);
         SphereSpec sphere = sphere(site, levelText, radiusText);
         Double resolution = Settings.resolution(resolutionText);
+        return analyse(site, sphere, resolution, progress);
+    }
+
+    private AnalysisRevision analyse(StoredSite site, SphereSpec sphere, Double resolution, AnalysisProgress progress) {
         SiteDocument document = sites.document(site);
         AnalysisResult result;
         try {
@@ -114,7 +135,7 @@ public class AnalysisService {
                     computed.exposedCorners(), computed.facadeBands(), computed.protectedGroundArea(),
                     computed.fullyProtected(), computed.resultGeoJson(), now, computed.engineMillis()),
                     new RevisionInputs(site.name(), site.sourceName(), site.sourceText(), computed.tolerance()));
-            siteRows.touch(site.id(), site.version(), now);
+            sites.markAnalysed(site, now);
             previous.ifPresent(p -> carryOverAcceptances(p, revision, now));
             audit.record(site.id(), "analysis", String.format(java.util.Locale.ROOT,
                     "revision %d at level %s, sphere radius %s m: %s", revision.revision(), sphere.level().name(),
@@ -228,7 +249,7 @@ public class AnalysisService {
         if (reasons.isEmpty()) {
             return;
         }
-        for (ReviewItems.Item item : ReviewItems.of(next.resultGeoJson())) {
+        for (ReviewItems.Item item : results.of(next).items()) {
             String reason = reasons.get(item.key());
             if (reason != null) {
                 accepted.accept(next.id(), item.key(), reason, now);

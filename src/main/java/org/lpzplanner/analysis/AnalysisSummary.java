@@ -14,11 +14,15 @@ public record AnalysisSummary(int revision, String method, String level, double 
         long engineMillis, Instant analysedAt) {
 
     public static AnalysisSummary of(AnalysisRevision r) {
+        return of(r, r.resultGeoJson() == null ? null : ReviewItems.negligibleBands(r.resultGeoJson()));
+    }
+
+    /** As {@link #of(AnalysisRevision)}, with the count of negligible facade bands already known. */
+    static AnalysisSummary of(AnalysisRevision r, Integer negligibleFacadeBands) {
         return new AnalysisSummary(r.revision(), ResultGeoJson.METHOD, r.level().name(), ResultGeoJson.round(r.sphereRadius()),
                 ResultGeoJson.round(r.resolution()), ResultGeoJson.round(r.exposedRoofArea()),
                 ResultGeoJson.round(r.exposedEdgeLength()), r.exposedCorners(), r.facadeBands(),
-                r.resultGeoJson() == null ? null : ReviewItems.negligibleBands(r.resultGeoJson()),
-                ResultGeoJson.round(r.protectedGroundArea()), r.fullyProtected(), r.inputsSha256(), r.engineMillis(),
+                negligibleFacadeBands, ResultGeoJson.round(r.protectedGroundArea()), r.fullyProtected(), r.inputsSha256(), r.engineMillis(),
                 r.createdAt());
     }
 }

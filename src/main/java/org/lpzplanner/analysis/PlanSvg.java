@@ -83,7 +83,11 @@ public final class PlanSvg {
      */
     public static String render(String resultGeoJson, Labels labels, Map<String, String> accepted,
             List<KeepOut> keepOut) {
-        JsonNode root = JSON.readTree(resultGeoJson);
+        return render(JSON.readTree(resultGeoJson), labels, accepted, keepOut);
+    }
+
+    /** As {@link #render(String, Labels, Map, List)}, from a result already read ({@link ParsedResults}). */
+    public static String render(JsonNode root, Labels labels, Map<String, String> accepted, List<KeepOut> keepOut) {
         List<JsonNode> features = new ArrayList<>();
         root.path("features").forEach(features::add);
         Map<JsonNode, String> keys = ReviewItems.keys(features);

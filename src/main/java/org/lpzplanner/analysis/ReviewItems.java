@@ -68,7 +68,12 @@ public final class ReviewItems {
 
     /** The items of a result, numbered from 1. */
     public static List<Item> of(String resultGeoJson) {
-        List<JsonNode> features = features(resultGeoJson);
+        return of(JSON.readTree(resultGeoJson));
+    }
+
+    /** The items of a result read as a tree ({@link ParsedResults}), numbered from 1. */
+    static List<Item> of(JsonNode result) {
+        List<JsonNode> features = features(result);
         Map<JsonNode, String> keys = keys(features);
         List<Item> items = new ArrayList<>();
         for (JsonNode f : features) {
@@ -151,12 +156,20 @@ public final class ReviewItems {
      * negligible (IEC 62305-3:2010 5.2.3): drawn and listed, not items of the review.
      */
     public static int negligibleBands(String resultGeoJson) {
-        return (int) features(resultGeoJson).stream().filter(ReviewItems::isNegligibleBand).count();
+        return negligibleBands(JSON.readTree(resultGeoJson));
+    }
+
+    static int negligibleBands(JsonNode result) {
+        return (int) features(result).stream().filter(ReviewItems::isNegligibleBand).count();
     }
 
     static List<JsonNode> features(String resultGeoJson) {
+        return features(JSON.readTree(resultGeoJson));
+    }
+
+    private static List<JsonNode> features(JsonNode result) {
         List<JsonNode> features = new ArrayList<>();
-        JSON.readTree(resultGeoJson).path("features").forEach(features::add);
+        result.path("features").forEach(features::add);
         return features;
     }
 

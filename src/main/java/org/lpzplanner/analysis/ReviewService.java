@@ -30,10 +30,12 @@ public class ReviewService {
     private final Clock clock;
 
     private final AuditTrail audit;
+    private final ParsedResults results;
 
     public ReviewService(AnalysisService analyses, AcceptedItemRepository accepted, TransactionTemplate transactions,
-            Clock clock, AuditTrail audit) {
+            Clock clock, AuditTrail audit, ParsedResults results) {
         this.audit = audit;
+        this.results = results;
         this.analyses = analyses;
         this.accepted = accepted;
         this.transactions = transactions;
@@ -59,7 +61,7 @@ public class ReviewService {
 
     /** The review of a revision read with its result GeoJSON. */
     public Review review(AnalysisRevision revision) {
-        return new Review(revision, ReviewItems.of(revision.resultGeoJson()), accepted.reasons(revision.id()));
+        return new Review(revision, results.of(revision).items(), accepted.reasons(revision.id()));
     }
 
     /**

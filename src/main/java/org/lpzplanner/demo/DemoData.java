@@ -6,7 +6,8 @@ import java.util.Arrays;
 import java.util.Comparator;
 import org.lpzplanner.accounts.AccountService;
 import org.lpzplanner.accounts.CurrentAccount;
-import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.editing.Edit;
+import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.slf4j.Logger;
@@ -20,8 +21,8 @@ import org.springframework.stereotype.Component;
 
 /**
  * On a first start (no site stored) stores every demo site packaged under {@code demo/} on the
- * classpath and analyses each at protection level II, so that a new user sees worked examples at
- * once. They belong to the default team, the team of the first administrator. Off with {@code lpz.demo-data=false}. A demo file that fails is logged and skipped.
+ * classpath and analyses each at protection level II, as any upload ({@link EditPipeline}), so that
+ * a new user sees worked examples at once. They belong to the default team, the team of the first administrator. Off with {@code lpz.demo-data=false}. A demo file that fails is logged and skipped.
  */
 @Component
 @ConditionalOnProperty(name = "lpz.demo-data", havingValue = "true", matchIfMissing = true)
@@ -33,12 +34,12 @@ public class DemoData implements ApplicationRunner {
     static final String ACTOR = "demo data";
 
     private final SiteService sites;
-    private final AnalysisService analyses;
+    private final EditPipeline edits;
     private final AccountService accounts;
 
-    public DemoData(SiteService sites, AnalysisService analyses, AccountService accounts) {
+    public DemoData(SiteService sites, EditPipeline edits, AccountService accounts) {
         this.sites = sites;
-        this.analyses = analyses;
+        this.edits = edits;
         this.accounts = accounts;
     }
 
@@ -57,12 +58,14 @@ public class DemoData implements ApplicationRunner {
             }
             try (InputStream in = file.getInputStream()) {
                 byte[] content = in.readAllBytes();
-                StoredSite site = CurrentAccount.asSystem(ACTOR, team, () -> {
-                    StoredSite stored = sites.create(name, content, null, "II", null);
-                    analyses.run(stored.id(), null, null, null);
-                    return stored;
-                });
-                LOG.info("Stored demo site {} from {}", site.name(), name);
+                Edit<StoredSite> upload = CurrentAccount.asSystem(ACTOR, team,
+                        () -> edits.upload(name, content, null, "II", null));
+                if (upload.analysis().isPending()) {
+                    LOG.warn("Demo site {} from {} stored, not analysed yet: {}", upload.outcome().name(), name,
+                            upload.analysis().pendingReason());
+                } else {
+                    LOG.info("Stored demo site {} from {}", upload.outcome().name(), name);
+                }
             } catch (RuntimeException e) {
                 LOG.warn("Demo site {} skipped: {}", name, e.getMessage());
             }

@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.editing.Edit;
 import org.lpzplanner.engine.design.quantities.QuantityTable;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpHeaders;
@@ -23,6 +24,7 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 
 /**
  * JSON API of the design of a site (local metres throughout):
@@ -33,7 +35,9 @@ import tools.jackson.databind.JsonNode;
  * <li>{@code GET /api/sites/{id}/proposals/{job}}: state, stage, fraction and, when done, the parts
  *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version} writes the rods,
  *     masts and conductors into the site in one change; {@code POST …/undo} with the {@code version}
- *     accepting answered removes them again in one change.</li>
+ *     accepting answered removes them again in one change. Both analyse the site again and answer
+ *     its new {@code version}; {@code analysisPending} says why when the analysis could not run now
+ *     (the change is stored all the same).</li>
  * <li>{@code GET /api/sites/{id}/method-checks}: angle and mesh methods against the rolling sphere per structure.</li>
  * <li>{@code GET /api/sites/{id}/down-conductors}: per building (structures whose footprints overlap
  *     or touch, on the outline of the whole), {@code buildings}; {@code PUT …/down-conductors/{building}}
@@ -50,12 +54,24 @@ import tools.jackson.databind.JsonNode;
         + " down-conductors, separation distances (IEC 62305-3:2010 6.3) and the bill of quantities")
 public class DesignApiController {
 
-    private final DesignService design;
-    private final DownConductorService downConductors;
+    private static final JsonMapper JSON = JsonMapper.builder().build();
 
-    public DesignApiController(DesignService design, DownConductorService downConductors) {
-        this.design = design;
+    private final ProposalService proposals;
+    private final MethodCheckService methodChecks;
+    private final DownConductorService downConductors;
+    private final SeparationService separations;
+    private final MetalInstallationService installations;
+    private final QuantityService quantities;
+
+    public DesignApiController(ProposalService proposals, MethodCheckService methodChecks,
+            DownConductorService downConductors, SeparationService separations,
+            MetalInstallationService installations, QuantityService quantities) {
+        this.proposals = proposals;
+        this.methodChecks = methodChecks;
         this.downConductors = downConductors;
+        this.separations = separations;
+        this.installations = installations;
+        this.quantities = quantities;
     }
 
     @PostMapping(value = "/proposals", consumes = MediaType.APPLICATION_JSON_VALUE)
@@ -66,22 +82,22 @@ public class DesignApiController {
         boolean edge = flag(body, "edgeConductors");
         boolean ridge = flag(body, "ridgeConductors");
         List<Double> rodHeights = body.has("rodHeights") || !(edge || ridge) ? numbers(body, "rodHeights") : List.of();
-        DesignService.ProposeRequest request = new DesignService.ProposeRequest(rodHeights,
+        ProposeRequest request = new ProposeRequest(rodHeights,
                 body.has("mastHeights") ? numbers(body, "mastHeights") : List.of(), edge, ridge,
                 polygons(body.path("keepOut"), "keepOut"));
-        ProposalJobs.Job job = design.propose(id, request);
+        ProposalJobs.Job job = proposals.propose(id, request);
         return ResponseEntity.status(HttpStatus.ACCEPTED)
                 .location(URI.create("/api/sites/" + id + "/proposals/" + job.id())).body(view(job));
     }
 
     @GetMapping("/proposals/{jobId}")
     public Map<String, Object> proposal(@PathVariable long id, @PathVariable String jobId) {
-        return view(design.job(id, jobId));
+        return view(proposals.job(id, jobId));
     }
 
     @PostMapping("/proposals/{jobId}/cancel")
     public Map<String, Object> cancel(@PathVariable long id, @PathVariable String jobId) {
-        return view(design.cancel(id, jobId));
+        return view(proposals.cancel(id, jobId));
     }
 
     @PostMapping(value = "/proposals/{jobId}/accept", consumes = MediaType.APPLICATION_JSON_VALUE)
@@ -90,12 +106,13 @@ public class DesignApiController {
         if (!version.isIntegralNumber()) {
             throw new InvalidInputException("version", "version is required: the site's version as last read");
         }
-        DesignService.Accepted accepted = design.accept(id, jobId, version.longValue());
+        Edit<AcceptedProposal> accepted = proposals.accept(id, jobId, version.longValue());
         Map<String, Object> out = new LinkedHashMap<>();
-        out.put("rodIds", accepted.rodIds());
-        out.put("conductorIds", accepted.conductorIds());
+        out.put("rodIds", accepted.outcome().rodIds());
+        out.put("conductorIds", accepted.outcome().conductorIds());
         out.put("version", accepted.version());
         out.put("plan", "/sites/" + id);
+        out.put("analysisPending", accepted.analysis().pendingReason());
         return out;
     }
 
@@ -105,15 +122,17 @@ public class DesignApiController {
         if (!version.isIntegralNumber()) {
             throw new InvalidInputException("version", "version is required: the site's version the accept answered");
         }
+        Edit<Void> undone = proposals.undoAccept(id, jobId, version.longValue());
         Map<String, Object> out = new LinkedHashMap<>();
-        out.put("version", design.undoAccept(id, jobId, version.longValue()));
+        out.put("version", undone.version());
         out.put("plan", "/sites/" + id);
+        out.put("analysisPending", undone.analysis().pendingReason());
         return out;
     }
 
     @GetMapping("/method-checks")
     public Map<String, Object> methodChecks(@PathVariable long id) {
-        return withCautions("structures", design.methodChecks(id));
+        return withCautions("structures", methodChecks.methodChecks(id));
     }
 
     @GetMapping("/down-conductors")
@@ -139,19 +158,19 @@ public class DesignApiController {
 
     @GetMapping("/separation-distances")
     public Map<String, Object> separations(@PathVariable long id) {
-        Map<String, Object> out = withCautions("checks", design.separations(id));
+        Map<String, Object> out = withCautions("checks", separations.separations(id));
         out.put("edition", "IEC 62305-3:2010 6.3 (the 2024 edition revised this method)");
         return out;
     }
 
     @GetMapping("/metal-installations")
     public List<DesignRepository.Installation> installations(@PathVariable long id) {
-        return design.installations(id);
+        return installations.list(id);
     }
 
     @PostMapping(value = "/metal-installations", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ResponseEntity<DesignRepository.Installation> addInstallation(@PathVariable long id, @RequestBody JsonNode body) {
-        DesignRepository.Installation i = design.addInstallation(id, text(body, "name"), number(body, "x"),
+        DesignRepository.Installation i = installations.add(id, text(body, "name"), number(body, "x"),
                 number(body, "y"), number(body, "z"), text(body, "material"));
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/sites/" + id + "/metal-installations/" + i.id())).body(i);
@@ -159,14 +178,14 @@ public class DesignApiController {
 
     @DeleteMapping("/metal-installations/{installationId}")
     public ResponseEntity<Void> removeInstallation(@PathVariable long id, @PathVariable long installationId) {
-        design.removeInstallation(id, installationId);
+        installations.remove(id, installationId);
         return ResponseEntity.noContent().build();
     }
 
     @GetMapping("/quantities")
     public Map<String, Object> quantities(@PathVariable long id,
             @RequestParam(defaultValue = "1") double fixingsPerMetre) {
-        QuantityTable table = design.quantities(id, fixingsPerMetre);
+        QuantityTable table = quantities.quantities(id, fixingsPerMetre);
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("title", table.title());
         out.put("columns", table.columns());
@@ -178,7 +197,7 @@ public class DesignApiController {
     @GetMapping(value = "/quantities.csv", produces = "text/csv")
     public ResponseEntity<byte[]> quantitiesCsv(@PathVariable long id,
             @RequestParam(defaultValue = "1") double fixingsPerMetre) {
-        QuantityTable table = design.quantities(id, fixingsPerMetre);
+        QuantityTable table = quantities.quantities(id, fixingsPerMetre);
         return ResponseEntity.ok()
                 .header(HttpHeaders.CONTENT_DISPOSITION, "attachment; filename=\"site-" + id + "-quantities.csv\"")
                 .contentType(new MediaType("text", "csv", StandardCharsets.UTF_8))
@@ -199,8 +218,8 @@ public class DesignApiController {
             out.put("error", job.error());
         }
         if (job.result() != null) {
-            // the proposal's parts and figures as stored when it finished (ProposalResultJson)
-            job.result().properties().forEach(e -> out.put(e.getKey(), e.getValue()));
+            // the proposal's parts and figures as stored when it finished (StoredProposal)
+            JSON.valueToTree(job.result()).properties().forEach(e -> out.put(e.getKey(), e.getValue()));
             out.put("cautions", Cautions.lines());
         }
         return out;

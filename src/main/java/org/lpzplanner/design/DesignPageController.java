@@ -7,17 +7,16 @@ import java.util.Locale;
 import java.util.Map;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
-import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.keepout.KeepOutArea;
 import org.lpzplanner.keepout.KeepOutAreaService;
+import org.lpzplanner.plan.PlanPresenter;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
 import org.lpzplanner.system.SitePages;
-import org.springframework.context.MessageSource;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -38,20 +37,28 @@ public class DesignPageController {
     private final SiteService sites;
     private final AnalysisService analyses;
     private final ReviewService reviews;
-    private final DesignService design;
-    private final MessageSource messages;
+    private final MethodCheckService methodChecks;
+    private final SeparationService separations;
+    private final MetalInstallationService installations;
+    private final QuantityService quantities;
+    private final PlanPresenter plan;
     private final KeepOutAreaService keepOut;
     private final DownConductorService downConductors;
 
-    DesignPageController(SiteService sites, AnalysisService analyses, ReviewService reviews, DesignService design,
-            MessageSource messages, KeepOutAreaService keepOut, DownConductorService downConductors) {
+    DesignPageController(SiteService sites, AnalysisService analyses, ReviewService reviews,
+            MethodCheckService methodChecks, SeparationService separations, MetalInstallationService installations,
+            QuantityService quantities, PlanPresenter plan, KeepOutAreaService keepOut,
+            DownConductorService downConductors) {
         this.keepOut = keepOut;
         this.downConductors = downConductors;
         this.sites = sites;
         this.analyses = analyses;
         this.reviews = reviews;
-        this.design = design;
-        this.messages = messages;
+        this.methodChecks = methodChecks;
+        this.separations = separations;
+        this.installations = installations;
+        this.quantities = quantities;
+        this.plan = plan;
     }
 
     @GetMapping("/sites/{id}/design")
@@ -62,15 +69,14 @@ public class DesignPageController {
         model.addAttribute("site", site);
         model.addAttribute("method", ResultGeoJson.METHOD);
         model.addAttribute("level", site.sphere().level().name());
-        model.addAttribute("radius", DesignService.round(site.sphere().radius()));
+        model.addAttribute("radius", Centimetres.round(site.sphere().radius()));
         model.addAttribute("editable", sites.isGeoJson(site));
         model.addAttribute("cautions", Cautions.lines());
         List<KeepOutArea> areas = keepOut.areas(id);
         model.addAttribute("keepOutAreas", areas.stream().map(KeepOutRow::of).toList());
         if (latest != null) {
             ReviewService.Review review = reviews.review(latest);
-            model.addAttribute("svg", PlanSvg.render(latest.resultGeoJson(),
-                    (key, args) -> messages.getMessage(key, args, locale), review.accepted(), keepOut.forPlan(id)));
+            model.addAttribute("svg", plan.drawing(id, latest, review.accepted(), locale));
         }
         double rate;
         try {
@@ -80,7 +86,7 @@ public class DesignPageController {
         }
         rate = Math.max(0, Math.min(20, rate));
         model.addAttribute("fixingsPerMetre", rate);
-        model.addAttribute("checks", design.methodChecks(id));
+        model.addAttribute("checks", methodChecks.methodChecks(id));
         List<DownConductorService.DownConductors> downs = downConductors.list(id);
         model.addAttribute("downConductors", downs);
         Map<String, String> positionsText = new LinkedHashMap<>();
@@ -92,9 +98,9 @@ public class DesignPageController {
             positionsText.put(d.buildingId(), String.join("\n", lines));
         }
         model.addAttribute("positionsText", positionsText);
-        model.addAttribute("separations", design.separations(id));
-        model.addAttribute("installations", design.installations(id));
-        model.addAttribute("quantities", design.quantities(id, rate));
+        model.addAttribute("separations", separations.separations(id));
+        model.addAttribute("installations", installations.list(id));
+        model.addAttribute("quantities", quantities.quantities(id, rate));
         return "sites/design";
     }
 
@@ -133,7 +139,7 @@ public class DesignPageController {
             @RequestParam(defaultValue = "") String z, @RequestParam(defaultValue = "AIR") String material,
             RedirectAttributes redirect) {
         try {
-            design.addInstallation(id, name, number("x", x), number("y", y), number("z", z), material);
+            installations.add(id, name, number("x", x), number("y", y), number("z", z), material);
         } catch (InvalidInputException e) {
             redirect.addFlashAttribute("installationError", e.getMessage());
         }
@@ -142,7 +148,7 @@ public class DesignPageController {
 
     @PostMapping("/sites/{id}/design/installations/{installationId}/delete")
     public String removeInstallation(@PathVariable long id, @PathVariable long installationId) {
-        design.removeInstallation(id, installationId);
+        installations.remove(id, installationId);
         return "redirect:/sites/" + id + "/design#separation";
     }
 

@@ -49,11 +49,11 @@ public class ProposalJobs {
     /**
      * A proposal job as stored.
      *
-     * @param result   the proposal's parts and figures once done ({@link ProposalResultJson}), else null
+     * @param result   the proposal's parts and figures once done ({@link StoredProposal}), else null
      * @param accepted what accepting it added, and the site's version after that; null until accepted or after an undo
      */
     public record Job(String id, long siteId, long siteVersion, State state, String stage, double fraction,
-            String level, double radius, String error, JsonNode result, DesignService.Accepted accepted) {
+            String level, double radius, String error, StoredProposal result, AcceptedProposal accepted) {
     }
 
     private final JobStore store;
@@ -102,7 +102,7 @@ public class ProposalJobs {
     }
 
     /** Records what accepting the proposal added (null: it was taken back). */
-    void accepted(Job job, DesignService.Accepted accepted) {
+    void accepted(Job job, AcceptedProposal accepted) {
         store.setAccepted(job.id(), accepted == null ? null : JSON.writeValueAsString(accepted));
     }
 
@@ -124,7 +124,7 @@ public class ProposalJobs {
                     return instance.cancelRequested(id);
                 }
             });
-            store.finish(id, JobStore.DONE, null, JSON.writeValueAsString(ProposalResultJson.of(proposal)), null,
+            store.finish(id, JobStore.DONE, null, JSON.writeValueAsString(StoredProposal.of(proposal)), null,
                     clock.instant());
         } catch (ProposalCancelledException e) {
             store.finish(id, JobStore.CANCELLED, null, null, null, clock.instant());
@@ -145,22 +145,12 @@ public class ProposalJobs {
 
     private static Job job(StoredJob s) {
         JsonNode settings = s.settingsJson() == null ? JSON.createObjectNode() : JSON.readTree(s.settingsJson());
-        JsonNode result = s.outcomeJson() == null ? null : JSON.readTree(s.outcomeJson());
-        DesignService.Accepted accepted = null;
-        if (s.acceptedJson() != null) {
-            JsonNode a = JSON.readTree(s.acceptedJson());
-            accepted = new DesignService.Accepted(texts(a.path("rodIds")), texts(a.path("conductorIds")),
-                    a.path("version").asLong());
-        }
+        StoredProposal result = s.outcomeJson() == null ? null : JSON.readValue(s.outcomeJson(), StoredProposal.class);
+        AcceptedProposal accepted = s.acceptedJson() == null ? null
+                : JSON.readValue(s.acceptedJson(), AcceptedProposal.class);
         return new Job(s.id(), s.siteId(), s.siteVersion() == null ? -1 : s.siteVersion(),
                 State.valueOf(JobStore.QUEUED.equals(s.state()) ? JobStore.RUNNING : s.state()), s.stage(), s.fraction(),
                 settings.path("level").asString(), settings.path("radius").asDouble(), s.error(), result, accepted);
-    }
-
-    private static List<String> texts(JsonNode array) {
-        List<String> out = new ArrayList<>();
-        array.forEach(n -> out.add(n.asString()));
-        return out;
     }
 
     @PreDestroy

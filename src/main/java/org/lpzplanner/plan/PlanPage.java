@@ -8,7 +8,7 @@ import java.util.Map;
 import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
-import org.lpzplanner.analysis.PlanSvg;
+import org.lpzplanner.analysis.ParsedResults;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
@@ -16,14 +16,15 @@ import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.common.Formats;
+import org.lpzplanner.editing.Edit;
 import org.lpzplanner.engine.model.ProtectionLevel;
-import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.sections.SectionPage;
 import org.lpzplanner.sites.PlanContribution;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.springframework.context.MessageSource;
 import org.springframework.stereotype.Component;
+import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /**
  * Everything the plan page shows of a site: its settings, the structures read from its file, the
@@ -46,13 +47,15 @@ class PlanPage {
     private final SectionPage sectionPage;
     private final CommentService comments;
     private final AuditTrail audit;
-    private final KeepOutAreaService keepOut;
+    private final PlanPresenter presenter;
+    private final ParsedResults results;
     private final List<PlanContribution> contributions;
 
     PlanPage(SiteService sites, AnalysisService analyses, MessageSource messages, ReviewService reviews,
-            SectionPage sectionPage, CommentService comments, AuditTrail audit, KeepOutAreaService keepOut,
-            List<PlanContribution> contributions) {
-        this.keepOut = keepOut;
+            SectionPage sectionPage, CommentService comments, AuditTrail audit, PlanPresenter presenter,
+            ParsedResults results, List<PlanContribution> contributions) {
+        this.presenter = presenter;
+        this.results = results;
         this.contributions = List.copyOf(contributions);
         this.comments = comments;
         this.audit = audit;
@@ -61,6 +64,13 @@ class PlanPage {
         this.analyses = analyses;
         this.messages = messages;
         this.reviews = reviews;
+    }
+
+    /** After a change from a page form: the plan page the browser is sent to says why the analysis is pending. */
+    static void notePending(Edit<?> edit, RedirectAttributes redirect) {
+        if (edit.analysis().isPending()) {
+            redirect.addFlashAttribute("analysisPending", edit.analysis().pendingReason());
+        }
     }
 
     /** @throws SiteNotFoundException when no site has this id */
@@ -95,11 +105,11 @@ class PlanPage {
                 Formats.dateTime(e.at()), e.actor(),
                 messages.getMessage("history.action." + e.action(), null, e.action(), locale), e.detail())).toList());
         if (latest != null) {
-            model.put("analysedAt", Formats.dateTime(latest.createdAt()));
+            model.put("basis", presenter.basis(latest, locale));
             model.put("radius", Formats.oneDecimal(latest.sphereRadius()));
             ReviewService.Review review = reviews.review(latest);
             List<SummaryRow> summary = new ArrayList<>(summary(latest));
-            int negligible = ReviewItems.negligibleBands(latest.resultGeoJson());
+            int negligible = results.of(latest).negligibleBands();
             summary.add(5, new SummaryRow("summary.negligibleBands", "negligibleFacadeBands", String.valueOf(negligible)));
             model.put("negligibleBands", negligible);
             summary.add(new SummaryRow("summary.review", null, messages.getMessage("review.counts",
@@ -109,10 +119,14 @@ class PlanPage {
                     .map(i -> ReviewRow.of(i, review.accepted().get(i.key()))).toList());
             model.put("warnings", review.items().stream().filter(ReviewItems.Item::isModelWarning)
                     .map(i -> WarningRow.of(i, latest.sphereRadius(), review.accepted().get(i.key()))).toList());
-            model.put("statusText", PlanStatus.text(latest, messages, locale));
-            model.put("statusClass", PlanStatus.cssClass(latest));
-            model.put("svg", PlanSvg.render(latest.resultGeoJson(),
-                    (key, args) -> messages.getMessage(key, args, locale), review.accepted(), keepOut.forPlan(id)));
+            boolean current = latest.inputsSha256().equals(AnalysisService.sha256(site.sourceText()));
+            // a revision of an earlier file (the analysis after a change is pending) gives no verdict
+            model.put("analysisStale", !current);
+            model.put("statusText", current ? presenter.status(latest, locale)
+                    : PlanStatus.pendingText(messages.getMessage("plan.stale", new Object[] {latest.revision()}, locale),
+                            messages, locale));
+            model.put("statusClass", current ? presenter.statusClass(latest) : "exposed");
+            model.put("svg", presenter.drawing(id, latest, review.accepted(), locale));
         }
         return model;
     }

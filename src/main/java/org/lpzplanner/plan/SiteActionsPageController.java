@@ -1,7 +1,7 @@
 package org.lpzplanner.plan;
 
 import java.util.Locale;
-import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.editing.Edit;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -16,6 +16,7 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.servlet.ModelAndView;
+import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /**
  * Page forms that change a stored site: rename ({@code POST /sites/{id}/name}), the address and
@@ -23,7 +24,8 @@ import org.springframework.web.servlet.ModelAndView;
  * ({@code POST /sites/{id}/duplicate}), delete after confirmation ({@code GET /sites/{id}/delete}
  * asks, {@code POST /sites/{id}/delete} with {@code confirm=yes} deletes) and the correction of one
  * structure ({@code POST /sites/{id}/structures}), which stores a corrected site file and analyses
- * the site again. Forms that change a site carry the version they were shown with; when the site
+ * the site again ({@link StructureCorrections}; when the analysis cannot run now, the plan page says
+ * it is pending and why). Forms that change a site carry the version they were shown with; when the site
  * changed meanwhile the page is shown again with status 409, the current state and a note.
  */
 @Controller
@@ -31,12 +33,12 @@ import org.springframework.web.servlet.ModelAndView;
 public class SiteActionsPageController {
 
     private final SiteService sites;
-    private final AnalysisService analyses;
+    private final StructureCorrections corrections;
     private final PlanPage planPage;
 
-    public SiteActionsPageController(SiteService sites, AnalysisService analyses, PlanPage planPage) {
+    public SiteActionsPageController(SiteService sites, StructureCorrections corrections, PlanPage planPage) {
         this.sites = sites;
-        this.analyses = analyses;
+        this.corrections = corrections;
         this.planPage = planPage;
     }
 
@@ -120,11 +122,12 @@ public class SiteActionsPageController {
             @RequestParam(required = false) String height, @RequestParam(required = false) String roof,
             @RequestParam(required = false) String ridgeHeight, @RequestParam(required = false) String bearing,
             @RequestParam(required = false) String parapet, @RequestParam(required = false) Long version,
-            Locale locale) {
+            Locale locale, RedirectAttributes redirect) {
         StructureCorrection correction = new StructureCorrection(structure == null ? -1 : structure, height, roof,
                 ridgeHeight, bearing, parapet);
+        Edit<Void> edit;
         try {
-            sites.correctStructure(id, requireVersion(version), correction);
+            edit = corrections.correct(id, requireVersion(version), correction);
         } catch (InvalidInputException | SiteFormatException e) {
             ModelAndView page = plan(id, locale, HttpStatus.BAD_REQUEST);
             page.addObject("correctionError", e.getMessage());
@@ -136,7 +139,7 @@ public class SiteActionsPageController {
             page.addObject("correction", correction);
             return page;
         }
-        analyses.run(id, null, null, null);
+        PlanPage.notePending(edit, redirect);
         return new ModelAndView("redirect:/sites/" + id);
     }
 

@@ -13,6 +13,8 @@ import io.swagger.v3.oas.annotations.tags.Tag;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.AnalysisSummary;
+import org.lpzplanner.editing.Edit;
+import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.sites.SiteFileVersion;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -36,7 +38,8 @@ import tools.jackson.databind.JsonNode;
 
 /**
  * JSON API for sites: list ({@code GET /api/sites}), upload ({@code POST /api/sites}, multipart
- * {@code file} with optional {@code name}, {@code level}, {@code radius}), one site
+ * {@code file} with optional {@code name}, {@code level}, {@code radius}; stored, then analysed like
+ * an upload through the page), one site
  * ({@code GET /api/sites/{id}}), changes ({@code PATCH /api/sites/{id}}, a JSON object with the
  * site's {@code version} and any of {@code name}, {@code level}, {@code radius}; a null radius goes
  * back to the level's own; {@code address} and {@code designer}, printed on the report's cover,
@@ -53,24 +56,30 @@ public class SiteApiController {
 
     private final SiteService sites;
     private final AnalysisService analyses;
+    private final EditPipeline edits;
 
-    public SiteApiController(SiteService sites, AnalysisService analyses) {
+    public SiteApiController(SiteService sites, AnalysisService analyses, EditPipeline edits) {
         this.sites = sites;
         this.analyses = analyses;
+        this.edits = edits;
     }
 
     /**
      * A site as the API shows it; {@code latest} is null until the site is analysed, and
-     * {@code lastChange} is when the site or its analyses last changed.
+     * {@code lastChange} is when the site or its analyses last changed. {@code analysisPending} is
+     * the reason the analysis after an upload could not run yet (the site is stored), else null.
      */
     public record SiteView(long id, String name, String level, Double customRadius, String fileName,
             Instant createdAt, Instant lastChange, long version, AnalysisSummary latest, String address,
-            String designer) {
+            String designer, String analysisPending) {
 
         static SiteView of(StoredSite s, AnalysisRevision latest) {
+            return of(s, latest == null ? null : AnalysisSummary.of(latest), null);
+        }
+
+        static SiteView of(StoredSite s, AnalysisSummary latest, String analysisPending) {
             return new SiteView(s.id(), s.name(), s.level().name(), s.customRadius(), s.sourceName(), s.createdAt(),
-                    s.updatedAt(), s.version(), latest == null ? null : AnalysisSummary.of(latest), s.address(),
-                    s.designer());
+                    s.updatedAt(), s.version(), latest, s.address(), s.designer(), analysisPending);
         }
     }
 
@@ -88,16 +97,19 @@ public class SiteApiController {
     }
 
     @Operation(summary = "Upload a site file",
-            description = "Multipart: file (GeoJSON or WKT, UTF-8), optional name, level (I to IV, default II) and radius (metres). The file is checked and kept byte for byte; nothing is stored when it is refused.")
-    @ApiResponse(responseCode = "201", description = "Stored; Location names the new site")
+            description = "Multipart: file (GeoJSON or WKT, UTF-8), optional name, level (I to IV, default II) and radius (metres). The file is checked and kept byte for byte, then the site is analysed; nothing is stored when it is refused. When the analysis cannot run now the site stays stored and analysisPending says why.")
+    @ApiResponse(responseCode = "201", description = "Stored and analysed (latest), or stored with the analysis pending (analysisPending); Location names the new site")
     @ApiResponse(responseCode = "400", description = "The file is not a valid site (file, feature, line and field named) or a setting cannot be used", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "413", description = "The file is too large", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     public ResponseEntity<SiteView> upload(@RequestParam("file") MultipartFile file,
             @RequestParam(required = false) String name, @RequestParam(required = false) String level,
             @RequestParam(required = false) String radius) throws java.io.IOException {
-        StoredSite site = sites.create(file.getOriginalFilename(), file.getBytes(), name, level, radius);
-        return ResponseEntity.created(URI.create("/api/sites/" + site.id())).body(SiteView.of(site, null));
+        Edit<StoredSite> upload = edits.upload(file.getOriginalFilename(), file.getBytes(), name, level, radius);
+        // read again: the analysis marked the site changed when it stored its revision
+        StoredSite site = sites.get(upload.siteId());
+        return ResponseEntity.created(URI.create("/api/sites/" + site.id()))
+                .body(SiteView.of(site, upload.analysis().summary(), upload.analysis().pendingReason()));
     }
 
     @Operation(summary = "One site")

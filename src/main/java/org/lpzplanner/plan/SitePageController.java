@@ -8,6 +8,8 @@ import java.util.Map;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.common.Formats;
+import org.lpzplanner.editing.Edit;
+import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.sites.SiteService;
@@ -24,11 +26,13 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.multipart.MultipartFile;
 import org.springframework.web.servlet.ModelAndView;
+import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /**
  * The server-rendered pages: the site list with the upload form ({@code /}) and the site plan
- * ({@code /sites/{id}}). Uploading a site stores it and analyses it at once; a bad file is
- * reported on the list page and nothing is stored.
+ * ({@code /sites/{id}}). Uploading a site stores it and analyses it at once ({@link EditPipeline}; when
+ * the analysis cannot run now, the plan page says it is pending and why); a bad file is reported on
+ * the list page and nothing is stored.
  */
 @Controller
 @SitePages
@@ -37,13 +41,15 @@ public class SitePageController {
 
     private final SiteService sites;
     private final AnalysisService analyses;
+    private final EditPipeline edits;
     private final MessageSource messages;
     private final PlanPage planPage;
 
-    public SitePageController(SiteService sites, AnalysisService analyses, MessageSource messages,
-            PlanPage planPage) {
+    public SitePageController(SiteService sites, AnalysisService analyses, EditPipeline edits,
+            MessageSource messages, PlanPage planPage) {
         this.sites = sites;
         this.analyses = analyses;
+        this.edits = edits;
         this.messages = messages;
         this.planPage = planPage;
     }
@@ -64,13 +70,13 @@ public class SitePageController {
     @PostMapping("/sites")
     public ModelAndView upload(@RequestParam(value = "file", required = false) MultipartFile file,
             @RequestParam(required = false) String name, @RequestParam(required = false) String level,
-            Locale locale) throws IOException {
+            Locale locale, RedirectAttributes redirect) throws IOException {
         try {
             String fileName = file == null ? null : file.getOriginalFilename();
             byte[] bytes = file == null ? new byte[0] : file.getBytes();
-            StoredSite site = sites.create(fileName, bytes, name, level, null);
-            analyses.run(site.id(), null, null, null);
-            return new ModelAndView("redirect:/sites/" + site.id());
+            Edit<StoredSite> upload = edits.upload(fileName, bytes, name, level, null);
+            PlanPage.notePending(upload, redirect);
+            return new ModelAndView("redirect:/sites/" + upload.siteId());
         } catch (SiteFormatException | InvalidInputException e) {
             ModelAndView page = new ModelAndView("sites/list", HttpStatus.BAD_REQUEST);
             page.addObject("rows", rows(locale));

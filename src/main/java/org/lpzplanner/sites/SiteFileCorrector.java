@@ -36,19 +36,6 @@ final class SiteFileCorrector {
     private SiteFileCorrector() {
     }
 
-    /** Whether the file is read as GeoJSON (else WKT), by the same rule as {@link SiteFiles}. */
-    static boolean isGeoJson(String text, String sourceName) {
-        String lower = sourceName.toLowerCase(Locale.ROOT);
-        if (lower.endsWith(".json") || lower.endsWith(".geojson")) {
-            return true;
-        }
-        if (lower.endsWith(".wkt") || lower.endsWith(".txt")) {
-            return false;
-        }
-        String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
-        return body.stripLeading().startsWith("{");
-    }
-
     /**
      * The file text with the correction applied.
      *
@@ -59,7 +46,7 @@ final class SiteFileCorrector {
         if (correction.isEmpty()) {
             throw new InvalidInputException("height", "enter at least one value to correct");
         }
-        return isGeoJson(text, sourceName) ? correctGeoJson(text, correction) : correctWkt(text, correction);
+        return SiteFiles.isGeoJson(text, sourceName) ? correctGeoJson(text, correction) : correctWkt(text, correction);
     }
 
     private static String correctGeoJson(String text, StructureCorrection c) {

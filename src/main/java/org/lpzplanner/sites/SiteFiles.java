@@ -15,6 +15,19 @@ public final class SiteFiles {
     private SiteFiles() {
     }
 
+    /** Whether the file is read as GeoJSON (else WKT), by the rule {@link #read} follows. */
+    public static boolean isGeoJson(String text, String sourceName) {
+        String lower = sourceName.toLowerCase(Locale.ROOT);
+        if (lower.endsWith(".json") || lower.endsWith(".geojson")) {
+            return true;
+        }
+        if (lower.endsWith(".wkt") || lower.endsWith(".txt")) {
+            return false;
+        }
+        String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
+        return body.stripLeading().startsWith("{");
+    }
+
     /**
      * Reads a site from its text.
      *

@@ -37,12 +37,15 @@ public class SiteService {
     private final AuditTrail audit;
     private final Clock clock;
     private final ApplicationEventPublisher events;
+    private final ParsedSites parsed;
 
-    public SiteService(SiteRepository sites, AuditTrail audit, Clock clock, ApplicationEventPublisher events) {
+    public SiteService(SiteRepository sites, AuditTrail audit, Clock clock, ApplicationEventPublisher events,
+            ParsedSites parsed) {
         this.sites = sites;
         this.audit = audit;
         this.clock = clock;
         this.events = events;
+        this.parsed = parsed;
     }
 
     /**
@@ -71,9 +74,18 @@ public class SiteService {
         checkName(siteName);
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         StoredSite site = sites.insert(CurrentAccount.teamId(), siteName, level, radius, sourceName, text, now);
-        audit.record(site.id(), "upload", "uploaded " + sourceName + " as \"" + siteName + "\", level "
-                + level.name() + (radius == null ? "" : ", radius " + radius + " m"));
+        parsed.keepAfterCommit(site.id(), site.version(), text, document);
+        audit.record(site.id(), UPLOAD, uploadDetail(site));
         return site;
+    }
+
+    /** The audit trail's action for an upload. */
+    public static final String UPLOAD = "upload";
+
+    /** What the audit trail says of an upload, e.g. {@code uploaded yard.wkt as "Yard", level II}. */
+    public static String uploadDetail(StoredSite site) {
+        return "uploaded " + site.sourceName() + " as \"" + site.name() + "\", level " + site.level().name()
+                + (site.customRadius() == null ? "" : ", radius " + site.customRadius() + " m");
     }
 
     /** The team's stored sites, most recently changed first. */
@@ -95,6 +107,7 @@ public class SiteService {
         if (!sites.delete(id)) {
             throw new SiteNotFoundException(id);
         }
+        parsed.forget(id);
         audit.record(id, "delete", "deleted \"" + site.name() + "\"");
     }
 
@@ -110,6 +123,7 @@ public class SiteService {
         if (!sites.delete(id, expectedVersion)) {
             throw new SiteNotFoundException(id);
         }
+        parsed.forget(id);
         audit.record(id, "delete", "deleted \"" + site.name() + "\"");
     }
 
@@ -229,32 +243,40 @@ public class SiteService {
     }
 
     /**
-     * Corrects one structure by writing a corrected site file in the same format, read back through
-     * the engine's reader; the file it replaces is kept as an earlier file of the site.
+     * Replaces the site's file with {@code text}, provided the site is still at the version
+     * {@code site} was read at, and keeps the file it replaces as an earlier file of the site. The
+     * caller has read {@code text} back as {@code document} (checked like an upload) and records the
+     * change in the audit trail; the document serves later reads of the new version.
      *
-     * @throws SiteNotFoundException when no site has this id
-     * @throws InvalidInputException when a typed value cannot be used (nothing changes)
-     * @throws SiteFormatException   when the corrected file is not a valid site, naming the field
-     *                               (nothing changes)
-     * @throws org.springframework.dao.OptimisticLockingFailureException when the site is no longer
-     *         at {@code expectedVersion} (nothing changes)
+     * @return the site as now stored, and the earlier file kept
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed meanwhile
+     *         (nothing changes)
      */
     @Transactional
-    public StoredSite correctStructure(long id, long expectedVersion, StructureCorrection correction) {
-        StoredSite site = get(id);
-        int count = document(site).site().structures().size();
-        if (correction.index() < 0 || correction.index() >= count) {
-            throw new InvalidInputException("structure", "structure must be a number from 1 to " + count
-                    + ", got " + (correction.index() + 1));
-        }
-        String corrected = SiteFileCorrector.correct(site.sourceText(), site.sourceName(), correction);
-        SiteFiles.read(corrected, site.sourceName());
+    public ReplacedFile replaceFile(StoredSite site, String text, SiteDocument document) {
         Instant now = now();
-        sites.replaceFile(id, expectedVersion, corrected, now);
-        SiteFileVersion kept = sites.insertFileVersion(id, site.sourceName(), site.sourceText(), now);
-        audit.record(id, "correction", "structure " + (correction.index() + 1) + ": " + correction.describe()
-                + " (earlier file kept as number " + kept.number() + ")");
-        return get(id);
+        sites.replaceFile(site.id(), site.version(), text, now);
+        SiteFileVersion kept = sites.insertFileVersion(site.id(), site.sourceName(), site.sourceText(), now);
+        StoredSite changed = site.withFile(text, now);
+        parsed.keepAfterCommit(changed.id(), changed.version(), text, document);
+        return new ReplacedFile(changed, kept);
+    }
+
+    /** A site after its file was replaced, and the file it replaced, kept as an earlier file. */
+    public record ReplacedFile(StoredSite site, SiteFileVersion kept) {
+    }
+
+    /**
+     * Marks the site as changed by an analysis of its file as stored (its file stays as it is),
+     * provided the site is still at the version {@code site} was read at.
+     *
+     * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed or was
+     *         deleted meanwhile
+     */
+    @Transactional
+    public void markAnalysed(StoredSite site, Instant now) {
+        sites.touch(site.id(), site.version(), now);
+        parsed.carryAfterCommit(site.id(), site.version(), site.version() + 1, site.sourceText());
     }
 
     /** The structures of the stored site file, in file order. */
@@ -264,7 +286,7 @@ public class SiteService {
 
     /** Whether the site's file is GeoJSON (all fields can be corrected) rather than WKT (heights only). */
     public boolean isGeoJson(StoredSite site) {
-        return SiteFileCorrector.isGeoJson(site.sourceText(), site.sourceName());
+        return SiteFiles.isGeoJson(site.sourceText(), site.sourceName());
     }
 
     /** The files corrections replaced, oldest first. @throws SiteNotFoundException for an unknown site */
@@ -298,9 +320,12 @@ public class SiteService {
         return sites.count();
     }
 
-    /** The stored site read back into the engine's model. */
+    /**
+     * The stored site read back into the engine's model; read once per version of the site and then
+     * kept for a while ({@link ParsedSites}). The document is shared: read it, never change it.
+     */
     public SiteDocument document(StoredSite site) {
-        return SiteFiles.read(site.sourceText(), site.sourceName());
+        return parsed.document(site);
     }
 
     /** The file's own name without any folder part; "site.geojson" when there is none. */

@@ -28,6 +28,15 @@ public record StoredSite(long id, String name, ProtectionLevel level, Double cus
         designer = designer == null ? "" : designer;
     }
 
+    /**
+     * The site as {@link SiteRepository#replaceFile} stores it: the new file, changed at
+     * {@code at}, one version on.
+     */
+    StoredSite withFile(String text, Instant at) {
+        return new StoredSite(id, name, level, customRadius, sourceName, text, createdAt, at, version + 1, address,
+                designer);
+    }
+
     /** The sphere the site is assessed with by default. */
     public SphereSpec sphere() {
         return customRadius == null ? SphereSpec.of(level) : new SphereSpec(level, customRadius);

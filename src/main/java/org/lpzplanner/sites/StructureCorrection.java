@@ -23,8 +23,24 @@ public record StructureCorrection(int index, String height, String roof, String 
         return given(roof) || given(ridgeHeight) || given(bearing) || given(parapet);
     }
 
+    /**
+     * The site file with this correction applied, in the file's own format; not yet read back.
+     *
+     * @param document the site file as read, for the number of structures
+     * @throws org.lpzplanner.system.InvalidInputException when the structure does not exist or a
+     *         value cannot be used, naming the field
+     */
+    public String applyTo(StoredSite site, org.lpzplanner.engine.io.SiteDocument document) {
+        int count = document.site().structures().size();
+        if (index < 0 || index >= count) {
+            throw new org.lpzplanner.system.InvalidInputException("structure", "structure must be a number from 1 to "
+                    + count + ", got " + (index + 1));
+        }
+        return SiteFileCorrector.correct(site.sourceText(), site.sourceName(), this);
+    }
+
     /** The values given, in words, for the audit trail, e.g. {@code height 12.5, roof gable}. */
-    String describe() {
+    public String describe() {
         java.util.List<String> parts = new java.util.ArrayList<>();
         if (given(height)) {
             parts.add("height " + height.strip());

@@ -15,7 +15,8 @@ import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisJob;
 import org.lpzplanner.analysis.AnalysisJobs;
 import org.lpzplanner.analysis.AnalysisService;
-import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.ProposalService;
+import org.lpzplanner.design.ProposeRequest;
 import org.lpzplanner.design.ProposalJobs;
 import org.lpzplanner.jobs.JobStore;
 import org.lpzplanner.sites.SiteService;
@@ -46,7 +47,7 @@ class TeamIsolationTest {
     AccountService accounts;
 
     @Autowired
-    DesignService design;
+    ProposalService design;
 
     @Autowired
     AnalysisJobs analysisJobs;
@@ -107,7 +108,7 @@ class TeamIsolationTest {
                 .orElseThrow().id();
         long id = foreignId;
         ProposalJobs.Job proposal = CurrentAccount.asSystem("test", otherTeam,
-                () -> design.propose(id, new DesignService.ProposeRequest(List.of(1.0), List.of(), List.of())));
+                () -> design.propose(id, new ProposeRequest(List.of(1.0), List.of(), List.of())));
         AnalysisJob.Snapshot analysis = CurrentAccount.asSystem("test", otherTeam,
                 () -> analysisJobs.submit(id, null, null, "2"));
         RequestBuilder[] requests = {

@@ -40,8 +40,8 @@ class AnalysisJobsTest {
         volatile int runs;
 
         SlowAnalyses() {
-            super(null, null, null, null, Clock.systemUTC(), new AnalysisStateCache(0, 0), null, null,
-                    new AnalysisCapacity(1, 0, 5));
+            super(null, null, null, Clock.systemUTC(), new AnalysisStateCache(0, 0), null, null,
+                    new AnalysisCapacity(1, 0, 5), new ParsedResults(0));
         }
 
         @Override

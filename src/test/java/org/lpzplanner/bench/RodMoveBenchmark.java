@@ -9,8 +9,8 @@ import org.lpzplanner.LpzPlannerApplication;
 import org.lpzplanner.accounts.AccountService;
 import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.airtermination.AirTerminationApiController;
-import org.lpzplanner.airtermination.AirTerminationService;
-import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.airtermination.PartsView;
+import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.plan.SitePageController;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.boot.WebApplicationType;
@@ -60,9 +60,8 @@ public final class RodMoveBenchmark {
         } catch (java.io.IOException e) {
             throw new java.io.UncheckedIOException(e);
         }
-        long id = sites.create("brookfield-campus.geojson", campus, null, "II", null).id();
-        app.getBean(AnalysisService.class).run(id, null, null, null);
-        AirTerminationService.RodView rod = app.getBean(AirTerminationService.class).parts(id).rods().get(0);
+        long id = app.getBean(EditPipeline.class).upload("brookfield-campus.geojson", campus, null, "II", null).siteId();
+        PartsView.RodView rod = app.getBean(PartsView.class).parts(id).rods().get(0);
         List<Long> moves = new ArrayList<>();
         List<Long> views = new ArrayList<>();
         for (int k = 0; k < WARM_UPS + RUNS; k++) {

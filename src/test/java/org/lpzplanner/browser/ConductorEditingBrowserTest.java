@@ -8,7 +8,8 @@ import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Coordinate;
-import org.lpzplanner.airtermination.AirTerminationService;
+import org.lpzplanner.airtermination.ConductorEdits;
+import org.lpzplanner.airtermination.ConductorInput;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.engine.model.Conductor;
 import org.lpzplanner.sites.SiteService;
@@ -35,7 +36,7 @@ class ConductorEditingBrowserTest extends BrowserTestBase {
     AnalysisService analyses;
 
     @Autowired
-    AirTerminationService parts;
+    ConductorEdits conductors;
 
     private List<Coordinate> path(long id) {
         return sites.document(sites.get(id)).site().conductors().get(0).path();
@@ -68,9 +69,8 @@ class ConductorEditingBrowserTest extends BrowserTestBase {
     void draggingAConductorPointChangesTheExposureAndUndoPutsItBack() throws Exception {
         StoredSite site = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Reshaped shed", "II", null);
-        parts.addConductor(site.id(), sites.get(site.id()).version(), new AirTerminationService.ConductorInput(null,
+        conductors.add(site.id(), sites.get(site.id()).version(), new ConductorInput(null,
                 "Middle line", List.of(new double[] {20, 20}, new double[] {60, 20}), "1"));
-        analyses.run(site.id(), null, null, null);
         browser.get("http://localhost:" + port + "/sites/" + site.id());
         waitUpTo(10).until(b -> b.findElement(By.id("plan-editor")).isDisplayed());
         browser.executeScript("window.pageMark = 'same page';");

@@ -8,7 +8,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisService;
-import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.MetalInstallationService;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -45,13 +45,13 @@ class DesignConductorProposalBrowserTest extends BrowserTestBase {
     AnalysisService analyses;
 
     @Autowired
-    DesignService design;
+    MetalInstallationService installations;
 
     @Test
     void proposeWithConductorsAcceptAndSeeTheSeparationRoutes() throws Exception {
         StoredSite site = sites.create("hall.geojson", HALL.getBytes(StandardCharsets.UTF_8), "Test hall", "II", null);
         analyses.run(site.id(), null, null, null);
-        design.addInstallation(site.id(), "Vent pipe", 41.0, 6.0, 8.5, "AIR");
+        installations.add(site.id(), "Vent pipe", 41.0, 6.0, 8.5, "AIR");
 
         browser.get("http://localhost:" + port + "/sites/" + site.id() + "/design");
         new WebDriverWait(browser, Duration.ofSeconds(30)).until(b -> b.findElement(By.id("propose-form")).isDisplayed());

@@ -59,7 +59,7 @@ class ProposalAcceptTest {
     SiteService sites;
 
     @Autowired
-    DesignService design;
+    ProposalService design;
 
     @Autowired
     AuditTrail audit;

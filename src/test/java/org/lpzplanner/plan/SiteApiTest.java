@@ -57,7 +57,9 @@ class SiteApiTest {
                 .andExpect(jsonPath("$.name").value("Quay shed"))
                 .andExpect(jsonPath("$.level").value("III"))
                 .andExpect(jsonPath("$.fileName").value("harbour-warehouse.geojson"))
-                .andExpect(jsonPath("$.latest").doesNotExist());
+                // analysed at once, like an upload through the page
+                .andExpect(jsonPath("$.latest.revision").value(1))
+                .andExpect(jsonPath("$.latest.level").value("III"));
         mvc.perform(get("/api/sites")).andExpect(status().isOk())
                 .andExpect(jsonPath("$[?(@.id == " + id + ")].name").value("Quay shed"));
     }
@@ -87,13 +89,14 @@ class SiteApiTest {
     void analysisRunStoresARevisionThatLatestReturnsWithCautions() throws Exception {
         long id = upload(SampleFiles.sample("harbour-warehouse.geojson"));
 
+        // revision 1 is the upload's own analysis
         mvc.perform(post("/api/sites/" + id + "/analyses").param("level", "II"))
                 .andExpect(status().isCreated())
-                .andExpect(jsonPath("$.summary.revision").value(1))
+                .andExpect(jsonPath("$.summary.revision").value(2))
                 .andExpect(jsonPath("$.summary.level").value("II"))
                 .andExpect(jsonPath("$.summary.radius").value(30.0));
         MvcResult latest = mvc.perform(get("/api/sites/" + id + "/analyses/latest")).andExpect(status().isOk())
-                .andExpect(jsonPath("$.summary.revision").value(1))
+                .andExpect(jsonPath("$.summary.revision").value(2))
                 .andExpect(jsonPath("$.summary.method").value("rolling sphere method"))
                 .andExpect(jsonPath("$.result.type").value("FeatureCollection"))
                 .andExpect(jsonPath("$.cautions.length()").value(5))
@@ -101,7 +104,7 @@ class SiteApiTest {
         JsonNode body = JSON.readTree(latest.getResponse().getContentAsString());
         assertThat(body.path("summary").path("exposedRoofArea").asDouble()).isPositive();
         assertThat(body.path("summary").path("inputsSha256").asString()).hasSize(64);
-        mvc.perform(get("/api/sites/" + id)).andExpect(jsonPath("$.latest.revision").value(1));
+        mvc.perform(get("/api/sites/" + id)).andExpect(jsonPath("$.latest.revision").value(2));
     }
 
     @Test
@@ -111,7 +114,7 @@ class SiteApiTest {
 
         mvc.perform(post("/api/sites/" + id + "/analyses").param("level", "IV").param("radius", "46"))
                 .andExpect(status().isCreated())
-                .andExpect(jsonPath("$.summary.revision").value(2))
+                .andExpect(jsonPath("$.summary.revision").value(3))
                 .andExpect(jsonPath("$.summary.radius").value(46.0));
     }
 
@@ -199,6 +202,8 @@ class SiteApiTest {
                 .andExpect(jsonPath("$.field").value("resolution"))
                 .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("choose a resolution")))
                 .andExpect(jsonPath("$.suggestedResolution").isNumber());
-        mvc.perform(get("/api/sites/" + id + "/analyses/latest")).andExpect(status().isNotFound());
+        // nothing stored: the latest revision is still the upload's own, at the resolution the engine chose
+        mvc.perform(get("/api/sites/" + id + "/analyses/latest")).andExpect(status().isOk())
+                .andExpect(jsonPath("$.summary.revision").value(1));
     }
 }

@@ -12,6 +12,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.analysis.AnalysisService;
+import org.lpzplanner.plan.StructureCorrections;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StructureCorrection;
 import org.springframework.jdbc.core.simple.JdbcClient;
@@ -34,6 +35,9 @@ class ReportApiTest {
 
     @Autowired
     AnalysisService analyses;
+
+    @Autowired
+    StructureCorrections corrections;
 
     @Autowired
     JdbcClient jdbc;
@@ -70,8 +74,7 @@ class ReportApiTest {
     void aRevisionKeepsItsFileWhenTheSiteFileIsCorrectedLater() throws Exception {
         long id = analysedWarehouse("Corrected later");
         String before = text(id, 1);
-        sites.correctStructure(id, sites.get(id).version(), new StructureCorrection(0, "21", null, null, null, null));
-        analyses.run(id, null, null, null);
+        corrections.correct(id, sites.get(id).version(), new StructureCorrection(0, "21", null, null, null, null));
         assertThat(text(id, 1)).isEqualTo(before);
         assertThat(text(id, 2)).isNotEqualTo(before).contains("21.00");
     }
@@ -84,7 +87,7 @@ class ReportApiTest {
         jdbc.sql("UPDATE analysis_revisions SET site_name = NULL, source_name = NULL, source_text = NULL,"
                 + " tolerance = NULL WHERE site_id = ?").param(id).update();
         assertThat(text(id, 1)).isEqualTo(before);
-        sites.correctStructure(id, sites.get(id).version(), new StructureCorrection(0, "21", null, null, null, null));
+        corrections.correct(id, sites.get(id).version(), new StructureCorrection(0, "21", null, null, null, null));
         assertThat(text(id, 1)).isEqualTo(before); // found among the earlier files
         jdbc.sql("DELETE FROM site_file_versions WHERE site_id = ?").param(id).update();
         mvc.perform(get("/api/sites/" + id + "/revisions/1/report")).andExpect(status().isConflict())

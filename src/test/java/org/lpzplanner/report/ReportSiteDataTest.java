@@ -17,10 +17,12 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.rendering.PDFRenderer;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.SignedIn;
-import org.lpzplanner.airtermination.AirTerminationService;
+import org.lpzplanner.airtermination.RodEdits;
+import org.lpzplanner.airtermination.RodInput;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.common.ReportSection;
-import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.MetalInstallationService;
+import org.lpzplanner.design.QuantityService;
 import org.lpzplanner.design.DownConductorService;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.risk.RiskService;
@@ -49,9 +51,11 @@ class ReportSiteDataTest {
     @Autowired
     AnalysisService analyses;
     @Autowired
-    AirTerminationService parts;
+    RodEdits rods;
     @Autowired
-    DesignService design;
+    MetalInstallationService installations;
+    @Autowired
+    QuantityService quantityService;
     @Autowired
     DownConductorService downConductors;
     @Autowired
@@ -67,8 +71,7 @@ class ReportSiteDataTest {
     private long designedWarehouse() throws Exception {
         long id = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Cold store", "III", null).id();
-        parts.addRod(id, sites.get(id).version(), new AirTerminationService.RodInput(null, "Corner rod", 3.0, 4.0, "2.5"));
-        analyses.run(id, null, null, null);
+        rods.add(id, sites.get(id).version(), new RodInput(null, "Corner rod", 3.0, 4.0, "2.5"));
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
                         .content("{\"flashDensity\": \"4\", \"location\": \"isolated\", \"lineCount\": 1,"
                                 + " \"fireRisk\": \"ORDINARY\", \"specialHazard\": \"NONE\","
@@ -77,7 +80,7 @@ class ReportSiteDataTest {
         String building = downConductors.list(id).get(0).buildingId();
         downConductors.save(id, building, List.of(new double[] {0, 0}, new double[] {80, 0},
                 new double[] {80, 40}, new double[] {0, 40}));
-        design.addInstallation(id, "Vent pipe", 5.0, 6.0, 12.0, "CONCRETE_OR_BRICK");
+        installations.add(id, "Vent pipe", 5.0, 6.0, 12.0, "CONCRETE_OR_BRICK");
         return id;
     }
 
@@ -107,7 +110,7 @@ class ReportSiteDataTest {
         assertThat(text).containsPattern("from the site's data as stored for the site on \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d UTC"
                 + " when this report was printed");
 
-        ReportSection quantities = design.quantitiesSection(id, 1.0);
+        ReportSection quantities = quantityService.quantitiesSection(id, 1.0);
         assertThat(text).contains("Bill of quantities");
         for (List<String> row : quantities.rows()) {
             assertThat(text).contains(row.get(0) + " " + row.get(1) + " " + row.get(2));

@@ -19,11 +19,12 @@ import java.util.stream.LongStream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.lpzplanner.accounts.SignedIn;
-import org.lpzplanner.airtermination.AirTerminationService;
+import org.lpzplanner.airtermination.RodEdits;
+import org.lpzplanner.airtermination.RodInput;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.comments.CommentService;
-import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.MetalInstallationService;
 import org.lpzplanner.engine.io.BadSiteFiles;
 import org.lpzplanner.sections.SiteCutService;
 import org.lpzplanner.sites.SiteService;
@@ -82,11 +83,11 @@ class ImportFuzzProperties {
     @Autowired
     AnalysisService analyses;
     @Autowired
-    AirTerminationService parts;
+    RodEdits rods;
     @Autowired
     ReviewService reviews;
     @Autowired
-    DesignService design;
+    MetalInstallationService installations;
     @Autowired
     org.lpzplanner.design.DownConductorService downConductors;
     @Autowired
@@ -109,14 +110,13 @@ class ImportFuzzProperties {
         long id = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Fuzz shed", "III", null).id();
         analyses.run(id, null, null, "2");
-        parts.addRod(id, sites.get(id).version(), new AirTerminationService.RodInput(null, "North rod", 3.0, 4.0, "2.5"));
-        analyses.run(id, null, null, "2");
+        rods.add(id, sites.get(id).version(), new RodInput(null, "North rod", 3.0, 4.0, "2.5"));
         reviews.accept(id, reviews.latest(id).orElseThrow().items().get(0).key(), "covered by the steel gutter");
         mvc.perform(put("/api/sites/" + id + "/risk").contentType(MediaType.APPLICATION_JSON)
                 .content("{\"flashDensity\": \"4\", \"lineCount\": 2}")).andExpect(status().isOk());
         org.lpzplanner.design.DownConductorService.DownConductors planned = downConductors.list(id).get(0);
         downConductors.save(id, planned.buildingId(), planned.positions());
-        design.addInstallation(id, "Vent pipe", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
+        installations.add(id, "Vent pipe", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
         cuts.save(id, "Quay section", new String[] {"-10", "20", "90.25", "20"});
         comments.comment(id, "Check the gutter bonding");
         comments.markReviewed(id);

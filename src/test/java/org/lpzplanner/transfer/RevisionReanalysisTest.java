@@ -18,7 +18,8 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.hamcrest.Matchers;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.SignedIn;
-import org.lpzplanner.airtermination.AirTerminationService;
+import org.lpzplanner.airtermination.RodEdits;
+import org.lpzplanner.airtermination.RodInput;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
@@ -59,7 +60,7 @@ class RevisionReanalysisTest {
     @Autowired
     AnalysisService analyses;
     @Autowired
-    AirTerminationService parts;
+    RodEdits rods;
     @Autowired
     ReviewService reviews;
     @Autowired
@@ -68,15 +69,15 @@ class RevisionReanalysisTest {
     JdbcClient jdbc;
 
     /**
-     * The warehouse sample at level III on a 2 m grid (small and quick): revision 1 as uploaded,
-     * revision 2 after a rod was added (its roof stays exposed), one item of revision 2 accepted.
+     * The warehouse sample at level III: revision 1 as uploaded on a 2 m grid (small and quick),
+     * revision 2 the analysis after a rod was added (its roof stays exposed), one item of revision 2
+     * accepted.
      */
     private long analysedWarehouse() throws Exception {
         long id = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Quay shed", "III", null).id();
         analyses.run(id, null, null, "2");
-        parts.addRod(id, sites.get(id).version(), new AirTerminationService.RodInput(null, "North rod", 3.0, 4.0, "2.5"));
-        analyses.run(id, null, null, "2");
+        rods.add(id, sites.get(id).version(), new RodInput(null, "North rod", 3.0, 4.0, "2.5"));
         reviews.accept(id, reviews.latest(id).orElseThrow().items().get(0).key(), "covered by the steel gutter");
         return id;
     }

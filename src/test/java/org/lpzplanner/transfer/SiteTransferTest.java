@@ -12,12 +12,15 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.SignedIn;
-import org.lpzplanner.airtermination.AirTerminationService;
+import org.lpzplanner.airtermination.RodEdits;
+import org.lpzplanner.airtermination.RodInput;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.comments.CommentService;
-import org.lpzplanner.design.DesignService;
+import org.lpzplanner.design.MetalInstallationService;
+import org.lpzplanner.design.SeparationService;
 import org.lpzplanner.keepout.KeepOutAreaService;
+import org.lpzplanner.plan.StructureCorrections;
 import org.lpzplanner.sections.SiteCutService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -46,13 +49,17 @@ class SiteTransferTest {
     @Autowired
     AnalysisService analyses;
     @Autowired
-    AirTerminationService parts;
+    RodEdits rods;
+    @Autowired
+    StructureCorrections corrections;
     @Autowired
     ReviewService reviews;
     @Autowired
     JdbcClient jdbc;
     @Autowired
-    DesignService design;
+    MetalInstallationService installations;
+    @Autowired
+    SeparationService separations;
     @Autowired
     org.lpzplanner.design.DownConductorService downConductors;
     @Autowired
@@ -62,16 +69,16 @@ class SiteTransferTest {
     @Autowired
     KeepOutAreaService keepOut;
 
-    /** A site with an added rod, a corrected structure (two earlier files), two revisions and an accepted item. */
+    /**
+     * A site with an added rod, a corrected structure (two earlier files), two revisions (each change
+     * analysed) and an accepted item.
+     */
     private long workedSite() throws Exception {
         StoredSite site = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Quay shed \u00e9\u00df\"<x>", "III", null);
-        analyses.run(site.id(), null, null, "2");
-        parts.addRod(site.id(), sites.get(site.id()).version(),
-                new AirTerminationService.RodInput(null, "North rod", 3.0, 4.0, "2.5"));
-        sites.correctStructure(site.id(), sites.get(site.id()).version(),
+        rods.add(site.id(), sites.get(site.id()).version(), new RodInput(null, "North rod", 3.0, 4.0, "2.5"));
+        corrections.correct(site.id(), sites.get(site.id()).version(),
                 new StructureCorrection(0, "9.5", null, null, null, null));
-        analyses.run(site.id(), null, null, "2");
         String key = reviews.latest(site.id()).orElseThrow().items().get(0).key();
         reviews.accept(site.id(), key, "covered by a natural component (steel gutter)");
         mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put("/api/sites/" + site.id()
@@ -83,7 +90,7 @@ class SiteTransferTest {
         java.util.List<double[]> moved = new java.util.ArrayList<>(planned.positions());
         moved.set(0, new double[] {moved.get(0)[0] + 0.5, moved.get(0)[1]});
         downConductors.save(site.id(), planned.buildingId(), moved);
-        design.addInstallation(site.id(), "Vent pipe \u00e9", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
+        installations.add(site.id(), "Vent pipe \u00e9", 4.0, 5.0, 9.0, "CONCRETE_OR_BRICK");
         cuts.save(site.id(), "Quay \u00e9 section", new String[] {"-10", "20", "90.25", "20"});
         keepOut.save(site.id(), "Skylight \u00e9 north", java.util.List.of(new double[] {10, 30}, new double[] {14.5, 30},
                 new double[] {14.5, 33}, new double[] {10, 33}));
@@ -181,7 +188,7 @@ class SiteTransferTest {
         assertThat(downConductors.list(copy).get(0).edited()).isTrue();
         assertThat(downConductors.list(copy).get(0).positions().get(0))
                 .containsExactly(downConductors.list(id).get(0).positions().get(0));
-        assertThat(design.separations(copy)).hasSameSizeAs(design.separations(id));
+        assertThat(separations.separations(copy)).hasSameSizeAs(separations.separations(id));
         assertThat(comments.comments(copy)).hasSize(1);
         assertThat(cuts.cuts(copy)).singleElement().satisfies(c -> {
             assertThat(c.name()).isEqualTo("Quay \u00e9 section");
