@@ -36,8 +36,8 @@ import tools.jackson.databind.json.JsonMapper;
  *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version} writes the rods,
  *     masts and conductors into the site in one change; {@code POST …/undo} with the {@code version}
  *     accepting answered removes them again in one change. Both analyse the site again and answer
- *     its new {@code version}; {@code analysisPending} says why when the analysis could not run now
- *     (the change is stored all the same).</li>
+ *     its new {@code version}; {@code analysisPending} is true when the analysis could not run now
+ *     (the change is stored all the same), {@code pendingReason} says why.</li>
  * <li>{@code GET /api/sites/{id}/method-checks}: angle and mesh methods against the rolling sphere per structure.</li>
  * <li>{@code GET /api/sites/{id}/down-conductors}: per building (structures whose footprints overlap
  *     or touch, on the outline of the whole), {@code buildings}; {@code PUT …/down-conductors/{building}}
@@ -112,7 +112,8 @@ public class DesignApiController {
         out.put("conductorIds", accepted.outcome().conductorIds());
         out.put("version", accepted.version());
         out.put("plan", "/sites/" + id);
-        out.put("analysisPending", accepted.analysis().pendingReason());
+        out.put("analysisPending", accepted.analysis().isPending());
+        out.put("pendingReason", accepted.analysis().pendingReason());
         return out;
     }
 
@@ -126,7 +127,8 @@ public class DesignApiController {
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("version", undone.version());
         out.put("plan", "/sites/" + id);
-        out.put("analysisPending", undone.analysis().pendingReason());
+        out.put("analysisPending", undone.analysis().isPending());
+        out.put("pendingReason", undone.analysis().pendingReason());
         return out;
     }
 

@@ -13,6 +13,7 @@ import io.swagger.v3.oas.annotations.tags.Tag;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.AnalysisSummary;
+import org.lpzplanner.editing.AnalysisUpdate;
 import org.lpzplanner.editing.Edit;
 import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.sites.SiteFileVersion;
@@ -66,20 +67,24 @@ public class SiteApiController {
 
     /**
      * A site as the API shows it; {@code latest} is null until the site is analysed, and
-     * {@code lastChange} is when the site or its analyses last changed. {@code analysisPending} is
-     * the reason the analysis after an upload could not run yet (the site is stored), else null.
+     * {@code lastChange} is when the site or its analyses last changed. {@code analysisPending} and
+     * {@code pendingReason} answer an upload only (null elsewhere): whether the analysis after it is
+     * pending (the site is stored all the same) and why.
      */
     public record SiteView(long id, String name, String level, Double customRadius, String fileName,
             Instant createdAt, Instant lastChange, long version, AnalysisSummary latest, String address,
-            String designer, String analysisPending) {
+            String designer, Boolean analysisPending, String pendingReason) {
 
         static SiteView of(StoredSite s, AnalysisRevision latest) {
-            return of(s, latest == null ? null : AnalysisSummary.of(latest), null);
+            return new SiteView(s.id(), s.name(), s.level().name(), s.customRadius(), s.sourceName(), s.createdAt(),
+                    s.updatedAt(), s.version(), latest == null ? null : AnalysisSummary.of(latest), s.address(),
+                    s.designer(), null, null);
         }
 
-        static SiteView of(StoredSite s, AnalysisSummary latest, String analysisPending) {
+        static SiteView uploaded(StoredSite s, AnalysisUpdate analysis) {
             return new SiteView(s.id(), s.name(), s.level().name(), s.customRadius(), s.sourceName(), s.createdAt(),
-                    s.updatedAt(), s.version(), latest, s.address(), s.designer(), analysisPending);
+                    s.updatedAt(), s.version(), analysis.summary(), s.address(), s.designer(), analysis.isPending(),
+                    analysis.pendingReason());
         }
     }
 
@@ -97,7 +102,7 @@ public class SiteApiController {
     }
 
     @Operation(summary = "Upload a site file",
-            description = "Multipart: file (GeoJSON or WKT, UTF-8), optional name, level (I to IV, default II) and radius (metres). The file is checked and kept byte for byte, then the site is analysed; nothing is stored when it is refused. When the analysis cannot run now the site stays stored and analysisPending says why.")
+            description = "Multipart: file (GeoJSON or WKT, UTF-8), optional name, level (I to IV, default II) and radius (metres). The file is checked and kept byte for byte, then the site is analysed; nothing is stored when it is refused. When the analysis cannot run now the site stays stored, analysisPending is true and pendingReason says why.")
     @ApiResponse(responseCode = "201", description = "Stored and analysed (latest), or stored with the analysis pending (analysisPending); Location names the new site")
     @ApiResponse(responseCode = "400", description = "The file is not a valid site (file, feature, line and field named) or a setting cannot be used", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "413", description = "The file is too large", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
@@ -109,7 +114,7 @@ public class SiteApiController {
         // read again: the analysis marked the site changed when it stored its revision
         StoredSite site = sites.get(upload.siteId());
         return ResponseEntity.created(URI.create("/api/sites/" + site.id()))
-                .body(SiteView.of(site, upload.analysis().summary(), upload.analysis().pendingReason()));
+                .body(SiteView.uploaded(site, upload.analysis()));
     }
 
     @Operation(summary = "One site")
