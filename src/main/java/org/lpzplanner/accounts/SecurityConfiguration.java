@@ -23,6 +23,7 @@ import org.springframework.security.web.authentication.HttpStatusEntryPoint;
 import org.springframework.security.web.authentication.LoginUrlAuthenticationEntryPoint;
 import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
 import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWriter.ReferrerPolicy;
+import org.springframework.security.web.session.DisableEncodeUrlFilter;
 import org.springframework.security.web.util.matcher.RequestMatcher;
 
 /**
@@ -33,9 +34,10 @@ import org.springframework.security.web.util.matcher.RequestMatcher;
  * in the services ({@link CurrentAccount}), so another team's site answers 404 everywhere.
  *
  * <p>Pages use a session (shared by all app instances through Spring Session JDBC) and a CSRF
- * token on every form and state-changing call; API clients may instead send
- * {@code Authorization: Bearer <personal token>}, which needs no CSRF token because browsers never
- * add that header on their own.
+ * token on every form and state-changing call. API clients may instead send
+ * {@code Authorization: Bearer <personal token>} to addresses under {@code /api/}, which needs no
+ * CSRF token because browsers never add that header on their own; anywhere else a token is refused
+ * ({@link ApiTokenScopeFilter}), and no request with a token opens a session.
  */
 @Configuration(proxyBeanMethods = false)
 public class SecurityConfiguration {
@@ -65,12 +67,13 @@ public class SecurityConfiguration {
     @Bean
     SecurityFilterChain securityFilterChain(HttpSecurity http, AuthenticationManager manager,
             ApiTokenService tokens) throws Exception {
-        RequestMatcher api = request -> request.getRequestURI().startsWith(request.getContextPath() + "/api/");
+        RequestMatcher api = ApiTokenScopeFilter::isApi;
         ExceptionMappingAuthenticationFailureHandler failure = new ExceptionMappingAuthenticationFailureHandler();
         failure.setExceptionMappings(Map.of(SignInThrottledException.class.getName(), "/login?throttled"));
         failure.setDefaultFailureUrl("/login?error");
 
         http.authenticationManager(manager)
+                .addFilterBefore(new ApiTokenScopeFilter(), DisableEncodeUrlFilter.class)
                 .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
                 .authorizeHttpRequests(a -> a
                         .requestMatchers("/login", "/setup", "/css/**", "/js/**", "/favicon.ico", "/error").permitAll()
@@ -89,7 +92,7 @@ public class SecurityConfiguration {
                 .formLogin(f -> f.loginPage("/login").usernameParameter("email").failureHandler(failure)
                         .defaultSuccessUrl("/", false).permitAll())
                 .logout(l -> l.logoutUrl("/logout").logoutSuccessUrl("/login?signedOut"))
-                .csrf(c -> c.ignoringRequestMatchers(BearerTokenFilter::hasBearer))
+                .csrf(c -> c.ignoringRequestMatchers(request -> BearerTokenFilter.hasBearer(request) && api.matches(request)))
                 .exceptionHandling(e -> e
                         .defaultAuthenticationEntryPointFor(new HttpStatusEntryPoint(HttpStatus.UNAUTHORIZED), api)
                         .defaultAuthenticationEntryPointFor(new LoginUrlAuthenticationEntryPoint("/login"),
