@@ -18,7 +18,8 @@ import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
 import org.springframework.security.crypto.password.DelegatingPasswordEncoder;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
-import org.springframework.security.web.authentication.ExceptionMappingAuthenticationFailureHandler;
+import org.springframework.security.web.DefaultRedirectStrategy;
+import org.springframework.security.web.authentication.AuthenticationFailureHandler;
 import org.springframework.security.web.authentication.HttpStatusEntryPoint;
 import org.springframework.security.web.authentication.LoginUrlAuthenticationEntryPoint;
 import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
@@ -68,9 +69,10 @@ public class SecurityConfiguration {
     SecurityFilterChain securityFilterChain(HttpSecurity http, AuthenticationManager manager,
             ApiTokenService tokens) throws Exception {
         RequestMatcher api = ApiTokenScopeFilter::isApi;
-        ExceptionMappingAuthenticationFailureHandler failure = new ExceptionMappingAuthenticationFailureHandler();
-        failure.setExceptionMappings(Map.of(SignInThrottledException.class.getName(), "/login?throttled"));
-        failure.setDefaultFailureUrl("/login?error");
+        DefaultRedirectStrategy redirects = new DefaultRedirectStrategy();
+        AuthenticationFailureHandler failure = (request, response, e) -> redirects.sendRedirect(request, response,
+                e instanceof SignInThrottledException locked ? "/login?throttled=" + locked.waitMinutes()
+                        : "/login?error");
 
         http.authenticationManager(manager)
                 .addFilterBefore(new ApiTokenScopeFilter(), DisableEncodeUrlFilter.class)
