@@ -38,7 +38,10 @@ import org.springframework.security.web.util.matcher.RequestMatcher;
  * token on every form and state-changing call. API clients may instead send
  * {@code Authorization: Bearer <personal token>} to addresses under {@code /api/}, which needs no
  * CSRF token because browsers never add that header on their own; anywhere else a token is refused
- * ({@link ApiTokenScopeFilter}), and no request with a token opens a session.
+ * ({@link ApiTokenScopeFilter}), and no request with a token opens a session. Forms carry the
+ * token in a hidden field, the upload forms too: for a multipart body the servlet container parses
+ * the parts when the CSRF check asks for the field (the dispatcher servlet has a multipart
+ * configuration), so no address ever holds a token.
  */
 @Configuration(proxyBeanMethods = false)
 public class SecurityConfiguration {
