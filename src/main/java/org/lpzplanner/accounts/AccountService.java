@@ -164,7 +164,12 @@ public class AccountService {
         if (accounts.findTeamByName(n).isPresent()) {
             throw new InvalidInputException("team", "a team named \"" + n + "\" exists already");
         }
-        return accounts.insertTeam(n, now());
+        try {
+            return accounts.insertTeam(n, now());
+        } catch (DuplicateKeyException e) {
+            // Another request created the same name (in any letter case) since the check above.
+            throw new InvalidInputException("team", "a team named \"" + n + "\" exists already");
+        }
     }
 
     private static String checkTeamName(String name) {
