@@ -11,6 +11,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.system.FixedClock;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StructureCorrection;
@@ -77,9 +78,11 @@ class ReportApiTest {
     }
 
     @Test
+    @FixedClock("2026-03-14T09:30:00Z") // the two prints compared carry the same date
     void revisionsStoredWithoutTheirFileFindItByChecksumOrAnswerConflict() throws Exception {
         long id = analysedWarehouse("Older revision");
         String before = text(id, 1);
+        assertThat(before).contains("2026-03-14 09:30 UTC"); // printed by the fixed clock
         // As stored before revisions kept their inputs.
         jdbc.sql("UPDATE analysis_revisions SET site_name = NULL, source_name = NULL, source_text = NULL,"
                 + " tolerance = NULL WHERE site_id = ?").param(id).update();
