@@ -5,7 +5,6 @@ import static org.lpzplanner.transfer.ArchiveFields.bad;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
@@ -14,9 +13,9 @@ import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.RevisionResult;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SettingRange;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.system.InvalidInputException;
-import org.lpzplanner.system.Settings;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
@@ -125,9 +124,9 @@ class RevisionReanalysis {
         } catch (IllegalArgumentException e) {
             throw bad(p + ".sphereRadius", which + " cannot be used: " + e.getMessage());
         }
-        if (!(r.resolution() >= Settings.MIN_RESOLUTION && r.resolution() <= Settings.MAX_RESOLUTION)) {
-            throw bad(p + ".resolution", String.format(Locale.ROOT, "%s must be between %s and %s m, got %s", which,
-                    Settings.MIN_RESOLUTION, (int) Settings.MAX_RESOLUTION, r.resolution()));
+        if (!SettingRange.RESOLUTION.contains(r.resolution())) {
+            throw bad(p + ".resolution", which + " must be " + SettingRange.RESOLUTION.rule() + ", got "
+                    + r.resolution());
         }
         try {
             analyses.check(file.document(), sphere, r.resolution());
