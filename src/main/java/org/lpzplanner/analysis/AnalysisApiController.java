@@ -20,7 +20,6 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * JSON API for analyses of a site:
@@ -35,8 +34,6 @@ import tools.jackson.databind.json.JsonMapper;
 @Tag(name = "Analyses", description = "Rolling sphere analyses of a site")
 @RequestMapping("/api/sites/{siteId}/analyses")
 public class AnalysisApiController {
-
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private final AnalysisService analyses;
     private final AnalysisJobs jobs;

@@ -42,8 +42,6 @@ import tools.jackson.databind.json.JsonMapper;
 @Component
 class RevisionReanalysis {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     /**
      * The archive with every revision's results computed here.
      *
@@ -62,9 +60,11 @@ class RevisionReanalysis {
     }
 
     private final AnalysisService analyses;
+    private final JsonMapper json;
 
-    RevisionReanalysis(AnalysisService analyses) {
+    RevisionReanalysis(AnalysisService analyses, JsonMapper json) {
         this.analyses = analyses;
+        this.json = json;
     }
 
     /**
@@ -150,7 +150,7 @@ class RevisionReanalysis {
      * Whether the file carried the results computed here: the same totals and verdict and the same
      * features (the engine's times aside, which differ from run to run).
      */
-    private static boolean sameResults(SiteArchive.Revision r, RevisionResult computed) {
+    private boolean sameResults(SiteArchive.Revision r, RevisionResult computed) {
         if (r.exposedRoofArea() != computed.exposedRoofArea() || r.exposedEdgeLength() != computed.exposedEdgeLength()
                 || r.exposedCorners() != computed.exposedCorners() || r.facadeBands() != computed.facadeBands()
                 || r.protectedGroundArea() != computed.protectedGroundArea()
@@ -159,11 +159,11 @@ class RevisionReanalysis {
         }
         JsonNode carried;
         try {
-            carried = JSON.readTree(r.resultGeoJson());
+            carried = json.readTree(r.resultGeoJson());
         } catch (RuntimeException notJson) {
             return false;
         }
-        JsonNode own = JSON.readTree(computed.resultGeoJson());
+        JsonNode own = json.readTree(computed.resultGeoJson());
         return carried.path("features").equals(own.path("features"))
                 && carried.path("analysis").path("summary").equals(own.path("analysis").path("summary"));
     }
