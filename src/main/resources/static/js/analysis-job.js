@@ -8,6 +8,11 @@ function format(template, ...values) {
   return values.reduce((text, value, k) => text.replace('{' + k + '}', value), template || '');
 }
 
+// An error answer of the API is a problem detail: its message is detail (error in earlier releases).
+function problemText(body) {
+  return body && (body.detail || body.error);
+}
+
 function setUp(form) {
   const box = document.getElementById('analysis-progress');
   const bar = document.getElementById('analysis-progress-bar');
@@ -46,7 +51,7 @@ function setUp(form) {
     const response = await fetch(jobUrl, {headers: {Accept: 'application/json'}});
     const job = await response.json();
     if (!response.ok) {
-      show(0, format(msg.msgFailed, job.error || response.status), false);
+      show(0, format(msg.msgFailed, problemText(job) || response.status), false);
       return;
     }
     if (job.state === 'DONE') {
@@ -80,7 +85,7 @@ function setUp(form) {
       return;
     }
     if (response.status !== 202) {
-      show(0, format(msg.msgFailed, body.error || response.status), false);
+      show(0, format(msg.msgFailed, problemText(body) || response.status), false);
       return;
     }
     jobUrl = response.headers.get('Location');

@@ -48,7 +48,7 @@ if (section) {
     });
     const data = await response.json().catch(() => ({}));
     if (!response.ok) {
-      throw new Error(data.error || response.statusText);
+      throw new Error(data.detail || data.error || response.statusText);
     }
     return data;
   }

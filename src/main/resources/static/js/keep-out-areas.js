@@ -28,7 +28,7 @@ if (box) {
     const response = await fetch(target, { method, headers, body: body ? JSON.stringify(body) : undefined });
     if (!response.ok) {
       const data = await response.json().catch(() => ({}));
-      throw new Error(data.error || response.statusText);
+      throw new Error(data.detail || data.error || response.statusText);
     }
   }
 

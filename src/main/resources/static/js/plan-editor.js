@@ -77,7 +77,7 @@ function setUp(root) {
       data = {};
     }
     if (!response.ok) {
-      throw new ApiError(response.status, data.error || String(response.status));
+      throw new ApiError(response.status, data.detail || data.error || String(response.status));
     }
     return data;
   }

@@ -1,15 +1,11 @@
 package org.lpzplanner.accounts;
 
-import jakarta.servlet.http.HttpServletResponse;
 import org.springframework.security.web.csrf.CsrfException;
-import java.nio.charset.StandardCharsets;
 import java.util.Map;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
 import org.springframework.http.HttpMethod;
-import org.springframework.http.HttpStatus;
-import org.springframework.http.MediaType;
 import org.springframework.security.authentication.AuthenticationManager;
 import org.springframework.security.authentication.ProviderManager;
 import org.springframework.security.authentication.dao.DaoAuthenticationProvider;
@@ -19,11 +15,12 @@ import org.springframework.security.crypto.password.DelegatingPasswordEncoder;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
 import org.springframework.security.web.authentication.ExceptionMappingAuthenticationFailureHandler;
-import org.springframework.security.web.authentication.HttpStatusEntryPoint;
 import org.springframework.security.web.authentication.LoginUrlAuthenticationEntryPoint;
 import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
 import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWriter.ReferrerPolicy;
 import org.springframework.security.web.util.matcher.RequestMatcher;
+import org.lpzplanner.system.ApiProblem;
+import org.lpzplanner.system.ProblemWriter;
 
 /**
  * Who may do what. Everything needs a signed-in account except the sign-in page, the first-run
@@ -64,14 +61,14 @@ public class SecurityConfiguration {
 
     @Bean
     SecurityFilterChain securityFilterChain(HttpSecurity http, AuthenticationManager manager,
-            ApiTokenService tokens) throws Exception {
+            ApiTokenService tokens, ProblemWriter problems) throws Exception {
         RequestMatcher api = request -> request.getRequestURI().startsWith(request.getContextPath() + "/api/");
         ExceptionMappingAuthenticationFailureHandler failure = new ExceptionMappingAuthenticationFailureHandler();
         failure.setExceptionMappings(Map.of(SignInThrottledException.class.getName(), "/login?throttled"));
         failure.setDefaultFailureUrl("/login?error");
 
         http.authenticationManager(manager)
-                .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
+                .addFilterBefore(new BearerTokenFilter(tokens, problems), BasicAuthenticationFilter.class)
                 .authorizeHttpRequests(a -> a
                         .requestMatchers("/login", "/setup", "/css/**", "/js/**", "/favicon.ico", "/error").permitAll()
                         // load balancers and container health checks ask without an account; the
@@ -91,14 +88,16 @@ public class SecurityConfiguration {
                 .logout(l -> l.logoutUrl("/logout").logoutSuccessUrl("/login?signedOut"))
                 .csrf(c -> c.ignoringRequestMatchers(BearerTokenFilter::hasBearer))
                 .exceptionHandling(e -> e
-                        .defaultAuthenticationEntryPointFor(new HttpStatusEntryPoint(HttpStatus.UNAUTHORIZED), api)
+                        .defaultAuthenticationEntryPointFor((request, response, refused) -> problems.write(request,
+                                response, ApiProblem.UNAUTHORIZED.with("sign in first, or send a personal API token"
+                                        + " from the account page as Authorization: Bearer …"), null), api)
                         .defaultAuthenticationEntryPointFor(new LoginUrlAuthenticationEntryPoint("/login"),
                                 request -> true)
-                        .defaultAccessDeniedHandlerFor((request, response, denied) -> jsonError(response,
-                                denied instanceof CsrfException
+                        .defaultAccessDeniedHandlerFor((request, response, denied) -> problems.write(request,
+                                response, ApiProblem.FORBIDDEN.with(denied instanceof CsrfException
                                         ? "the request lacks a valid CSRF token: send the X-CSRF-TOKEN header of"
                                                 + " the page, or use a personal API token (Authorization: Bearer)"
-                                        : "your role may not do this"), api))
+                                        : "your role may not do this"), null), api))
                 .headers(h -> h
                         .contentSecurityPolicy(c -> c.policyDirectives(CONTENT_SECURITY_POLICY))
                         .frameOptions(f -> f.deny())
@@ -106,9 +105,4 @@ public class SecurityConfiguration {
         return http.build();
     }
 
-    private static void jsonError(HttpServletResponse response, String message) throws java.io.IOException {
-        response.setStatus(HttpStatus.FORBIDDEN.value());
-        response.setContentType(MediaType.APPLICATION_JSON_VALUE);
-        response.getOutputStream().write(("{\"error\":\"" + message + "\"}").getBytes(StandardCharsets.UTF_8));
-    }
 }

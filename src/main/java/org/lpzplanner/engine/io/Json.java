@@ -11,9 +11,12 @@ import tools.jackson.databind.type.LogicalType;
  * How the product reads and writes JSON (RFC 8259), in one place: the settings every mapper of the
  * product gets, and the one mapper for code that runs without an application context.
  *
- * <p>The settings: an object holding a member twice is refused (as site files refuse it), and a value
- * is read only as the type it is written in: no number where text is expected or the reverse, no
- * fraction where a whole number is expected, no text for a number or a yes-or-no. Jackson's own limits
+ * <p>The settings: an object holding a member twice is refused (as site files refuse it); a value is
+ * read only as the type it is written in: no number where text is expected or the reverse, no
+ * fraction where a whole number is expected, no text for a number or a yes-or-no; a member the type
+ * has not is refused, unless the type says it ignores such members
+ * ({@code @JsonIgnoreProperties(ignoreUnknown = true)}, for request bodies that clients of earlier
+ * releases may send with more members than are read). Jackson's own limits
  * stay as they are: nesting at most 500 deep, numbers of at most 1,000 characters, strings of at most
  * 100 million characters; NaN and Infinity are not JSON and are refused.
  *
@@ -34,6 +37,7 @@ public final class Json {
     public static JsonMapper.Builder configure(JsonMapper.Builder builder) {
         return builder
                 .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
                 .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
                 .withCoercionConfig(LogicalType.Textual, c -> c
                         .setCoercion(CoercionInputShape.Integer, CoercionAction.Fail)
