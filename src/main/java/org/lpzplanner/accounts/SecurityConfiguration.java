@@ -1,11 +1,15 @@
 package org.lpzplanner.accounts;
 
+import jakarta.servlet.DispatcherType;
 import org.springframework.security.web.csrf.CsrfException;
 import java.util.Map;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.annotation.Bean;
+import org.springframework.boot.web.servlet.FilterRegistrationBean;
 import org.springframework.context.annotation.Configuration;
+import org.springframework.core.Ordered;
 import org.springframework.http.HttpMethod;
+import org.springframework.http.HttpStatus;
 import org.springframework.security.authentication.AuthenticationManager;
 import org.springframework.security.authentication.ProviderManager;
 import org.springframework.security.authentication.dao.DaoAuthenticationProvider;
@@ -14,13 +18,18 @@ import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
 import org.springframework.security.crypto.password.DelegatingPasswordEncoder;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
-import org.springframework.security.web.authentication.ExceptionMappingAuthenticationFailureHandler;
+import org.springframework.security.web.DefaultRedirectStrategy;
+import org.springframework.security.web.authentication.AuthenticationFailureHandler;
 import org.springframework.security.web.authentication.LoginUrlAuthenticationEntryPoint;
 import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
 import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWriter.ReferrerPolicy;
+import org.springframework.security.web.session.DisableEncodeUrlFilter;
+import org.springframework.security.web.savedrequest.HttpSessionRequestCache;
+import org.springframework.security.web.savedrequest.RequestCache;
 import org.springframework.security.web.util.matcher.RequestMatcher;
 import org.lpzplanner.system.ApiProblem;
 import org.lpzplanner.system.ProblemWriter;
+import org.springframework.web.filter.RelativeRedirectFilter;
 
 /**
  * Who may do what. Everything needs a signed-in account except the sign-in page, the first-run
@@ -30,9 +39,13 @@ import org.lpzplanner.system.ProblemWriter;
  * in the services ({@link CurrentAccount}), so another team's site answers 404 everywhere.
  *
  * <p>Pages use a session (shared by all app instances through Spring Session JDBC) and a CSRF
- * token on every form and state-changing call; API clients may instead send
- * {@code Authorization: Bearer <personal token>}, which needs no CSRF token because browsers never
- * add that header on their own.
+ * token on every form and state-changing call. API clients may instead send
+ * {@code Authorization: Bearer <personal token>} to addresses under {@code /api/}, which needs no
+ * CSRF token because browsers never add that header on their own; anywhere else a token is refused
+ * ({@link ApiTokenScopeFilter}), and no request with a token opens a session. Forms carry the
+ * token in a hidden field, the upload forms too: for a multipart body the servlet container parses
+ * the parts when the CSRF check asks for the field (the dispatcher servlet has a multipart
+ * configuration), so no address ever holds a token.
  */
 @Configuration(proxyBeanMethods = false)
 public class SecurityConfiguration {
@@ -62,12 +75,19 @@ public class SecurityConfiguration {
     @Bean
     SecurityFilterChain securityFilterChain(HttpSecurity http, AuthenticationManager manager,
             ApiTokenService tokens, ProblemWriter problems) throws Exception {
-        RequestMatcher api = request -> request.getRequestURI().startsWith(request.getContextPath() + "/api/");
-        ExceptionMappingAuthenticationFailureHandler failure = new ExceptionMappingAuthenticationFailureHandler();
-        failure.setExceptionMappings(Map.of(SignInThrottledException.class.getName(), "/login?throttled"));
-        failure.setDefaultFailureUrl("/login?error");
+        RequestMatcher api = ApiTokenScopeFilter::isApi;
+        DefaultRedirectStrategy redirects = new DefaultRedirectStrategy();
+        AuthenticationFailureHandler failure = (request, response, e) -> redirects.sendRedirect(request, response,
+                e instanceof SignInThrottledException locked ? "/login?throttled=" + locked.waitMinutes()
+                        : "/login?error");
+
+        RequestCache askedPages = new HttpSessionRequestCache();
+        LoginUrlAuthenticationEntryPoint signInPage = new LoginUrlAuthenticationEntryPoint("/login");
+        // the entry point would otherwise build an absolute address from the request's Host header
+        signInPage.setFavorRelativeUris(true);
 
         http.authenticationManager(manager)
+                .addFilterBefore(new ApiTokenScopeFilter(problems), DisableEncodeUrlFilter.class)
                 .addFilterBefore(new BearerTokenFilter(tokens, problems), BasicAuthenticationFilter.class)
                 .authorizeHttpRequests(a -> a
                         .requestMatchers("/login", "/setup", "/css/**", "/js/**", "/favicon.ico", "/error").permitAll()
@@ -83,16 +103,16 @@ public class SecurityConfiguration {
                         .requestMatchers(HttpMethod.GET, "/**").authenticated()
                         .requestMatchers(HttpMethod.HEAD, "/**").authenticated()
                         .anyRequest().hasAnyRole(Role.ADMIN.name(), Role.DESIGNER.name()))
+                .requestCache(c -> c.requestCache(askedPages))
                 .formLogin(f -> f.loginPage("/login").usernameParameter("email").failureHandler(failure)
-                        .defaultSuccessUrl("/", false).permitAll())
+                        .successHandler(new ReturnToAskedPage(askedPages)).permitAll())
                 .logout(l -> l.logoutUrl("/logout").logoutSuccessUrl("/login?signedOut"))
-                .csrf(c -> c.ignoringRequestMatchers(BearerTokenFilter::hasBearer))
+                .csrf(c -> c.ignoringRequestMatchers(request -> BearerTokenFilter.hasBearer(request) && api.matches(request)))
                 .exceptionHandling(e -> e
                         .defaultAuthenticationEntryPointFor((request, response, refused) -> problems.write(request,
                                 response, ApiProblem.UNAUTHORIZED.with("sign in first, or send a personal API token"
                                         + " from the account page as Authorization: Bearer …"), null), api)
-                        .defaultAuthenticationEntryPointFor(new LoginUrlAuthenticationEntryPoint("/login"),
-                                request -> true)
+                        .defaultAuthenticationEntryPointFor(signInPage, request -> true)
                         .defaultAccessDeniedHandlerFor((request, response, denied) -> problems.write(request,
                                 response, ApiProblem.FORBIDDEN.with(denied instanceof CsrfException
                                         ? "the request lacks a valid CSRF token: send the X-CSRF-TOKEN header of"
@@ -105,4 +125,18 @@ public class SecurityConfiguration {
         return http.build();
     }
 
+    /**
+     * Redirects keep the relative address they are given: the servlet container would otherwise
+     * complete it with the request's {@code Host} header, which a client may forge. First of all
+     * filters, so that the redirects of the sign-in are covered too.
+     */
+    @Bean
+    FilterRegistrationBean<RelativeRedirectFilter> relativeRedirects() {
+        RelativeRedirectFilter filter = new RelativeRedirectFilter();
+        filter.setRedirectStatus(HttpStatus.FOUND);
+        FilterRegistrationBean<RelativeRedirectFilter> registration = new FilterRegistrationBean<>(filter);
+        registration.setOrder(Ordered.HIGHEST_PRECEDENCE);
+        registration.setDispatcherTypes(DispatcherType.REQUEST, DispatcherType.ERROR, DispatcherType.ASYNC);
+        return registration;
+    }
 }
