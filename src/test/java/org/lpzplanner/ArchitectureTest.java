@@ -8,6 +8,7 @@ import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The engine is a plain library: the rest of the product depends on it, never the reverse. The
@@ -49,6 +50,19 @@ class ArchitectureTest {
                 .check(classes);
         noClasses().that().resideInAPackage("org.lpzplanner.engine.envelope..")
                 .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.engine.exposure..", "org.lpzplanner.engine.io..")
+                .check(classes);
+    }
+
+    /**
+     * One JSON mapper: Spring components take the application's bean, code without a context
+     * {@code engine.io.Json.MAPPER}; nothing else builds one (the plan drawing still holds its own).
+     */
+    @Test
+    void onlyTheSharedJsonSettingsBuildAMapper() {
+        noClasses().that().doNotHaveFullyQualifiedName("org.lpzplanner.engine.io.Json")
+                .and().doNotHaveFullyQualifiedName("org.lpzplanner.analysis.PlanSvg")
+                .should().callMethod(JsonMapper.class, "builder")
+                .orShould().callConstructor(JsonMapper.class)
                 .check(classes);
     }
 

@@ -11,8 +11,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import org.lpzplanner.engine.io.Json;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The items of a stored {@link ResultGeoJson} a designer reviews one by one: every exposed edge
@@ -42,7 +42,6 @@ public final class ReviewItems {
     public static final Set<String> LAYERS = Set.of("exposed-edge", "exposed-corner", "facade-band",
             "model-warning");
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private ReviewItems() {
     }
@@ -156,7 +155,7 @@ public final class ReviewItems {
 
     static List<JsonNode> features(String resultGeoJson) {
         List<JsonNode> features = new ArrayList<>();
-        JSON.readTree(resultGeoJson).path("features").forEach(features::add);
+        Json.MAPPER.readTree(resultGeoJson).path("features").forEach(features::add);
         return features;
     }
 

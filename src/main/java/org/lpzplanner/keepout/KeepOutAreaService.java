@@ -38,18 +38,18 @@ public class KeepOutAreaService {
     /** Most areas one site keeps. */
     public static final int MAX_AREAS = 50;
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     private final JdbcClient jdbc;
     private final SiteService sites;
     private final AuditTrail audit;
     private final Clock clock;
+    private final JsonMapper json;
 
-    public KeepOutAreaService(JdbcClient jdbc, SiteService sites, AuditTrail audit, Clock clock) {
+    public KeepOutAreaService(JdbcClient jdbc, SiteService sites, AuditTrail audit, Clock clock, JsonMapper json) {
         this.jdbc = jdbc;
         this.sites = sites;
         this.audit = audit;
         this.clock = clock;
+        this.json = json;
     }
 
     /**
@@ -73,7 +73,7 @@ public class KeepOutAreaService {
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO site_keep_out_areas (site_id, name, corners, created_at) VALUES (?, ?, ?, ?)")
-                .params(siteId, n, JSON.writeValueAsString(outline), Timestamp.from(now))
+                .params(siteId, n, json.writeValueAsString(outline), Timestamp.from(now))
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
         double area = KeepOutOutline.area(outline);
@@ -148,9 +148,9 @@ public class KeepOutAreaService {
     }
 
     /** Corners as stored: a JSON array of [x, y]. */
-    static List<double[]> corners(String json) {
+    private List<double[]> corners(String stored) {
         List<double[]> out = new ArrayList<>();
-        for (JsonNode p : JSON.readTree(json)) {
+        for (JsonNode p : json.readTree(stored)) {
             out.add(new double[] {p.get(0).asDouble(), p.get(1).asDouble()});
         }
         return out;

@@ -17,6 +17,7 @@ import org.lpzplanner.comments.CommentService;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SettingRange;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.sections.SectionPage;
 import org.lpzplanner.sites.PlanContribution;
@@ -74,6 +75,7 @@ class PlanPage {
         model.put("method", ResultGeoJson.METHOD);
         model.put("cautions", Cautions.lines());
         model.put("levels", ProtectionLevel.values());
+        model.put("radiusRule", SettingRange.RADIUS.rule());
         contributions.forEach(c -> model.putAll(c.attributes(site, locale)));
         model.put("structures", sites.structures(site));
         model.put("roofForms", ROOF_FORMS);

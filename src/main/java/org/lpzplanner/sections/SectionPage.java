@@ -115,6 +115,16 @@ public final class SectionPage {
                         + text + "\"");
             }
         }
+        return checked(cut);
+    }
+
+    /**
+     * Checks a cut's length: its ends (x1, y1, x2, y2, finite) at least {@value #MIN_LENGTH} m and at
+     * most {@value #MAX_LENGTH} m apart.
+     *
+     * @throws InvalidInputException naming x2 otherwise
+     */
+    static double[] checked(double[] cut) {
         double length = Math.hypot(cut[2] - cut[0], cut[3] - cut[1]);
         if (length < MIN_LENGTH) {
             throw new InvalidInputException("x2", "the cut is " + String.format(Locale.ROOT, "%.2f", length)

@@ -49,6 +49,21 @@ public class SiteCutService {
      */
     @Transactional
     public SiteCut save(long siteId, String name, String[] ends) {
+        String n = checkedName(siteId, name);
+        return store(siteId, n, SectionPage.cut(ends));
+    }
+
+    /**
+     * Saves a cut given as numbers (x1, y1, x2, y2), checked as {@link #save(long, String, String[])}
+     * checks typed ones.
+     */
+    @Transactional
+    public SiteCut save(long siteId, String name, double[] ends) {
+        String n = checkedName(siteId, name);
+        return store(siteId, n, SectionPage.checked(ends));
+    }
+
+    private String checkedName(long siteId, String name) {
         sites.get(siteId);
         String n = name == null ? "" : name.strip();
         if (n.isEmpty()) {
@@ -58,7 +73,10 @@ public class SiteCutService {
             throw new InvalidInputException("name", "a cut name must be at most " + MAX_NAME + " characters, got "
                     + n.length());
         }
-        double[] c = SectionPage.cut(ends);
+        return n;
+    }
+
+    private SiteCut store(long siteId, String n, double[] c) {
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO site_cuts (site_id, name, x1, y1, x2, y2, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)")
