@@ -8,8 +8,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.locationtech.jts.geom.Polygon;
-import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.drawing.PlanItem;
 import org.lpzplanner.sites.SiteDuplicated;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -104,8 +104,8 @@ public class KeepOutAreaService {
 
     /** The site's areas as the plan drawing takes them. */
     @Transactional(readOnly = true)
-    public List<PlanSvg.KeepOut> forPlan(long siteId) {
-        return areas(siteId).stream().map(a -> new PlanSvg.KeepOut(a.name(), a.corners())).toList();
+    public List<PlanItem.KeepOutArea> forPlan(long siteId) {
+        return areas(siteId).stream().map(a -> new PlanItem.KeepOutArea(a.name(), a.corners())).toList();
     }
 
     /**
