@@ -56,9 +56,9 @@ public final class Formats {
         return trimmed(metres, 1);
     }
 
-    /** A percentage to one decimal: "9.1" (the caller writes the "%"). */
+    /** A percentage to one decimal, without a trailing ".0": "9.1", "20" (the caller writes the "%"). */
     public static String percent(double percent) {
-        return fixed(percent, 1);
+        return trimmed(percent, 1);
     }
 
     /**
