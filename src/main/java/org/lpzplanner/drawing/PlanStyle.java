@@ -26,6 +26,11 @@ public final class PlanStyle {
     /** The halo round names and numbers, the fill of rods and the veil under hatching. */
     public static final Colour WHITE = Colour.of(0xffffff);
 
+    /** The ink of a drawing's furniture: north arrow, scale bar, axes. */
+    public static final Colour INK = Colour.of(0x222222);
+    /** The outline of a legend's swatches. */
+    public static final Colour SWATCH_OUTLINE = Colour.of(0x444444);
+
     /** The grid of detail sheets drawn over an overview, in the parts' blue. */
     public static final Colour SHEET_GRID = Colour.of(0x1f5fbf);
 

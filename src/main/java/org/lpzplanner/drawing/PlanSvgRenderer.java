@@ -63,13 +63,13 @@ public final class PlanSvgRenderer {
 
         SvgWriter svg = new SvgWriter();
         svg.start("svg").attr("xmlns", "http://www.w3.org/2000/svg").attr("class", options.cssClass())
-                .attr("viewBox", "0 0 " + whole(WIDTH) + " " + whole(height)).attr("width", whole(WIDTH))
-                .attr("height", whole(height)).attr("role", "img").attr("aria-label", options.ariaLabel())
-                .attr("data-origin-x", exact(frame.minX())).attr("data-origin-y", exact(frame.maxY()))
-                .attr("data-scale", exact(scale)).attr("data-margin", exact(MARGIN)).attr("data-y-flipped", "true")
-                .attr("data-draw-height", whole(drawHeight));
-        svg.start("rect").attr("class", "plan-background").attr("x", "0").attr("y", "0").attr("width", whole(WIDTH))
-                .attr("height", whole(drawHeight)).attr("fill", PlanStyle.BACKGROUND.hex()).end();
+                .attr("viewBox", "0 0 " + SvgWriter.whole(WIDTH) + " " + SvgWriter.whole(height)).attr("width", SvgWriter.whole(WIDTH))
+                .attr("height", SvgWriter.whole(height)).attr("role", "img").attr("aria-label", options.ariaLabel())
+                .attr("data-origin-x", SvgWriter.exact(frame.minX())).attr("data-origin-y", SvgWriter.exact(frame.maxY()))
+                .attr("data-scale", SvgWriter.exact(scale)).attr("data-margin", SvgWriter.exact(MARGIN)).attr("data-y-flipped", "true")
+                .attr("data-draw-height", SvgWriter.whole(drawHeight));
+        svg.start("rect").attr("class", "plan-background").attr("x", "0").attr("y", "0").attr("width", SvgWriter.whole(WIDTH))
+                .attr("height", SvgWriter.whole(drawHeight)).attr("fill", PlanStyle.BACKGROUND.hex()).end();
         if (drawing.has(Layer.KEEP_OUT) || legend.contains(Layer.KEEP_OUT)) {
             hatchPattern(svg, PlanStyle.of(Layer.KEEP_OUT));
         }
@@ -265,7 +265,8 @@ public final class PlanSvgRenderer {
         }
         svg.attr("font-size", SvgWriter.size(p.size())).attr("font-family", "sans-serif")
                 .attr("fill", PlanStyle.of(label.layer()).labelColour().hex()).attr("stroke", PlanStyle.WHITE.hex())
-                .attr("stroke-width", "3").attr("paint-order", "stroke").attr("pointer-events", "none")
+                .attr("stroke-width", "3").attr("stroke-linejoin", "round").attr("paint-order", "stroke")
+                .attr("pointer-events", "none")
                 .text(label.text()).end();
     }
 
@@ -286,7 +287,7 @@ public final class PlanSvgRenderer {
         double y = drawHeight - 14;
         svg.start("g").attr("class", "scale-bar");
         svg.start("rect").attr("x", MARGIN).attr("y", y).attr("width", length * scale).attr("height", "5")
-                .attr("fill", "#222222").end();
+                .attr("fill", PlanStyle.INK.hex()).end();
         svg.start("text").attr("x", MARGIN).attr("y", y - 4).attr("font-size", "11").attr("font-family", "sans-serif")
                 .text(texts.text("plan.scale", Formats.scaleStep(length))).end();
         svg.end();
@@ -296,7 +297,7 @@ public final class PlanSvgRenderer {
         double x = WIDTH - MARGIN;
         svg.start("g").attr("class", "north-arrow");
         svg.start("path").attr("d", String.format(Locale.ROOT, "M %.1f 14 L %.1f 44 L %.1f 36 L %.1f 44 Z", x, x - 8,
-                x, x + 8)).attr("fill", "#222222").end();
+                x, x + 8)).attr("fill", PlanStyle.INK.hex()).end();
         svg.start("text").attr("x", x).attr("y", "58").attr("text-anchor", "middle").attr("font-size", "12")
                 .attr("font-family", "sans-serif").attr("font-weight", "bold").text(texts.text("plan.north")).end();
         svg.end();
@@ -312,7 +313,7 @@ public final class PlanSvgRenderer {
             if (style.opacity() < 1) {
                 svg.attr("fill-opacity", SvgWriter.size(style.opacity()));
             }
-            svg.attr("stroke", "#444444").attr("stroke-width", "0.5").end();
+            svg.attr("stroke", PlanStyle.SWATCH_OUTLINE.hex()).attr("stroke-width", "0.5").end();
             svg.start("text").attr("x", MARGIN + 26).attr("y", y + 10).text(texts.text(style.legendKey())).end();
         }
         svg.end();
@@ -322,12 +323,4 @@ public final class PlanSvgRenderer {
         return value == null ? "" : value;
     }
 
-    private static String whole(double value) {
-        return String.format(Locale.ROOT, "%.0f", value);
-    }
-
-    /** A frame number for the data attributes, exact enough to invert the drawing. */
-    private static String exact(double value) {
-        return String.format(Locale.ROOT, "%.6f", value);
-    }
 }

@@ -1,6 +1,6 @@
 package org.lpzplanner.drawing;
 
-/** The length a scale bar shows: a round number of metres. */
+/** Round numbers of metres for a drawing: the length a scale bar shows, the step of an axis's ticks. */
 public final class ScaleBar {
 
     private ScaleBar() {
@@ -16,5 +16,19 @@ public final class ScaleBar {
             }
         }
         return length;
+    }
+
+    /**
+     * The least of 1, 2 or 5 times a power of ten that is at least {@code target} metres: the step
+     * between the ticks of a drawing's axis.
+     */
+    public static double step(double target) {
+        double magnitude = Math.pow(10, Math.floor(Math.log10(target)));
+        for (double step : new double[] {1, 2, 5}) {
+            if (step * magnitude >= target) {
+                return step * magnitude;
+            }
+        }
+        return 10 * magnitude;
     }
 }

@@ -82,6 +82,16 @@ public final class SvgWriter {
         return String.format(Locale.ROOT, "%.1f", value);
     }
 
+    /** A whole number of units, for the drawing's width and height: "720". */
+    public static String whole(double value) {
+        return String.format(Locale.ROOT, "%.0f", value);
+    }
+
+    /** A frame number for the data attributes the page scripts read, exact enough to invert the drawing. */
+    public static String exact(double value) {
+        return String.format(Locale.ROOT, "%.6f", value);
+    }
+
     /** A size or dash length to a hundredth, without trailing zeros: "2.5", "5", "0.8". */
     public static String size(double value) {
         String text = String.format(Locale.ROOT, "%.2f", value);

@@ -325,7 +325,7 @@ final class PdfPlanPainter {
         PDExtendedGraphicsState veil = new PDExtendedGraphicsState();
         veil.setNonStrokingAlphaConstant((float) hatch.veilOpacity());
         out.setGraphicsStateParameters(veil);
-        out.setNonStrokingColor(Color.WHITE);
+        out.setNonStrokingColor(PlanStyle.WHITE.awt());
         out.addRect(x, y, w, h);
         out.fill();
         out.restoreGraphicsState();
@@ -365,7 +365,7 @@ final class PdfPlanPainter {
         out.closePath();
     }
 
-    /** A placed label: white halo, then the text in its layer's label colour. */
+    /** A placed label: white halo (round joins, no spikes at sharp glyph corners), then the text in its layer's label colour. */
     private static void halo(PDPageContentStream out, PdfFonts fonts, LabelPlacement.Placed l) throws IOException {
         float size = (float) l.size(), x = (float) l.x(), y = (float) l.baseline();
         String text = l.label().text();
@@ -374,10 +374,12 @@ final class PdfPlanPainter {
         out.setStrokingColor(PlanStyle.WHITE.awt());
         out.setLineWidth(size / 4);
         out.setLineDashPattern(new float[0], 0);
+        out.setLineJoinStyle(1);
         out.setRenderingMode(RenderingMode.STROKE);
         out.newLineAtOffset(x, y);
         out.showText(text);
         out.endText();
+        out.setLineJoinStyle(0);
         out.beginText();
         out.setRenderingMode(RenderingMode.FILL);
         out.setNonStrokingColor(PlanStyle.of(l.label().layer()).labelColour().awt());
@@ -389,7 +391,7 @@ final class PdfPlanPainter {
     private static void northArrow(PdfPages p, float x, float top) {
         try {
             PDPageContentStream out = p.out;
-            out.setNonStrokingColor(PdfReportRenderer.TEXT);
+            out.setNonStrokingColor(PlanStyle.INK.awt());
             out.moveTo(x, top);
             out.lineTo(x - 7, top - 26);
             out.lineTo(x, top - 20);
@@ -406,13 +408,13 @@ final class PdfPlanPainter {
         double length = ScaleBar.length(110 / k);
         float x = PdfPages.MARGIN + 10;
         float seg = (float) (length * k / 4);
-        p.fillRect(x - 4, y - 4, seg * 4 + 60, 22, Color.WHITE);
+        p.fillRect(x - 4, y - 4, seg * 4 + 60, 22, PlanStyle.WHITE.awt());
         for (int i = 0; i < 4; i++) {
             if (i % 2 == 0) {
-                p.fillRect(x + i * seg, y, seg, 4, PdfReportRenderer.TEXT);
+                p.fillRect(x + i * seg, y, seg, 4, PlanStyle.INK.awt());
             }
         }
-        p.strokeRect(x, y, seg * 4, 4, PdfReportRenderer.TEXT, 0.5f);
+        p.strokeRect(x, y, seg * 4, 4, PlanStyle.INK.awt(), 0.5f);
         p.text("0", x - 2, y + 7, 6.5f, false, PdfReportRenderer.TEXT);
         p.text(Formats.scaleStep(length) + " m", x + seg * 4 - 4, y + 7, 6.5f, false, PdfReportRenderer.TEXT);
         p.text("1:" + denominator, x + seg * 4 + 22, y, 6.5f, true, PdfReportRenderer.TEXT);
@@ -425,7 +427,7 @@ final class PdfPlanPainter {
         for (int i = 0; i < rows.size(); i++) {
             LayerStyle style = PlanStyle.of(rows.get(i));
             float x = PdfPages.MARGIN + (i % 3) * colW, y = top - (i / 3) * 14;
-            p.fillRect(x, y - 8, 14, 8, Color.WHITE);
+            p.fillRect(x, y - 8, 14, 8, PlanStyle.WHITE.awt());
             try {
                 p.out.saveGraphicsState();
                 p.out.addRect(x, y - 8, 14, 8);
@@ -445,7 +447,7 @@ final class PdfPlanPainter {
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
-            p.strokeRect(x, y - 8, 14, 8, PdfReportRenderer.MUTED, 0.3f);
+            p.strokeRect(x, y - 8, 14, 8, PlanStyle.SWATCH_OUTLINE.awt(), 0.3f);
             p.text(style.reportLegend(), x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
         }
     }

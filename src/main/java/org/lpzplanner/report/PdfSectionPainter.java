@@ -8,6 +8,7 @@ import org.lpzplanner.common.Formats;
 import org.lpzplanner.drawing.Layer;
 import org.lpzplanner.drawing.LayerStyle;
 import org.lpzplanner.drawing.PlanStyle;
+import org.lpzplanner.drawing.ScaleBar;
 import org.lpzplanner.sections.SiteSection;
 import org.lpzplanner.sections.SiteSection.Point;
 
@@ -113,8 +114,8 @@ final class PdfSectionPainter {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        p.line(x0, z0, drawRight, z0, PdfReportRenderer.TEXT, 0.8f);
-        p.line(x0, z0, x0, frameTop, PdfReportRenderer.TEXT, 0.6f);
+        p.line(x0, z0, drawRight, z0, PlanStyle.INK.awt(), 0.8f);
+        p.line(x0, z0, x0, frameTop, PlanStyle.INK.awt(), 0.6f);
         ticks(p, s.length(), zMax, k, x0, z0, frameTop);
         p.y = frameBottom - 4;
         legend(p);
@@ -140,7 +141,7 @@ final class PdfSectionPainter {
         double step = niceStep(length / 6);
         for (double d = 0; d <= length + 1e-9; d += step) {
             float x = x0 + (float) (d * k);
-            p.line(x, z0, x, z0 - 3, PdfReportRenderer.TEXT, 0.5f);
+            p.line(x, z0, x, z0 - 3, PlanStyle.INK.awt(), 0.5f);
             p.text(Formats.scaleStep(d), x - 4, z0 - 11, 6, false, PdfReportRenderer.MUTED);
         }
         p.text("m along the cut", x0 + (float) (length * k) - 48, z0 - 17, 6, false, PdfReportRenderer.MUTED);
@@ -150,20 +151,14 @@ final class PdfSectionPainter {
             if (y > top - 4) {
                 break;
             }
-            p.line(x0 - 3, y, x0, y, PdfReportRenderer.TEXT, 0.5f);
+            p.line(x0 - 3, y, x0, y, PlanStyle.INK.awt(), 0.5f);
             p.text(Formats.scaleStep(z) + " m", PdfPages.MARGIN, y - 2, 6, false,
                     PdfReportRenderer.MUTED);
         }
     }
 
     private static double niceStep(double target) {
-        double magnitude = Math.pow(10, Math.floor(Math.log10(Math.max(target, 1e-6))));
-        for (double m : new double[] {1, 2, 5, 10}) {
-            if (m * magnitude >= target) {
-                return m * magnitude;
-            }
-        }
-        return 10 * magnitude;
+        return ScaleBar.step(Math.max(target, 1e-6));
     }
 
     /** The legend in one line: the report's words for each layer of a section. */

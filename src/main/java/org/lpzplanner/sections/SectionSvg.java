@@ -3,9 +3,11 @@ package org.lpzplanner.sections;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.drawing.Layer;
 import org.lpzplanner.drawing.LayerStyle;
 import org.lpzplanner.drawing.PlanStyle;
+import org.lpzplanner.drawing.ScaleBar;
 import org.lpzplanner.drawing.SvgWriter;
 import org.lpzplanner.drawing.Texts;
 import org.lpzplanner.sections.SiteSection.Point;
@@ -62,17 +64,17 @@ public final class SectionSvg {
 
         SvgWriter svg = new SvgWriter();
         svg.start("svg").attr("xmlns", "http://www.w3.org/2000/svg").attr("class", "section")
-                .attr("viewBox", "0 0 " + whole(WIDTH) + " " + whole(height)).attr("width", whole(WIDTH))
-                .attr("height", whole(height)).attr("role", "img").attr("aria-label", texts.text("section.title"))
-                .attr("data-length", exact(length)).attr("data-radius", exact(section.radius()))
-                .attr("data-scale", exact(scale)).attr("data-margin-left", exact(LEFT))
-                .attr("data-margin-top", exact(TOP)).attr("data-z-max", exact(zMax))
-                .attr("data-envelope-max", exact(max.z())).attr("data-envelope-max-at", exact(max.s()));
+                .attr("viewBox", "0 0 " + SvgWriter.whole(WIDTH) + " " + SvgWriter.whole(height)).attr("width", SvgWriter.whole(WIDTH))
+                .attr("height", SvgWriter.whole(height)).attr("role", "img").attr("aria-label", texts.text("section.title"))
+                .attr("data-length", SvgWriter.exact(length)).attr("data-radius", SvgWriter.exact(section.radius()))
+                .attr("data-scale", SvgWriter.exact(scale)).attr("data-margin-left", SvgWriter.exact(LEFT))
+                .attr("data-margin-top", SvgWriter.exact(TOP)).attr("data-z-max", SvgWriter.exact(zMax))
+                .attr("data-envelope-max", SvgWriter.exact(max.z())).attr("data-envelope-max-at", SvgWriter.exact(max.s()));
         svg.start("defs").start("clipPath").attr("id", "section-clip");
         svg.start("rect").attr("x", f.x(0)).attr("y", f.z(zMax)).attr("width", length * scale)
                 .attr("height", zMax * scale).end();
         svg.end().end();
-        svg.start("rect").attr("x", "0").attr("y", "0").attr("width", whole(WIDTH)).attr("height", whole(drawHeight))
+        svg.start("rect").attr("x", "0").attr("y", "0").attr("width", SvgWriter.whole(WIDTH)).attr("height", SvgWriter.whole(drawHeight))
                 .attr("fill", PlanStyle.BACKGROUND.hex()).end();
         profile(svg, section, f);
         LayerStyle rod = PlanStyle.of(Layer.SECTION_ROD);
@@ -172,14 +174,14 @@ public final class SectionSvg {
         for (int k = 0; k * step <= length + 1e-9; k++) {
             double s = k * step;
             axisLine(svg, f.x(s), f.z(0), f.x(s), f.z(0) + 5);
-            svg.start("text").attr("x", f.x(s)).attr("y", f.z(0) + 17).attr("text-anchor", "middle").text(tick(s))
+            svg.start("text").attr("x", f.x(s)).attr("y", f.z(0) + 17).attr("text-anchor", "middle").text(Formats.scaleStep(s))
                     .end();
         }
         double zStep = tickStep(zMax, 5);
         for (int k = 0; k * zStep <= zMax + 1e-9; k++) {
             double z = k * zStep;
             axisLine(svg, f.x(0) - 5, f.z(z), f.x(0), f.z(z));
-            svg.start("text").attr("x", f.x(0) - 8).attr("y", f.z(z) + 4).attr("text-anchor", "end").text(tick(z))
+            svg.start("text").attr("x", f.x(0) - 8).attr("y", f.z(z) + 4).attr("text-anchor", "end").text(Formats.scaleStep(z))
                     .end();
         }
         svg.start("text").attr("class", "axis-title").attr("x", f.x(length / 2)).attr("y", f.z(0) + 36)
@@ -192,25 +194,14 @@ public final class SectionSvg {
     }
 
     private static void axisLine(SvgWriter svg, double x1, double y1, double x2, double y2) {
-        svg.start("line").attr("x1", x1).attr("y1", y1).attr("x2", x2).attr("y2", y2).attr("stroke", "#222222").end();
+        svg.start("line").attr("x1", x1).attr("y1", y1).attr("x2", x2).attr("y2", y2).attr("stroke", PlanStyle.INK.hex()).end();
     }
 
     /** A round tick spacing (1, 2 or 5 times a power of ten, at least 1 m) giving at most about {@code count} ticks. */
     static double tickStep(double range, int count) {
-        double raw = Math.max(range / count, 1);
-        double power = Math.pow(10, Math.floor(Math.log10(raw)));
-        for (double m : new double[] {1, 2, 5, 10}) {
-            if (m * power >= raw) {
-                return m * power;
-            }
-        }
-        return 10 * power;
+        return ScaleBar.step(Math.max(range / count, 1));
     }
 
-    /** An axis tick: the steps are whole metres. */
-    private static String tick(double value) {
-        return String.valueOf(Math.round(value));
-    }
 
     private static void legend(SvgWriter svg, double top, Texts texts) {
         svg.start("g").attr("class", "legend").attr("font-size", "12").attr("font-family", "sans-serif");
@@ -218,17 +209,9 @@ public final class SectionSvg {
             double y = top + i * LEGEND_ROW;
             LayerStyle style = PlanStyle.of(LEGEND.get(i));
             svg.start("rect").attr("x", LEFT).attr("y", y).attr("width", "18").attr("height", "12")
-                    .attr("fill", style.colour().hex()).attr("stroke", "#444444").attr("stroke-width", "0.5").end();
+                    .attr("fill", style.colour().hex()).attr("stroke", PlanStyle.SWATCH_OUTLINE.hex()).attr("stroke-width", "0.5").end();
             svg.start("text").attr("x", LEFT + 26).attr("y", y + 10).text(texts.text(style.legendKey())).end();
         }
         svg.end();
-    }
-
-    private static String whole(double value) {
-        return String.format(Locale.ROOT, "%.0f", value);
-    }
-
-    private static String exact(double value) {
-        return String.format(Locale.ROOT, "%.6f", value);
     }
 }
