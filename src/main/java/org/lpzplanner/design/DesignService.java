@@ -239,6 +239,16 @@ public class DesignService {
     public record MethodCheck(String structureId, String name, int sphereExposedItems, double sphereExposedRoofArea,
             boolean angleCovered, double angleUncoveredArea, int meshFacesPassing, int meshFacesFailing,
             int meshFacesNotApplicable, String agreement, List<String> notes) {
+
+        /** The exposed roof area as pages and report write an area. */
+        public String sphereExposedRoofAreaText() {
+            return Formats.area(sphereExposedRoofArea);
+        }
+
+        /** The roof area the angle method leaves uncovered, written as an area. */
+        public String angleUncoveredAreaText() {
+            return Formats.area(angleUncoveredArea);
+        }
     }
 
     public List<MethodCheck> methodChecks(long siteId) {

@@ -65,6 +65,16 @@ public class DownConductorService {
     public record DownConductors(String buildingId, List<String> structureIds, String name, double perimeter,
             double typicalSpacing, int required, List<double[]> positions, List<String> labels, boolean edited,
             double height, List<String> warnings) {
+
+        /** The perimeter as pages and report write a length. */
+        public String perimeterText() {
+            return Formats.length(perimeter);
+        }
+
+        /** The typical spacing of the level as pages and report write a length. */
+        public String typicalSpacingText() {
+            return Formats.length(typicalSpacing);
+        }
     }
 
     public List<DownConductors> list(long siteId) {

@@ -271,9 +271,8 @@ public final class ReportAssembler {
                 + " touch or overlap; the rest of such bands is listed apart as negligible."));
         List<List<String>> rows = new ArrayList<>();
         for (StructureRow r : StructureRow.of(facts.site().structures())) {
-            rows.add(List.of(r.id(), r.name(), Formats.area(r.footprintArea()), Formats.height(r.height()), r.roof(),
-                    r.ridgeHeight() == null ? "" : Formats.height(r.ridgeHeight()),
-                    r.parapet() == null ? "" : Formats.height(r.parapet()),
+            rows.add(List.of(r.id(), r.name(), r.footprintText(), r.heightText(), r.roof(),
+                    r.ridgeHeight() == null ? "" : r.ridgeHeightText(), r.parapet() == null ? "" : r.parapetText(),
                     Formats.height(facts.site().structures().get(r.index()).topHeight())));
         }
         blocks.add(new Schedule("Structures", List.of("Id", "Name", "Footprint (m²)", "Wall top (m)", "Roof",
