@@ -6,6 +6,8 @@
 // it, up to MAX_WIDENING; a larger zone (a tall building) is clipped to the drawing with a note. The layer is drawn again when the plan is replaced after an edit. Without this module
 // the checkbox stays hidden.
 
+import { frameOf, toDrawing } from './plan-frame.js';
+
 const SVG_NS = 'http://www.w3.org/2000/svg';
 const LAYER = 'collection-area-layer';
 const PAD = 12;
@@ -26,12 +28,6 @@ function setUp(toggle) {
   document.getElementById('collection-area-control').hidden = false;
   const clippedNote = document.getElementById('collection-area-clipped');
 
-  function frameOf(svg) {
-    const d = svg.dataset;
-    return { originX: Number(d.originX), originY: Number(d.originY), scale: Number(d.scale), margin: Number(d.margin),
-      drawHeight: Number(d.drawHeight) };
-  }
-
   function draw(svg) {
     if (svg.querySelector('.' + LAYER)) {
       return;
@@ -45,8 +41,7 @@ function setUp(toggle) {
     let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
     for (const ring of rings) {
       ring.forEach(([x, y], i) => {
-        const sx = f.margin + (x - f.originX) * f.scale;
-        const sy = f.margin + (f.originY - y) * f.scale;
+        const { x: sx, y: sy } = toDrawing(f, x, y);
         minX = Math.min(minX, sx); maxX = Math.max(maxX, sx);
         minY = Math.min(minY, sy); maxY = Math.max(maxY, sy);
         d += (i === 0 ? 'M' : 'L') + sx.toFixed(2) + ' ' + sy.toFixed(2);

@@ -1,7 +1,11 @@
 package org.lpzplanner.accounts;
 
+import jakarta.servlet.http.HttpServletRequest;
+import jakarta.servlet.http.HttpServletResponse;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
+import org.springframework.security.core.context.SecurityContextHolder;
+import org.springframework.security.web.authentication.logout.SecurityContextLogoutHandler;
 import org.springframework.stereotype.Controller;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -50,17 +54,19 @@ public class AccountPageController {
         return new ModelAndView("redirect:/account");
     }
 
+    /** A changed password ends every session of the account, this one too: the person signs in again. */
     @PostMapping("/account/password")
     public ModelAndView password(@RequestParam(required = false) String current,
-            @RequestParam(required = false) String password, @RequestParam(required = false) String passwordAgain) {
+            @RequestParam(required = false) String password, @RequestParam(required = false) String passwordAgain,
+            HttpServletRequest request, HttpServletResponse response) {
         try {
             if (password == null || !password.equals(passwordAgain)) {
                 throw new InvalidInputException("passwordAgain", "the two new passwords differ");
             }
             accounts.changePassword(me().accountId(), current, password);
-            ModelAndView page = page(HttpStatus.OK);
-            page.addObject("passwordChanged", true);
-            return page;
+            new SecurityContextLogoutHandler().logout(request, response,
+                    SecurityContextHolder.getContext().getAuthentication());
+            return new ModelAndView("redirect:/login?passwordChanged");
         } catch (InvalidInputException e) {
             ModelAndView page = page(HttpStatus.BAD_REQUEST);
             page.addObject("passwordError", e.getMessage());

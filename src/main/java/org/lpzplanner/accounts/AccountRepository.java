@@ -80,7 +80,7 @@ public class AccountRepository {
     }
 
     public Optional<Team> findTeamByName(String name) {
-        return jdbc.sql("SELECT id, name, created_at FROM teams WHERE name = ?").param(name)
+        return jdbc.sql("SELECT id, name, created_at FROM teams WHERE name_key = ?").param(nameKey(name))
                 .query(AccountRepository::teamRow).optional();
     }
 
@@ -92,7 +92,8 @@ public class AccountRepository {
 
     public Team insertTeam(String name, Instant now) {
         KeyHolder keys = new GeneratedKeyHolder();
-        jdbc.sql("INSERT INTO teams (name, created_at) VALUES (?, ?)").params(name, Timestamp.from(now))
+        jdbc.sql("INSERT INTO teams (name, name_key, created_at) VALUES (?, ?, ?)")
+                .params(name, nameKey(name), Timestamp.from(now))
                 .update(keys, "id");
         return new Team(keys.getKeyAs(Number.class).longValue(), name, now);
     }
@@ -103,7 +104,12 @@ public class AccountRepository {
     }
 
     public void renameTeam(long id, String name) {
-        jdbc.sql("UPDATE teams SET name = ? WHERE id = ?").params(name, id).update();
+        jdbc.sql("UPDATE teams SET name = ?, name_key = ? WHERE id = ?").params(name, nameKey(name), id).update();
+    }
+
+    /** Team names are unique whatever their letter case; the key carries the constraint. */
+    static String nameKey(String name) {
+        return name.toLowerCase(java.util.Locale.ROOT);
     }
 
     private static Account row(ResultSet rs, int rowNum) throws SQLException {

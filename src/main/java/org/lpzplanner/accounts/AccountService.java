@@ -24,11 +24,13 @@ public class AccountService {
     public static final int MAX_PASSWORD = 200;
 
     private final AccountRepository accounts;
+    private final ApiTokenService tokens;
     private final PasswordEncoder encoder;
     private final Clock clock;
 
-    public AccountService(AccountRepository accounts, PasswordEncoder encoder, Clock clock) {
+    public AccountService(AccountRepository accounts, ApiTokenService tokens, PasswordEncoder encoder, Clock clock) {
         this.accounts = accounts;
+        this.tokens = tokens;
         this.encoder = encoder;
         this.clock = clock;
     }
@@ -88,9 +90,10 @@ public class AccountService {
 
     /**
      * Changes an account's role, team or whether it may sign in, and ends the account's sessions on
-     * every instance when any of them changed. The last enabled administrator cannot be demoted or
+     * every instance when any of them changed. Disabling an account also revokes its API tokens, so
+     * enabling it again brings none back. The last enabled administrator cannot be demoted or
      * disabled, so the app always has someone who can manage accounts. (API tokens look the
-     * account up on every request, so they follow the change by themselves.)
+     * account up on every request, so they follow a new role or team by themselves.)
      */
     @Transactional
     public Account update(long accountId, Role role, long teamId, boolean enabled) {
@@ -108,10 +111,18 @@ public class AccountService {
             // sessions keep the role and team they signed in with: end them, so the change counts at once
             accounts.endSessions(account.email());
         }
+        if (account.enabled() && !enabled) {
+            tokens.revokeAll(accountId);
+        }
         return get(accountId);
     }
 
-    /** Sets a new password after checking the current one. */
+    /**
+     * Sets a new password after checking the current one, ends every session of the account (the
+     * one the change was made in too) and revokes its API tokens. People change a password mostly
+     * because it may be known to someone else, and whoever knew it could have opened sessions and
+     * made tokens with it; both end with the old password.
+     */
     @Transactional
     public void changePassword(long accountId, String current, String replacement) {
         Account account = get(accountId);
@@ -120,6 +131,8 @@ public class AccountService {
         }
         checkPassword(replacement);
         accounts.updatePassword(accountId, encoder.encode(replacement));
+        accounts.endSessions(account.email());
+        tokens.revokeAll(accountId);
     }
 
     public Account get(long accountId) {
@@ -151,7 +164,12 @@ public class AccountService {
         if (accounts.findTeamByName(n).isPresent()) {
             throw new InvalidInputException("team", "a team named \"" + n + "\" exists already");
         }
-        return accounts.insertTeam(n, now());
+        try {
+            return accounts.insertTeam(n, now());
+        } catch (DuplicateKeyException e) {
+            // Another request created the same name (in any letter case) since the check above.
+            throw new InvalidInputException("team", "a team named \"" + n + "\" exists already");
+        }
     }
 
     private static String checkTeamName(String name) {

@@ -67,6 +67,11 @@ public class ApiTokenService {
                 .update() > 0;
     }
 
+    /** Revokes every token of the account; returns how many there were. */
+    public int revokeAll(long accountId) {
+        return jdbc.sql("DELETE FROM api_tokens WHERE account_id = ?").param(accountId).update();
+    }
+
     /** The enabled account a token belongs to, empty for an unknown token. */
     public Optional<SignedInAccount> authenticate(String token) {
         if (token == null || !token.startsWith(PREFIX) || token.length() > 100) {

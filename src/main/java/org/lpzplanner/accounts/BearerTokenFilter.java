@@ -15,7 +15,9 @@ import org.springframework.web.filter.OncePerRequestFilter;
 
 /**
  * Signs in an API request that carries {@code Authorization: Bearer <token>}, for that request
- * only (no session). A wrong token answers 401 at once rather than falling back to the session.
+ * only: {@link ApiTokenScopeFilter} has already refused such requests outside {@code /api/} and
+ * hidden every session from them. A wrong token answers 401 at once rather than falling back to a
+ * session.
  */
 class BearerTokenFilter extends OncePerRequestFilter {
 

@@ -1,12 +1,15 @@
 package org.lpzplanner.accounts;
 
+import jakarta.servlet.DispatcherType;
 import jakarta.servlet.http.HttpServletResponse;
 import org.springframework.security.web.csrf.CsrfException;
 import java.nio.charset.StandardCharsets;
 import java.util.Map;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.annotation.Bean;
+import org.springframework.boot.web.servlet.FilterRegistrationBean;
 import org.springframework.context.annotation.Configuration;
+import org.springframework.core.Ordered;
 import org.springframework.http.HttpMethod;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
@@ -18,12 +21,17 @@ import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
 import org.springframework.security.crypto.password.DelegatingPasswordEncoder;
 import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
-import org.springframework.security.web.authentication.ExceptionMappingAuthenticationFailureHandler;
+import org.springframework.security.web.DefaultRedirectStrategy;
+import org.springframework.security.web.authentication.AuthenticationFailureHandler;
 import org.springframework.security.web.authentication.HttpStatusEntryPoint;
 import org.springframework.security.web.authentication.LoginUrlAuthenticationEntryPoint;
 import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
 import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWriter.ReferrerPolicy;
+import org.springframework.security.web.session.DisableEncodeUrlFilter;
+import org.springframework.security.web.savedrequest.HttpSessionRequestCache;
+import org.springframework.security.web.savedrequest.RequestCache;
 import org.springframework.security.web.util.matcher.RequestMatcher;
+import org.springframework.web.filter.RelativeRedirectFilter;
 
 /**
  * Who may do what. Everything needs a signed-in account except the sign-in page, the first-run
@@ -33,9 +41,13 @@ import org.springframework.security.web.util.matcher.RequestMatcher;
  * in the services ({@link CurrentAccount}), so another team's site answers 404 everywhere.
  *
  * <p>Pages use a session (shared by all app instances through Spring Session JDBC) and a CSRF
- * token on every form and state-changing call; API clients may instead send
- * {@code Authorization: Bearer <personal token>}, which needs no CSRF token because browsers never
- * add that header on their own.
+ * token on every form and state-changing call. API clients may instead send
+ * {@code Authorization: Bearer <personal token>} to addresses under {@code /api/}, which needs no
+ * CSRF token because browsers never add that header on their own; anywhere else a token is refused
+ * ({@link ApiTokenScopeFilter}), and no request with a token opens a session. Forms carry the
+ * token in a hidden field, the upload forms too: for a multipart body the servlet container parses
+ * the parts when the CSRF check asks for the field (the dispatcher servlet has a multipart
+ * configuration), so no address ever holds a token.
  */
 @Configuration(proxyBeanMethods = false)
 public class SecurityConfiguration {
@@ -65,12 +77,19 @@ public class SecurityConfiguration {
     @Bean
     SecurityFilterChain securityFilterChain(HttpSecurity http, AuthenticationManager manager,
             ApiTokenService tokens) throws Exception {
-        RequestMatcher api = request -> request.getRequestURI().startsWith(request.getContextPath() + "/api/");
-        ExceptionMappingAuthenticationFailureHandler failure = new ExceptionMappingAuthenticationFailureHandler();
-        failure.setExceptionMappings(Map.of(SignInThrottledException.class.getName(), "/login?throttled"));
-        failure.setDefaultFailureUrl("/login?error");
+        RequestMatcher api = ApiTokenScopeFilter::isApi;
+        DefaultRedirectStrategy redirects = new DefaultRedirectStrategy();
+        AuthenticationFailureHandler failure = (request, response, e) -> redirects.sendRedirect(request, response,
+                e instanceof SignInThrottledException locked ? "/login?throttled=" + locked.waitMinutes()
+                        : "/login?error");
+
+        RequestCache askedPages = new HttpSessionRequestCache();
+        LoginUrlAuthenticationEntryPoint signInPage = new LoginUrlAuthenticationEntryPoint("/login");
+        // the entry point would otherwise build an absolute address from the request's Host header
+        signInPage.setFavorRelativeUris(true);
 
         http.authenticationManager(manager)
+                .addFilterBefore(new ApiTokenScopeFilter(), DisableEncodeUrlFilter.class)
                 .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
                 .authorizeHttpRequests(a -> a
                         .requestMatchers("/login", "/setup", "/css/**", "/js/**", "/favicon.ico", "/error").permitAll()
@@ -86,14 +105,14 @@ public class SecurityConfiguration {
                         .requestMatchers(HttpMethod.GET, "/**").authenticated()
                         .requestMatchers(HttpMethod.HEAD, "/**").authenticated()
                         .anyRequest().hasAnyRole(Role.ADMIN.name(), Role.DESIGNER.name()))
+                .requestCache(c -> c.requestCache(askedPages))
                 .formLogin(f -> f.loginPage("/login").usernameParameter("email").failureHandler(failure)
-                        .defaultSuccessUrl("/", false).permitAll())
+                        .successHandler(new ReturnToAskedPage(askedPages)).permitAll())
                 .logout(l -> l.logoutUrl("/logout").logoutSuccessUrl("/login?signedOut"))
-                .csrf(c -> c.ignoringRequestMatchers(BearerTokenFilter::hasBearer))
+                .csrf(c -> c.ignoringRequestMatchers(request -> BearerTokenFilter.hasBearer(request) && api.matches(request)))
                 .exceptionHandling(e -> e
                         .defaultAuthenticationEntryPointFor(new HttpStatusEntryPoint(HttpStatus.UNAUTHORIZED), api)
-                        .defaultAuthenticationEntryPointFor(new LoginUrlAuthenticationEntryPoint("/login"),
-                                request -> true)
+                        .defaultAuthenticationEntryPointFor(signInPage, request -> true)
                         .defaultAccessDeniedHandlerFor((request, response, denied) -> jsonError(response,
                                 denied instanceof CsrfException
                                         ? "the request lacks a valid CSRF token: send the X-CSRF-TOKEN header of"
@@ -104,6 +123,21 @@ public class SecurityConfiguration {
                         .frameOptions(f -> f.deny())
                         .referrerPolicy(r -> r.policy(ReferrerPolicy.SAME_ORIGIN)));
         return http.build();
+    }
+
+    /**
+     * Redirects keep the relative address they are given: the servlet container would otherwise
+     * complete it with the request's {@code Host} header, which a client may forge. First of all
+     * filters, so that the redirects of the sign-in are covered too.
+     */
+    @Bean
+    FilterRegistrationBean<RelativeRedirectFilter> relativeRedirects() {
+        RelativeRedirectFilter filter = new RelativeRedirectFilter();
+        filter.setRedirectStatus(HttpStatus.FOUND);
+        FilterRegistrationBean<RelativeRedirectFilter> registration = new FilterRegistrationBean<>(filter);
+        registration.setOrder(Ordered.HIGHEST_PRECEDENCE);
+        registration.setDispatcherTypes(DispatcherType.REQUEST, DispatcherType.ERROR, DispatcherType.ASYNC);
+        return registration;
     }
 
     private static void jsonError(HttpServletResponse response, String message) throws java.io.IOException {

@@ -7,8 +7,9 @@ import org.springframework.security.core.AuthenticationException;
 import org.springframework.security.web.authentication.WebAuthenticationDetails;
 
 /**
- * Password sign-in behind the {@link SignInThrottle}: a throttled account or address is refused
- * before the password is checked, every failure is counted, a success clears the account's count.
+ * Password sign-in behind the {@link SignInThrottle}: every attempt is counted as failed before its
+ * password is checked (a locked account is refused right there, unchecked), a failure is recorded
+ * against the client address, a success takes the count back and clears the account's failures.
  */
 class ThrottledAuthenticationProvider implements AuthenticationProvider {
 
@@ -24,7 +25,7 @@ class ThrottledAuthenticationProvider implements AuthenticationProvider {
     public Authentication authenticate(Authentication authentication) throws AuthenticationException {
         String email = authentication.getName();
         String address = authentication.getDetails() instanceof WebAuthenticationDetails d ? d.getRemoteAddress() : null;
-        throttle.check(email, address);
+        throttle.reserve(email, address);
         try {
             Authentication result = passwords.authenticate(authentication);
             throttle.succeeded(email, address);

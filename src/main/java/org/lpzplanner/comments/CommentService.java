@@ -12,6 +12,8 @@ import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.jdbc.core.simple.JdbcClient;
+import org.springframework.jdbc.support.GeneratedKeyHolder;
+import org.springframework.jdbc.support.KeyHolder;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -57,10 +59,11 @@ public class CommentService {
         }
         var now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         String author = CurrentAccount.actorName();
+        KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO site_comments (site_id, author, body, created_at) VALUES (?, ?, ?, ?)")
-                .params(siteId, author, text, Timestamp.from(now)).update();
+                .params(siteId, author, text, Timestamp.from(now)).update(keys, "id");
         audit.record(siteId, "comment", text.length() > 200 ? text.substring(0, 199) + "\u2026" : text);
-        return new SiteComment(0, siteId, author, text, now);
+        return new SiteComment(keys.getKeyAs(Number.class).longValue(), siteId, author, text, now);
     }
 
     /** The site's comments, oldest first. */

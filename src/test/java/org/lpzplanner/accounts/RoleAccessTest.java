@@ -201,8 +201,14 @@ class RoleAccessTest {
 
         mvc.perform(post("/sites/{id}/comments", siteId).param("comment", "Check the north parapet"))
                 .andExpect(status().is3xxRedirection());
-        mvc.perform(post("/api/sites/{id}/comments", siteId).contentType(MediaType.APPLICATION_JSON)
-                .content("{\"comment\": \"Second look done\"}")).andExpect(status().isCreated());
+        String created = mvc.perform(post("/api/sites/{id}/comments", siteId).contentType(MediaType.APPLICATION_JSON)
+                .content("{\"comment\": \"Second look done\"}")).andExpect(status().isCreated())
+                .andReturn().getResponse().getContentAsString();
+        // the answer names the stored comment, the same id its list gives it
+        long commentId = tools.jackson.databind.json.JsonMapper.builder().build().readTree(created).path("id").asLong();
+        assertThat(commentId).isPositive();
+        assertThat(mvc.perform(get("/api/sites/{id}/comments", siteId)).andReturn().getResponse()
+                .getContentAsString()).contains("\"id\":" + commentId);
         mvc.perform(post("/sites/{id}/reviewed", siteId)).andExpect(status().is3xxRedirection());
 
         String after = mvc.perform(get("/sites/{id}", siteId)).andReturn().getResponse().getContentAsString();

@@ -18,7 +18,8 @@ import java.util.stream.Collectors;
 /**
  * Obtains a personal API token from a running app the way a person does: signs in on the sign-in
  * page and creates a token on the account page. Clients that run outside the app (the load script,
- * tests that start the app in its own JVM) then send {@code Authorization: Bearer <token>}.
+ * tests that start the app in its own JVM) then send {@code Authorization: Bearer <token>} to the
+ * JSON API; pages take only a signed-in session ({@link #signIn}).
  */
 public final class ApiTokenOverHttp {
 
@@ -31,6 +32,11 @@ public final class ApiTokenOverHttp {
     /** Signs in with the e-mail and password and returns a new API token of that account. */
     public static String create(URI base, String email, String password, String label)
             throws IOException, InterruptedException {
+        return create(base, signIn(base, email, password), label);
+    }
+
+    /** Signs in on the sign-in page; the client returned holds the session cookie, as a browser does. */
+    public static HttpClient signIn(URI base, String email, String password) throws IOException, InterruptedException {
         HttpClient browser = HttpClient.newBuilder().cookieHandler(new CookieManager())
                 .followRedirects(HttpClient.Redirect.NEVER).connectTimeout(Duration.ofSeconds(10)).build();
         String loginPage = send(browser, HttpRequest.newBuilder(base.resolve("/login")).GET(), 200).body();
@@ -40,6 +46,11 @@ public final class ApiTokenOverHttp {
         if (next.contains("/login")) {
             throw new IllegalStateException("sign-in as " + email + " was refused (" + next + ")");
         }
+        return browser;
+    }
+
+    /** Creates a token on the account page of a client signed in by {@link #signIn}. */
+    public static String create(URI base, HttpClient browser, String label) throws IOException, InterruptedException {
         String accountPage = send(browser, HttpRequest.newBuilder(base.resolve("/account")).GET(), 200).body();
         String created = send(browser, form(base.resolve("/account/tokens"),
                 Map.of("label", label, "_csrf", csrf(accountPage, "/account"))), 200).body();

@@ -33,9 +33,11 @@ import tools.jackson.databind.json.JsonMapper;
  * <pre>scripts/load [--url http://127.0.0.1:8080] [--users 50] [--seconds 60] [--max-requests 100000] [--pid N]
  *             (--token lpz_… | --email E [--password P])</pre>
  *
- * Every request carries {@code Authorization: Bearer} with a designer's or administrator's API
+ * Every API request carries {@code Authorization: Bearer} with a designer's or administrator's API
  * token: given with {@code --token} (or {@code LPZ_API_TOKEN}), or created by signing in with
- * {@code --email} and the password ({@code --password} or {@code LPZ_LOAD_PASSWORD}).
+ * {@code --email} and the password ({@code --password} or {@code LPZ_LOAD_PASSWORD}). API tokens do
+ * not open pages, so the plan page is viewed with the session of that sign-in; with a token alone
+ * the view step is left out.
  */
 public final class LoadBenchmark {
 
@@ -49,10 +51,13 @@ public final class LoadBenchmark {
     private final AtomicLong requests = new AtomicLong();
 
     private final String token;
+    /** Signed in on the sign-in page (pages need a session), or null when only a token was given. */
+    private final HttpClient pages;
 
-    private LoadBenchmark(URI base, String token) {
+    private LoadBenchmark(URI base, String token, HttpClient pages) {
         this.base = base;
         this.token = token;
+        this.pages = pages;
         for (String step : STEPS) {
             latencies.put(step, java.util.Collections.synchronizedList(new ArrayList<>()));
         }
@@ -75,14 +80,20 @@ public final class LoadBenchmark {
         int seconds = Math.min(600, Integer.parseInt(options.get("seconds")));
         long maxRequests = Long.parseLong(options.get("max-requests"));
         String token = options.get("token");
+        HttpClient pages = null;
+        if (!options.get("email").isBlank()) {
+            pages = ApiTokenOverHttp.signIn(base, options.get("email"), options.get("password"));
+        } else {
+            System.out.println("No --email: the view step (a page, which needs a signed-in session) is left out.");
+        }
         if (token.isBlank()) {
-            if (options.get("email").isBlank()) {
+            if (pages == null) {
                 throw new IllegalArgumentException("give --token lpz_… (or LPZ_API_TOKEN), or --email and the password"
                         + " (--password or LPZ_LOAD_PASSWORD) of a designer or administrator");
             }
-            token = ApiTokenOverHttp.create(base, options.get("email"), options.get("password"), "load script");
+            token = ApiTokenOverHttp.create(base, pages, "load script");
         }
-        new LoadBenchmark(base, token).run(users, seconds, maxRequests, options.get("pid"));
+        new LoadBenchmark(base, token, pages).run(users, seconds, maxRequests, options.get("pid"));
     }
 
     private void run(int users, int seconds, long maxRequests, String pid) throws Exception {
@@ -112,7 +123,9 @@ public final class LoadBenchmark {
         double x = 25;
         try {
             while (System.nanoTime() < end && requests.get() < maxRequests) {
-                timed("view", HttpRequest.newBuilder(base.resolve("/sites/" + siteId)).GET());
+                if (pages != null) {
+                    viewPage(siteId);
+                }
                 HttpResponse<String> analysed = timed("analyse",
                         HttpRequest.newBuilder(base.resolve("/api/sites/" + siteId + "/analyses")).POST(
                                 HttpRequest.BodyPublishers.noBody()));
@@ -133,6 +146,16 @@ public final class LoadBenchmark {
             statuses.computeIfAbsent("client error: " + e.getClass().getSimpleName(), k -> new AtomicLong())
                     .incrementAndGet();
         }
+    }
+
+    /** The plan page, with the session of the sign-in (a token is refused on pages). */
+    private void viewPage(long siteId) throws IOException, InterruptedException {
+        long t0 = System.nanoTime();
+        HttpResponse<String> response = pages.send(HttpRequest.newBuilder(base.resolve("/sites/" + siteId))
+                .timeout(Duration.ofSeconds(120)).GET().build(), HttpResponse.BodyHandlers.ofString());
+        latencies.get("view").add(System.nanoTime() - t0);
+        requests.incrementAndGet();
+        statuses.computeIfAbsent("view " + response.statusCode(), k -> new AtomicLong()).incrementAndGet();
     }
 
     private HttpResponse<String> timed(String step, HttpRequest.Builder request) throws IOException, InterruptedException {

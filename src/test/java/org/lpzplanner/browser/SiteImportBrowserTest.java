@@ -42,6 +42,9 @@ class SiteImportBrowserTest extends BrowserTestBase {
         assertThat(browser.findElement(By.cssSelector("a[href='/api/sites/" + site.id() + "/export']")).getText())
                 .isEqualTo("Export site");
         Files.write(shots.resolve("site-list-import.png"), browser.getScreenshotAs(OutputType.BYTES));
+        // the form's token goes in a hidden field of the body, never in the address
+        assertThat(browser.findElement(By.id("import-form")).getDomAttribute("action")).isEqualTo("/sites/import");
+        assertThat(browser.findElements(By.cssSelector("#import-form input[type=hidden][name=_csrf]"))).hasSize(1);
         browser.findElement(By.cssSelector("#import-form input[type=file]")).sendKeys(export.toAbsolutePath().toString());
         clickAndAwaitNewPage(By.cssSelector("#import-form button[type=submit]"));
 

@@ -24,6 +24,9 @@ class UploadAndPlanBrowserTest extends BrowserTestBase {
     @Test
     void uploadedSiteOpensOnItsPlanWithDrawingSummaryAndCautions() throws Exception {
         browser.get("http://localhost:" + port + "/");
+        // the form's token goes in a hidden field of the body, never in the address
+        assertThat(browser.findElement(By.id("upload-form")).getDomAttribute("action")).isEqualTo("/sites");
+        assertThat(browser.findElements(By.cssSelector("#upload-form input[type=hidden][name=_csrf]"))).hasSize(1);
         WebElement file = browser.findElement(By.cssSelector("input[type=file][name=file]"));
         file.sendKeys(Path.of("sample-sites/harbour-warehouse.geojson").toAbsolutePath().toString());
         browser.findElement(By.name("name")).sendKeys("Browser check shed");

@@ -76,19 +76,22 @@ class UploadLimitTest {
         assertThat(sites.count()).isEqualTo(before);
     }
 
+    /** The forms are pages: an API token is refused there before the body is read. */
     @ParameterizedTest
     @CsvSource({"/sites, 12", "/sites/import, 12"})
-    void formUploadOverTheLimitShowsAPageWithTheLimit(String path, int megabytes) throws Exception {
+    void formUploadWithAnApiTokenIsRefusedAndStoresNothing(String path, int megabytes) throws Exception {
         long before = sites.count();
         HttpResponse<String> r = post(path, megabytes);
 
-        assertThat(r.statusCode()).isEqualTo(413);
-        assertThat(r.body()).contains("id=\"upload-refused\"", "larger than the upload limit of 10 MB")
-                .doesNotContain("Exception");
+        assertThat(r.statusCode()).isEqualTo(403);
+        assertThat(r.body()).contains("only for the JSON API under /api/");
         assertThat(sites.count()).isEqualTo(before);
     }
 
-    /** The upload form as a browser sends it: a session, and the form's token in its address. */
+    /**
+     * The upload form as a browser sends it: a session, and the form's token in a hidden field after
+     * the file, so that it is read only with the oversized body.
+     */
     @ParameterizedTest
     @CsvSource({"/sites, 12", "/sites/import, 12"})
     void browserFormUploadOverTheLimitShowsThePageWithTheLimit(String path, int megabytes) throws Exception {
@@ -104,19 +107,27 @@ class UploadLimitTest {
         String list = client.send(HttpRequest.newBuilder(URI.create(base + "/login"))
                 .header("Content-Type", "application/x-www-form-urlencoded")
                 .POST(HttpRequest.BodyPublishers.ofString(form)).build(), HttpResponse.BodyHandlers.ofString()).body();
-        Matcher action = Pattern.compile("action=\"(" + Pattern.quote(path) + "\\?_csrf=[^\"]+)\"").matcher(list);
-        assertThat(action.find()).as("the site list's upload form at %s carries its token in the address", path)
+        Matcher action = Pattern.compile("action=\"(" + Pattern.quote(path) + ")\"").matcher(list);
+        assertThat(action.find()).as("the site list's upload form posts to %s, with no token in the address", path)
                 .isTrue();
         String boundary = "lpz-limit";
+        ByteArrayOutputStream body = new ByteArrayOutputStream();
+        byte[] file = multipart(boundary, megabytes);
+        // the file's part without the closing delimiter, then the token's part and the delimiter
+        body.write(file, 0, file.length - ("\r\n--" + boundary + "--\r\n").length());
+        body.write(("\r\n--" + boundary + "\r\nContent-Disposition: form-data; name=\"_csrf\"\r\n\r\n"
+                + hiddenToken(list.substring(list.indexOf("action=\"" + path + "\""))) + "\r\n--" + boundary
+                + "--\r\n").getBytes(StandardCharsets.UTF_8));
         HttpResponse<String> r = client.send(HttpRequest.newBuilder(URI.create(base + action.group(1)))
                 .header("Accept", "text/html")
                 .header("Content-Type", "multipart/form-data; boundary=" + boundary)
-                .POST(HttpRequest.BodyPublishers.ofByteArray(multipart(boundary, megabytes))).build(),
+                .POST(HttpRequest.BodyPublishers.ofByteArray(body.toByteArray())).build(),
                 HttpResponse.BodyHandlers.ofString());
 
         assertThat(r.statusCode()).isEqualTo(413);
         assertThat(r.body()).contains("id=\"upload-refused\"", "larger than the upload limit of 10 MB")
                 .doesNotContain("Exception");
+        assertThat(r.uri().toString()).doesNotContain("csrf");
         assertThat(sites.count()).isEqualTo(before);
     }
 

@@ -277,7 +277,7 @@ class SiteTransferTest {
     void anotherTeamsSiteIsNotExported() throws Exception {
         long id = sites.create("harbour-warehouse.geojson",
                 Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson")), "Other shed", "III", null).id();
-        jdbc.sql("INSERT INTO teams (name, created_at) VALUES ('Export elsewhere', CURRENT_TIMESTAMP)").update();
+        jdbc.sql("INSERT INTO teams (name, name_key, created_at) VALUES ('Export elsewhere', 'export elsewhere', CURRENT_TIMESTAMP)").update();
         jdbc.sql("UPDATE sites SET team_id = (SELECT id FROM teams WHERE name = 'Export elsewhere') WHERE id = ?")
                 .param(id).update();
         mvc.perform(get("/api/sites/" + id + "/export")).andExpect(status().isNotFound());
