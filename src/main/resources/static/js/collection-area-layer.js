@@ -1,6 +1,7 @@
 // Collection area layer on the plan page: a checkbox draws the risk estimate's collection area A_D
-// (rings in local metres, from the checkbox's data-zone) under the structures of the plan, in the
-// plan's own frame (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
+// (rings in local metres, from the checkbox's data-zone; its fill and outline as the plan's renderer
+// draws the layer, from data-style) under the structures of the plan, in the plan's own frame
+// (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
 // often reaches beyond the drawn site: the view is widened to hold it and the legend moved below
 // it, up to MAX_WIDENING; a larger zone (a tall building) is clipped to the drawing with a note. The layer is drawn again when the plan is replaced after an edit. Without this module
 // the checkbox stays hidden.
@@ -20,6 +21,7 @@ function setUp(toggle) {
     return;
   }
   const rings = JSON.parse(toggle.dataset.zone || '[]');
+  const style = JSON.parse(toggle.dataset.style || '{}');
   if (rings.length === 0) {
     return;
   }
@@ -49,13 +51,16 @@ function setUp(toggle) {
     const path = document.createElementNS(SVG_NS, 'path');
     path.setAttribute('class', LAYER);
     path.setAttribute('d', d);
+    for (const [name, value] of Object.entries(style)) {
+      path.setAttribute(name, value);
+    }
     path.setAttribute('fill-rule', 'evenodd');
     const title = document.createElementNS(SVG_NS, 'title');
     title.textContent = toggle.dataset.title;
     path.appendChild(title);
     // over the protected ground (opaque) and under the exposed areas, edges and parts, which stay on top
     const grounds = svg.querySelectorAll('path.protected-ground');
-    const below = grounds.length > 0 ? grounds[grounds.length - 1] : svg.querySelector('rect');
+    const below = grounds.length > 0 ? grounds[grounds.length - 1] : svg.querySelector('rect.plan-background');
     svg.insertBefore(path, below ? below.nextSibling : svg.firstChild);
 
     const [vx, vy, vw, vh] = svg.dataset.viewBoxPlain.split(/\s+/).map(Number);
@@ -80,7 +85,7 @@ function setUp(toggle) {
     svg.setAttribute('viewBox', [left, top, width, height].map((v) => v.toFixed(1)).join(' '));
     svg.setAttribute('height', (Number(svg.getAttribute('width')) * height / width).toFixed(0));
     // the drawing's background grows with the view, down to where the legend now starts
-    const background = svg.querySelector('rect');
+    const background = svg.querySelector('rect.plan-background');
     if (background) {
       background.dataset.plain = ['x', 'y', 'width', 'height'].map((a) => background.getAttribute(a)).join(' ');
       setBox(background, [left, top, width, f.drawHeight + overhang - top]);
@@ -109,7 +114,7 @@ function setUp(toggle) {
     if (legend) {
       legend.removeAttribute('transform');
     }
-    const background = svg.querySelector('rect');
+    const background = svg.querySelector('rect.plan-background');
     if (background && background.dataset.plain) {
       setBox(background, background.dataset.plain.split(' ').map(Number));
       delete background.dataset.plain;

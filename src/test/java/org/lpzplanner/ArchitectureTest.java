@@ -12,7 +12,8 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The engine is a plain library: the rest of the product depends on it, never the reverse. The
- * product's features (top-level packages) form no cycle, and the low packages know no feature.
+ * product's features (top-level packages) form no cycle, and the low packages (system, jobs,
+ * drawing, common) know no feature.
  */
 class ArchitectureTest {
 
@@ -83,9 +84,19 @@ class ArchitectureTest {
                 .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.accounts..",
                         "org.lpzplanner.airtermination..", "org.lpzplanner.analysis..", "org.lpzplanner.audit..",
                         "org.lpzplanner.cli..", "org.lpzplanner.comments..", "org.lpzplanner.demo..",
-                        "org.lpzplanner.design..", "org.lpzplanner.keepout..", "org.lpzplanner.plan..",
+                        "org.lpzplanner.design..", "org.lpzplanner.drawing..", "org.lpzplanner.keepout..",
+                        "org.lpzplanner.plan..",
                         "org.lpzplanner.report..", "org.lpzplanner.risk..", "org.lpzplanner.sections..",
                         "org.lpzplanner.sites..", "org.lpzplanner.transfer..")
+                .check(classes);
+    }
+
+    @Test
+    void drawingsKnowNoFeature() {
+        // the plan drawing model, its style table and renderers: every feature may draw with them
+        noClasses().that().resideInAPackage("org.lpzplanner.drawing..")
+                .should().dependOnClassesThat().resideOutsideOfPackages("org.lpzplanner.drawing..",
+                        "org.lpzplanner.common..", "java..")
                 .check(classes);
     }
 

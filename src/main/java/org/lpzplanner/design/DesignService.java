@@ -13,6 +13,7 @@ import org.lpzplanner.airtermination.AirTerminationService;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.AngleCoverage;
 import org.lpzplanner.engine.design.AngleMethodCheck;
 import org.lpzplanner.engine.design.BondingRoutes;
@@ -195,9 +196,9 @@ public class DesignService {
         if (rods.isEmpty() && conductors.isEmpty()) {
             throw new InvalidInputException("proposal", "the proposal adds no parts; there is nothing to accept");
         }
-        String text = String.format(Locale.ROOT, "accepted proposal %s: %d rods, %d masts, %d conductors (%.1f m)%s",
-                job.id(), rods.size() - masts, masts, conductors.size(), conductorLength,
-                job.result().path("complete").asBoolean() ? "" : ", not complete");
+        String text = "accepted proposal " + job.id() + ": " + (rods.size() - masts) + " rods, " + masts + " masts, "
+                + conductors.size() + " conductors (" + Formats.length(conductorLength) + " m)"
+                + (job.result().path("complete").asBoolean() ? "" : ", not complete");
         AirTerminationService.AddedParts added = parts.addParts(siteId, version, rods, conductors, "proposal-accepted", text);
         analyses.run(siteId, null, null, null);
         Accepted accepted = new Accepted(added.rodIds(), added.conductorIds(), sites.get(siteId).version());
@@ -238,6 +239,16 @@ public class DesignService {
     public record MethodCheck(String structureId, String name, int sphereExposedItems, double sphereExposedRoofArea,
             boolean angleCovered, double angleUncoveredArea, int meshFacesPassing, int meshFacesFailing,
             int meshFacesNotApplicable, String agreement, List<String> notes) {
+
+        /** The exposed roof area as pages and report write an area. */
+        public String sphereExposedRoofAreaText() {
+            return Formats.area(sphereExposedRoofArea);
+        }
+
+        /** The roof area the angle method leaves uncovered, written as an area. */
+        public String angleUncoveredAreaText() {
+            return Formats.area(angleUncoveredArea);
+        }
     }
 
     public List<MethodCheck> methodChecks(long siteId) {
@@ -343,9 +354,8 @@ public class DesignService {
         } else if (route.basis() == BondingRoutes.Basis.NONE) {
             note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
         } else if (c.status() == SeparationSurvey.Status.NOT_CONFIRMED) {
-            note = String.format(Locale.ROOT, "it clears s at every point, but %s has no drawn route to a down-conductor"
-                    + " (there l is at least %.2f m): not confirmed until its route is drawn", u.partId(),
-                    u.result().length());
+            note = "it clears s at every point, but " + u.partId() + " has no drawn route to a down-conductor (there l is"
+                    + " at least " + Formats.length(u.result().length()) + " m): not confirmed until its route is drawn";
         } else {
             note = "l along the drawn air-termination and down the down-conductor";
         }

@@ -6,10 +6,10 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.locationtech.jts.geom.Polygon;
-import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.common.Formats;
+import org.lpzplanner.drawing.PlanItem;
 import org.lpzplanner.sites.SiteDuplicated;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -78,7 +78,7 @@ public class KeepOutAreaService {
         long id = keys.getKeyAs(Number.class).longValue();
         double area = KeepOutOutline.area(outline);
         audit.record(siteId, "keep-out-added", "\"" + n + "\", " + outline.size() + " corners, "
-                + String.format(Locale.ROOT, "%.2f", area) + " m²");
+                + Formats.area(area) + " m²");
         return new KeepOutArea(id, siteId, n, outline, area, now);
     }
 
@@ -104,8 +104,8 @@ public class KeepOutAreaService {
 
     /** The site's areas as the plan drawing takes them. */
     @Transactional(readOnly = true)
-    public List<PlanSvg.KeepOut> forPlan(long siteId) {
-        return areas(siteId).stream().map(a -> new PlanSvg.KeepOut(a.name(), a.corners())).toList();
+    public List<PlanItem.KeepOutArea> forPlan(long siteId) {
+        return areas(siteId).stream().map(a -> new PlanItem.KeepOutArea(a.name(), a.corners())).toList();
     }
 
     /**

@@ -5,8 +5,8 @@ import java.time.Clock;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.List;
-import java.util.Locale;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.sites.SiteDuplicated;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -83,8 +83,8 @@ public class SiteCutService {
                 .params(siteId, n, c[0], c[1], c[2], c[3], Timestamp.from(now))
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
-        audit.record(siteId, "save cut", "\"" + n + "\" from (" + metres(c[0]) + ", " + metres(c[1]) + ") to ("
-                + metres(c[2]) + ", " + metres(c[3]) + ")");
+        audit.record(siteId, "save cut", "\"" + n + "\" from (" + Formats.coordinate(c[0]) + ", " + Formats.coordinate(c[1])
+                + ") to (" + Formats.coordinate(c[2]) + ", " + Formats.coordinate(c[3]) + ")");
         return new SiteCut(id, siteId, n, c[0], c[1], c[2], c[3], now);
     }
 
@@ -113,10 +113,6 @@ public class SiteCutService {
         }
         jdbc.sql("DELETE FROM site_cuts WHERE site_id = ? AND id = ?").params(siteId, cutId).update();
         audit.record(siteId, "delete cut", "\"" + names.get(0) + "\"");
-    }
-
-    private static String metres(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
     }
 
     /** A copied site keeps the original's saved cuts (the same file, so the same local frame). */
