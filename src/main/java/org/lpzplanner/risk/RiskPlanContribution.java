@@ -6,6 +6,7 @@ import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.drawing.Layer;
 import org.lpzplanner.drawing.PlanSvgRenderer;
 import org.lpzplanner.engine.model.ProtectionLevel;
@@ -15,7 +16,6 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.context.MessageSource;
 import org.springframework.stereotype.Component;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The risk estimate on the plan page: the level the analysis form starts at, with a note saying
@@ -32,7 +32,6 @@ import tools.jackson.databind.json.JsonMapper;
 class RiskPlanContribution implements PlanContribution {
 
     private static final Logger LOG = LoggerFactory.getLogger(RiskPlanContribution.class);
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private final RiskService risk;
     private final MessageSource messages;
@@ -82,7 +81,7 @@ class RiskPlanContribution implements PlanContribution {
         model.put("collectionZone", rings(a.area().zone()));
         model.put("collectionAreaText", RiskFormat.area(a.area().upperBound()));
         // drawn by the page's script into the plan, as the plan's renderer draws the layer
-        model.put("collectionAreaStyle", JSON.writeValueAsString(PlanSvgRenderer.areaAttributes(Layer.COLLECTION_AREA)));
+        model.put("collectionAreaStyle", Json.MAPPER.writeValueAsString(PlanSvgRenderer.areaAttributes(Layer.COLLECTION_AREA)));
         return model;
     }
 
