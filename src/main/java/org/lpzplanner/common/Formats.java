@@ -38,6 +38,23 @@ public final class Formats {
         return fixed(metres, 2);
     }
 
+    /**
+     * A required separation distance s in metres, to the millimetre and rounded up, so that the
+     * printed requirement is never less than the computed one: 0.4512 is "0.452".
+     */
+    public static String requiredSeparation(double metres) {
+        return fixed(Math.ceil(metres * 1000 - 1e-9) / 1000, 3);
+    }
+
+    /**
+     * A distance that a separation requirement is checked against, in metres, to the millimetre and
+     * rounded down, so that the printed distance is never more than the measured one: 0.4578 is
+     * "0.457".
+     */
+    public static String availableSeparation(double metres) {
+        return fixed(Math.floor(metres * 1000 + 1e-9) / 1000, 3);
+    }
+
     /** A plan area in square metres, to the hundredth: "290.93". */
     public static String area(double squareMetres) {
         return fixed(squareMetres, 2);

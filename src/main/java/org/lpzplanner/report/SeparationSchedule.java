@@ -73,8 +73,8 @@ final class SeparationSchedule {
             unusual |= verdict.equals("connected") || verdict.equals("not confirmed");
             rows.add(List.of(name, insulation, number, sharing(c.route()),
                     Formats.length(c.result().length()), c.route().describe(),
-                    Formats.length(c.result().required()),
-                    Formats.length(c.result().actual()), verdict));
+                    Formats.requiredSeparation(c.result().required()),
+                    Formats.availableSeparation(c.result().actual()), verdict));
         }
         List<String> notes = new ArrayList<>();
         notes.add("s must hold at every point of the protection system, each with its own l (IEC 62305-3:2010 6.3):"

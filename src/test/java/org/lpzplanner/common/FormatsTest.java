@@ -40,6 +40,31 @@ class FormatsTest {
         }
     }
 
+    /**
+     * A printed separation check must not look better than the computed one: the required distance
+     * is never printed below its value, the available one never above (both within 1 mm, and to
+     * within 1e-9 m of float noise, far below any measurement).
+     */
+    @Test
+    void separationDistancesPrintOnTheSafeSide() {
+        BigDecimal noise = new BigDecimal("1e-9");
+        BigDecimal millimetre = new BigDecimal("0.001");
+        for (int i = 0; i < 5000; i++) {
+            double v = Math.abs(sample());
+            BigDecimal exact = new BigDecimal(v);
+            BigDecimal required = new BigDecimal(Formats.requiredSeparation(v));
+            BigDecimal available = new BigDecimal(Formats.availableSeparation(v));
+            assertThat(required.scale()).isEqualTo(3);
+            assertThat(required.add(noise)).as("required %s", v).isGreaterThanOrEqualTo(exact);
+            assertThat(required.subtract(exact)).isLessThanOrEqualTo(millimetre);
+            assertThat(available.subtract(noise)).as("available %s", v).isLessThanOrEqualTo(exact);
+            assertThat(exact.subtract(available)).isLessThanOrEqualTo(millimetre);
+        }
+        assertThat(Formats.requiredSeparation(0.4512)).isEqualTo("0.452");
+        assertThat(Formats.availableSeparation(0.4578)).isEqualTo("0.457");
+        assertThat(Formats.requiredSeparation(0.452)).isEqualTo("0.452");
+    }
+
     @Test
     void trimmedQuantitiesAreTheRoundedValueWithoutTrailingZeros() {
         for (int i = 0; i < 5000; i++) {
