@@ -2,11 +2,10 @@
 // API, a progress bar follows it, a button cancels it, and the page reloads with the new result
 // when it is stored. Without this module the form posts and waits as before.
 
-const POLL_MS = 250;
+import { csrfHeaders, problemText } from './api.js';
+import { fill as format } from './numbers.js';
 
-function format(template, ...values) {
-  return values.reduce((text, value, k) => text.replace('{' + k + '}', value), template || '');
-}
+const POLL_MS = 250;
 
 function setUp(form) {
   const box = document.getElementById('analysis-progress');
@@ -31,22 +30,11 @@ function setUp(form) {
     return msg[key] || stage;
   }
 
-  // the session's CSRF token, which every state-changing request must carry
-  function csrfHeaders() {
-    const headers = {Accept: 'application/json'};
-    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
-    const csrfToken = document.querySelector('meta[name="csrf-token"]');
-    if (csrfHeader && csrfToken) {
-      headers[csrfHeader.content] = csrfToken.content;
-    }
-    return headers;
-  }
-
   async function follow() {
     const response = await fetch(jobUrl, {headers: {Accept: 'application/json'}});
     const job = await response.json();
     if (!response.ok) {
-      show(0, format(msg.msgFailed, job.error || response.status), false);
+      show(0, format(msg.msgFailed, problemText(job) || response.status), false);
       return;
     }
     if (job.state === 'DONE') {
@@ -80,7 +68,7 @@ function setUp(form) {
       return;
     }
     if (response.status !== 202) {
-      show(0, format(msg.msgFailed, body.error || response.status), false);
+      show(0, format(msg.msgFailed, problemText(body) || response.status), false);
       return;
     }
     jobUrl = response.headers.get('Location');

@@ -1,9 +1,12 @@
 // Collection area layer on the plan page: a checkbox draws the risk estimate's collection area A_D
-// (rings in local metres, from the checkbox's data-zone) under the structures of the plan, in the
-// plan's own frame (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
+// (rings in local metres, from the checkbox's data-zone; its fill and outline as the plan's renderer
+// draws the layer, from data-style) under the structures of the plan, in the plan's own frame
+// (data-origin-x, data-origin-y, data-scale, data-margin of the <svg>). The zone
 // often reaches beyond the drawn site: the view is widened to hold it and the legend moved below
 // it, up to MAX_WIDENING; a larger zone (a tall building) is clipped to the drawing with a note. The layer is drawn again when the plan is replaced after an edit. Without this module
 // the checkbox stays hidden.
+
+import { frameOf, toDrawing } from './plan-frame.js';
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
 const LAYER = 'collection-area-layer';
@@ -18,17 +21,12 @@ function setUp(toggle) {
     return;
   }
   const rings = JSON.parse(toggle.dataset.zone || '[]');
+  const style = JSON.parse(toggle.dataset.style || '{}');
   if (rings.length === 0) {
     return;
   }
   document.getElementById('collection-area-control').hidden = false;
   const clippedNote = document.getElementById('collection-area-clipped');
-
-  function frameOf(svg) {
-    const d = svg.dataset;
-    return { originX: Number(d.originX), originY: Number(d.originY), scale: Number(d.scale), margin: Number(d.margin),
-      drawHeight: Number(d.drawHeight) };
-  }
 
   function draw(svg) {
     if (svg.querySelector('.' + LAYER)) {
@@ -43,8 +41,7 @@ function setUp(toggle) {
     let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
     for (const ring of rings) {
       ring.forEach(([x, y], i) => {
-        const sx = f.margin + (x - f.originX) * f.scale;
-        const sy = f.margin + (f.originY - y) * f.scale;
+        const { x: sx, y: sy } = toDrawing(f, x, y);
         minX = Math.min(minX, sx); maxX = Math.max(maxX, sx);
         minY = Math.min(minY, sy); maxY = Math.max(maxY, sy);
         d += (i === 0 ? 'M' : 'L') + sx.toFixed(2) + ' ' + sy.toFixed(2);
@@ -54,13 +51,16 @@ function setUp(toggle) {
     const path = document.createElementNS(SVG_NS, 'path');
     path.setAttribute('class', LAYER);
     path.setAttribute('d', d);
+    for (const [name, value] of Object.entries(style)) {
+      path.setAttribute(name, value);
+    }
     path.setAttribute('fill-rule', 'evenodd');
     const title = document.createElementNS(SVG_NS, 'title');
     title.textContent = toggle.dataset.title;
     path.appendChild(title);
     // over the protected ground (opaque) and under the exposed areas, edges and parts, which stay on top
     const grounds = svg.querySelectorAll('path.protected-ground');
-    const below = grounds.length > 0 ? grounds[grounds.length - 1] : svg.querySelector('rect');
+    const below = grounds.length > 0 ? grounds[grounds.length - 1] : svg.querySelector('rect.plan-background');
     svg.insertBefore(path, below ? below.nextSibling : svg.firstChild);
 
     const [vx, vy, vw, vh] = svg.dataset.viewBoxPlain.split(/\s+/).map(Number);
@@ -85,7 +85,7 @@ function setUp(toggle) {
     svg.setAttribute('viewBox', [left, top, width, height].map((v) => v.toFixed(1)).join(' '));
     svg.setAttribute('height', (Number(svg.getAttribute('width')) * height / width).toFixed(0));
     // the drawing's background grows with the view, down to where the legend now starts
-    const background = svg.querySelector('rect');
+    const background = svg.querySelector('rect.plan-background');
     if (background) {
       background.dataset.plain = ['x', 'y', 'width', 'height'].map((a) => background.getAttribute(a)).join(' ');
       setBox(background, [left, top, width, f.drawHeight + overhang - top]);
@@ -114,7 +114,7 @@ function setUp(toggle) {
     if (legend) {
       legend.removeAttribute('transform');
     }
-    const background = svg.querySelector('rect');
+    const background = svg.querySelector('rect.plan-background');
     if (background && background.dataset.plain) {
       setBox(background, background.dataset.plain.split(' ').map(Number));
       delete background.dataset.plain;

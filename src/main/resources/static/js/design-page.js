@@ -1,5 +1,9 @@
 // Design page: starts a proposal through the JSON API, polls its progress, draws the proposed parts
 // on the plan, accepts them into the site; clicks on the plan add keep-out corners.
+import { requestJson } from './api.js';
+import { cornerText, fill, parseCornerLines, parseNumberList } from './numbers.js';
+import { eventLocal, frameOf, toDrawing } from './plan-frame.js';
+
 const section = document.getElementById('proposal');
 
 if (section) {
@@ -17,41 +21,16 @@ if (section) {
   let jobId = null;
   let timer = null;
 
-  const fmt = (text, ...args) => text.replace(/\{(\d+)\}/g, (m, i) => (args[i] !== undefined ? String(args[i]) : m));
-
-  function numbers(text) {
-    return text.split(',').map((s) => s.trim()).filter((s) => s !== '').map(Number);
-  }
-
-  function areas(text) {
-    return text.split('\n').map((line) => line.trim()).filter((line) => line !== '').map((line) =>
-      line.split(';').map((p) => p.trim()).filter((p) => p !== '').map((p) => p.split(/[\s,]+/).map(Number)));
-  }
+  const fmt = fill;
+  const numbers = parseNumberList;
+  const areas = parseCornerLines;
 
   function showError(message) {
     errorLine.textContent = message;
     errorLine.hidden = false;
   }
 
-  async function call(method, url, body) {
-    const headers = body ? { 'Content-Type': 'application/json', Accept: 'application/json' } : { Accept: 'application/json' };
-    // the session's CSRF token, which every state-changing request must carry
-    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
-    const csrfToken = document.querySelector('meta[name="csrf-token"]');
-    if (csrfHeader && csrfToken) {
-      headers[csrfHeader.content] = csrfToken.content;
-    }
-    const response = await fetch(url, {
-      method,
-      headers,
-      body: body ? JSON.stringify(body) : undefined,
-    });
-    const data = await response.json().catch(() => ({}));
-    if (!response.ok) {
-      throw new Error(data.error || response.statusText);
-    }
-    return data;
-  }
+  const call = (method, url, body) => requestJson(method, url, body);
 
   // ---- drawing on the plan ----
 
@@ -59,24 +38,12 @@ if (section) {
     return drawing ? drawing.querySelector('svg') : null;
   }
 
-  function frame() {
-    const d = svg().dataset;
-    return { originX: Number(d.originX), originY: Number(d.originY), scale: Number(d.scale), margin: Number(d.margin) };
-  }
-
   function toSvg(x, y) {
-    const f = frame();
-    return { x: f.margin + (x - f.originX) * f.scale, y: f.margin + (f.originY - y) * f.scale };
+    return toDrawing(frameOf(svg()), x, y);
   }
 
   function toLocal(event) {
-    const element = svg();
-    const point = element.createSVGPoint();
-    point.x = event.clientX;
-    point.y = event.clientY;
-    const p = point.matrixTransform(element.getScreenCTM().inverse());
-    const f = frame();
-    return { x: f.originX + (p.x - f.margin) / f.scale, y: f.originY - (p.y - f.margin) / f.scale };
+    return eventLocal(svg(), event);
   }
 
   function layer(id) {
@@ -145,7 +112,7 @@ if (section) {
         return;
       }
       const p = toLocal(event);
-      const corner = p.x.toFixed(2) + ' ' + p.y.toFixed(2);
+      const corner = cornerText(p.x, p.y);
       const lines = keepOut.value.split('\n');
       const last = lines[lines.length - 1].trim();
       lines[lines.length - 1] = last === '' ? corner : last + '; ' + corner;

@@ -1,36 +1,23 @@
 // Design page: stores the last keep-out area of the proposal's keep-out field for the site, and
 // removes stored areas, through /api/sites/{id}/keep-out-areas; the page is reloaded after a change
 // so the list, the hatched plan and the proposal defaults all show the stored areas.
+import { requestJson, siteUrl } from './api.js';
+import { parseCornerLines } from './numbers.js';
+
 const box = document.getElementById('keep-out-areas');
 
 if (box) {
   const siteId = box.dataset.siteId;
   const errorLine = document.getElementById('keep-out-error');
   const status = document.getElementById('keep-out-status');
-  const url = '/api/sites/' + siteId + '/keep-out-areas';
+  const url = siteUrl(siteId, '/keep-out-areas');
 
   function showError(message) {
     errorLine.textContent = message;
     errorLine.hidden = false;
   }
 
-  async function call(method, target, body) {
-    const headers = { Accept: 'application/json' };
-    if (body) {
-      headers['Content-Type'] = 'application/json';
-    }
-    // the session's CSRF token, which every state-changing request must carry
-    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
-    const csrfToken = document.querySelector('meta[name="csrf-token"]');
-    if (csrfHeader && csrfToken) {
-      headers[csrfHeader.content] = csrfToken.content;
-    }
-    const response = await fetch(target, { method, headers, body: body ? JSON.stringify(body) : undefined });
-    if (!response.ok) {
-      const data = await response.json().catch(() => ({}));
-      throw new Error(data.error || response.statusText);
-    }
-  }
+  const call = (method, target, body) => requestJson(method, target, body);
 
   // The last non-empty line of the keep-out field: "x y; x y; x y", as the plan clicks write it.
   function lastArea() {
@@ -38,12 +25,8 @@ if (box) {
     if (!field) {
       return [];
     }
-    const lines = field.value.split('\n').map((line) => line.trim()).filter((line) => line !== '');
-    if (lines.length === 0) {
-      return [];
-    }
-    return lines[lines.length - 1].split(';').map((p) => p.trim()).filter((p) => p !== '')
-      .map((p) => p.split(/[\s,]+/).map(Number));
+    const areas = parseCornerLines(field.value);
+    return areas.length === 0 ? [] : areas[areas.length - 1];
   }
 
   const store = document.getElementById('store-keep-out');

@@ -1,9 +1,16 @@
 // Plan editor: places, moves and removes air-termination rods, and draws, reshapes, moves and
 // removes conductors, on the plan page through the JSON API, swapping in the new drawing and
-// summary after each change. Without this module the page
-// stays a read-only plan. All words come from data attributes the server renders from messages.
+// summary after each change. Without this module the page stays a read-only plan. All words come
+// from data attributes the server renders from messages. The pure parts live in the modules it
+// imports: the API client, the plan's frame, dragging and nudging, the undo history, the tools.
 
+import { ApiError, requestJson, siteUrl } from './api.js';
+import { arrowStep, followPointer, Nudge, shifted } from './drag.js';
+import { oneDecimal, parseDecimal, round } from './numbers.js';
 import { snapToParapet } from './parapet-snap.js';
+import { eventPoint, frameOf, onDrawing, pointsAttribute, toDrawing as frameToDrawing, toLocal as frameToLocal } from './plan-frame.js';
+import { planTools } from './tools.js';
+import { EditHistory, historyKey } from './undo.js';
 
 const root = document.getElementById('plan-editor');
 if (root) {
@@ -33,59 +40,23 @@ function setUp(root) {
   let conductors = [];
   let conductorId = null;
   let vertexIndex = 0;
-  let drawingConductor = false;
   let conductorPoints = [];
 
   let version = Number(root.dataset.version);
   let parapets = [];
   let rods = [];
   let selectedId = null;
-  let placing = false;
-  let queue = Promise.resolve();
-  const undoStack = [];
-  const redoStack = [];
-  let nudge = null;
+  const placing = () => planTools.isActive('rod');
+  const drawingConductor = () => planTools.isActive('conductor');
 
   // ---- talking to the server ----
 
-  class ApiError extends Error {
-    constructor(status, message) {
-      super(message);
-      this.status = status;
-    }
-  }
-
-  async function call(method, path, body) {
-    const options = { method, headers: { Accept: 'application/json' } };
-    const csrfHeader = document.querySelector('meta[name="csrf-header"]');
-    const csrfToken = document.querySelector('meta[name="csrf-token"]');
-    if (csrfHeader && csrfToken) {
-      options.headers[csrfHeader.content] = csrfToken.content;
-    }
-    let url = '/api/sites/' + encodeURIComponent(siteId) + path;
+  /** One request about this site; every change carries the version it was made on. */
+  function call(method, path, body) {
     if (method === 'DELETE') {
-      url += '?version=' + version;
-    } else if (body) {
-      options.headers['Content-Type'] = 'application/json';
-      options.body = JSON.stringify(Object.assign({}, body, { version }));
+      return requestJson(method, siteUrl(siteId, path) + '?version=' + version);
     }
-    const response = await fetch(url, options);
-    let data = {};
-    try {
-      data = await response.json();
-    } catch (e) {
-      data = {};
-    }
-    if (!response.ok) {
-      throw new ApiError(response.status, data.error || String(response.status));
-    }
-    return data;
-  }
-
-  /** Runs one task after the previous ones, so that changes reach the server in order. */
-  function enqueue(task) {
-    queue = queue.then(task, task);
-    return queue;
+    return requestJson(method, siteUrl(siteId, path), body ? Object.assign({}, body, { version }) : undefined);
   }
 
   function show(message, failed) {
@@ -123,7 +94,7 @@ function setUp(root) {
     status.className = data.summary.fullyProtected ? 'clear' : 'exposed';
     document.querySelectorAll('#plan-summary [data-summary]').forEach((cell) => {
       const value = data.summary[cell.dataset.summary];
-      cell.textContent = typeof value === 'number' && !Number.isInteger(value) ? formatNumber(value) : String(value);
+      cell.textContent = typeof value === 'number' && !Number.isInteger(value) ? oneDecimal(value) : String(value);
     });
     const printRevision = document.getElementById('print-revision');
     if (printRevision && Number.isInteger(data.summary.revision)) {
@@ -143,12 +114,6 @@ function setUp(root) {
         handle.focus();
       }
     }
-  }
-
-  /** A whole number when it is one, else one decimal, as the server writes the summary. */
-  function formatNumber(value) {
-    const rounded = Math.round(value * 10) / 10;
-    return Number.isInteger(rounded) ? String(rounded) : rounded.toFixed(1);
   }
 
   function setParts(parts) {
@@ -185,29 +150,15 @@ function setUp(root) {
   }
 
   function frame() {
-    const d = svg().dataset;
-    return {
-      originX: Number(d.originX), originY: Number(d.originY), scale: Number(d.scale),
-      margin: Number(d.margin), drawHeight: Number(d.drawHeight),
-    };
+    return frameOf(svg());
   }
 
   function svgPoint(event) {
-    const element = svg();
-    const point = element.createSVGPoint();
-    point.x = event.clientX;
-    point.y = event.clientY;
-    return point.matrixTransform(element.getScreenCTM().inverse());
+    return eventPoint(svg(), event);
   }
 
   function toLocal(p) {
-    const f = frame();
-    return { x: f.originX + (p.x - f.margin) / f.scale, y: f.originY - (p.y - f.margin) / f.scale };
-  }
-
-  function round(value, places) {
-    const factor = 10 ** places;
-    return Math.round(value * factor) / factor;
+    return frameToLocal(frame(), p);
   }
 
   /**
@@ -237,8 +188,7 @@ function setUp(root) {
 
   /** Plan position (SVG units) of a point in local metres. */
   function toDrawing(x, y) {
-    const f = frame();
-    return { x: f.margin + (x - f.originX) * f.scale, y: f.margin + (f.originY - y) * f.scale };
+    return frameToDrawing(frame(), x, y);
   }
 
   // ---- selection and the side form ----
@@ -280,12 +230,7 @@ function setUp(root) {
     }
   });
 
-  /** A typed decimal as a number (a comma is taken as the decimal mark); else the text for the server to name. */
-  function number(value) {
-    const cleaned = value.trim().replace(',', '.');
-    const parsed = Number(cleaned);
-    return cleaned !== '' && Number.isFinite(parsed) ? parsed : value;
-  }
+  const number = parseDecimal;
 
   function snapshot(rod) {
     return { x: rod.x, y: rod.y, height: rod.height, name: rod.name };
@@ -375,77 +320,53 @@ function setUp(root) {
   }
 
   function updateButtons() {
-    undoButton.disabled = undoStack.length === 0;
-    redoButton.disabled = redoStack.length === 0;
+    undoButton.disabled = !edits.canUndo;
+    redoButton.disabled = !edits.canRedo;
   }
 
-  function run(step, message, onDone) {
-    return enqueue(async () => {
-      show(text('Working'), false);
-      root.setAttribute('aria-busy', 'true');
+  const DONE = { saved: 'Saved', undone: 'Undone', redone: 'Redone' };
+
+  /**
+   * Sends one step and shows its answer; true when the server stored the change (also when its
+   * analysis is pending), false when it refused it, after which the parts are read again.
+   */
+  async function run(step, kind) {
+    show(text('Working'), false);
+    root.setAttribute('aria-busy', 'true');
+    try {
+      const data = await step();
+      apply(data);
+      show(data.analysisPending ? text('Pending').replace('{0}', data.pendingReason) : text(DONE[kind]), false);
+      return true;
+    } catch (error) {
+      report(error);
       try {
-        const data = await step();
-        apply(data);
-        onDone();
-        show(data.analysisPending ? text('Pending').replace('{0}', data.pendingReason) : message, false);
-      } catch (error) {
-        report(error);
-        try {
-          setParts(await call('GET', '/parts'));
-          bindDrawing();
-        } catch (ignored) {
-          // the status line already says what went wrong
-        }
-        select(selectedId);
-      } finally {
-        root.removeAttribute('aria-busy');
-        updateButtons();
+        setParts(await call('GET', '/parts'));
+        bindDrawing();
+      } catch (ignored) {
+        // the status line already says what went wrong
       }
-    });
+      select(selectedId);
+      return false;
+    } finally {
+      root.removeAttribute('aria-busy');
+    }
   }
+
+  const edits = new EditHistory(run, updateButtons);
 
   function perform(command) {
-    return run(() => command.forward(), text('Saved'), () => {
-      undoStack.push(command);
-      redoStack.length = 0;
-    });
+    return edits.perform(command);
   }
 
-  function undo() {
-    const command = undoStack.pop();
-    if (!command) {
-      return queue;
-    }
-    return run(() => command.backward(), text('Undone'), () => redoStack.push(command))
-      .then(() => { if (!redoStack.includes(command)) undoStack.push(command); updateButtons(); });
-  }
-
-  function redo() {
-    const command = redoStack.pop();
-    if (!command) {
-      return queue;
-    }
-    return run(() => command.forward(), text('Redone'), () => undoStack.push(command))
-      .then(() => { if (!undoStack.includes(command)) redoStack.push(command); updateButtons(); });
-  }
-
-  undoButton.addEventListener('click', () => undo());
-  redoButton.addEventListener('click', () => redo());
+  undoButton.addEventListener('click', () => edits.undo());
+  redoButton.addEventListener('click', () => edits.redo());
 
   document.addEventListener('keydown', (event) => {
-    const target = event.target;
-    const typing = target instanceof HTMLInputElement || target instanceof HTMLTextAreaElement
-      || target instanceof HTMLSelectElement;
-    if (!(event.ctrlKey || event.metaKey) || typing) {
-      return;
-    }
-    const key = event.key.toLowerCase();
-    if (key === 'z' && !event.shiftKey) {
+    const asked = historyKey(event);
+    if (asked) {
       event.preventDefault();
-      undo();
-    } else if (key === 'y' || (key === 'z' && event.shiftKey)) {
-      event.preventDefault();
-      redo();
+      edits[asked]();
     }
   });
 
@@ -462,16 +383,11 @@ function setUp(root) {
       line.setAttribute('class', 'conductor-draft');
       element.appendChild(line);
     }
-    const f = frame();
-    line.setAttribute('points', conductorPoints.map((p) => (f.margin + (p[0] - f.originX) * f.scale) + ','
-      + (f.margin + (f.originY - p[1]) * f.scale)).join(' '));
+    line.setAttribute('points', pointsAttribute(frame(), conductorPoints));
   }
 
-  function setDrawingConductor(on) {
-    if (on) {
-      setPlacing(false);
-    }
-    drawingConductor = on;
+  /** The conductor tool's look while it is chosen or ended (through planTools only). */
+  function showDrawingConductor(on) {
     conductorPoints = [];
     conductorForm.elements.count.value = '0';
     conductorButton.setAttribute('aria-pressed', on ? 'true' : 'false');
@@ -486,9 +402,10 @@ function setUp(root) {
     }
   }
 
-  conductorButton.addEventListener('click', () => setDrawingConductor(!drawingConductor));
+  planTools.register('conductor', { activate: () => showDrawingConductor(true), deactivate: () => showDrawingConductor(false) });
+  conductorButton.addEventListener('click', () => planTools.toggle('conductor'));
   document.getElementById('cancel-conductor').addEventListener('click', () => {
-    setDrawingConductor(false);
+    planTools.end('conductor');
     conductorButton.focus();
   });
 
@@ -506,7 +423,7 @@ function setUp(root) {
     if (name) {
       body.name = name;
     }
-    setDrawingConductor(false);
+    planTools.end('conductor');
     values.name.value = '';
     perform(addConductorCommand(body));
   });
@@ -581,7 +498,7 @@ function setUp(root) {
     const line = document.createElementNS(ns, 'polyline');
     line.setAttribute('class', 'conductor-outline');
     line.dataset.conductorId = c.id;
-    line.setAttribute('points', c.path.map((p) => { const q = toDrawing(p[0], p[1]); return q.x + ',' + q.y; }).join(' '));
+    line.setAttribute('points', pointsAttribute(frame(), c.path));
     line.addEventListener('pointerdown', startConductorDrag);
     group.appendChild(line);
     c.path.forEach((p, k) => {
@@ -628,7 +545,7 @@ function setUp(root) {
     const element = svg();
     const line = element.querySelector('polyline.conductor-outline');
     if (line) {
-      line.setAttribute('points', points.map((p) => { const q = toDrawing(p[0], p[1]); return q.x + ',' + q.y; }).join(' '));
+      line.setAttribute('points', pointsAttribute(frame(), points));
     }
     element.querySelectorAll('circle.conductor-vertex').forEach((h) => {
       const p = points[Number(h.dataset.vertex)];
@@ -640,49 +557,14 @@ function setUp(root) {
 
   /** Follows a pointer from {@code event}; {@code moveTo} gets the plan offset in metres. */
   function dragFrom(event, target, moveTo, done) {
-    event.preventDefault();
-    event.stopPropagation();
-    target.setPointerCapture(event.pointerId);
-    const start = toLocal(svgPoint(event));
-    const startX = event.clientX;
-    const startY = event.clientY;
-    let moved = false;
-    const offset = (e) => { const p = toLocal(svgPoint(e)); return [p.x - start.x, p.y - start.y]; };
-    const move = (e) => {
-      if (Math.abs(e.clientX - startX) + Math.abs(e.clientY - startY) > 3) {
-        moved = true;
-      }
-      moveTo(offset(e));
-    };
-    const end = (e) => {
-      target.removeEventListener('pointermove', move);
-      target.removeEventListener('pointerup', end);
-      target.removeEventListener('pointercancel', end);
-      done(moved && e.type !== 'pointercancel' ? offset(e) : null);
-    };
-    target.addEventListener('pointermove', move);
-    target.addEventListener('pointerup', end);
-    target.addEventListener('pointercancel', end);
-  }
-
-  /** The points moved by {@code offset} metres (only point {@code only} when given), to the centimetre. */
-  function shifted(points, offset, only) {
-    return points.map((p, k) => {
-      if (only !== undefined && k !== only) {
-        return p.slice();
-      }
-      const q = p.slice();
-      q[0] = round(p[0] + offset[0], 2);
-      q[1] = round(p[1] + offset[1], 2);
-      return q;
-    });
+    followPointer(event, target, { position: (e) => toLocal(svgPoint(e)), onMove: moveTo, onEnd: done });
   }
 
   function startVertexDrag(event) {
     const handle = event.currentTarget;
     const c = conductorById(handle.dataset.conductorId);
     const k = Number(handle.dataset.vertex);
-    if (!c || event.button !== 0 || placing || drawingConductor) {
+    if (!c || event.button !== 0 || placing() || drawingConductor()) {
       return;
     }
     markVertex(k);
@@ -699,7 +581,7 @@ function setUp(root) {
 
   function startConductorDrag(event) {
     const c = conductorById(event.currentTarget.dataset.conductorId);
-    if (!c || event.button !== 0 || placing || drawingConductor) {
+    if (!c || event.button !== 0 || placing() || drawingConductor()) {
       return;
     }
     dragFrom(event, event.currentTarget, (offset) => showPath(shifted(c.path, offset)), (offset) => {
@@ -712,34 +594,28 @@ function setUp(root) {
     });
   }
 
-  let vertexNudge = null;
+  const vertexNudge = new Nudge((before, offset, key) => {
+    const k = Number(key.split('#')[1]);
+    const after = Object.assign({}, before, { points: shifted(before.points, offset, k) });
+    perform(changeConductorCommand(key.split('#')[0], before, after));
+  });
 
   /** Arrow keys move the selected point; the move is saved once the keys rest for a moment. */
   function nudgeVertexByKey(event) {
-    const step = ARROWS[event.key];
+    const step = arrowStep(event);
     const c = conductorById(conductorId);
     if (!step || !c) {
       return;
     }
     event.preventDefault();
-    const distance = event.shiftKey ? 1 : 0.1;
     const k = Number(event.currentTarget.dataset.vertex);
-    if (!vertexNudge || vertexNudge.id !== c.id || vertexNudge.vertex !== k) {
-      vertexNudge = { id: c.id, vertex: k, before: conductorShape(c), offset: [0, 0], timer: null };
-    }
-    vertexNudge.offset = [round(vertexNudge.offset[0] + step[0] * distance, 3),
-      round(vertexNudge.offset[1] + step[1] * distance, 3)];
-    const points = shifted(vertexNudge.before.points, vertexNudge.offset, k);
+    const key = c.id + '#' + k;
+    const before = vertexNudge.pending && vertexNudge.pending.key === key ? vertexNudge.pending.before : conductorShape(c);
+    const offset = vertexNudge.step(key, before, step);
+    const points = shifted(before.points, offset, k);
     showPath(points);
     conductorList.elements.x.value = String(points[k][0]);
     conductorList.elements.y.value = String(points[k][1]);
-    clearTimeout(vertexNudge.timer);
-    const pending = vertexNudge;
-    pending.timer = setTimeout(() => {
-      vertexNudge = null;
-      const after = Object.assign({}, pending.before, { points: shifted(pending.before.points, pending.offset, pending.vertex) });
-      perform(changeConductorCommand(pending.id, pending.before, after));
-    }, 600);
   }
 
   deleteConductor.addEventListener('click', () => {
@@ -751,8 +627,8 @@ function setUp(root) {
 
   // ---- placing a new rod ----
 
-  function setPlacing(on) {
-    placing = on;
+  /** The rod tool's look while it is chosen or ended (through planTools only). */
+  function showPlacing(on) {
     placeButton.setAttribute('aria-pressed', on ? 'true' : 'false');
     drawing.classList.toggle('placing', on);
     newForm.hidden = !on;
@@ -761,18 +637,17 @@ function setUp(root) {
     }
   }
 
+  planTools.register('rod', { activate: () => showPlacing(true), deactivate: () => showPlacing(false) });
+
   placeButton.addEventListener('click', () => {
-    if (drawingConductor) {
-      setDrawingConductor(false);
-    }
-    setPlacing(!placing);
-    if (placing) {
+    planTools.toggle('rod');
+    if (placing()) {
       newForm.elements.x.focus();
     }
   });
 
   document.getElementById('cancel-rod').addEventListener('click', () => {
-    setPlacing(false);
+    planTools.end('rod');
     placeButton.focus();
   });
 
@@ -786,7 +661,7 @@ function setUp(root) {
     if (name) {
       rod.name = name;
     }
-    setPlacing(false);
+    planTools.end('rod');
     values.name.value = '';
     perform(addCommand(rod));
   });
@@ -799,9 +674,9 @@ function setUp(root) {
       return;
     }
     element.addEventListener('click', (event) => {
-      if (drawingConductor) {
+      if (drawingConductor()) {
         const q = svgPoint(event);
-        if (q.y <= frame().drawHeight) {
+        if (onDrawing(frame(), q)) {
           const at = placedAt(toLocal(q));
           conductorPoints.push([at.x, at.y]);
           conductorForm.elements.count.value = String(conductorPoints.length);
@@ -810,15 +685,15 @@ function setUp(root) {
         return;
       }
       const clicked = event.target.closest('path.conductor, polyline.conductor-hit');
-      if (!placing && clicked) {
+      if (!placing() && clicked) {
         selectConductor(clicked.dataset.conductorId, 0);
         return;
       }
-      if (!placing || event.target.closest('circle.rod')) {
+      if (!placing() || event.target.closest('circle.rod')) {
         return;
       }
       const p = svgPoint(event);
-      if (p.y > frame().drawHeight) {
+      if (!onDrawing(frame(), p)) {
         return;
       }
       const at = placedAt(toLocal(p));
@@ -852,7 +727,7 @@ function setUp(root) {
       const hit = document.createElementNS(ns, 'polyline');
       hit.setAttribute('class', 'conductor-hit');
       hit.dataset.conductorId = c.id;
-      hit.setAttribute('points', c.path.map((p) => { const q = toDrawing(p[0], p[1]); return q.x + ',' + q.y; }).join(' '));
+      hit.setAttribute('points', pointsAttribute(frame(), c.path));
       element.insertBefore(hit, firstRod);
     }
   }
@@ -864,71 +739,54 @@ function setUp(root) {
     if (!rod || event.button !== 0) {
       return;
     }
-    event.preventDefault();
     select(id);
-    circle.setPointerCapture(event.pointerId);
-    const startX = event.clientX;
-    const startY = event.clientY;
-    let moved = false;
-    const move = (e) => {
-      if (Math.abs(e.clientX - startX) + Math.abs(e.clientY - startY) > 3) {
-        moved = true;
-      }
-      const p = svgPoint(e);
-      circle.setAttribute('cx', String(p.x));
-      circle.setAttribute('cy', String(p.y));
-    };
-    const end = (e) => {
-      circle.removeEventListener('pointermove', move);
-      circle.removeEventListener('pointerup', end);
-      circle.removeEventListener('pointercancel', end);
-      if (!moved || e.type === 'pointercancel') {
-        circle.focus();
-        return;
-      }
-      const at = placedAt(toLocal(svgPoint(e)));
-      perform(changeCommand(id, snapshot(rod), { x: at.x, y: at.y, height: rod.height }));
-    };
-    circle.addEventListener('pointermove', move);
-    circle.addEventListener('pointerup', end);
-    circle.addEventListener('pointercancel', end);
+    const start = toDrawing(rod.x, rod.y);
+    followPointer(event, circle, {
+      position: (e) => svgPoint(e),
+      onMove: (offset) => {
+        circle.setAttribute('cx', String(start.x + offset[0]));
+        circle.setAttribute('cy', String(start.y + offset[1]));
+      },
+      onEnd: (offset, e) => {
+        if (!offset) {
+          circle.focus();
+          return;
+        }
+        const at = placedAt(toLocal(svgPoint(e)));
+        perform(changeCommand(id, snapshot(rod), { x: at.x, y: at.y, height: rod.height }));
+      },
+    });
   }
 
-  const ARROWS = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, 1], ArrowDown: [0, -1] };
+  const rodNudge = new Nudge((before, offset, id) => {
+    perform(changeCommand(id, before, { x: round(before.x + offset[0], 3), y: round(before.y + offset[1], 3), height: before.height }));
+  });
 
   /** Arrow keys move the selected rod; the move is saved once the keys rest for a moment. */
   function nudgeByKey(event) {
-    const step = ARROWS[event.key];
+    const step = arrowStep(event);
     const rod = rodById(selectedId);
     if (!step || !rod) {
       return;
     }
     event.preventDefault();
-    const distance = event.shiftKey ? 1 : 0.1;
-    if (!nudge || nudge.id !== rod.id) {
-      nudge = { id: rod.id, before: snapshot(rod), x: rod.x, y: rod.y, timer: null };
-    }
-    nudge.x = round(nudge.x + step[0] * distance, 3);
-    nudge.y = round(nudge.y + step[1] * distance, 3);
-    const f = frame();
+    const before = rodNudge.pending && rodNudge.pending.key === rod.id ? rodNudge.pending.before : snapshot(rod);
+    const offset = rodNudge.step(rod.id, before, step);
+    const x = round(before.x + offset[0], 3);
+    const y = round(before.y + offset[1], 3);
     const circle = rodCircle(rod.id);
     if (circle) {
-      circle.setAttribute('cx', String(f.margin + (nudge.x - f.originX) * f.scale));
-      circle.setAttribute('cy', String(f.margin + (f.originY - nudge.y) * f.scale));
+      const q = toDrawing(x, y);
+      circle.setAttribute('cx', String(q.x));
+      circle.setAttribute('cy', String(q.y));
     }
-    rodForm.elements.x.value = String(nudge.x);
-    rodForm.elements.y.value = String(nudge.y);
-    clearTimeout(nudge.timer);
-    const pending = nudge;
-    pending.timer = setTimeout(() => {
-      nudge = null;
-      perform(changeCommand(pending.id, pending.before, { x: pending.x, y: pending.y, height: pending.before.height }));
-    }, 600);
+    rodForm.elements.x.value = String(x);
+    rodForm.elements.y.value = String(y);
   }
 
   // ---- start ----
 
-  enqueue(async () => {
+  edits.enqueue(async () => {
     try {
       setParts(await call('GET', '/parts'));
       bindDrawing();

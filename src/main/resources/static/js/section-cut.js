@@ -1,6 +1,10 @@
 // Drawing a section cut on the plan: after "Draw the cut on the plan", the first click on the
 // drawing sets the start, the second the end; both fill the cut form (local metres) and a line
 // shows the cut. The form is then sent as usual. Without this module the numbers are typed in.
+// Drawing the cut is one of the plan's tools: choosing it ends placing a rod or drawing a conductor.
+
+import { eventPoint, frameOf, toLocal as frameToLocal } from './plan-frame.js';
+import { planTools } from './tools.js';
 
 const SVG_NS = 'http://www.w3.org/2000/svg';
 
@@ -11,24 +15,15 @@ function setUp(form, button) {
     return;
   }
   let start = null;
-  let active = false;
 
   function svg() {
     return drawing.querySelector('svg');
   }
 
   function toLocal(event) {
-    const element = svg();
-    const point = element.createSVGPoint();
-    point.x = event.clientX;
-    point.y = event.clientY;
-    const p = point.matrixTransform(element.getScreenCTM().inverse());
-    const d = element.dataset;
-    return {
-      sx: p.x, sy: p.y,
-      x: Number(d.originX) + (p.x - Number(d.margin)) / Number(d.scale),
-      y: Number(d.originY) - (p.y - Number(d.margin)) / Number(d.scale),
-    };
+    const p = eventPoint(svg(), event);
+    const local = frameToLocal(frameOf(svg()), p);
+    return { sx: p.x, sy: p.y, x: local.x, y: local.y };
   }
 
   function line() {
@@ -41,18 +36,18 @@ function setUp(form, button) {
     return element;
   }
 
-  function setActive(on) {
-    active = on;
+  function showActive(on) {
     start = null;
     button.setAttribute('aria-pressed', on ? 'true' : 'false');
     drawing.classList.toggle('cutting', on);
   }
 
-  button.addEventListener('click', () => setActive(!active));
+  planTools.register('cut', { activate: () => showActive(true), deactivate: () => showActive(false) });
+  button.addEventListener('click', () => planTools.toggle('cut'));
 
   // capture phase: while a cut is drawn, clicks on the plan belong to the cut, not to the rod editor
   drawing.addEventListener('click', (event) => {
-    if (!active || !svg()) {
+    if (!planTools.isActive('cut') || !svg()) {
       return;
     }
     event.stopPropagation();
@@ -74,7 +69,7 @@ function setUp(form, button) {
     fields.y2.value = p.y.toFixed(1);
     cut.setAttribute('x2', p.sx);
     cut.setAttribute('y2', p.sy);
-    setActive(false);
+    planTools.end('cut');
     form.querySelector('button[type="submit"]').focus();
   }, true);
 }

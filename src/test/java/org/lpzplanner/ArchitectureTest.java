@@ -15,11 +15,13 @@ import org.lpzplanner.plan.SitePageController;
 import org.lpzplanner.sites.SiteRepository;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
+import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The engine is a plain library: the rest of the product depends on it, never the reverse. The
- * product's features (top-level packages) form no cycle, and the low packages know no feature. A
- * site's file changes only through the edit pipeline, which alone analyses after a change.
+ * product's features (top-level packages) form no cycle, and the low packages (system, jobs,
+ * drawing, common) know no feature. A site's file changes only through the edit pipeline, which
+ * alone analyses after a change.
  */
 class ArchitectureTest {
 
@@ -60,6 +62,18 @@ class ArchitectureTest {
                 .check(classes);
     }
 
+    /**
+     * One JSON mapper: Spring components take the application's bean, code without a context
+     * {@code engine.io.Json.MAPPER}; nothing else builds one.
+     */
+    @Test
+    void onlyTheSharedJsonSettingsBuildAMapper() {
+        noClasses().that().doNotHaveFullyQualifiedName("org.lpzplanner.engine.io.Json")
+                .should().callMethod(JsonMapper.class, "builder")
+                .orShould().callConstructor(JsonMapper.class)
+                .check(classes);
+    }
+
     @Test
     void featurePackagesFormNoCycle() {
         slices().matching("org.lpzplanner.(*)..").should().beFreeOfCycles().check(classes);
@@ -77,10 +91,20 @@ class ArchitectureTest {
                 .should().dependOnClassesThat().resideInAnyPackage("org.lpzplanner.accounts..",
                         "org.lpzplanner.airtermination..", "org.lpzplanner.analysis..", "org.lpzplanner.audit..",
                         "org.lpzplanner.cli..", "org.lpzplanner.comments..", "org.lpzplanner.demo..",
-                        "org.lpzplanner.design..", "org.lpzplanner.editing..", "org.lpzplanner.keepout..",
+                        "org.lpzplanner.design..", "org.lpzplanner.drawing..", "org.lpzplanner.editing..",
+                        "org.lpzplanner.keepout..",
                         "org.lpzplanner.plan..",
                         "org.lpzplanner.report..", "org.lpzplanner.risk..", "org.lpzplanner.sections..",
                         "org.lpzplanner.sites..", "org.lpzplanner.transfer..")
+                .check(classes);
+    }
+
+    @Test
+    void drawingsKnowNoFeature() {
+        // the plan drawing model, its style table and renderers: every feature may draw with them
+        noClasses().that().resideInAPackage("org.lpzplanner.drawing..")
+                .should().dependOnClassesThat().resideOutsideOfPackages("org.lpzplanner.drawing..",
+                        "org.lpzplanner.common..", "java..")
                 .check(classes);
     }
 

@@ -5,9 +5,9 @@ import jakarta.servlet.ServletException;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.util.Optional;
-import org.springframework.http.MediaType;
+import org.lpzplanner.system.ApiProblem;
+import org.lpzplanner.system.ProblemWriter;
 import org.springframework.security.authentication.UsernamePasswordAuthenticationToken;
 import org.springframework.security.core.context.SecurityContext;
 import org.springframework.security.core.context.SecurityContextHolder;
@@ -22,9 +22,11 @@ import org.springframework.web.filter.OncePerRequestFilter;
 class BearerTokenFilter extends OncePerRequestFilter {
 
     private final ApiTokenService tokens;
+    private final ProblemWriter problems;
 
-    BearerTokenFilter(ApiTokenService tokens) {
+    BearerTokenFilter(ApiTokenService tokens, ProblemWriter problems) {
         this.tokens = tokens;
+        this.problems = problems;
     }
 
     /** Whether the request authenticates with a bearer token (such requests need no CSRF token). */
@@ -42,11 +44,9 @@ class BearerTokenFilter extends OncePerRequestFilter {
         }
         Optional<SignedInAccount> account = tokens.authenticate(request.getHeader("Authorization").substring(7).strip());
         if (account.isEmpty()) {
-            response.setStatus(HttpServletResponse.SC_UNAUTHORIZED);
             response.setHeader("WWW-Authenticate", "Bearer error=\"invalid_token\"");
-            response.setContentType(MediaType.APPLICATION_JSON_VALUE);
-            response.getOutputStream().write("{\"field\":\"Authorization\",\"error\":\"the API token is unknown, revoked or its account disabled\"}"
-                    .getBytes(StandardCharsets.UTF_8));
+            problems.write(request, response, ApiProblem.UNAUTHORIZED.with("the API token is unknown, revoked or its"
+                    + " account disabled"), "Authorization");
             return;
         }
         SecurityContext context = SecurityContextHolder.createEmptyContext();

@@ -1,9 +1,7 @@
 package org.lpzplanner.accounts;
 
 import jakarta.servlet.DispatcherType;
-import jakarta.servlet.http.HttpServletResponse;
 import org.springframework.security.web.csrf.CsrfException;
-import java.nio.charset.StandardCharsets;
 import java.util.Map;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.annotation.Bean;
@@ -12,7 +10,6 @@ import org.springframework.context.annotation.Configuration;
 import org.springframework.core.Ordered;
 import org.springframework.http.HttpMethod;
 import org.springframework.http.HttpStatus;
-import org.springframework.http.MediaType;
 import org.springframework.security.authentication.AuthenticationManager;
 import org.springframework.security.authentication.ProviderManager;
 import org.springframework.security.authentication.dao.DaoAuthenticationProvider;
@@ -23,7 +20,6 @@ import org.springframework.security.crypto.password.PasswordEncoder;
 import org.springframework.security.web.SecurityFilterChain;
 import org.springframework.security.web.DefaultRedirectStrategy;
 import org.springframework.security.web.authentication.AuthenticationFailureHandler;
-import org.springframework.security.web.authentication.HttpStatusEntryPoint;
 import org.springframework.security.web.authentication.LoginUrlAuthenticationEntryPoint;
 import org.springframework.security.web.authentication.www.BasicAuthenticationFilter;
 import org.springframework.security.web.header.writers.ReferrerPolicyHeaderWriter.ReferrerPolicy;
@@ -31,6 +27,8 @@ import org.springframework.security.web.session.DisableEncodeUrlFilter;
 import org.springframework.security.web.savedrequest.HttpSessionRequestCache;
 import org.springframework.security.web.savedrequest.RequestCache;
 import org.springframework.security.web.util.matcher.RequestMatcher;
+import org.lpzplanner.system.ApiProblem;
+import org.lpzplanner.system.ProblemWriter;
 import org.springframework.web.filter.RelativeRedirectFilter;
 
 /**
@@ -76,7 +74,7 @@ public class SecurityConfiguration {
 
     @Bean
     SecurityFilterChain securityFilterChain(HttpSecurity http, AuthenticationManager manager,
-            ApiTokenService tokens) throws Exception {
+            ApiTokenService tokens, ProblemWriter problems) throws Exception {
         RequestMatcher api = ApiTokenScopeFilter::isApi;
         DefaultRedirectStrategy redirects = new DefaultRedirectStrategy();
         AuthenticationFailureHandler failure = (request, response, e) -> redirects.sendRedirect(request, response,
@@ -89,8 +87,8 @@ public class SecurityConfiguration {
         signInPage.setFavorRelativeUris(true);
 
         http.authenticationManager(manager)
-                .addFilterBefore(new ApiTokenScopeFilter(), DisableEncodeUrlFilter.class)
-                .addFilterBefore(new BearerTokenFilter(tokens), BasicAuthenticationFilter.class)
+                .addFilterBefore(new ApiTokenScopeFilter(problems), DisableEncodeUrlFilter.class)
+                .addFilterBefore(new BearerTokenFilter(tokens, problems), BasicAuthenticationFilter.class)
                 .authorizeHttpRequests(a -> a
                         .requestMatchers("/login", "/setup", "/css/**", "/js/**", "/favicon.ico", "/error").permitAll()
                         // load balancers and container health checks ask without an account; the
@@ -111,13 +109,15 @@ public class SecurityConfiguration {
                 .logout(l -> l.logoutUrl("/logout").logoutSuccessUrl("/login?signedOut"))
                 .csrf(c -> c.ignoringRequestMatchers(request -> BearerTokenFilter.hasBearer(request) && api.matches(request)))
                 .exceptionHandling(e -> e
-                        .defaultAuthenticationEntryPointFor(new HttpStatusEntryPoint(HttpStatus.UNAUTHORIZED), api)
+                        .defaultAuthenticationEntryPointFor((request, response, refused) -> problems.write(request,
+                                response, ApiProblem.UNAUTHORIZED.with("sign in first, or send a personal API token"
+                                        + " from the account page as Authorization: Bearer …"), null), api)
                         .defaultAuthenticationEntryPointFor(signInPage, request -> true)
-                        .defaultAccessDeniedHandlerFor((request, response, denied) -> jsonError(response,
-                                denied instanceof CsrfException
+                        .defaultAccessDeniedHandlerFor((request, response, denied) -> problems.write(request,
+                                response, ApiProblem.FORBIDDEN.with(denied instanceof CsrfException
                                         ? "the request lacks a valid CSRF token: send the X-CSRF-TOKEN header of"
                                                 + " the page, or use a personal API token (Authorization: Bearer)"
-                                        : "your role may not do this"), api))
+                                        : "your role may not do this"), null), api))
                 .headers(h -> h
                         .contentSecurityPolicy(c -> c.policyDirectives(CONTENT_SECURITY_POLICY))
                         .frameOptions(f -> f.deny())
@@ -138,11 +138,5 @@ public class SecurityConfiguration {
         registration.setOrder(Ordered.HIGHEST_PRECEDENCE);
         registration.setDispatcherTypes(DispatcherType.REQUEST, DispatcherType.ERROR, DispatcherType.ASYNC);
         return registration;
-    }
-
-    private static void jsonError(HttpServletResponse response, String message) throws java.io.IOException {
-        response.setStatus(HttpStatus.FORBIDDEN.value());
-        response.setContentType(MediaType.APPLICATION_JSON_VALUE);
-        response.getOutputStream().write(("{\"error\":\"" + message + "\"}").getBytes(StandardCharsets.UTF_8));
     }
 }

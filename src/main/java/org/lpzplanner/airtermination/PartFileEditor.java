@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.engine.io.LocalProjection;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.model.Conductor;
@@ -13,8 +14,6 @@ import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.SerializationFeature;
-import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -30,7 +29,6 @@ import tools.jackson.databind.node.ObjectNode;
  */
 final class PartFileEditor {
 
-    private static final JsonMapper JSON = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
 
     private final ObjectNode root;
     private final ArrayNode features;
@@ -60,7 +58,7 @@ final class PartFileEditor {
         String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
         JsonNode parsed;
         try {
-            parsed = JSON.readTree(body);
+            parsed = Json.MAPPER.readTree(body);
         } catch (JacksonException e) {
             throw new InvalidInputException("file", "the stored site file cannot be read as JSON");
         }
@@ -128,7 +126,7 @@ final class PartFileEditor {
     }
 
     private ObjectNode lineString(List<double[]> points, boolean elevations) {
-        ObjectNode geometry = JSON.createObjectNode();
+        ObjectNode geometry = Json.MAPPER.createObjectNode();
         geometry.put("type", "LineString");
         ArrayNode coordinates = geometry.putArray("coordinates");
         for (double[] p : points) {
@@ -203,7 +201,7 @@ final class PartFileEditor {
 
     /** The edited file text. */
     String text() {
-        return JSON.writeValueAsString(root) + "\n";
+        return Json.MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
     }
 
     private ObjectNode rodFeature(int rodIndex) {
@@ -217,7 +215,7 @@ final class PartFileEditor {
     }
 
     private ObjectNode point(double x, double y) {
-        ObjectNode geometry = JSON.createObjectNode();
+        ObjectNode geometry = Json.MAPPER.createObjectNode();
         geometry.put("type", "Point");
         ArrayNode coordinates = geometry.putArray("coordinates");
         if (projection == null) {

@@ -6,7 +6,6 @@ import io.swagger.v3.oas.annotations.media.Content;
 import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
-import org.lpzplanner.system.ApiError;
 import java.util.List;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.sites.SiteService;
@@ -20,7 +19,6 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * JSON API for analyses of a site:
@@ -35,8 +33,6 @@ import tools.jackson.databind.json.JsonMapper;
 @Tag(name = "Analyses", description = "Rolling sphere analyses of a site")
 @RequestMapping("/api/sites/{siteId}/analyses")
 public class AnalysisApiController {
-
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private final AnalysisService analyses;
     private final AnalysisJobs jobs;
@@ -64,11 +60,13 @@ public class AnalysisApiController {
      */
     @Operation(summary = "Analyse a site",
             description = "Optional parameters level (I to IV, default the site's), radius (metres) and resolution (metres). Answers with the summary, the result GeoJSON and the cautions. With async=true the analysis is queued and the answer is the job.")
-    @ApiResponse(responseCode = "201", description = "The new analysis revision")
-    @ApiResponse(responseCode = "202", description = "Queued (async=true): the job, its address in Location")
-    @ApiResponse(responseCode = "429", description = "Every analysis worker is busy and the queue is full; Retry-After says when to try again", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "400", description = "A setting cannot be used, or the analysis is too large (with a resolution that fits)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "201", description = "The new analysis revision",
+            content = @Content(schema = @Schema(implementation = AnalysisView.class)))
+    @ApiResponse(responseCode = "202", description = "Queued (async=true): the job, its address in Location",
+            content = @Content(schema = @Schema(implementation = AnalysisJob.Snapshot.class)))
+    @ApiResponse(responseCode = "429", description = "Every analysis worker is busy and the queue is full; Retry-After says when to try again")
+    @ApiResponse(responseCode = "400", description = "A setting cannot be used, or the analysis is too large (with a resolution that fits)")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @PostMapping
     public ResponseEntity<?> run(@PathVariable long siteId,
             @RequestParam(required = false) String level, @RequestParam(required = false) String radius,
@@ -87,7 +85,7 @@ public class AnalysisApiController {
     @Operation(summary = "Follow a background analysis",
             description = "State (QUEUED, RUNNING, DONE, FAILED, CANCELLED), stage, share done (0..1), the stored revision once done, or the error.")
     @ApiResponse(responseCode = "200", description = "The job")
-    @ApiResponse(responseCode = "404", description = "No such job for this site", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such job for this site")
     @GetMapping("/jobs/{jobId}")
     public AnalysisJob.Snapshot job(@PathVariable long siteId, @PathVariable String jobId) {
         sites.get(siteId); // another team's site (and so its jobs) is not found
@@ -97,22 +95,20 @@ public class AnalysisApiController {
     /** Asks a background analysis to stop; nothing of it is stored. Answers with the job. */
     @Operation(summary = "Cancel a background analysis", description = "A queued job never starts; a running one stops at its next check. Nothing of it is stored.")
     @ApiResponse(responseCode = "200", description = "The job, CANCELLED or about to be")
-    @ApiResponse(responseCode = "404", description = "No such job for this site", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such job for this site")
     @DeleteMapping("/jobs/{jobId}")
     public AnalysisJob.Snapshot cancel(@PathVariable long siteId, @PathVariable String jobId) {
         sites.get(siteId); // another team's site (and so its jobs) is not found
         return jobs.cancel(siteId, jobId).orElseThrow(() -> new AnalysisJobNotFoundException(siteId, jobId));
     }
 
-    /** 404 with a JSON message when the site was never analysed. */
+    /** 404 when the site was never analysed. */
     @Operation(summary = "The latest analysis of a site")
     @ApiResponse(responseCode = "200", description = "The latest revision with result and cautions")
-    @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed")
     @GetMapping("/latest")
-    public ResponseEntity<?> latest(@PathVariable long siteId) {
-        return analyses.latest(siteId)
-                .<ResponseEntity<?>>map(r -> ResponseEntity.ok(AnalysisView.of(r, analyses)))
-                .orElseGet(() -> ResponseEntity.status(HttpStatus.NOT_FOUND).body(
-                        java.util.Map.of("error", "site " + siteId + " has not been analysed yet")));
+    public AnalysisView latest(@PathVariable long siteId) {
+        return AnalysisView.of(analyses.latest(siteId).orElseThrow(() -> new ReviewItemNotFoundException(
+                "site " + siteId + " has not been analysed yet")), analyses);
     }
 }

@@ -20,8 +20,6 @@ import tools.jackson.databind.json.JsonMapper;
 @Component
 public class ParsedResults {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     /**
      * One revision's result as read: the GeoJSON tree, its review items (numbered from 1) and how
      * many facade bands have flashes to the side negligible.
@@ -30,10 +28,12 @@ public class ParsedResults {
     }
 
     private final int capacity;
+    private final JsonMapper json;
     private final LinkedHashMap<Long, ParsedResult> results;
 
-    public ParsedResults(@Value("${lpz.analysis.parsed-results:16}") int capacity) {
+    public ParsedResults(@Value("${lpz.analysis.parsed-results:16}") int capacity, JsonMapper json) {
         this.capacity = Math.max(0, capacity);
+        this.json = json;
         this.results = new LinkedHashMap<>(16, 0.75f, true) {
             @Override
             protected boolean removeEldestEntry(Map.Entry<Long, ParsedResult> eldest) {
@@ -53,7 +53,7 @@ public class ParsedResults {
                 return kept;
             }
         }
-        JsonNode root = JSON.readTree(revision.resultGeoJson());
+        JsonNode root = json.readTree(revision.resultGeoJson());
         ParsedResult parsed = new ParsedResult(root, ReviewItems.of(root), ReviewItems.negligibleBands(root));
         synchronized (this) {
             if (capacity > 0 && revision.id() > 0) {

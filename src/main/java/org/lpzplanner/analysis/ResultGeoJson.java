@@ -19,13 +19,13 @@ import org.lpzplanner.engine.geom.EdgeKind;
 import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
 import org.lpzplanner.engine.geom.SurfaceKind;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.engine.io.LocalProjection;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.model.RooftopObject;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.Structure;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -107,19 +107,18 @@ public final class ResultGeoJson {
     public static final List<String> LAYERS = List.of("structure", "rooftop-object", "protected-ground",
             "exposed-roof", "facade-band", "model-warning", "exposed-edge", "exposed-corner", "rod", "conductor");
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private ResultGeoJson() {
     }
 
     /** The stored form of an analysis of the site read from a file (see the class comment). */
     public static String write(SiteDocument document, AnalysisResult result) {
-        return JSON.writeValueAsString(collection(document.site(), document.projection(), document.sourceName(), result));
+        return Json.MAPPER.writeValueAsString(collection(document.site(), document.projection(), document.sourceName(), result));
     }
 
     /** The stored form of an analysis of a site in local metres with no file behind it. */
     public static String write(Site site, AnalysisResult result) {
-        return JSON.writeValueAsString(collection(site, null, null, result));
+        return Json.MAPPER.writeValueAsString(collection(site, null, null, result));
     }
 
     /**
@@ -128,7 +127,7 @@ public final class ResultGeoJson {
      * Longitudes and latitudes are rounded to 10⁻⁸ degree (about a millimetre).
      */
     public static ObjectNode published(String stored) {
-        ObjectNode root = (ObjectNode) JSON.readTree(stored);
+        ObjectNode root = (ObjectNode) Json.MAPPER.readTree(stored);
         JsonNode origin = root.path("localOrigin");
         if (!origin.path("longitude").isNumber() || !origin.path("latitude").isNumber()) {
             return root;
@@ -148,8 +147,8 @@ public final class ResultGeoJson {
         }
         if (array.get(0).isNumber()) {
             Coordinate lonLat = projection.toLonLat(array.get(0).asDouble(), array.get(1).asDouble());
-            array.set(0, JSON.getNodeFactory().numberNode(Math.round(lonLat.x * 1e8) / 1e8));
-            array.set(1, JSON.getNodeFactory().numberNode(Math.round(lonLat.y * 1e8) / 1e8));
+            array.set(0, Json.MAPPER.getNodeFactory().numberNode(Math.round(lonLat.x * 1e8) / 1e8));
+            array.set(1, Json.MAPPER.getNodeFactory().numberNode(Math.round(lonLat.y * 1e8) / 1e8));
             return;
         }
         array.forEach(child -> toLonLat(child, projection));
@@ -158,7 +157,7 @@ public final class ResultGeoJson {
     private static ObjectNode collection(Site site, LocalProjection projection, String sourceName,
             AnalysisResult result) {
         GeoJsonGeometry geometry = new GeoJsonGeometry();
-        ObjectNode root = JSON.createObjectNode();
+        ObjectNode root = Json.MAPPER.createObjectNode();
         root.put("type", "FeatureCollection");
         root.put("coordinates", "local-metres");
         root.put("name", site.name());
@@ -287,7 +286,7 @@ public final class ResultGeoJson {
 
     private static ObjectNode analysis(Site site, String sourceName, AnalysisResult result) {
         ResultTotals totals = ResultTotals.of(result);
-        ObjectNode a = JSON.createObjectNode();
+        ObjectNode a = Json.MAPPER.createObjectNode();
         a.put("site", site.name());
         if (sourceName != null) {
             a.put("source", sourceName);

@@ -1,14 +1,11 @@
 package org.lpzplanner.analysis;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
-import org.lpzplanner.system.ApiError;
+import jakarta.validation.Valid;
 import java.util.List;
 import org.lpzplanner.common.Cautions;
-import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.DeleteMapping;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -17,7 +14,6 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.JsonNode;
 
 /**
  * JSON API for the review of a site's latest analysis:
@@ -26,7 +22,8 @@ import tools.jackson.databind.JsonNode;
  * {@code {"key": ..., "reason": ...}} marks one accepted; {@code DELETE
  * /api/sites/{id}/analyses/latest/accepted/{key}} marks it exposed again. Each answers with the
  * whole review, method, level, radius and cautions. An unknown key answers 404, a missing key or a
- * blank reason 400 naming the field; nothing is stored then.
+ * blank reason 400 naming the field; nothing is stored then. Errors are problem details, see
+ * {@link org.lpzplanner.system.ApiErrorHandler}.
  */
 @RestController
 @Tag(name = "Review", description = "Exposed items of the latest analysis and their acceptances")
@@ -78,7 +75,7 @@ public class ReviewApiController {
     @Operation(summary = "Exposed items of the latest analysis",
             description = "Every exposed edge, corner and facade band, and every model warning, with its status.")
     @ApiResponse(responseCode = "200", description = "The review")
-    @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site, or it was never analysed")
     @GetMapping("/items")
     public ReviewView items(@PathVariable long siteId) {
         return ReviewView.of(reviews.latest(siteId).orElseThrow(() -> new ReviewItemNotFoundException(
@@ -88,32 +85,18 @@ public class ReviewApiController {
     @Operation(summary = "Accept an exposed item",
             description = "JSON object with key and reason (required). Kept with this analysis revision.")
     @ApiResponse(responseCode = "200", description = "The review after the change")
-    @ApiResponse(responseCode = "400", description = "Key or reason missing or not a string; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No such site, analysis or item", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "Key or reason missing or not text, or the reason blank or too long; the field is named")
+    @ApiResponse(responseCode = "404", description = "No such site, analysis or item")
     @PostMapping(value = "/accepted", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public ReviewView accept(@PathVariable long siteId, @RequestBody JsonNode body) {
-        if (!body.isObject()) {
-            throw new InvalidInputException("body", "the body must be a JSON object with \"key\" and \"reason\"");
-        }
-        return ReviewView.of(reviews.accept(siteId, text(body, "key"), text(body, "reason")));
+    public ReviewView accept(@PathVariable long siteId, @Valid @RequestBody AcceptItem body) {
+        return ReviewView.of(reviews.accept(siteId, body.key(), body.reason()));
     }
 
     @Operation(summary = "Count an accepted item as exposed again")
     @ApiResponse(responseCode = "200", description = "The review after the change")
-    @ApiResponse(responseCode = "404", description = "No such site, analysis or accepted item", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site, analysis or accepted item")
     @DeleteMapping("/accepted/{key}")
     public ReviewView remove(@PathVariable long siteId, @PathVariable String key) {
         return ReviewView.of(reviews.remove(siteId, key));
-    }
-
-    private static String text(JsonNode body, String field) {
-        JsonNode node = body.get(field);
-        if (node == null || node.isNull()) {
-            return null;
-        }
-        if (!node.isString()) {
-            throw new InvalidInputException(field, field + " must be a string");
-        }
-        return node.stringValue();
     }
 }

@@ -11,8 +11,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import org.lpzplanner.engine.io.Json;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The items of a stored {@link ResultGeoJson} a designer reviews one by one: every exposed edge
@@ -42,8 +42,6 @@ public final class ReviewItems {
     public static final Set<String> LAYERS = Set.of("exposed-edge", "exposed-corner", "facade-band",
             "model-warning");
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     private ReviewItems() {
     }
 
@@ -68,7 +66,7 @@ public final class ReviewItems {
 
     /** The items of a result, numbered from 1. */
     public static List<Item> of(String resultGeoJson) {
-        return of(JSON.readTree(resultGeoJson));
+        return of(Json.MAPPER.readTree(resultGeoJson));
     }
 
     /** The items of a result read as a tree ({@link ParsedResults}), numbered from 1. */
@@ -156,7 +154,7 @@ public final class ReviewItems {
      * negligible (IEC 62305-3:2010 5.2.3): drawn and listed, not items of the review.
      */
     public static int negligibleBands(String resultGeoJson) {
-        return negligibleBands(JSON.readTree(resultGeoJson));
+        return negligibleBands(Json.MAPPER.readTree(resultGeoJson));
     }
 
     static int negligibleBands(JsonNode result) {
@@ -164,7 +162,7 @@ public final class ReviewItems {
     }
 
     static List<JsonNode> features(String resultGeoJson) {
-        return features(JSON.readTree(resultGeoJson));
+        return features(Json.MAPPER.readTree(resultGeoJson));
     }
 
     private static List<JsonNode> features(JsonNode result) {

@@ -10,9 +10,8 @@ import java.util.Set;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.engine.exposure.AnalysisResult;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.engine.io.SiteDocument;
-import tools.jackson.databind.ObjectMapper;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * {@code analyze}: runs the rolling sphere analysis of a site, prints the summary and, with
@@ -22,7 +21,6 @@ final class AnalyzeCommand implements Command {
 
     static final String OUT = "--out";
 
-    private static final ObjectMapper JSON = JsonMapper.builder().build();
 
     @Override
     public String name() {
@@ -44,7 +42,7 @@ final class AnalyzeCommand implements Command {
         AnalysisResult result = ExposureAnalysis.analyze(document.site(), settings.analysisOptions());
         new SummaryPrinter(out).print(document, result);
         if (outFile != null) {
-            write(outFile, JSON.writerWithDefaultPrettyPrinter()
+            write(outFile, Json.MAPPER.writerWithDefaultPrettyPrinter()
                     .writeValueAsString(ResultGeoJson.published(ResultGeoJson.write(document, result))));
             out.println();
             out.println("Results written to " + outFile);

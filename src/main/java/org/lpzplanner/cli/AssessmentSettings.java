@@ -1,13 +1,13 @@
 package org.lpzplanner.cli;
 
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Set;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.engine.io.SiteReader;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SettingRange;
 import org.lpzplanner.engine.model.SphereSpec;
 
 /**
@@ -28,11 +28,6 @@ record AssessmentSettings(Path site, SphereSpec sphere, Double resolution) {
     /** The option names read here. */
     static final Set<String> OPTION_NAMES = Set.of(SITE, LEVEL, RADIUS, RESOLUTION);
 
-    /** Same bounds as the engine's, checked here to name the option in the message. */
-    static final double MIN_RESOLUTION = 0.05;
-    static final double MAX_RESOLUTION = 10;
-    static final double MAX_RADIUS = 1000;
-
     /**
      * Reads and checks the settings.
      *
@@ -45,19 +40,20 @@ record AssessmentSettings(Path site, SphereSpec sphere, Double resolution) {
         if (level == null) {
             throw new CliException("option --level must be I, II, III or IV, got \"" + levelText + "\"");
         }
-        Double radius = options.decimal(RADIUS);
-        if (radius != null && !(radius > 0 && radius <= MAX_RADIUS)) {
-            throw new CliException("option --radius must be above 0 and at most " + (int) MAX_RADIUS
-                    + " m, got " + options.value(RADIUS));
-        }
-        Double resolution = options.decimal(RESOLUTION);
-        if (resolution != null && !(resolution >= MIN_RESOLUTION && resolution <= MAX_RESOLUTION)) {
-            throw new CliException(String.format(Locale.ROOT, "option --resolution must be between %s and %s m, got %s",
-                    MIN_RESOLUTION, (int) MAX_RESOLUTION, options.value(RESOLUTION)));
-        }
+        Double radius = inRange(options, RADIUS, SettingRange.RADIUS);
+        Double resolution = inRange(options, RESOLUTION, SettingRange.RESOLUTION);
         Path site = options.inputFile(SITE, "FILE");
         SphereSpec sphere = radius == null ? SphereSpec.of(level) : new SphereSpec(level, radius);
         return new AssessmentSettings(site, sphere, resolution);
+    }
+
+    /** The option's number, checked against the engine's range here to name the option in the message. */
+    private static Double inRange(CliOptions options, String option, SettingRange range) {
+        Double value = options.decimal(option);
+        if (value != null && !range.contains(value)) {
+            throw new CliException("option " + option + " must be " + range.rule() + ", got " + options.value(option));
+        }
+        return value;
     }
 
     /** Options for the engine, with its default tolerance for exact envelope values. */

@@ -1,12 +1,12 @@
 package org.lpzplanner.cli;
 
 import java.util.Objects;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.engine.io.SiteDocument;
 import org.lpzplanner.engine.io.SiteFormatException;
 import org.lpzplanner.sites.SiteFiles;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -18,7 +18,6 @@ import tools.jackson.databind.node.ObjectNode;
  */
 final class PartsFile {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private PartsFile() {
     }
@@ -50,7 +49,7 @@ final class PartsFile {
             features.add(f);
             i++;
         }
-        return JSON.writeValueAsString(site);
+        return Json.MAPPER.writeValueAsString(site);
     }
 
     /**
@@ -74,12 +73,12 @@ final class PartsFile {
 
     /** Number of features in GeoJSON site text. */
     static int featureCount(String siteText) {
-        return JSON.readTree(siteText).path("features").size();
+        return Json.MAPPER.readTree(siteText).path("features").size();
     }
 
     private static JsonNode parse(String text, String name, String problem) {
         try {
-            JsonNode node = JSON.readTree(text.startsWith("\uFEFF") ? text.substring(1) : text);
+            JsonNode node = Json.MAPPER.readTree(text.startsWith("\uFEFF") ? text.substring(1) : text);
             if (!(node instanceof ObjectNode)) {
                 throw new CliException(name + ": " + problem);
             }

@@ -5,7 +5,16 @@ import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.Locale;
 
-/** How pages write dates and plain quantities, the same on every page. */
+/**
+ * How the product writes dates and quantities, one method per kind of quantity, the same on every
+ * page, in the printed report, in the drawings and on the command line. Numbers use a dot as the
+ * decimal separator whatever the locale; a value that rounds to zero never prints a minus sign.
+ *
+ * <p>Lengths, heights, areas and coordinates print to the centimetre (areas to the hundredth of a
+ * square metre) with both decimals, so that they line up in columns and a value read from the page
+ * is the value read from the report. The stored result holds them to the centimetre already
+ * ({@code ResultGeoJson.round}), so nothing is lost.
+ */
 public final class Formats {
 
     private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
@@ -19,10 +28,97 @@ public final class Formats {
         return WHEN.format(at);
     }
 
+    /** A length along the ground, an edge, a wall or a part, in metres to the centimetre: "12.35", "0.50". */
+    public static String length(double metres) {
+        return fixed(metres, 2);
+    }
+
+    /** A height above ground or above the surface beneath a part, in metres to the centimetre: "12.00". */
+    public static String height(double metres) {
+        return fixed(metres, 2);
+    }
+
+    /**
+     * A required separation distance s in metres, to the millimetre and rounded up, so that the
+     * printed requirement is never less than the computed one: 0.4512 is "0.452".
+     */
+    public static String requiredSeparation(double metres) {
+        return fixed(Math.ceil(metres * 1000 - 1e-9) / 1000, 3);
+    }
+
+    /**
+     * A distance that a separation requirement is checked against, in metres, to the millimetre and
+     * rounded down, so that the printed distance is never more than the measured one: 0.4578 is
+     * "0.457".
+     */
+    public static String availableSeparation(double metres) {
+        return fixed(Math.floor(metres * 1000 + 1e-9) / 1000, 3);
+    }
+
+    /** A plan area in square metres, to the hundredth: "290.93". */
+    public static String area(double squareMetres) {
+        return fixed(squareMetres, 2);
+    }
+
+    /** A coordinate in local metres (x east, y north), to the centimetre: "-10.00". */
+    public static String coordinate(double metres) {
+        return fixed(metres, 2);
+    }
+
+    /**
+     * The rolling sphere's radius in metres, to the decimetre without a trailing ".0": "30", "45.5"
+     * (the levels' radii are whole metres; a custom radius is given to the decimetre).
+     */
+    public static String radius(double metres) {
+        return trimmed(metres, 1);
+    }
+
+    /** A percentage to one decimal, without a trailing ".0": "9.1", "20" (the caller writes the "%"). */
+    public static String percent(double percent) {
+        return trimmed(percent, 1);
+    }
+
+    /**
+     * A step of a scale bar or of an axis of a drawing, in metres: a round value without trailing
+     * zeros, "20", "0.5", "2.5".
+     */
+    public static String scaleStep(double metres) {
+        return trimmed(metres, 2);
+    }
+
     /** A whole number when it rounds to one, else one decimal: "20", "12.5". */
     public static String oneDecimal(double value) {
-        double rounded = Math.round(value * 10) / 10.0;
-        return rounded == Math.rint(rounded) ? String.valueOf((long) rounded)
-                : String.format(Locale.ROOT, "%.1f", rounded);
+        return trimmed(value, 1);
+    }
+
+    /** The value with exactly {@code places} decimals, "-0.00" written "0.00". */
+    private static String fixed(double value, int places) {
+        String text = String.format(Locale.ROOT, "%." + places + "f", value);
+        return text.startsWith("-") && isZero(text) ? text.substring(1) : text;
+    }
+
+    /** The value rounded to {@code places} decimals, without trailing zeros or a trailing dot. */
+    private static String trimmed(double value, int places) {
+        String text = fixed(value, places);
+        if (text.indexOf('.') < 0) {
+            return text;
+        }
+        int end = text.length();
+        while (text.charAt(end - 1) == '0') {
+            end--;
+        }
+        if (text.charAt(end - 1) == '.') {
+            end--;
+        }
+        return text.substring(0, end);
+    }
+
+    private static boolean isZero(String number) {
+        for (char c : number.toCharArray()) {
+            if (c >= '1' && c <= '9') {
+                return false;
+            }
+        }
+        return true;
     }
 }

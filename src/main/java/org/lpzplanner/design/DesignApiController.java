@@ -54,24 +54,24 @@ import tools.jackson.databind.json.JsonMapper;
         + " down-conductors, separation distances (IEC 62305-3:2010 6.3) and the bill of quantities")
 public class DesignApiController {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     private final ProposalService proposals;
     private final MethodCheckService methodChecks;
     private final DownConductorService downConductors;
     private final SeparationService separations;
     private final MetalInstallationService installations;
     private final QuantityService quantities;
+    private final JsonMapper json;
 
     public DesignApiController(ProposalService proposals, MethodCheckService methodChecks,
             DownConductorService downConductors, SeparationService separations,
-            MetalInstallationService installations, QuantityService quantities) {
+            MetalInstallationService installations, QuantityService quantities, JsonMapper json) {
         this.proposals = proposals;
         this.methodChecks = methodChecks;
         this.downConductors = downConductors;
         this.separations = separations;
         this.installations = installations;
         this.quantities = quantities;
+        this.json = json;
     }
 
     @PostMapping(value = "/proposals", consumes = MediaType.APPLICATION_JSON_VALUE)
@@ -207,7 +207,7 @@ public class DesignApiController {
     }
 
     /** A job as the API shows it. */
-    static Map<String, Object> view(ProposalJobs.Job job) {
+    private Map<String, Object> view(ProposalJobs.Job job) {
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("jobId", job.id());
         out.put("state", job.state().name().toLowerCase(java.util.Locale.ROOT));
@@ -221,7 +221,7 @@ public class DesignApiController {
         }
         if (job.result() != null) {
             // the proposal's parts and figures as stored when it finished (StoredProposal)
-            JSON.valueToTree(job.result()).properties().forEach(e -> out.put(e.getKey(), e.getValue()));
+            json.valueToTree(job.result()).properties().forEach(e -> out.put(e.getKey(), e.getValue()));
             out.put("cautions", Cautions.lines());
         }
         return out;

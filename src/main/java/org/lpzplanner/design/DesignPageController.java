@@ -10,6 +10,7 @@ import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.ResultGeoJson;
 import org.lpzplanner.analysis.ReviewService;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.keepout.KeepOutArea;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.plan.PlanPresenter;
@@ -93,7 +94,7 @@ public class DesignPageController {
         for (DownConductorService.DownConductors d : downs) {
             List<String> lines = new ArrayList<>();
             for (double[] p : d.positions()) {
-                lines.add(String.format(Locale.ROOT, "%.2f, %.2f", p[0], p[1]));
+                lines.add(Formats.coordinate(p[0]) + ", " + Formats.coordinate(p[1]));
             }
             positionsText.put(d.buildingId(), String.join("\n", lines));
         }
@@ -110,9 +111,9 @@ public class DesignPageController {
         static KeepOutRow of(KeepOutArea a) {
             List<String> corners = new ArrayList<>();
             for (double[] c : a.corners()) {
-                corners.add(String.format(Locale.ROOT, "%.2f %.2f", c[0], c[1]));
+                corners.add(Formats.coordinate(c[0]) + " " + Formats.coordinate(c[1]));
             }
-            return new KeepOutRow(a.id(), a.name(), String.format(Locale.ROOT, "%.2f", a.area()), a.corners().size(),
+            return new KeepOutRow(a.id(), a.name(), Formats.area(a.area()), a.corners().size(),
                     String.join("; ", corners));
         }
     }

@@ -18,12 +18,12 @@ import tools.jackson.databind.json.JsonMapper;
 @Repository
 public class DesignRepository {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     private final JdbcClient jdbc;
+    private final JsonMapper json;
 
-    public DesignRepository(JdbcClient jdbc) {
+    public DesignRepository(JdbcClient jdbc, JsonMapper json) {
         this.jdbc = jdbc;
+        this.json = json;
     }
 
     /** A metal installation; material is "AIR" or "CONCRETE_OR_BRICK" (the insulation between it and the LPS). */
@@ -36,7 +36,7 @@ public class DesignRepository {
         jdbc.sql("SELECT structure_id, positions FROM down_conductor_positions WHERE site_id = ? ORDER BY structure_id")
                 .param(siteId).query((rs, n) -> {
                     List<double[]> positions = new ArrayList<>();
-                    for (JsonNode p : JSON.readTree(rs.getString(2))) {
+                    for (JsonNode p : json.readTree(rs.getString(2))) {
                         positions.add(new double[] {p.get(0).asDouble(), p.get(1).asDouble()});
                     }
                     out.put(rs.getString(1), positions);
@@ -46,13 +46,13 @@ public class DesignRepository {
     }
 
     public void saveDownConductors(long siteId, String structureId, List<double[]> positions, Instant at) {
-        String json = JSON.writeValueAsString(positions);
+        String positionsJson = json.writeValueAsString(positions);
         OffsetDateTime when = at.atOffset(ZoneOffset.UTC);
         int changed = jdbc.sql("UPDATE down_conductor_positions SET positions = ?, updated_at = ? WHERE site_id = ? AND structure_id = ?")
-                .params(json, when, siteId, structureId).update();
+                .params(positionsJson, when, siteId, structureId).update();
         if (changed == 0) {
             jdbc.sql("INSERT INTO down_conductor_positions (site_id, structure_id, positions, updated_at) VALUES (?, ?, ?, ?)")
-                    .params(siteId, structureId, json, when).update();
+                    .params(siteId, structureId, positionsJson, when).update();
         }
     }
 

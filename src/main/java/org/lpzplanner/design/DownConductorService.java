@@ -9,6 +9,7 @@ import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.GeometryFactory;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.BondingRoutes;
 import org.lpzplanner.engine.design.Building;
 import org.lpzplanner.engine.design.DownConductorLayout;
@@ -64,6 +65,16 @@ public class DownConductorService {
     public record DownConductors(String buildingId, List<String> structureIds, String name, double perimeter,
             double typicalSpacing, int required, List<double[]> positions, List<String> labels, boolean edited,
             double height, List<String> warnings) {
+
+        /** The perimeter as pages and report write a length. */
+        public String perimeterText() {
+            return Formats.length(perimeter);
+        }
+
+        /** The typical spacing of the level as pages and report write a length. */
+        public String typicalSpacingText() {
+            return Formats.length(typicalSpacing);
+        }
     }
 
     public List<DownConductors> list(long siteId) {
@@ -91,17 +102,19 @@ public class DownConductorService {
             }
             List<String> warnings = new ArrayList<>();
             if (positions.size() < planned.required()) {
-                warnings.add(String.format(Locale.ROOT, "%d down-conductors, fewer than the %d a perimeter of %.1f m needs at"
-                        + " %.0f m typical spacing", positions.size(), planned.required(), planned.perimeter(), spacing));
+                warnings.add(positions.size() + " down-conductors, fewer than the " + planned.required() + " a perimeter of "
+                        + Formats.length(planned.perimeter()) + " m needs at " + Formats.length(spacing)
+                        + " m typical spacing");
             }
             if (!kept.edited() && planned.exceedsTypicalSpacing()) {
-                warnings.add(String.format(Locale.ROOT, "one gap along the outline is %.1f m, longer than the typical"
-                        + " spacing of %.0f m", planned.largestSpacing(), spacing));
+                warnings.add("one gap along the outline is " + Formats.length(planned.largestSpacing())
+                        + " m, longer than the typical spacing of " + Formats.length(spacing) + " m");
             }
             for (Coordinate c : kept.dropped()) {
-                warnings.add(String.format(Locale.ROOT, "the stored position (%.2f, %.2f) is more than %.0f m from the"
-                        + " outline of the building as a whole (it stood by a wall inside it) and is left out; save the"
-                        + " positions again to keep the list as shown", c.x, c.y, DownConductorPlan.EDIT_REACH));
+                warnings.add("the stored position (" + Formats.coordinate(c.x) + ", " + Formats.coordinate(c.y)
+                        + ") is more than " + Formats.length(DownConductorPlan.EDIT_REACH) + " m from the outline of the"
+                        + " building as a whole (it stood by a wall inside it) and is left out; save the positions"
+                        + " again to keep the list as shown");
             }
             out.add(new DownConductors(b.id(), b.structureIds(), b.name(), round(planned.perimeter()), spacing,
                     planned.required(), positions, labels, kept.edited(), b.height(), warnings));

@@ -2,6 +2,7 @@ package org.lpzplanner.design;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.AngleCoverage;
 import org.lpzplanner.engine.design.AngleMethodCheck;
 import org.lpzplanner.engine.design.MeshFaceResult;
@@ -36,6 +37,16 @@ public class MethodCheckService {
     public record MethodCheck(String structureId, String name, int sphereExposedItems, double sphereExposedRoofArea,
             boolean angleCovered, double angleUncoveredArea, int meshFacesPassing, int meshFacesFailing,
             int meshFacesNotApplicable, String agreement, List<String> notes) {
+
+        /** The exposed roof area as pages and report write an area. */
+        public String sphereExposedRoofAreaText() {
+            return Formats.area(sphereExposedRoofArea);
+        }
+
+        /** The roof area the angle method leaves uncovered, written as an area. */
+        public String angleUncoveredAreaText() {
+            return Formats.area(angleUncoveredArea);
+        }
     }
 
     public List<MethodCheck> methodChecks(long siteId) {

@@ -41,7 +41,6 @@ public class ProposalJobs {
     static final int KEEP = 20;
     static final Duration KEPT_FOR = Duration.ofDays(1);
     private static final Logger LOG = LoggerFactory.getLogger(ProposalJobs.class);
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     /** Where a job stands. */
     public enum State { RUNNING, DONE, FAILED, CANCELLED }
@@ -59,16 +58,18 @@ public class ProposalJobs {
     private final JobStore store;
     private final JobInstance instance;
     private final Clock clock;
+    private final JsonMapper json;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "proposal-worker");
         t.setDaemon(true);
         return t;
     });
 
-    public ProposalJobs(JobStore store, JobInstance instance, Clock clock) {
+    public ProposalJobs(JobStore store, JobInstance instance, Clock clock, JsonMapper json) {
         this.store = store;
         this.instance = instance;
         this.clock = clock;
+        this.json = json;
     }
 
     public Job start(long siteId, long siteVersion, Site site, ProposalOptions options) {
@@ -77,7 +78,7 @@ public class ProposalJobs {
         settings.put("level", options.sphere().level().name());
         settings.put("radius", options.sphere().radius());
         store.insert(new JobStore.NewJob(id, JobStore.PROPOSAL, siteId, CurrentAccount.teamId(),
-                CurrentAccount.actorName(), JobStore.RUNNING, "waiting", siteVersion, JSON.writeValueAsString(settings),
+                CurrentAccount.actorName(), JobStore.RUNNING, "waiting", siteVersion, json.writeValueAsString(settings),
                 instance.name()), clock.instant());
         LiveJob live = instance.track(id, "waiting");
         // the worker acts for the person who started the proposal, like every background task
@@ -92,7 +93,7 @@ public class ProposalJobs {
      */
     public Job get(long siteId, String jobId) {
         return store.find(JobStore.PROPOSAL, siteId, CurrentAccount.teamId(), jobId).map(instance::current)
-                .map(ProposalJobs::job).orElse(null);
+                .map(this::job).orElse(null);
     }
 
     /** Asks the proposal to stop, whichever instance runs it. */
@@ -103,7 +104,7 @@ public class ProposalJobs {
 
     /** Records what accepting the proposal added (null: it was taken back). */
     void accepted(Job job, AcceptedProposal accepted) {
-        store.setAccepted(job.id(), accepted == null ? null : JSON.writeValueAsString(accepted));
+        store.setAccepted(job.id(), accepted == null ? null : json.writeValueAsString(accepted));
     }
 
     private void run(LiveJob live, Site site, ProposalOptions options) {
@@ -124,7 +125,7 @@ public class ProposalJobs {
                     return instance.cancelRequested(id);
                 }
             });
-            store.finish(id, JobStore.DONE, null, JSON.writeValueAsString(StoredProposal.of(proposal)), null,
+            store.finish(id, JobStore.DONE, null, json.writeValueAsString(StoredProposal.of(proposal)), null,
                     clock.instant());
         } catch (ProposalCancelledException e) {
             store.finish(id, JobStore.CANCELLED, null, null, null, clock.instant());
@@ -143,11 +144,11 @@ public class ProposalJobs {
         }
     }
 
-    private static Job job(StoredJob s) {
-        JsonNode settings = s.settingsJson() == null ? JSON.createObjectNode() : JSON.readTree(s.settingsJson());
-        StoredProposal result = s.outcomeJson() == null ? null : JSON.readValue(s.outcomeJson(), StoredProposal.class);
+    private Job job(StoredJob s) {
+        JsonNode settings = s.settingsJson() == null ? json.createObjectNode() : json.readTree(s.settingsJson());
+        StoredProposal result = s.outcomeJson() == null ? null : json.readValue(s.outcomeJson(), StoredProposal.class);
         AcceptedProposal accepted = s.acceptedJson() == null ? null
-                : JSON.readValue(s.acceptedJson(), AcceptedProposal.class);
+                : json.readValue(s.acceptedJson(), AcceptedProposal.class);
         return new Job(s.id(), s.siteId(), s.siteVersion() == null ? -1 : s.siteVersion(),
                 State.valueOf(JobStore.QUEUED.equals(s.state()) ? JobStore.RUNNING : s.state()), s.stage(), s.fraction(),
                 settings.path("level").asString(), settings.path("radius").asDouble(), s.error(), result, accepted);

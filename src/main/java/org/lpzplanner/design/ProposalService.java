@@ -11,6 +11,7 @@ import org.lpzplanner.airtermination.PartBatchEdits;
 import org.lpzplanner.airtermination.RodInput;
 import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.ReviewService;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.editing.AuditLine;
 import org.lpzplanner.editing.Edit;
 import org.lpzplanner.engine.design.proposal.ProposalOptions;
@@ -155,9 +156,9 @@ public class ProposalService {
         if (rods.isEmpty() && conductors.isEmpty()) {
             throw new InvalidInputException("proposal", "the proposal adds no parts; there is nothing to accept");
         }
-        AuditLine audit = AuditLine.of("proposal-accepted", String.format(Locale.ROOT,
-                "accepted proposal %s: %d rods, %d masts, %d conductors (%.1f m)%s", job.id(), rods.size() - masts,
-                masts, conductors.size(), conductorLength, job.result().complete() ? "" : ", not complete"));
+        AuditLine audit = AuditLine.of("proposal-accepted", "accepted proposal " + job.id() + ": "
+                + (rods.size() - masts) + " rods, " + masts + " masts, " + conductors.size() + " conductors ("
+                + Formats.length(conductorLength) + " m)" + (job.result().complete() ? "" : ", not complete"));
         Edit<PartBatchEdits.AddedParts> added = parts.add(siteId, version, rods, conductors, audit);
         AcceptedProposal accepted = new AcceptedProposal(added.outcome().rodIds(), added.outcome().conductorIds(),
                 added.version());

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.BondingRoutes;
 import org.lpzplanner.engine.design.SeparationDistance;
 import org.lpzplanner.engine.design.SeparationSurvey;
@@ -94,9 +95,8 @@ public class SeparationService {
         } else if (route.basis() == BondingRoutes.Basis.NONE) {
             note = "no down-conductor reached: l is only a lower bound, so the check cannot pass";
         } else if (c.status() == SeparationSurvey.Status.NOT_CONFIRMED) {
-            note = String.format(Locale.ROOT, "it clears s at every point, but %s has no drawn route to a down-conductor"
-                    + " (there l is at least %.2f m): not confirmed until its route is drawn", u.partId(),
-                    u.result().length());
+            note = "it clears s at every point, but " + u.partId() + " has no drawn route to a down-conductor (there l is"
+                    + " at least " + Formats.length(u.result().length()) + " m): not confirmed until its route is drawn";
         } else {
             note = "l along the drawn air-termination and down the down-conductor";
         }

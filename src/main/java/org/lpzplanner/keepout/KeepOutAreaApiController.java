@@ -1,14 +1,11 @@
 package org.lpzplanner.keepout;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
+import jakarta.validation.Valid;
 import java.net.URI;
 import java.util.List;
-import org.lpzplanner.system.ApiError;
-import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
@@ -20,12 +17,12 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.JsonNode;
 
 /**
- * JSON API of a site's keep-out areas: {@code GET|POST /api/sites/{id}/keep-out-areas} (JSON
- * {@code {"name": "...", "corners": [[x, y], …]}}, local metres), {@code PATCH …/{areaId}}
- * ({@code {"name": "..."}}) and {@code DELETE …/{areaId}}.
+ * JSON API of a site's keep-out areas: {@code GET|POST /api/sites/{id}/keep-out-areas}
+ * ({@link KeepOutAreaRequest}: {@code {"name": "...", "corners": [[x, y], …]}}, local metres),
+ * {@code PATCH …/{areaId}} ({@link KeepOutAreaName}) and {@code DELETE …/{areaId}}. Errors are problem
+ * details, see {@link org.lpzplanner.system.ApiErrorHandler}.
  */
 @RestController
 @RequestMapping("/api/sites/{id}/keep-out-areas")
@@ -41,7 +38,7 @@ public class KeepOutAreaApiController {
     @Operation(summary = "List the site's keep-out areas", description = "Oldest first; corners in local metres,"
             + " area in m². Proposals keep out of them by default; the plan page and the report draw them")
     @ApiResponse(responseCode = "200", description = "The stored keep-out areas")
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping
     public List<KeepOutArea> list(@PathVariable long id) {
         return areas.areas(id);
@@ -53,15 +50,12 @@ public class KeepOutAreaApiController {
                     + " before it, an outline that does not cross itself, at least 0.01 m². At most 50 areas per"
                     + " site. Designers and administrators only")
     @ApiResponse(responseCode = "201", description = "Stored; Location names the area")
-    @ApiResponse(responseCode = "400", description = "The name or the corners are unusable, or the site keeps the most areas it may; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "The name or the corners are unusable, or the site keeps the most areas it may; the field is named")
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @PostMapping(consumes = MediaType.APPLICATION_JSON_VALUE)
-    public ResponseEntity<KeepOutArea> save(@PathVariable long id, @RequestBody JsonNode body) {
-        if (body == null || !body.isObject()) {
-            throw new InvalidInputException("body", "send a JSON object with \"name\" and \"corners\"");
-        }
-        KeepOutArea area = areas.save(id, name(body), KeepOutOutline.read(body.get("corners"), "corners"));
+    public ResponseEntity<KeepOutArea> save(@PathVariable long id, @Valid @RequestBody KeepOutAreaRequest body) {
+        KeepOutArea area = areas.save(id, body.name(), body.outline());
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/sites/" + id + "/keep-out-areas/" + area.id())).body(area);
     }
@@ -69,32 +63,23 @@ public class KeepOutAreaApiController {
     @Operation(summary = "Rename a keep-out area", description = "JSON {\"name\": \"...\"}, at most 100 characters."
             + " Designers and administrators only")
     @ApiResponse(responseCode = "200", description = "Renamed; the area as stored")
-    @ApiResponse(responseCode = "400", description = "The name is unusable", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such area", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "The name is unusable")
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such area")
     @PatchMapping(path = "/{areaId}", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public KeepOutArea rename(@PathVariable long id, @PathVariable long areaId, @RequestBody JsonNode body) {
-        if (body == null || !body.isObject()) {
-            throw new InvalidInputException("body", "send a JSON object with \"name\"");
-        }
-        return areas.rename(id, areaId, name(body));
+    public KeepOutArea rename(@PathVariable long id, @PathVariable long areaId,
+            @Valid @RequestBody KeepOutAreaName body) {
+        return areas.rename(id, areaId, body.name());
     }
 
     @Operation(summary = "Delete a keep-out area", description = "Designers and administrators only")
     @ApiResponse(responseCode = "204", description = "Deleted")
-    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such area", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "403", description = "The account may not edit sites (reviewer)")
+    @ApiResponse(responseCode = "404", description = "No site with this id, or the site has no such area")
     @DeleteMapping("/{areaId}")
     public ResponseEntity<Void> delete(@PathVariable long id, @PathVariable long areaId) {
         areas.delete(id, areaId);
         return ResponseEntity.noContent().build();
     }
 
-    private static String name(JsonNode body) {
-        JsonNode name = body.path("name");
-        if (!name.isString()) {
-            throw new InvalidInputException("name", "send \"name\" as a string");
-        }
-        return name.stringValue();
-    }
 }

@@ -6,10 +6,10 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.locationtech.jts.geom.Polygon;
-import org.lpzplanner.analysis.PlanSvg;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.common.Formats;
+import org.lpzplanner.drawing.PlanItem;
 import org.lpzplanner.sites.SiteDuplicated;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -38,18 +38,18 @@ public class KeepOutAreaService {
     /** Most areas one site keeps. */
     public static final int MAX_AREAS = 50;
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     private final JdbcClient jdbc;
     private final SiteService sites;
     private final AuditTrail audit;
     private final Clock clock;
+    private final JsonMapper json;
 
-    public KeepOutAreaService(JdbcClient jdbc, SiteService sites, AuditTrail audit, Clock clock) {
+    public KeepOutAreaService(JdbcClient jdbc, SiteService sites, AuditTrail audit, Clock clock, JsonMapper json) {
         this.jdbc = jdbc;
         this.sites = sites;
         this.audit = audit;
         this.clock = clock;
+        this.json = json;
     }
 
     /**
@@ -73,12 +73,12 @@ public class KeepOutAreaService {
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO site_keep_out_areas (site_id, name, corners, created_at) VALUES (?, ?, ?, ?)")
-                .params(siteId, n, JSON.writeValueAsString(outline), Timestamp.from(now))
+                .params(siteId, n, json.writeValueAsString(outline), Timestamp.from(now))
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
         double area = KeepOutOutline.area(outline);
         audit.record(siteId, "keep-out-added", "\"" + n + "\", " + outline.size() + " corners, "
-                + String.format(Locale.ROOT, "%.2f", area) + " m²");
+                + Formats.area(area) + " m²");
         return new KeepOutArea(id, siteId, n, outline, area, now);
     }
 
@@ -104,8 +104,8 @@ public class KeepOutAreaService {
 
     /** The site's areas as the plan drawing takes them. */
     @Transactional(readOnly = true)
-    public List<PlanSvg.KeepOut> forPlan(long siteId) {
-        return areas(siteId).stream().map(a -> new PlanSvg.KeepOut(a.name(), a.corners())).toList();
+    public List<PlanItem.KeepOutArea> forPlan(long siteId) {
+        return areas(siteId).stream().map(a -> new PlanItem.KeepOutArea(a.name(), a.corners())).toList();
     }
 
     /**
@@ -148,9 +148,9 @@ public class KeepOutAreaService {
     }
 
     /** Corners as stored: a JSON array of [x, y]. */
-    static List<double[]> corners(String json) {
+    private List<double[]> corners(String stored) {
         List<double[]> out = new ArrayList<>();
-        for (JsonNode p : JSON.readTree(json)) {
+        for (JsonNode p : json.readTree(stored)) {
             out.add(new double[] {p.get(0).asDouble(), p.get(1).asDouble()});
         }
         return out;

@@ -18,6 +18,7 @@ import org.lpzplanner.common.Cautions;
 import org.lpzplanner.common.Formats;
 import org.lpzplanner.editing.Edit;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SettingRange;
 import org.lpzplanner.sections.SectionPage;
 import org.lpzplanner.sites.PlanContribution;
 import org.lpzplanner.sites.SiteService;
@@ -84,6 +85,7 @@ class PlanPage {
         model.put("method", ResultGeoJson.METHOD);
         model.put("cautions", Cautions.lines());
         model.put("levels", ProtectionLevel.values());
+        model.put("radiusRule", SettingRange.RADIUS.rule());
         contributions.forEach(c -> model.putAll(c.attributes(site, locale)));
         model.put("structures", sites.structures(site));
         model.put("roofForms", ROOF_FORMS);
@@ -106,7 +108,7 @@ class PlanPage {
                 messages.getMessage("history.action." + e.action(), null, e.action(), locale), e.detail())).toList());
         if (latest != null) {
             model.put("basis", presenter.basis(latest, locale));
-            model.put("radius", Formats.oneDecimal(latest.sphereRadius()));
+            model.put("radius", Formats.radius(latest.sphereRadius()));
             ReviewService.Review review = reviews.review(latest);
             List<SummaryRow> summary = new ArrayList<>(summary(latest));
             int negligible = results.of(latest).negligibleBands();
@@ -142,21 +144,18 @@ class PlanPage {
             String length = item.length() == null ? "-" : Formats.oneDecimal(item.length());
             String height;
             if (item.isModelWarning()) {
-                height = item.heightAboveSurface() == null ? "-" : metres(item.heightAboveSurface());
+                height = item.heightAboveSurface() == null ? "-" : Formats.height(item.heightAboveSurface());
             } else if (item.top() == null) {
                 height = "-";
             } else if (item.bottom() != null) {
-                height = metres(item.bottom()) + "\u2013" + metres(item.top());
+                height = Formats.height(item.bottom()) + "\u2013" + Formats.height(item.top());
             } else {
-                height = metres(item.top());
+                height = Formats.height(item.top());
             }
             return new ReviewRow(item.number(), item.key(), item.owner(), item.kind(), length, height, reason,
                     item.isModelWarning());
         }
 
-        private static String metres(double value) {
-            return String.format(Locale.ROOT, "%.2f", value);
-        }
     }
 
     /**
@@ -169,8 +168,8 @@ class PlanPage {
 
         static WarningRow of(ReviewItems.Item item, double radius, String reason) {
             return new WarningRow(item.number(), item.key(), item.kind(), item.owner(),
-                    item.heightAboveSurface() == null ? "-" : Formats.oneDecimal(item.heightAboveSurface()),
-                    Formats.oneDecimal(radius), reason);
+                    item.heightAboveSurface() == null ? "-" : Formats.height(item.heightAboveSurface()),
+                    Formats.radius(radius), reason);
         }
     }
 
@@ -207,7 +206,7 @@ class PlanPage {
                 new SummaryRow("summary.facadeBands", "facadeBands", String.valueOf(r.facadeBands())),
                 new SummaryRow("summary.protectedGround", "protectedGroundArea",
                         Formats.oneDecimal(r.protectedGroundArea())),
-                new SummaryRow("summary.resolution", "resolution", String.format(java.util.Locale.ROOT, "%.2f", r.resolution())),
+                new SummaryRow("summary.resolution", "resolution", Formats.length(r.resolution())),
                 new SummaryRow("summary.engineTime", "engineMillis", String.valueOf(r.engineMillis())),
                 new SummaryRow("summary.checksum", "inputsSha256", r.inputsSha256()));
     }

@@ -64,7 +64,7 @@ public class PlanPresenter {
     /** "Method: rolling sphere method. Protection level II, sphere radius 30 m. Analysed ...". */
     public String basis(AnalysisRevision revision, Locale locale) {
         return messages.getMessage("plan.basis", new Object[] {ResultGeoJson.METHOD, revision.level().name(),
-                Formats.oneDecimal(revision.sphereRadius()), Formats.dateTime(revision.createdAt())}, locale);
+                Formats.radius(revision.sphereRadius()), Formats.dateTime(revision.createdAt())}, locale);
     }
 
     /** The status line of a revision of the site's current file ({@link PlanStatus}). */

@@ -6,10 +6,9 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Map;
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
+import jakarta.validation.Valid;
 import org.lpzplanner.analysis.AnalysisRevision;
 import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.AnalysisSummary;
@@ -19,8 +18,6 @@ import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.sites.SiteFileVersion;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
-import org.lpzplanner.system.ApiError;
-import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
@@ -35,7 +32,6 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.multipart.MultipartFile;
-import tools.jackson.databind.JsonNode;
 
 /**
  * JSON API for sites: list ({@code GET /api/sites}), upload ({@code POST /api/sites}, multipart
@@ -47,7 +43,7 @@ import tools.jackson.databind.JsonNode;
  * one line of at most 200 characters each, null or blank to clear), a copy ({@code POST /api/sites/{id}/duplicate}), removal
  * ({@code DELETE /api/sites/{id}}, optionally {@code ?version=N}), the stored file ({@code GET /api/sites/{id}/file}) and the
  * files corrections replaced ({@code GET /api/sites/{id}/file/versions} and
- * {@code .../versions/{number}}). A stale {@code version} answers 409. Errors are JSON, see
+ * {@code .../versions/{number}}). A stale {@code version} answers 409. Errors are problem details, see
  * {@link org.lpzplanner.system.ApiErrorHandler}.
  */
 @RestController
@@ -103,9 +99,9 @@ public class SiteApiController {
 
     @Operation(summary = "Upload a site file",
             description = "Multipart: file (GeoJSON or WKT, UTF-8), optional name, level (I to IV, default II) and radius (metres). The file is checked and kept byte for byte, then the site is analysed; nothing is stored when it is refused. When the analysis cannot run now the site stays stored, analysisPending is true and pendingReason says why.")
-    @ApiResponse(responseCode = "201", description = "Stored and analysed (latest), or stored with the analysis pending (analysisPending); Location names the new site")
-    @ApiResponse(responseCode = "400", description = "The file is not a valid site (file, feature, line and field named) or a setting cannot be used", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "413", description = "The file is too large", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "201", description = "Stored and analysed (latest), or stored with the analysis pending (analysisPending, pendingReason); Location names the new site")
+    @ApiResponse(responseCode = "400", description = "The file is not a valid site (file, feature, line and field named) or a setting cannot be used")
+    @ApiResponse(responseCode = "413", description = "The file is too large")
     @PostMapping(consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     public ResponseEntity<SiteView> upload(@RequestParam("file") MultipartFile file,
             @RequestParam(required = false) String name, @RequestParam(required = false) String level,
@@ -119,8 +115,8 @@ public class SiteApiController {
 
     @Operation(summary = "One site")
     @ApiResponse(responseCode = "200", description = "The site")
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "400", description = "The id is not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id")
+    @ApiResponse(responseCode = "400", description = "The id is not a whole number")
     @GetMapping("/{id}")
     public SiteView get(@PathVariable long id) {
         StoredSite site = sites.get(id);
@@ -132,32 +128,20 @@ public class SiteApiController {
                     + " address and designer (strings printed on the report's cover: one line, at most 200 characters,"
                     + " no control characters; null or blank clears).")
     @ApiResponse(responseCode = "200", description = "Changed")
-    @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one")
     @PatchMapping(value = "/{id}", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public SiteView update(@PathVariable long id, @RequestBody JsonNode body) {
-        if (!body.isObject()) {
-            throw new InvalidInputException("body", "the body must be a JSON object with \"version\" and any of"
-                    + " \"name\", \"level\", \"radius\", \"address\", \"designer\"");
-        }
-        JsonNode version = body.path("version");
-        if (!version.isIntegralNumber()) {
-            throw new InvalidInputException("version", "version is required: the site's version as last read"
-                    + " (GET /api/sites/" + id + ")");
-        }
-        String name = text(body, "name");
-        String level = text(body, "level");
-        String radius = body.has("radius") && body.get("radius").isNull() ? "" : text(body, "radius");
-        StoredSite site = sites.update(id, version.longValue(), name, level, radius, coverText(body, "address"),
-                coverText(body, "designer"));
+    public SiteView update(@PathVariable long id, @Valid @RequestBody SiteChanges body) {
+        StoredSite site = sites.update(id, body.version(), body.name(), body.level(), body.radius(), body.address(),
+                body.designer());
         return SiteView.of(site, analyses.latest(id).orElse(null));
     }
 
     @Operation(summary = "Copy a site",
             description = "Same file and settings, named '(copy)'; analyses are not copied.")
     @ApiResponse(responseCode = "201", description = "The copy")
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @PostMapping("/{id}/duplicate")
     public ResponseEntity<SiteView> duplicate(@PathVariable long id) {
         StoredSite copy = sites.duplicate(id);
@@ -167,7 +151,7 @@ public class SiteApiController {
     @Operation(summary = "Earlier files of a site",
             description = "The files that corrections replaced, oldest first.")
     @ApiResponse(responseCode = "200", description = "The earlier files")
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/{id}/file/versions")
     public List<FileVersionView> fileVersions(@PathVariable long id) {
         return sites.fileVersions(id).stream().map(v -> new FileVersionView(v.number(), v.sourceName(),
@@ -177,41 +161,11 @@ public class SiteApiController {
     /** An earlier site file exactly as it was stored. */
     @Operation(summary = "One earlier file, verbatim")
     @ApiResponse(responseCode = "200", description = "The file as text")
-    @ApiResponse(responseCode = "404", description = "No such site or earlier file", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No such site or earlier file")
     @GetMapping("/{id}/file/versions/{number}")
     public ResponseEntity<byte[]> fileVersion(@PathVariable long id, @PathVariable int number) {
         SiteFileVersion version = sites.fileVersion(id, number);
         return textFile(version.sourceName(), version.sourceText());
-    }
-
-    /** A cover detail: a JSON string, or null (cleared, as an empty string); null when absent. */
-    private static String coverText(JsonNode body, String field) {
-        JsonNode node = body.get(field);
-        if (node == null) {
-            return null;
-        }
-        if (node.isNull()) {
-            return "";
-        }
-        if (!node.isString()) {
-            throw new InvalidInputException(field, field + " must be a string (or null to clear it)");
-        }
-        return node.stringValue();
-    }
-
-    /** A JSON string or number member as text, null when absent. */
-    private static String text(JsonNode body, String field) {
-        JsonNode node = body.get(field);
-        if (node == null) {
-            return null;
-        }
-        if (node.isString()) {
-            return node.stringValue();
-        }
-        if (node.isNumber()) {
-            return node.asString();
-        }
-        throw new InvalidInputException(field, field + " must be a string" + ("name".equals(field) ? "" : " or number"));
     }
 
     private static ResponseEntity<byte[]> textFile(String fileName, String text) {
@@ -226,8 +180,8 @@ public class SiteApiController {
     @Operation(summary = "Delete a site",
             description = "With its analyses and inputs. With ?version=N only while the site is still at that version.")
     @ApiResponse(responseCode = "204", description = "Deleted")
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id")
+    @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one")
     @DeleteMapping("/{id}")
     public ResponseEntity<Void> delete(@PathVariable long id, @RequestParam(required = false) Long version) {
         if (version == null) {
@@ -241,7 +195,7 @@ public class SiteApiController {
     /** The site file exactly as uploaded, under its original name. */
     @Operation(summary = "The site file as uploaded")
     @ApiResponse(responseCode = "200", description = "The file as text")
-    @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/{id}/file")
     public ResponseEntity<byte[]> file(@PathVariable long id) {
         StoredSite site = sites.get(id);

@@ -112,6 +112,11 @@ public class SitePageController {
                 status = messages.getMessage("sites.status.notAnalysed", null, locale);
             } else if (r.fullyProtected()) {
                 status = messages.getMessage("sites.status.none", null, locale);
+            } else if (r.exposedRoofArea() == 0 && r.exposedEdgeLength() == 0 && r.exposedCorners() == 0
+                    && r.facadeBands() == 0) {
+                // nothing counted as exposed, yet no verdict: a model warning or another item stands
+                exposed = true;
+                status = messages.getMessage("sites.status.otherItems", null, locale);
             } else {
                 exposed = true;
                 status = messages.getMessage("sites.status.exposed", new Object[] {Formats.oneDecimal(r.exposedRoofArea()),

@@ -1,10 +1,9 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.geom.SiteSurface;
 
 /**
@@ -24,18 +23,19 @@ final class AirTerminationSchedule {
             String on = facts.standsOn(r.rod().x(), r.rod().y());
             boolean mast = on == null;
             rows.add(List.of(facts.partNumbers().get(r.rod().id()), mast ? "mast" : "rod", name(r.rod().name(),
-                    r.rod().id()), metres(r.rod().x()), metres(r.rod().y()), metres(r.rod().height()),
-                    mast ? "ground" : on, metres(r.tip().getZ()), intercepts(facts, r.rod().id())));
+                    r.rod().id()), Formats.coordinate(r.rod().x()), Formats.coordinate(r.rod().y()),
+                    Formats.height(r.rod().height()),
+                    mast ? "ground" : on, Formats.height(r.tip().getZ()), intercepts(facts, r.rod().id())));
         }
         for (SiteSurface.PlacedConductor c : facts.surface().conductors()) {
             Coordinate start = c.path().get(0);
             String on = facts.standsOn(start.x, start.y);
             double top = c.path().stream().mapToDouble(Coordinate::getZ).max().orElse(0);
-            String height = c.conductor().followsSurface() ? metres(c.conductor().heightAboveRoof()) + " above surface"
+            String height = c.conductor().followsSurface() ? Formats.height(c.conductor().heightAboveRoof()) + " above surface"
                     : "elevations given";
-            rows.add(List.of(facts.partNumbers().get(c.conductor().id()), "conductor, " + metres(length(c.path()))
-                    + " m", name(c.conductor().name(), c.conductor().id()), metres(start.x), metres(start.y), height,
-                    on == null ? "free span / ground" : on, metres(top), intercepts(facts, c.conductor().id())));
+            rows.add(List.of(facts.partNumbers().get(c.conductor().id()), "conductor, " + Formats.length(length(c.path()))
+                    + " m", name(c.conductor().name(), c.conductor().id()), Formats.coordinate(start.x), Formats.coordinate(start.y), height,
+                    on == null ? "free span / ground" : on, Formats.height(top), intercepts(facts, c.conductor().id())));
         }
         if (rows.isEmpty()) {
             return List.of(new ReportBlock.Heading(TITLE, 2),

@@ -1,10 +1,9 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.DownConductorLayout;
 
 /**
@@ -32,13 +31,13 @@ final class DownConductorSchedule {
             boolean edited = facts.edited(i);
             anyEdited |= edited;
             int required = layout.required();
-            summary.add(List.of(name, edited ? "edited" : "planned", metres(layout.perimeter()),
-                    metres(layout.typicalSpacing()), layout.count()
+            summary.add(List.of(name, edited ? "edited" : "planned", Formats.length(layout.perimeter()),
+                    Formats.length(layout.typicalSpacing()), layout.count()
                             + (layout.count() < required ? " (fewer than " + required + ": check)" : ""),
-                    metres(layout.meanSpacing()), metres(layout.largestSpacing()) + overTypical(layout)));
+                    Formats.length(layout.meanSpacing()), Formats.length(layout.largestSpacing()) + overTypical(layout)));
             for (Coordinate c : layout.positions()) {
                 number++;
-                positions.add(List.of("D" + number, name, metres(c.x), metres(c.y)));
+                positions.add(List.of("D" + number, name, Formats.coordinate(c.x), Formats.coordinate(c.y)));
             }
         }
         List<String> notes = new ArrayList<>();

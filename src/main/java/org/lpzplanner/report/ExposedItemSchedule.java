@@ -1,11 +1,10 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import org.lpzplanner.analysis.ReviewItems;
+import org.lpzplanner.common.Formats;
 
 /**
  * The exposed items of the stored result: roof areas by structure, then every exposed edge, corner
@@ -26,7 +25,7 @@ final class ExposedItemSchedule {
         Map<String, Double> areas = facts.stored().roofAreas();
         if (!areas.isEmpty()) {
             List<List<String>> rows = new ArrayList<>();
-            areas.forEach((owner, area) -> rows.add(List.of(owner, metres(area))));
+            areas.forEach((owner, area) -> rows.add(List.of(owner, Formats.area(area))));
             out.add(new Schedule(ROOF_TITLE, List.of("Structure or object", "Exposed plan area (m²)"),
                     List.of(3.0, 1.5), rows, List.of()));
         }
@@ -44,8 +43,9 @@ final class ExposedItemSchedule {
         for (ReviewItems.Item item : items) {
             String reason = facts.source().accepted().get(item.key());
             rows.add(List.of("E" + item.number(), item.owner(), item.kind(),
-                    item.length() == null ? "" : metres(item.length()),
-                    item.bottom() == null ? "" : metres(item.bottom()), item.top() == null ? "" : metres(item.top()),
+                    item.length() == null ? "" : Formats.length(item.length()),
+                    item.bottom() == null ? "" : Formats.height(item.bottom()),
+                    item.top() == null ? "" : Formats.height(item.top()),
                     reason == null ? "exposed" : "accepted: " + reason));
         }
         out.add(new Schedule(TITLE, List.of("No.", "Structure", "Kind", "Length (m)", "From (m)", "Top (m)", "Status"),

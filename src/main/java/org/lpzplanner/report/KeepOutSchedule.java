@@ -1,12 +1,11 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.Polygon;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.model.Conductor;
 import org.lpzplanner.engine.model.Rod;
 
@@ -49,9 +48,9 @@ final class KeepOutSchedule {
             conflicts += inside.size();
             List<String> corners = new ArrayList<>();
             for (double[] c : a.corners()) {
-                corners.add("(" + metres(c[0]) + ", " + metres(c[1]) + ")");
+                corners.add("(" + Formats.coordinate(c[0]) + ", " + Formats.coordinate(c[1]) + ")");
             }
-            rows.add(List.of(number(i), a.name(), metres(a.area()), String.join(" ", corners),
+            rows.add(List.of(number(i), a.name(), Formats.area(a.area()), String.join(" ", corners),
                     inside.isEmpty() ? "none" : String.join(", ", inside)));
         }
         List<String> notes = new ArrayList<>();

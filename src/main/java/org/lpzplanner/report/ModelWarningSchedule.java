@@ -1,9 +1,8 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
+import org.lpzplanner.common.Formats;
 
 /**
  * The model warnings of the stored result, numbered as in the review list and on the plan: the
@@ -28,8 +27,8 @@ final class ModelWarningSchedule {
         for (StoredResult.Warning w : warnings) {
             String reason = facts.source().accepted().get(w.item().key());
             rows.add(List.of("E" + w.item().number(), w.item().owner() + " (" + w.partId() + ")", kind(w.item().kind()),
-                    w.item().heightAboveSurface() == null ? "" : metres(w.item().heightAboveSurface()),
-                    Double.isNaN(w.limit()) ? "" : metres(w.limit()), w.item().text(),
+                    w.item().heightAboveSurface() == null ? "" : Formats.height(w.item().heightAboveSurface()),
+                    Double.isNaN(w.limit()) ? "" : Formats.length(w.limit()), w.item().text(),
                     reason == null ? "not yet accepted" : "accepted: " + reason));
         }
         return List.of(new Schedule(TITLE, List.of("No.", "Part", "Kind", "Above surface (m)", "Limit R (m)",

@@ -6,16 +6,26 @@ import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
-import org.lpzplanner.report.PlanDrawing.Label;
-import org.lpzplanner.report.PlanDrawing.Layer;
-import org.lpzplanner.report.PlanDrawing.Shape;
+import org.apache.pdfbox.pdmodel.graphics.state.PDExtendedGraphicsState;
+import org.apache.pdfbox.pdmodel.graphics.state.RenderingMode;
+import org.lpzplanner.common.Formats;
+import org.lpzplanner.drawing.LabelPlacement;
+import org.lpzplanner.drawing.Layer;
+import org.lpzplanner.drawing.LayerStyle;
+import org.lpzplanner.drawing.PlanDrawing;
+import org.lpzplanner.drawing.PlanItem;
+import org.lpzplanner.drawing.PlanLabel;
+import org.lpzplanner.drawing.PlanStyle;
+import org.lpzplanner.drawing.ScaleBar;
 
 /**
- * Draws the plan to a stated scale on A4: an overview page at the largest standard scale that fits
- * the site, then, when that scale is smaller than 1:{@value #DETAIL_SCALE}, detail sheets at
- * 1:{@value #DETAIL_SCALE} tiling the site (numbered on the overview, which then names only the
- * structures; item, part and down-conductor numbers are on the detail sheets). Every sheet has a scale bar, a
- * north arrow (north is up: local y) and the legend. Shapes are clipped to the drawing frame.
+ * Draws a {@link PlanDrawing} to a stated scale on A4, with the styles of {@link PlanStyle} and the
+ * labels where {@link LabelPlacement} puts them, as the pages draw the same model: an overview page
+ * at the largest standard scale that fits the site, then, when that scale is smaller than
+ * 1:{@value #DETAIL_SCALE}, detail sheets at 1:{@value #DETAIL_SCALE} tiling the site (numbered on
+ * the overview, which then names only the structures; item, part and down-conductor numbers are on
+ * the detail sheets). Every sheet has a scale bar, a north arrow (north is up: local y) and the
+ * legend. Items are clipped to the drawing frame.
  */
 final class PdfPlanPainter {
 
@@ -26,21 +36,6 @@ final class PdfPlanPainter {
     static final float LEGEND_HEIGHT = 66;
     private static final float POINTS_PER_MM = 72f / 25.4f;
     private static final float PAD = 10;
-
-    private static final Color GROUND = new Color(0xcf, 0xe9, 0xc8);
-    private static final Color OBJECT = new Color(0xb9, 0xad, 0x94);
-    private static final Color EXPOSED_ROOF = new Color(0xf5, 0xb0, 0x6c);
-    private static final Color FACADE = new Color(0x7b, 0x4f, 0xa0);
-    /** Facade bands where flashes to the side are negligible: the band's purple, light and dashed. */
-    private static final Color FACADE_NEGLIGIBLE = new Color(0xc4, 0xb0, 0xda);
-    private static final Color EDGE = new Color(0xc8, 0x10, 0x2e);
-    private static final Color ACCEPTED = new Color(0x8a, 0x8a, 0x8a);
-    private static final Color PART = new Color(0x1f, 0x5f, 0xbf);
-    private static final Color DOWN = new Color(0x11, 0x11, 0x11);
-    /** Hatch and outline of keep-out areas (our own dark teal). */
-    private static final Color KEEP_OUT = new Color(0x1b, 0x6e, 0x5a);
-    /** Stretches of parts a model warning is about: a broad dashed amber band under the part. */
-    private static final Color WARNING = new Color(0xe0, 0x9b, 0x00);
 
     private PdfPlanPainter() {
     }
@@ -65,7 +60,7 @@ final class PdfPlanPainter {
         float frameBottom = p.bottom + LEGEND_HEIGHT;
         float frameW = PdfPages.CONTENT_WIDTH, frameH = frameTop - frameBottom;
         double margin = 4; // metres of ground shown round the site
-        double w = plan.width() + 2 * margin, h = plan.height() + 2 * margin;
+        double w = plan.frame().width() + 2 * margin, h = plan.frame().height() + 2 * margin;
         int overview = fitScale(w, h, frameW - 2 * PAD, frameH - 2 * PAD);
         int cols = 1, rows = 1;
         double tileW = 0, tileH = 0;
@@ -79,9 +74,10 @@ final class PdfPlanPainter {
         }
         String title = tiled ? "Overview, scale 1:" + overview + " on A4; detail sheets 1 to " + (cols * rows)
                 + " at 1:" + DETAIL_SCALE + " follow" : "Plan, scale 1:" + overview + " on A4";
-        double cx = (plan.minX() + plan.maxX()) / 2, cy = (plan.minY() + plan.maxY()) / 2;
+        double cx = plan.frame().centreX(), cy = plan.frame().centreY();
         sheet(p, plan, title, overview, cx, cy, frameTop, frameBottom, !tiled);
         if (tiled) {
+            Color grid = PlanStyle.SHEET_GRID.awt();
             float k = pointsPerMetre(overview);
             float ox = PdfPages.MARGIN + frameW / 2, oy = (frameTop + frameBottom) / 2;
             // The tile grid is centred on the site, like the overview.
@@ -96,9 +92,9 @@ final class PdfPlanPainter {
                         n++;
                         double tx = x0 + c * tileW, ty = y1 - (r + 1) * tileH;
                         float px = (float) (ox + (tx - cx) * k), py = (float) (oy + (ty - cy) * k);
-                        p.strokeRect(px, py, (float) (tileW * k), (float) (tileH * k), PART, 0.8f);
+                        p.strokeRect(px, py, (float) (tileW * k), (float) (tileH * k), grid, 0.8f);
                         p.text(String.valueOf(n), Math.max(px, PdfPages.MARGIN) + 3,
-                                Math.min(py + (float) (tileH * k), frameTop) - 10, 8, true, PART);
+                                Math.min(py + (float) (tileH * k), frameTop) - 10, 8, true, grid);
                     }
                 }
                 p.out.restoreGraphicsState();
@@ -121,38 +117,49 @@ final class PdfPlanPainter {
         p.y = p.bottom;
     }
 
+    /** Local metres to points on the page: the sheet's centre (cx, cy) at (ox, oy), k points per metre. */
+    private record Sheet(float k, float ox, float oy, double cx, double cy) {
+        float x(double x) {
+            return (float) (ox + (x - cx) * k);
+        }
+
+        float y(double y) {
+            return (float) (oy + (y - cy) * k);
+        }
+    }
+
     /** One sheet: the site centred on (cx, cy) at the scale, clipped to the frame, with its furniture. */
     private static void sheet(PdfPages p, PlanDrawing plan, String title, int denominator, double cx, double cy,
             float frameTop, float frameBottom, boolean numbers) {
         p.text(title, PdfPages.MARGIN, p.y - 10, 10, true, PdfReportRenderer.TEXT);
         float frameW = PdfPages.CONTENT_WIDTH, frameH = frameTop - frameBottom;
         float k = pointsPerMetre(denominator);
-        float ox = PdfPages.MARGIN + frameW / 2, oy = frameBottom + frameH / 2;
+        Sheet s = new Sheet(k, PdfPages.MARGIN + frameW / 2, frameBottom + frameH / 2, cx, cy);
+        List<LabelPlacement.Placed> labels = placeLabels(p, plan, s, frameBottom, frameTop, numbers);
         PDPageContentStream out = p.out;
         try {
             out.saveGraphicsState();
             out.addRect(PdfPages.MARGIN, frameBottom, frameW, frameH);
             out.clip();
-            p.fillRect(PdfPages.MARGIN, frameBottom, frameW, frameH, new Color(0xfb, 0xfb, 0xf8));
-            for (Shape s : plan.shapes()) {
-                shape(out, s, k, ox, oy, cx, cy);
-            }
-            // Names first, then the numbers around them: a number goes where it overlaps no label
-            // already placed, so that D44 next to E0 does not read as "D440".
-            List<float[]> taken = new ArrayList<>();
-            for (boolean small : new boolean[] {false, true}) {
-                for (Label l : plan.labels()) {
-                    float x = (float) (ox + (l.x() - cx) * k), y = (float) (oy + (l.y() - cy) * k);
-                    if (l.small() != small || (l.small() && !numbers) || x < PdfPages.MARGIN
-                            || x > PdfPages.MARGIN + frameW || y < frameBottom || y > frameTop) {
-                        continue;
+            p.fillRect(PdfPages.MARGIN, frameBottom, frameW, frameH, PlanStyle.BACKGROUND.awt());
+            for (Layer layer : Layer.values()) {
+                if (!layer.onPlan()) {
+                    continue;
+                }
+                for (PlanItem item : plan.items(layer)) {
+                    item(p, plan, item, s);
+                }
+                if (layer == Layer.MODEL_WARNING) {
+                    for (LabelPlacement.Placed l : labels) {
+                        if (l.label().kind() != PlanLabel.Kind.NUMBER) {
+                            halo(out, p.fonts, l);
+                        }
                     }
-                    float size = l.small() ? 5.5f : 7f;
-                    String text = p.fonts.safe(l.text());
-                    float tw = p.fonts.width(text, size);
-                    float[] at = l.small() ? placeNumber(taken, x, y, tw, size) : new float[] {x - tw / 2, y - size / 3};
-                    taken.add(box(at[0], at[1], tw, size));
-                    halo(out, p.fonts, text, at[0], at[1], size);
+                }
+            }
+            for (LabelPlacement.Placed l : labels) {
+                if (l.label().kind() == PlanLabel.Kind.NUMBER) {
+                    halo(out, p.fonts, l);
                 }
             }
             out.restoreGraphicsState();
@@ -166,142 +173,177 @@ final class PdfPlanPainter {
         legend(p, frameBottom - 10, plan);
     }
 
-    private static void shape(PDPageContentStream out, Shape s, float k, float ox, float oy, double cx, double cy)
-            throws IOException {
-        Layer layer = s.layer();
-        switch (layer) {
-            case PROTECTED_GROUND, STRUCTURE, ROOFTOP_OBJECT, EXPOSED_ROOF -> {
-                for (List<double[]> ring : s.paths()) {
-                    path(out, ring, k, ox, oy, cx, cy, true);
-                }
-                if (layer == Layer.STRUCTURE) {
-                    int grey = Math.round(225 - 120 * (float) s.shade());
-                    out.setNonStrokingColor(new Color(grey, grey, Math.min(255, grey + 6)));
-                    out.setStrokingColor(new Color(0x33, 0x33, 0x33));
-                    out.setLineWidth(0.6f);
-                    out.fillAndStrokeEvenOdd();
-                } else if (layer == Layer.ROOFTOP_OBJECT) {
-                    out.setNonStrokingColor(OBJECT);
-                    out.setStrokingColor(new Color(0x55, 0x55, 0x55));
-                    out.setLineWidth(0.5f);
-                    out.fillAndStrokeEvenOdd();
-                } else {
-                    out.setNonStrokingColor(layer == Layer.PROTECTED_GROUND ? GROUND : EXPOSED_ROOF);
-                    out.fillEvenOdd();
-                }
+    /**
+     * The sheet's labels placed, names first: those whose point lies in the frame, numbers only on
+     * sheets that show them.
+     */
+    private static List<LabelPlacement.Placed> placeLabels(PdfPages p, PlanDrawing plan, Sheet s, float frameBottom,
+            float frameTop, boolean numbers) {
+        List<LabelPlacement.Wanted> wanted = new ArrayList<>();
+        for (PlanLabel l : plan.labels()) {
+            float x = s.x(l.x()), y = s.y(l.y());
+            if ((l.kind() == PlanLabel.Kind.NUMBER && !numbers) || x < PdfPages.MARGIN
+                    || x > PdfPages.MARGIN + PdfPages.CONTENT_WIDTH || y < frameBottom || y > frameTop) {
+                continue;
             }
-            case MODEL_WARNING -> {
-                for (List<double[]> line : s.paths()) {
-                    if (line.size() > 1) {
-                        path(out, line, k, ox, oy, cx, cy, false);
-                    }
-                }
-                out.setStrokingColor(WARNING);
-                out.setLineWidth(5f);
-                out.setLineDashPattern(new float[] {5, 3}, 0);
-                out.stroke();
-                out.setLineDashPattern(new float[0], 0);
-            }
-            case FACADE_NEGLIGIBLE -> {
-                List<double[]> line = s.paths().get(0);
-                if (line.size() > 1) {
-                    path(out, line, k, ox, oy, cx, cy, false);
-                    out.setStrokingColor(FACADE_NEGLIGIBLE);
-                    out.setLineWidth(3f);
-                    out.setLineDashPattern(new float[] {2, 2}, 0);
-                    out.stroke();
-                    out.setLineDashPattern(new float[0], 0);
-                }
-            }
-            case FACADE_BAND, EXPOSED_EDGE, ACCEPTED_ITEM, CONDUCTOR -> {
-                List<double[]> line = s.paths().get(0);
-                if (line.size() == 1) {
-                    dot(out, line.get(0), k, ox, oy, cx, cy, 2f, ACCEPTED);
-                    return;
-                }
-                path(out, line, k, ox, oy, cx, cy, false);
-                out.setStrokingColor(switch (layer) {
-                    case FACADE_BAND -> FACADE;
-                    case EXPOSED_EDGE -> EDGE;
-                    case ACCEPTED_ITEM -> ACCEPTED;
-                    default -> PART;
-                });
-                out.setLineWidth(layer == Layer.FACADE_BAND ? 3f : layer == Layer.CONDUCTOR ? 1.2f : 1.5f);
-                out.setLineDashPattern(layer == Layer.CONDUCTOR || layer == Layer.ACCEPTED_ITEM ? new float[] {3, 2}
-                        : new float[0], 0);
-                out.stroke();
-                out.setLineDashPattern(new float[0], 0);
-            }
-            case KEEP_OUT -> {
-                List<double[]> ring = s.paths().get(0);
-                out.saveGraphicsState();
-                path(out, ring, k, ox, oy, cx, cy, true);
-                out.clip();
-                double minX = Double.POSITIVE_INFINITY, minY = Double.POSITIVE_INFINITY;
-                double maxX = Double.NEGATIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
-                for (double[] xy : ring) {
-                    minX = Math.min(minX, ox + (xy[0] - cx) * k);
-                    maxX = Math.max(maxX, ox + (xy[0] - cx) * k);
-                    minY = Math.min(minY, oy + (xy[1] - cy) * k);
-                    maxY = Math.max(maxY, oy + (xy[1] - cy) * k);
-                }
-                hatch(out, (float) minX, (float) minY, (float) (maxX - minX), (float) (maxY - minY));
-                out.restoreGraphicsState();
-                path(out, ring, k, ox, oy, cx, cy, true);
-                out.setStrokingColor(KEEP_OUT);
-                out.setLineWidth(0.9f);
-                out.setLineDashPattern(new float[] {4, 2}, 0);
-                out.stroke();
-                out.setLineDashPattern(new float[0], 0);
-            }
-            case EXPOSED_CORNER -> dot(out, s.paths().get(0).get(0), k, ox, oy, cx, cy, 2.2f, EDGE);
-            case DOWN_CONDUCTOR -> {
-                double[] xy = s.paths().get(0).get(0);
-                float x = (float) (ox + (xy[0] - cx) * k), y = (float) (oy + (xy[1] - cy) * k);
-                out.setNonStrokingColor(DOWN);
-                out.addRect(x - 2, y - 2, 4, 4);
-                out.fill();
-            }
-            case ROD -> {
-                double[] xy = s.paths().get(0).get(0);
-                float x = (float) (ox + (xy[0] - cx) * k), y = (float) (oy + (xy[1] - cy) * k);
-                circle(out, x, y, 3.2f);
-                out.setNonStrokingColor(Color.WHITE);
-                out.setStrokingColor(PART);
-                out.setLineWidth(1.4f);
-                out.fillAndStroke();
-            }
+            String text = p.fonts.safe(l.text());
+            float size = (float) l.kind().size();
+            wanted.add(new LabelPlacement.Wanted(new PlanLabel(text, l.x(), l.y(), l.kind(), l.layer()), x, y,
+                    p.fonts.width(text, size), size));
+        }
+        return LabelPlacement.placeAll(wanted, 1);
+    }
+
+    private static void item(PdfPages p, PlanDrawing plan, PlanItem item, Sheet s) throws IOException {
+        PDPageContentStream out = p.out;
+        LayerStyle style = PlanStyle.of(item.layer());
+        if (item instanceof PlanItem.KeepOutArea k) {
+            keepOut(out, k, style, s);
+        } else if (item instanceof PlanItem.Structure structure) {
+            area(p, item.paths(), style, PlanStyle.structureFill(plan.shade(structure)), s);
+        } else if (item instanceof PlanItem.ProtectedGround || item instanceof PlanItem.CollectionArea
+                || item instanceof PlanItem.RooftopObject || item instanceof PlanItem.ExposedRoof) {
+            area(p, item.paths(), style, style.colour(), s);
+        } else if (item instanceof PlanItem.ExposedCorner c) {
+            circle(out, s.x(c.x()), s.y(c.y()), (float) style.markSize());
+            out.setNonStrokingColor(style.colour().awt());
+            out.fill();
+        } else if (item instanceof PlanItem.DownConductor d) {
+            float side = (float) style.markSize();
+            out.setNonStrokingColor(style.colour().awt());
+            out.addRect(s.x(d.x()) - side / 2, s.y(d.y()) - side / 2, side, side);
+            out.fill();
+        } else if (item instanceof PlanItem.Rod r) {
+            circle(out, s.x(r.x()), s.y(r.y()), (float) style.markSize());
+            out.setNonStrokingColor(PlanStyle.WHITE.awt());
+            out.setStrokingColor(style.colour().awt());
+            out.setLineWidth((float) style.width());
+            out.setLineDashPattern(new float[0], 0);
+            out.fillAndStroke();
+        } else {
+            lines(p, item.paths(), style, s);
         }
     }
 
-    /**
-     * A half-transparent white veil (what lies below stays visible, on dark roofs too) and diagonal
-     * lines (45°, 3 pt apart) over a rectangle; the caller clips them to the area.
-     */
-    private static void hatch(PDPageContentStream out, float x, float y, float w, float h) throws IOException {
+    /** Polygons filled even-odd in the fill given, translucent as the style says, outlined when it has one. */
+    private static void area(PdfPages p, List<List<double[]>> rings, LayerStyle style, org.lpzplanner.drawing.Colour fill,
+            Sheet s) throws IOException {
+        PDPageContentStream out = p.out;
+        boolean translucent = style.opacity() < 1;
+        if (translucent) {
+            out.saveGraphicsState();
+            PDExtendedGraphicsState alpha = new PDExtendedGraphicsState();
+            alpha.setNonStrokingAlphaConstant((float) style.opacity());
+            out.setGraphicsStateParameters(alpha);
+        }
+        for (List<double[]> ring : rings) {
+            path(out, ring, s, true);
+        }
+        out.setNonStrokingColor(fill.awt());
+        if (style.outline() != null) {
+            stroke(out, style, style.outline());
+            out.fillAndStrokeEvenOdd();
+        } else {
+            out.fillEvenOdd();
+        }
+        if (translucent) {
+            out.restoreGraphicsState();
+            p.fonts.forget();
+        }
+    }
+
+    /** Lines in the style's colour, width and dash, translucent as the style says. */
+    private static void lines(PdfPages p, List<List<double[]>> lines, LayerStyle style, Sheet s) throws IOException {
+        PDPageContentStream out = p.out;
+        boolean any = false;
+        for (List<double[]> line : lines) {
+            if (line.size() > 1) {
+                path(out, line, s, false);
+                any = true;
+            }
+        }
+        if (!any) {
+            return;
+        }
+        boolean translucent = style.opacity() < 1;
+        if (translucent) {
+            out.saveGraphicsState();
+            PDExtendedGraphicsState alpha = new PDExtendedGraphicsState();
+            alpha.setStrokingAlphaConstant((float) style.opacity());
+            out.setGraphicsStateParameters(alpha);
+        }
+        stroke(out, style, style.colour());
+        out.stroke();
+        if (translucent) {
+            out.restoreGraphicsState();
+            p.fonts.forget();
+        }
+    }
+
+    private static void stroke(PDPageContentStream out, LayerStyle style, org.lpzplanner.drawing.Colour colour)
+            throws IOException {
+        out.setStrokingColor(colour.awt());
+        out.setLineWidth((float) style.width());
+        out.setLineCapStyle(style.roundCap() ? 1 : 0);
+        double[] dash = style.dash();
+        float[] pattern = new float[dash.length];
+        for (int i = 0; i < dash.length; i++) {
+            pattern[i] = (float) dash[i];
+        }
+        out.setLineDashPattern(pattern, 0);
+    }
+
+    private static void keepOut(PDPageContentStream out, PlanItem.KeepOutArea area, LayerStyle style, Sheet s)
+            throws IOException {
+        List<double[]> ring = area.corners();
         out.saveGraphicsState();
-        org.apache.pdfbox.pdmodel.graphics.state.PDExtendedGraphicsState veil =
-                new org.apache.pdfbox.pdmodel.graphics.state.PDExtendedGraphicsState();
-        veil.setNonStrokingAlphaConstant(0.55f);
+        path(out, ring, s, true);
+        out.clip();
+        float minX = Float.POSITIVE_INFINITY, minY = Float.POSITIVE_INFINITY;
+        float maxX = Float.NEGATIVE_INFINITY, maxY = Float.NEGATIVE_INFINITY;
+        for (double[] xy : ring) {
+            minX = Math.min(minX, s.x(xy[0]));
+            maxX = Math.max(maxX, s.x(xy[0]));
+            minY = Math.min(minY, s.y(xy[1]));
+            maxY = Math.max(maxY, s.y(xy[1]));
+        }
+        hatch(out, style, minX, minY, maxX - minX, maxY - minY);
+        out.restoreGraphicsState();
+        path(out, ring, s, true);
+        stroke(out, style, style.outline());
+        out.stroke();
+    }
+
+    /**
+     * The style's hatching over a rectangle: a half-transparent white veil (what lies below stays
+     * visible, on dark roofs too) and diagonal lines at 45°; the caller clips them to the area.
+     */
+    private static void hatch(PDPageContentStream out, LayerStyle style, float x, float y, float w, float h)
+            throws IOException {
+        LayerStyle.Hatch hatch = style.hatch();
+        out.saveGraphicsState();
+        PDExtendedGraphicsState veil = new PDExtendedGraphicsState();
+        veil.setNonStrokingAlphaConstant((float) hatch.veilOpacity());
         out.setGraphicsStateParameters(veil);
-        out.setNonStrokingColor(Color.WHITE);
+        out.setNonStrokingColor(PlanStyle.WHITE.awt());
         out.addRect(x, y, w, h);
         out.fill();
         out.restoreGraphicsState();
-        float step = 3f;
+        float step = (float) hatch.spacing();
         for (float d = -h; d <= w; d += step) {
             out.moveTo(x + d, y);
             out.lineTo(x + d + h, y + h);
         }
-        out.setStrokingColor(KEEP_OUT);
-        out.setLineWidth(0.6f);
+        out.setStrokingColor(style.colour().awt());
+        out.setLineWidth((float) hatch.width());
+        out.setLineDashPattern(new float[0], 0);
         out.stroke();
     }
 
-    private static void path(PDPageContentStream out, List<double[]> points, float k, float ox, float oy, double cx,
-            double cy, boolean close) throws IOException {
+    private static void path(PDPageContentStream out, List<double[]> points, Sheet s, boolean close)
+            throws IOException {
         for (int i = 0; i < points.size(); i++) {
-            float x = (float) (ox + (points.get(i)[0] - cx) * k), y = (float) (oy + (points.get(i)[1] - cy) * k);
+            float x = s.x(points.get(i)[0]), y = s.y(points.get(i)[1]);
             if (i == 0) {
                 out.moveTo(x, y);
             } else {
@@ -311,13 +353,6 @@ final class PdfPlanPainter {
         if (close) {
             out.closePath();
         }
-    }
-
-    private static void dot(PDPageContentStream out, double[] xy, float k, float ox, float oy, double cx, double cy,
-            float r, Color colour) throws IOException {
-        circle(out, (float) (ox + (xy[0] - cx) * k), (float) (oy + (xy[1] - cy) * k), r);
-        out.setNonStrokingColor(colour);
-        out.fill();
     }
 
     static void circle(PDPageContentStream out, float x, float y, float r) throws IOException {
@@ -330,28 +365,33 @@ final class PdfPlanPainter {
         out.closePath();
     }
 
-    private static void halo(PDPageContentStream out, PdfFonts fonts, String safeText, float x, float y, float size)
-            throws IOException {
+    /** A placed label: white halo (round joins, no spikes at sharp glyph corners), then the text in its layer's label colour. */
+    private static void halo(PDPageContentStream out, PdfFonts fonts, LabelPlacement.Placed l) throws IOException {
+        float size = (float) l.size(), x = (float) l.x(), y = (float) l.baseline();
+        String text = l.label().text();
         fonts.use(out, size);
         out.beginText();
-        out.setStrokingColor(Color.WHITE);
+        out.setStrokingColor(PlanStyle.WHITE.awt());
         out.setLineWidth(size / 4);
-        out.setRenderingMode(org.apache.pdfbox.pdmodel.graphics.state.RenderingMode.STROKE);
+        out.setLineDashPattern(new float[0], 0);
+        out.setLineJoinStyle(1);
+        out.setRenderingMode(RenderingMode.STROKE);
         out.newLineAtOffset(x, y);
-        out.showText(safeText);
+        out.showText(text);
         out.endText();
+        out.setLineJoinStyle(0);
         out.beginText();
-        out.setRenderingMode(org.apache.pdfbox.pdmodel.graphics.state.RenderingMode.FILL);
-        out.setNonStrokingColor(PdfReportRenderer.TEXT);
+        out.setRenderingMode(RenderingMode.FILL);
+        out.setNonStrokingColor(PlanStyle.of(l.label().layer()).labelColour().awt());
         out.newLineAtOffset(x, y);
-        out.showText(safeText);
+        out.showText(text);
         out.endText();
     }
 
     private static void northArrow(PdfPages p, float x, float top) {
         try {
             PDPageContentStream out = p.out;
-            out.setNonStrokingColor(PdfReportRenderer.TEXT);
+            out.setNonStrokingColor(PlanStyle.INK.awt());
             out.moveTo(x, top);
             out.lineTo(x - 7, top - 26);
             out.lineTo(x, top - 20);
@@ -365,109 +405,73 @@ final class PdfPlanPainter {
     }
 
     private static void scaleBar(PdfPages p, int denominator, float k, float y) {
-        double target = 110 / k;
-        double magnitude = Math.pow(10, Math.floor(Math.log10(target)));
-        double length = magnitude;
-        for (double step : new double[] {1, 2, 5, 10}) {
-            if (step * magnitude <= target) {
-                length = step * magnitude;
-            }
-        }
+        double length = ScaleBar.length(110 / k);
         float x = PdfPages.MARGIN + 10;
         float seg = (float) (length * k / 4);
-        p.fillRect(x - 4, y - 4, seg * 4 + 60, 22, Color.WHITE);
+        p.fillRect(x - 4, y - 4, seg * 4 + 60, 22, PlanStyle.WHITE.awt());
         for (int i = 0; i < 4; i++) {
             if (i % 2 == 0) {
-                p.fillRect(x + i * seg, y, seg, 4, PdfReportRenderer.TEXT);
+                p.fillRect(x + i * seg, y, seg, 4, PlanStyle.INK.awt());
             }
         }
-        p.strokeRect(x, y, seg * 4, 4, PdfReportRenderer.TEXT, 0.5f);
+        p.strokeRect(x, y, seg * 4, 4, PlanStyle.INK.awt(), 0.5f);
         p.text("0", x - 2, y + 7, 6.5f, false, PdfReportRenderer.TEXT);
-        p.text(ReportFacts.oneDecimal(length).replace(".0", "") + " m", x + seg * 4 - 4, y + 7, 6.5f, false,
-                PdfReportRenderer.TEXT);
+        p.text(Formats.scaleStep(length) + " m", x + seg * 4 - 4, y + 7, 6.5f, false, PdfReportRenderer.TEXT);
         p.text("1:" + denominator, x + seg * 4 + 22, y, 6.5f, true, PdfReportRenderer.TEXT);
     }
 
+    /** The drawing's legend in three columns: the report's words for each row. */
     private static void legend(PdfPages p, float top, PlanDrawing plan) {
-        List<String> names = new ArrayList<>(List.of("Structure (darker is higher)", "Rooftop object",
-                "Protected open ground (LPZ 0B)", "Exposed roof area (LPZ 0A)",
-                "Facade band, lateral air-termination (5.2.3)", "Exposed edge / corner (E1, E2, …)",
-                "Accepted item (dashed grey)",
-                "Air-termination rod / conductor (A1, …)", "Down-conductor (D1, …)"));
-        // a null colour is the keep-out hatch
-        List<Color> colours = new ArrayList<>(List.of(new Color(0xa0, 0xa0, 0xa6), OBJECT, GROUND, EXPOSED_ROOF,
-                FACADE, EDGE, ACCEPTED, PART, DOWN));
-        if (plan.has(Layer.FACADE_NEGLIGIBLE)) {
-            names.add("Facade band, side flashes negligible (5.2.3)");
-            colours.add(FACADE_NEGLIGIBLE);
-        }
-        if (plan.has(Layer.MODEL_WARNING)) {
-            names.add("Model warning: part > R above surface (E…)");
-            colours.add(WARNING);
-        }
-        if (plan.has(Layer.KEEP_OUT)) {
-            names.add("Keep-out area, hatched (K1, …)");
-            colours.add(null);
-        }
+        List<Layer> rows = plan.legend();
         float colW = PdfPages.CONTENT_WIDTH / 3;
-        for (int i = 0; i < names.size(); i++) {
+        for (int i = 0; i < rows.size(); i++) {
+            LayerStyle style = PlanStyle.of(rows.get(i));
             float x = PdfPages.MARGIN + (i % 3) * colW, y = top - (i / 3) * 14;
-            if (colours.get(i) == null) {
-                p.fillRect(x, y - 8, 14, 8, Color.WHITE);
-                try {
-                    p.out.saveGraphicsState();
-                    p.out.addRect(x, y - 8, 14, 8);
-                    p.out.clip();
-                    hatch(p.out, x, y - 8, 14, 8);
-                    p.out.restoreGraphicsState();
-                } catch (IOException e) {
-                    throw new UncheckedIOException(e);
+            p.fillRect(x, y - 8, 14, 8, PlanStyle.WHITE.awt());
+            try {
+                p.out.saveGraphicsState();
+                p.out.addRect(x, y - 8, 14, 8);
+                p.out.clip();
+                if (style.hatch() != null) {
+                    hatch(p.out, style, x, y - 8, 14, 8);
+                } else {
+                    if (style.opacity() < 1) {
+                        PDExtendedGraphicsState alpha = new PDExtendedGraphicsState();
+                        alpha.setNonStrokingAlphaConstant((float) style.opacity());
+                        p.out.setGraphicsStateParameters(alpha);
+                    }
+                    p.fillRect(x, y - 8, 14, 8, style.colour().awt());
                 }
-            } else {
-                p.fillRect(x, y - 8, 14, 8, colours.get(i));
+                p.out.restoreGraphicsState();
+                p.fonts.forget();
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
             }
-            p.strokeRect(x, y - 8, 14, 8, PdfReportRenderer.MUTED, 0.3f);
-            p.text(names.get(i), x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
+            p.strokeRect(x, y - 8, 14, 8, PlanStyle.SWATCH_OUTLINE.awt(), 0.3f);
+            p.text(style.reportLegend(), x + 19, y - 7.5f, 7, false, PdfReportRenderer.TEXT);
         }
     }
 
     /**
-     * Where a small number label beside the point (x, y) goes: up and to the right of it, else the
-     * first of the other corners, above or below that overlaps no box in {@code taken}; when all
-     * overlap, the place that overlaps least (it is still drawn: a number is never left out).
+     * Where a small number label beside the point (x, y) goes, in points ({@link
+     * LabelPlacement#beside}): {@code taken} holds boxes {left, bottom, right, top}.
      *
      * @return the text's baseline start {x, y}
      */
     static float[] placeNumber(List<float[]> taken, float x, float y, float width, float size) {
-        float[][] places = {{x + 3, y + 2}, {x + 3, y - 2 - size}, {x - 3 - width, y + 2},
-            {x - 3 - width, y - 2 - size}, {x - width / 2, y + 4}, {x - width / 2, y - 4 - size}};
-        float[] best = places[0];
-        double least = Double.MAX_VALUE;
-        for (float[] place : places) {
-            float[] candidate = box(place[0], place[1], width, size);
-            double covered = taken.stream().mapToDouble(t -> overlapArea(t, candidate)).sum();
-            if (covered == 0) {
-                return place;
-            }
-            if (covered < least) {
-                least = covered;
-                best = place;
-            }
-        }
-        return best;
+        LabelPlacement placement = new LabelPlacement(1);
+        taken.forEach(t -> placement.take(new LabelPlacement.Box(t[0], t[1], t[2], t[3])));
+        double[] at = placement.beside(x, y, width, size);
+        return new float[] {(float) at[0], (float) at[1]};
     }
 
-    private static double overlapArea(float[] a, float[] b) {
-        return Math.max(0, Math.min(a[2], b[2]) - Math.max(a[0], b[0]))
-                * Math.max(0, Math.min(a[3], b[3]) - Math.max(a[1], b[1]));
-    }
-
-    /** The box {left, bottom, right, top} a label's text covers, with its halo. */
+    /** The box {left, bottom, right, top} a label's text covers, with its halo, in points. */
     static float[] box(float x, float baseline, float width, float size) {
-        return new float[] {x - 0.8f, baseline - size * 0.25f, x + width + 0.8f, baseline + size * 0.8f};
+        LabelPlacement.Box b = LabelPlacement.box(x, baseline, width, size, 1);
+        return new float[] {(float) b.left(), (float) b.bottom(), (float) b.right(), (float) b.top()};
     }
 
     static boolean overlap(float[] a, float[] b) {
-        return a[0] < b[2] && b[0] < a[2] && a[1] < b[3] && b[1] < a[3];
+        return new LabelPlacement.Box(a[0], a[1], a[2], a[3]).overlaps(new LabelPlacement.Box(b[0], b[1], b[2], b[3]));
     }
 }

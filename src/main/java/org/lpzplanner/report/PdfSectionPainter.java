@@ -1,10 +1,14 @@
 package org.lpzplanner.report;
 
-import java.awt.Color;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.util.List;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.lpzplanner.common.Formats;
+import org.lpzplanner.drawing.Layer;
+import org.lpzplanner.drawing.LayerStyle;
+import org.lpzplanner.drawing.PlanStyle;
+import org.lpzplanner.drawing.ScaleBar;
 import org.lpzplanner.sections.SiteSection;
 import org.lpzplanner.sections.SiteSection.Point;
 
@@ -12,17 +16,16 @@ import org.lpzplanner.sections.SiteSection.Point;
  * Draws a {@link SiteSection} to a standard scale, the same across and up: the structure profile
  * filled, the part of it in LPZ 0A marked along its top, rods, the envelope (dashed) and the sphere
  * at its resting positions clipped to the frame, with distance and height ticks and a one-line legend.
+ * Colours, strokes and legend words come from {@link PlanStyle}, as for the page's drawing of the
+ * same section.
  */
 final class PdfSectionPainter {
 
     static final float MAX_FRAME_HEIGHT = 250;
     private static final float LEFT = 30;
     private static final float BOTTOM = 18;
-    private static final Color PROFILE = new Color(0xa7, 0xa9, 0xb0);
-    private static final Color EXPOSED = new Color(0xe0, 0x6c, 0x00);
-    private static final Color ENVELOPE = new Color(0x0b, 0x6e, 0x8a);
-    private static final Color SPHERE = new Color(0x6d, 0x6d, 0x6d);
-    private static final Color ROD = new Color(0x1f, 0x5f, 0xbf);
+    private static final List<Layer> LEGEND = List.of(Layer.SECTION_PROFILE, Layer.SECTION_EXPOSED,
+            Layer.SECTION_ENVELOPE, Layer.SECTION_ROD, Layer.SECTION_SPHERE);
 
     private PdfSectionPainter() {
     }
@@ -69,14 +72,16 @@ final class PdfSectionPainter {
             }
             out.lineTo(drawRight, z0);
             out.closePath();
-            out.setNonStrokingColor(PROFILE);
-            out.setStrokingColor(new Color(0x33, 0x33, 0x33));
-            out.setLineWidth(0.5f);
+            LayerStyle structure = PlanStyle.of(Layer.SECTION_PROFILE);
+            out.setNonStrokingColor(structure.colour().awt());
+            out.setStrokingColor(structure.outline().awt());
+            out.setLineWidth((float) structure.width());
             out.fillAndStroke();
             exposedRuns(out, s, k, x0, z0);
+            LayerStyle rod = PlanStyle.of(Layer.SECTION_ROD);
             for (SiteSection.RodMark r : s.rods()) {
-                out.setStrokingColor(ROD);
-                out.setLineWidth(1.6f);
+                out.setStrokingColor(rod.colour().awt());
+                out.setLineWidth((float) rod.width());
                 out.moveTo(x0 + (float) (r.s() * k), z0 + (float) (r.base() * k));
                 out.lineTo(x0 + (float) (r.s() * k), z0 + (float) (r.top() * k));
                 out.stroke();
@@ -90,16 +95,18 @@ final class PdfSectionPainter {
                     out.lineTo(x, z);
                 }
             }
-            out.setStrokingColor(ENVELOPE);
-            out.setLineWidth(1.2f);
-            out.setLineDashPattern(new float[] {4, 2}, 0);
+            LayerStyle envelope = PlanStyle.of(Layer.SECTION_ENVELOPE);
+            out.setStrokingColor(envelope.colour().awt());
+            out.setLineWidth((float) envelope.width());
+            out.setLineDashPattern(points(envelope.dash()), 0);
             out.stroke();
             out.setLineDashPattern(new float[0], 0);
+            LayerStyle sphere = PlanStyle.of(Layer.SECTION_SPHERE);
             for (Point c : s.spheres()) {
                 PdfPlanPainter.circle(out, x0 + (float) (c.s() * k), z0 + (float) (c.z() * k),
                         (float) (s.radius() * k));
-                out.setStrokingColor(SPHERE);
-                out.setLineWidth(0.7f);
+                out.setStrokingColor(sphere.colour().awt());
+                out.setLineWidth((float) sphere.width());
                 out.stroke();
             }
             out.restoreGraphicsState();
@@ -107,8 +114,8 @@ final class PdfSectionPainter {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        p.line(x0, z0, drawRight, z0, PdfReportRenderer.TEXT, 0.8f);
-        p.line(x0, z0, x0, frameTop, PdfReportRenderer.TEXT, 0.6f);
+        p.line(x0, z0, drawRight, z0, PlanStyle.INK.awt(), 0.8f);
+        p.line(x0, z0, x0, frameTop, PlanStyle.INK.awt(), 0.6f);
         ticks(p, s.length(), zMax, k, x0, z0, frameTop);
         p.y = frameBottom - 4;
         legend(p);
@@ -118,8 +125,9 @@ final class PdfSectionPainter {
     private static void exposedRuns(PDPageContentStream out, SiteSection s, float k, float x0, float z0)
             throws IOException {
         List<Point> profile = s.profile();
-        out.setStrokingColor(EXPOSED);
-        out.setLineWidth(3f);
+        LayerStyle exposed = PlanStyle.of(Layer.SECTION_EXPOSED);
+        out.setStrokingColor(exposed.colour().awt());
+        out.setLineWidth((float) exposed.width());
         for (int i = 0; i + 1 < profile.size(); i++) {
             if (s.exposed().get(i) && s.exposed().get(i + 1)) {
                 out.moveTo(x0 + (float) (profile.get(i).s() * k), z0 + (float) (profile.get(i).z() * k));
@@ -133,8 +141,8 @@ final class PdfSectionPainter {
         double step = niceStep(length / 6);
         for (double d = 0; d <= length + 1e-9; d += step) {
             float x = x0 + (float) (d * k);
-            p.line(x, z0, x, z0 - 3, PdfReportRenderer.TEXT, 0.5f);
-            p.text(ReportFacts.oneDecimal(d).replace(".0", ""), x - 4, z0 - 11, 6, false, PdfReportRenderer.MUTED);
+            p.line(x, z0, x, z0 - 3, PlanStyle.INK.awt(), 0.5f);
+            p.text(Formats.scaleStep(d), x - 4, z0 - 11, 6, false, PdfReportRenderer.MUTED);
         }
         p.text("m along the cut", x0 + (float) (length * k) - 48, z0 - 17, 6, false, PdfReportRenderer.MUTED);
         double zStep = niceStep(zMax / 4);
@@ -143,30 +151,32 @@ final class PdfSectionPainter {
             if (y > top - 4) {
                 break;
             }
-            p.line(x0 - 3, y, x0, y, PdfReportRenderer.TEXT, 0.5f);
-            p.text(ReportFacts.oneDecimal(z).replace(".0", "") + " m", PdfPages.MARGIN, y - 2, 6, false,
+            p.line(x0 - 3, y, x0, y, PlanStyle.INK.awt(), 0.5f);
+            p.text(Formats.scaleStep(z) + " m", PdfPages.MARGIN, y - 2, 6, false,
                     PdfReportRenderer.MUTED);
         }
     }
 
     private static double niceStep(double target) {
-        double magnitude = Math.pow(10, Math.floor(Math.log10(Math.max(target, 1e-6))));
-        for (double m : new double[] {1, 2, 5, 10}) {
-            if (m * magnitude >= target) {
-                return m * magnitude;
-            }
-        }
-        return 10 * magnitude;
+        return ScaleBar.step(Math.max(target, 1e-6));
     }
 
+    /** The legend in one line: the report's words for each layer of a section. */
     private static void legend(PdfPages p) {
-        String[] names = {"Structure", "Exposed (LPZ 0A)", "Envelope (LPZ 0A / 0B boundary)", "Rod", "Sphere"};
-        Color[] colours = {PROFILE, EXPOSED, ENVELOPE, ROD, SPHERE};
         float x = PdfPages.MARGIN;
-        for (int i = 0; i < names.length; i++) {
-            p.fillRect(x, p.y - 7, 12, 6, colours[i]);
-            p.text(names[i], x + 15, p.y - 7, 6.8f, false, PdfReportRenderer.TEXT);
-            x += 15 + p.fonts.width(p.fonts.safe(names[i]), 6.8f) + 14;
+        for (Layer layer : LEGEND) {
+            LayerStyle style = PlanStyle.of(layer);
+            p.fillRect(x, p.y - 7, 12, 6, style.colour().awt());
+            p.text(style.reportLegend(), x + 15, p.y - 7, 6.8f, false, PdfReportRenderer.TEXT);
+            x += 15 + p.fonts.width(p.fonts.safe(style.reportLegend()), 6.8f) + 14;
         }
+    }
+
+    private static float[] points(double[] values) {
+        float[] out = new float[values.length];
+        for (int i = 0; i < values.length; i++) {
+            out[i] = (float) values[i];
+        }
+        return out;
     }
 }

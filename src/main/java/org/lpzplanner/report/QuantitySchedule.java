@@ -3,6 +3,7 @@ package org.lpzplanner.report;
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.design.quantities.BillOfQuantities;
 import org.lpzplanner.engine.design.quantities.QuantityTable;
@@ -29,7 +30,7 @@ final class QuantitySchedule {
                 FIXINGS_PER_METRE));
         List<String> notes = new ArrayList<>();
         notes.add("Counted from the parts of the site file of this revision and the down-conductors of the schedule"
-                + " above (D1…), at " + ReportFacts.oneDecimal(FIXINGS_PER_METRE) + " fixing per metre.");
+                + " above (D1…), at " + Formats.oneDecimal(FIXINGS_PER_METRE) + " fixing per metre.");
         notes.add("Down-conductor lengths run from the air-termination level at the top of the wall (parapet, eaves or"
                 + " verge) straight down to ground level; the installed route may be longer, and the connection to the"
                 + " earth termination is not included.");

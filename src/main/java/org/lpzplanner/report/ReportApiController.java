@@ -1,11 +1,8 @@
 package org.lpzplanner.report;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
-import org.lpzplanner.system.ApiError;
 import org.springframework.http.ContentDisposition;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.MediaType;
@@ -15,8 +12,8 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.RestController;
 
 /**
- * The printed assessment of a stored revision as PDF. Errors answer as JSON through the API error
- * handler: 404 for an unknown site or revision, 409 when the revision's file is no longer stored,
+ * The printed assessment of a stored revision as PDF. Errors answer as problem details through the API
+ * error handler: 404 for an unknown site or revision, 409 when the revision's file is no longer stored,
  * 400 for an id that is not a number.
  */
 @RestController
@@ -32,9 +29,9 @@ public class ReportApiController {
     @Operation(summary = "The printed assessment as PDF",
             description = "Plan, sections, schedules, cautions and the review block of one stored revision.")
     @ApiResponse(responseCode = "200", description = "The PDF")
-    @ApiResponse(responseCode = "400", description = "An id is not a whole number", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "404", description = "No such site or revision", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
-    @ApiResponse(responseCode = "409", description = "The revision's site file is no longer stored", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
+    @ApiResponse(responseCode = "400", description = "An id is not a whole number")
+    @ApiResponse(responseCode = "404", description = "No such site or revision")
+    @ApiResponse(responseCode = "409", description = "The revision's site file is no longer stored")
     @GetMapping(path = "/api/sites/{siteId}/revisions/{revision}/report",
             produces = {MediaType.APPLICATION_PDF_VALUE, MediaType.APPLICATION_JSON_VALUE})
     public ResponseEntity<byte[]> report(@PathVariable long siteId, @PathVariable int revision) {

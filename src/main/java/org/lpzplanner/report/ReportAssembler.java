@@ -1,13 +1,12 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.engine.envelope.EnvelopeField;
 import org.lpzplanner.engine.envelope.EnvelopeOp;
@@ -175,7 +174,7 @@ public final class ReportAssembler {
                 .filter(facts::edited).count();
         blocks.add(new ReportBlock.Facts(List.of(
                 new ReportBlock.Fact("Structures", String.valueOf(facts.site().structures().size())),
-                new ReportBlock.Fact("Exposed roof area", metres(roofArea) + " m² (plan)"),
+                new ReportBlock.Fact("Exposed roof area", Formats.area(roofArea) + " m² (plan)"),
                 new ReportBlock.Fact("Exposed items", edges + " edges, " + corners + " corners, " + bands
                         + " facade bands needing lateral air-termination; " + facts.acceptedExposedCount()
                         + " accepted"),
@@ -206,7 +205,7 @@ public final class ReportAssembler {
         List<String> each = new ArrayList<>();
         for (StoredResult.Warning w : warnings) {
             Double above = w.item().heightAboveSurface();
-            each.add(w.item().owner() + ", up to " + (above == null ? "?" : metres(above)) + " m above the surface"
+            each.add(w.item().owner() + ", up to " + (above == null ? "?" : Formats.height(above)) + " m above the surface"
                     + " beneath it (" + ModelWarningSchedule.kind(w.item().kind()) + ", E" + w.item().number() + ")");
         }
         return warnings.size() + ": " + String.join("; ", each) + ". No verdict of full protection while a"
@@ -247,17 +246,17 @@ public final class ReportAssembler {
         blocks.add(new ReportBlock.Facts(List.of(
                 new ReportBlock.Fact("Standard followed", STANDARD),
                 new ReportBlock.Fact("Protection level", level.name()),
-                new ReportBlock.Fact("Sphere radius R", metres(s.sphere().radius()) + " m"
+                new ReportBlock.Fact("Sphere radius R", Formats.radius(s.sphere().radius()) + " m"
                         + (s.sphere().isCustomRadius() ? " (custom; the level's own is "
-                                + metres(level.sphereRadius()) + " m)" : " (IEC 62305-3:2010 Table 2)")),
-                new ReportBlock.Fact("Mesh size of the level", metres(level.meshSize()) + " m × "
-                        + metres(level.meshSize()) + " m (Table 2)"),
-                new ReportBlock.Fact("Typical down-conductor spacing", metres(level.downConductorSpacing())
+                                + Formats.radius(level.sphereRadius()) + " m)" : " (IEC 62305-3:2010 Table 2)")),
+                new ReportBlock.Fact("Mesh size of the level", Formats.length(level.meshSize()) + " m × "
+                        + Formats.length(level.meshSize()) + " m (Table 2)"),
+                new ReportBlock.Fact("Typical down-conductor spacing", Formats.length(level.downConductorSpacing())
                         + " m (Table 4)"),
-                new ReportBlock.Fact("Minimum peak current intercepted", metres(level.minPeakCurrentKa())
+                new ReportBlock.Fact("Minimum peak current intercepted", Formats.oneDecimal(level.minPeakCurrentKa())
                         + " kA (IEC 62305-1:2010)"),
                 new ReportBlock.Fact("Separation distance ki", String.valueOf(level.ki()) + " (Table 10)"),
-                new ReportBlock.Fact("Grid resolution", metres(s.resolution()) + " m"),
+                new ReportBlock.Fact("Grid resolution", Formats.length(s.resolution()) + " m"),
                 new ReportBlock.Fact("Envelope tolerance", String.format(Locale.ROOT, "%.3f m", s.tolerance())))));
         blocks.add(new ReportBlock.Heading("Assumptions", 2));
         blocks.add(new ReportBlock.Paragraph("Every structure and rooftop object is solid from the ground up; no"
@@ -272,10 +271,9 @@ public final class ReportAssembler {
                 + " touch or overlap; the rest of such bands is listed apart as negligible."));
         List<List<String>> rows = new ArrayList<>();
         for (StructureRow r : StructureRow.of(facts.site().structures())) {
-            rows.add(List.of(r.id(), r.name(), metres(r.footprintArea()), metres(r.height()), r.roof(),
-                    r.ridgeHeight() == null ? "" : metres(r.ridgeHeight()),
-                    r.parapet() == null ? "" : metres(r.parapet()),
-                    metres(facts.site().structures().get(r.index()).topHeight())));
+            rows.add(List.of(r.id(), r.name(), r.footprintText(), r.heightText(), r.roof(),
+                    r.ridgeHeight() == null ? "" : r.ridgeHeightText(), r.parapet() == null ? "" : r.parapetText(),
+                    Formats.height(facts.site().structures().get(r.index()).topHeight())));
         }
         blocks.add(new Schedule("Structures", List.of("Id", "Name", "Footprint (m²)", "Wall top (m)", "Roof",
                 "Ridge (m)", "Parapet (m)", "Top (m)"), List.of(0.6, 2.2, 1.1, 0.9, 0.7, 0.8, 0.8, 0.8), rows,
@@ -302,14 +300,15 @@ public final class ReportAssembler {
         for (int i = 0; i < cuts.size(); i++) {
             AutomaticCuts.StructureCut c = cuts.get(i);
             blocks.add(new ReportBlock.Section("Section through " + c.structure().name(), "Through its highest"
-                    + " exposed point (" + metres(c.through().x()) + ", " + metres(c.through().y()) + "), "
+                    + " exposed point (" + Formats.coordinate(c.through().x()) + ", "
+                    + Formats.coordinate(c.through().y()) + "), "
                     + cutText(c.cut()), sections.get(i)));
         }
     }
 
     private static String cutText(ReportSource.Cut cut) {
-        return "from (" + metres(cut.x1()) + ", " + metres(cut.y1()) + ") to (" + metres(cut.x2()) + ", "
-                + metres(cut.y2()) + "), local metres.";
+        return "from (" + Formats.coordinate(cut.x1()) + ", " + Formats.coordinate(cut.y1()) + ") to ("
+                + Formats.coordinate(cut.x2()) + ", " + Formats.coordinate(cut.y2()) + "), local metres.";
     }
 
     private static ReportBlock reviewBlock() {
@@ -322,6 +321,6 @@ public final class ReportAssembler {
     }
 
     static String levelText(ReportSource s) {
-        return "Protection level " + s.sphere().level().name() + ", R = " + metres(s.sphere().radius()) + " m";
+        return "Protection level " + s.sphere().level().name() + ", R = " + Formats.radius(s.sphere().radius()) + " m";
     }
 }

@@ -1,6 +1,7 @@
 package org.lpzplanner.report;
 
 import java.util.List;
+import org.lpzplanner.drawing.PlanDrawing;
 import org.lpzplanner.sections.SiteSection;
 
 /**

@@ -3,7 +3,6 @@ package org.lpzplanner.report;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.GeometryFactory;
@@ -114,15 +113,5 @@ public record ReportFacts(ReportSource source, Site site, SiteSurface surface, E
             }
         }
         return -1;
-    }
-
-    /** A length or height in metres to the centimetre. */
-    public static String metres(double value) {
-        return String.format(Locale.ROOT, "%.2f", value + 0.0);
-    }
-
-    /** A number with one decimal. */
-    public static String oneDecimal(double value) {
-        return String.format(Locale.ROOT, "%.1f", value + 0.0);
     }
 }

@@ -1,10 +1,9 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.BondingRoutes;
 import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.design.SeparationDistance;
@@ -67,14 +66,15 @@ final class SeparationSchedule {
             if (c.status() == SeparationSurvey.Status.NOT_CONFIRMED && !c.worst().lowerBound()) {
                 elsewhere.add(name + ": " + facts.partNumbers().getOrDefault(c.unconfirmed().partId(),
                         c.unconfirmed().partId()) + " has no drawn route to a down-conductor (l there at least "
-                        + metres(c.unconfirmed().result().length()) + " m)");
+                        + Formats.length(c.unconfirmed().result().length()) + " m)");
             }
             close |= c.status() == SeparationSurvey.Status.FAILS && c.result().actual() >= c.result().required();
             assumed |= c.route().basis() == BondingRoutes.Basis.ASSUMED_LINKS;
             unusual |= verdict.equals("connected") || verdict.equals("not confirmed");
             rows.add(List.of(name, insulation, number, sharing(c.route()),
-                    metres(c.result().length()), c.route().describe(), metres(c.result().required()),
-                    metres(c.result().actual()), verdict));
+                    Formats.length(c.result().length()), c.route().describe(),
+                    Formats.requiredSeparation(c.result().required()),
+                    Formats.availableSeparation(c.result().actual()), verdict));
         }
         List<String> notes = new ArrayList<>();
         notes.add("s must hold at every point of the protection system, each with its own l (IEC 62305-3:2010 6.3):"

@@ -1,10 +1,9 @@
 package org.lpzplanner.report;
 
-import static org.lpzplanner.report.ReportFacts.metres;
-
 import java.util.ArrayList;
 import java.util.List;
 import org.lpzplanner.analysis.ResultGeoJson;
+import org.lpzplanner.common.Formats;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -38,9 +37,9 @@ final class SideFlashSchedule {
         for (JsonNode f : bands) {
             JsonNode p = f.path("properties");
             rows.add(List.of(p.path("owner").asString(""), String.valueOf(p.path("wall").asInt()),
-                    metres(p.path("length").asDouble()), metres(p.path("bottom").asDouble()),
-                    metres(p.path("top").asDouble()),
-                    p.path("buildingHeight").isNumber() ? metres(p.path("buildingHeight").asDouble()) : ""));
+                    Formats.length(p.path("length").asDouble()), Formats.height(p.path("bottom").asDouble()),
+                    Formats.height(p.path("top").asDouble()),
+                    p.path("buildingHeight").isNumber() ? Formats.height(p.path("buildingHeight").asDouble()) : ""));
         }
         return List.of(new Schedule(TITLE, List.of("Structure", "Wall", "Length (m)", "From (m)", "To (m)",
                 "Building H (m)"), List.of(2.0, 0.6, 0.9, 0.9, 0.9, 1.1), rows, List.of(

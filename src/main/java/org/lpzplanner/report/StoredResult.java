@@ -6,9 +6,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.analysis.ReviewItems;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The stored result of a revision (see {@link org.lpzplanner.analysis.ResultGeoJson}) read once for
@@ -38,7 +38,6 @@ public record StoredResult(List<JsonNode> features, List<ReviewItems.Item> items
     public record Warning(ReviewItems.Item item, String partId, double limit) {
     }
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     /**
      * A point in local metres with the name of the structure or object it belongs to, its height and
@@ -52,7 +51,7 @@ public record StoredResult(List<JsonNode> features, List<ReviewItems.Item> items
 
     public static StoredResult read(String resultGeoJson) {
         List<JsonNode> features = new ArrayList<>();
-        JSON.readTree(resultGeoJson).path("features").forEach(features::add);
+        Json.MAPPER.readTree(resultGeoJson).path("features").forEach(features::add);
         Map<String, Double> roofAreas = new LinkedHashMap<>();
         List<Marked> corners = new ArrayList<>();
         List<Marked> high = new ArrayList<>();

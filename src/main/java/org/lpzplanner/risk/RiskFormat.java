@@ -54,13 +54,6 @@ final class RiskFormat {
         return String.format(Locale.ROOT, "%.0f", squareMetres);
     }
 
-    /** Metres to one decimal, without a trailing ".0". */
-    static String metres(double value) {
-        double rounded = Math.round(value * 10) / 10.0;
-        return rounded == Math.rint(rounded) ? String.valueOf((long) rounded)
-                : String.format(Locale.ROOT, "%.1f", rounded);
-    }
-
     private static String superscript(int exponent) {
         StringBuilder out = new StringBuilder(exponent < 0 ? "⁻" : "");
         for (char c : String.valueOf(Math.abs(exponent)).toCharArray()) {

@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.function.Function;
 import java.util.function.ToDoubleFunction;
 import org.lpzplanner.common.Cautions;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.risk.EntrySurgeProtection;
 import org.lpzplanner.engine.risk.FireProvisions;
@@ -279,8 +280,8 @@ class RiskPage {
         if (s.structureName() == null) {
             return text(locale, "risk.suggestion.empty", factor);
         }
-        return text(locale, "risk.suggestion.basis", factor, s.structureName(), RiskFormat.metres(s.height()),
-                RiskFormat.metres(s.reach()), s.near(), s.higher(), s.parts() - 1);
+        return text(locale, "risk.suggestion.basis", factor, s.structureName(), Formats.height(s.height()),
+                Formats.length(s.reach()), s.near(), s.higher(), s.parts() - 1);
     }
 
     private String text(Locale locale, String key, Object... args) {

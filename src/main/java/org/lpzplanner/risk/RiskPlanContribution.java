@@ -6,6 +6,9 @@ import java.util.Map;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.geom.Polygon;
+import org.lpzplanner.engine.io.Json;
+import org.lpzplanner.drawing.Layer;
+import org.lpzplanner.drawing.PlanSvgRenderer;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.sites.PlanContribution;
 import org.lpzplanner.sites.StoredSite;
@@ -16,7 +19,8 @@ import org.springframework.stereotype.Component;
 
 /**
  * The risk estimate on the plan page: the level the analysis form starts at, with a note saying
- * why, and the collection area as a layer the user can switch on.
+ * why, and the collection area as a layer the user can switch on, styled as {@link PlanSvgRenderer}
+ * styles it.
  *
  * <p>The form starts at the lowest sufficient level of the saved risk inputs, unless the site's own
  * level is stricter (a smaller sphere: kept, on the safe side). While no inputs are saved, an input
@@ -76,6 +80,8 @@ class RiskPlanContribution implements PlanContribution {
         model.put("analysisLevelNote", note);
         model.put("collectionZone", rings(a.area().zone()));
         model.put("collectionAreaText", RiskFormat.area(a.area().upperBound()));
+        // drawn by the page's script into the plan, as the plan's renderer draws the layer
+        model.put("collectionAreaStyle", Json.MAPPER.writeValueAsString(PlanSvgRenderer.areaAttributes(Layer.COLLECTION_AREA)));
         return model;
     }
 

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.function.Function;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.Site;
@@ -217,7 +218,7 @@ public class RiskService {
             RiskAssessment.LineFlashes f = a.lines().get(i);
             IncomingLine l = f.line();
             lines.add(text(locale, "risk.figure.line", i + 1, l.installation().description(),
-                    RiskFormat.metres(l.length()), l.environment().description(), l.transformer().description(),
+                    Formats.oneDecimal(l.length()), l.environment().description(), l.transformer().description(),
                     RiskFormat.area(f.collectionArea()), RiskFormat.significant(l.lineFactors()),
                     RiskFormat.scientific(f.flashesPerYear()), RiskFormat.area(f.nearArea()),
                     RiskFormat.scientific(f.flashesNearPerYear())));
@@ -262,7 +263,7 @@ public class RiskService {
             return text(locale, "risk.dominant.zero");
         }
         double part = none.component(none.dominant());
-        return text(locale, "risk.dominant." + none.dominant().name(), RiskFormat.metres(100 * part / none.r1()));
+        return text(locale, "risk.dominant." + none.dominant().name(), Formats.percent(100 * part / none.r1()));
     }
 
     String optionName(LifeRisk option, Locale locale) {

@@ -1,6 +1,7 @@
 package org.lpzplanner.risk;
 
 import java.util.List;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.engine.risk.EntrySurgeProtection;
 import org.lpzplanner.engine.risk.IncomingLine;
 import org.lpzplanner.engine.risk.LineEnvironment;
@@ -10,7 +11,6 @@ import org.lpzplanner.engine.risk.LineTouchProtection;
 import org.lpzplanner.engine.risk.LineTransformer;
 import org.lpzplanner.engine.risk.WithstandVoltage;
 import tools.jackson.core.type.TypeReference;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * An incoming line's inputs as stored (column {@code line_details} of {@code site_risk_inputs}, a
@@ -20,7 +20,6 @@ import tools.jackson.databind.json.JsonMapper;
 public record StoredLine(String installation, double length, String environment, String transformer,
         String surgeProtection, String shielding, String withstandVoltage, String touchProtection) {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     /**
      * A line entered only by its length, as earlier releases stored lines (a count and one length):
@@ -46,11 +45,11 @@ public record StoredLine(String installation, double length, String environment,
 
     /** The JSON array stored for these lines. */
     public static String toJson(List<StoredLine> lines) {
-        return JSON.writeValueAsString(lines);
+        return Json.MAPPER.writeValueAsString(lines);
     }
 
     /** The lines of a stored JSON array. */
     public static List<StoredLine> fromJson(String json) {
-        return JSON.readValue(json, new TypeReference<List<StoredLine>>() { });
+        return Json.MAPPER.readValue(json, new TypeReference<List<StoredLine>>() { });
     }
 }

@@ -72,7 +72,7 @@ public final class SectionPage {
         model.put("site", site);
         model.put("method", ResultGeoJson.METHOD);
         model.put("level", level.name());
-        model.put("radius", Formats.oneDecimal(radius));
+        model.put("radius", Formats.radius(radius));
         model.put("cut", formatted(cut));
         model.put("length", Formats.oneDecimal(section.length()));
         model.put("analysed", latest != null);
@@ -115,13 +115,23 @@ public final class SectionPage {
                         + text + "\"");
             }
         }
+        return checked(cut);
+    }
+
+    /**
+     * Checks a cut's length: its ends (x1, y1, x2, y2, finite) at least {@value #MIN_LENGTH} m and at
+     * most {@value #MAX_LENGTH} m apart.
+     *
+     * @throws InvalidInputException naming x2 otherwise
+     */
+    static double[] checked(double[] cut) {
         double length = Math.hypot(cut[2] - cut[0], cut[3] - cut[1]);
         if (length < MIN_LENGTH) {
-            throw new InvalidInputException("x2", "the cut is " + String.format(Locale.ROOT, "%.2f", length)
+            throw new InvalidInputException("x2", "the cut is " + Formats.length(length)
                     + " m long; its ends must be at least 1 m apart");
         }
         if (length > MAX_LENGTH) {
-            throw new InvalidInputException("x2", "the cut is " + String.format(Locale.ROOT, "%.0f", length)
+            throw new InvalidInputException("x2", "the cut is " + Formats.length(length)
                     + " m long; draw sections of at most 2000 m");
         }
         return cut;

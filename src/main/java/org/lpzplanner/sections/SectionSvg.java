@@ -3,26 +3,29 @@ package org.lpzplanner.sections;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Collectors;
-import org.lpzplanner.analysis.PlanSvg;
+import org.lpzplanner.common.Formats;
+import org.lpzplanner.drawing.Layer;
+import org.lpzplanner.drawing.LayerStyle;
+import org.lpzplanner.drawing.PlanStyle;
+import org.lpzplanner.drawing.ScaleBar;
+import org.lpzplanner.drawing.SvgWriter;
+import org.lpzplanner.drawing.Texts;
 import org.lpzplanner.sections.SiteSection.Point;
 
 /**
  * Draws a {@link SiteSection} as an inline SVG element: distance along the cut across, height up,
  * both at the same scale, with labelled axes; the structure profile filled, the part of it in LPZ
  * 0A marked along its top, rods as vertical lines, the envelope as a curve and the sphere at its
- * resting positions (clipped to the drawing), then a legend.
+ * resting positions (clipped to the drawing), then a legend. Colours, strokes and legend words come
+ * from {@link PlanStyle}, as for the report's drawing of the same section.
  *
  * <p>The {@code <svg>} element carries its frame: {@code s = (svgX - data-margin-left) / data-scale}
  * and {@code z = data-z-max - (svgY - data-margin-top) / data-scale}; also {@code data-length},
  * {@code data-radius}, {@code data-envelope-max} and {@code data-envelope-max-at} (metres). The
  * envelope path lists its samples in {@code data-samples} as "s,E" pairs. Rod names are escaped;
- * every other text comes from {@link PlanSvg.Labels}.
+ * every other text comes from {@link Texts}.
  */
 public final class SectionSvg {
-
-    static final String PROFILE = "#a7a9b0";
-    static final String ENVELOPE = "#0b6e8a";
-    static final String SPHERE = "#6d6d6d";
 
     private static final double WIDTH = 820;
     private static final double MAX_DRAW_HEIGHT = 480;
@@ -31,12 +34,15 @@ public final class SectionSvg {
     private static final double RIGHT = 20;
     private static final double BOTTOM = 48;
     private static final double LEGEND_ROW = 20;
+    private static final double U = PlanStyle.WEB_UNITS_PER_POINT;
+    private static final List<Layer> LEGEND = List.of(Layer.SECTION_PROFILE, Layer.SECTION_EXPOSED,
+            Layer.SECTION_ENVELOPE, Layer.SECTION_ROD, Layer.SECTION_SPHERE);
 
     private SectionSvg() {
     }
 
     /** The SVG markup of one section. */
-    public static String render(SiteSection section, PlanSvg.Labels labels) {
+    public static String render(SiteSection section, Texts texts) {
         double length = section.length();
         double highest = 1;
         for (Point p : section.profile()) {
@@ -53,49 +59,51 @@ public final class SectionSvg {
         double scale = Math.min((WIDTH - LEFT - RIGHT) / length, (MAX_DRAW_HEIGHT - TOP - BOTTOM) / zMax);
         double drawHeight = TOP + zMax * scale + BOTTOM;
         Frame f = new Frame(scale, zMax);
-        String[] legendKeys = {"section.legend.structure", "section.legend.exposed", "section.legend.envelope",
-            "section.legend.rod", "section.legend.sphere"};
-        double height = drawHeight + 10 + LEGEND_ROW * legendKeys.length;
+        double height = drawHeight + 10 + LEGEND_ROW * LEGEND.size();
         Point max = section.envelopeMax();
 
-        StringBuilder svg = new StringBuilder();
-        svg.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"section\""
-                + " viewBox=\"0 0 %.0f %.0f\" width=\"%.0f\" height=\"%.0f\" role=\"img\" aria-label=\"%s\""
-                + " data-length=\"%s\" data-radius=\"%s\" data-scale=\"%s\" data-margin-left=\"%s\""
-                + " data-margin-top=\"%s\" data-z-max=\"%s\" data-envelope-max=\"%s\" data-envelope-max-at=\"%s\">",
-                WIDTH, height, WIDTH, height, PlanSvg.escape(labels.text("section.title")), exact(length),
-                exact(section.radius()), exact(scale), exact(LEFT), exact(TOP), exact(zMax), exact(max.z()),
-                exact(max.s())));
-        svg.append(String.format(Locale.ROOT,
-                "<defs><clipPath id=\"section-clip\"><rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"%.1f\"/>"
-                + "</clipPath></defs>", f.x(0), f.z(zMax), length * scale, zMax * scale));
-        svg.append(String.format(Locale.ROOT, "<rect x=\"0\" y=\"0\" width=\"%.0f\" height=\"%.0f\" fill=\"#fbfbf8\"/>",
-                WIDTH, drawHeight));
+        SvgWriter svg = new SvgWriter();
+        svg.start("svg").attr("xmlns", "http://www.w3.org/2000/svg").attr("class", "section")
+                .attr("viewBox", "0 0 " + SvgWriter.whole(WIDTH) + " " + SvgWriter.whole(height)).attr("width", SvgWriter.whole(WIDTH))
+                .attr("height", SvgWriter.whole(height)).attr("role", "img").attr("aria-label", texts.text("section.title"))
+                .attr("data-length", SvgWriter.exact(length)).attr("data-radius", SvgWriter.exact(section.radius()))
+                .attr("data-scale", SvgWriter.exact(scale)).attr("data-margin-left", SvgWriter.exact(LEFT))
+                .attr("data-margin-top", SvgWriter.exact(TOP)).attr("data-z-max", SvgWriter.exact(zMax))
+                .attr("data-envelope-max", SvgWriter.exact(max.z())).attr("data-envelope-max-at", SvgWriter.exact(max.s()));
+        svg.start("defs").start("clipPath").attr("id", "section-clip");
+        svg.start("rect").attr("x", f.x(0)).attr("y", f.z(zMax)).attr("width", length * scale)
+                .attr("height", zMax * scale).end();
+        svg.end().end();
+        svg.start("rect").attr("x", "0").attr("y", "0").attr("width", SvgWriter.whole(WIDTH)).attr("height", SvgWriter.whole(drawHeight))
+                .attr("fill", PlanStyle.BACKGROUND.hex()).end();
         profile(svg, section, f);
+        LayerStyle rod = PlanStyle.of(Layer.SECTION_ROD);
         for (SiteSection.RodMark r : section.rods()) {
-            svg.append(String.format(Locale.ROOT, "<line class=\"section-rod\" x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\""
-                    + " y2=\"%.1f\" stroke=\"%s\" stroke-width=\"2.5\"><title>%s</title></line>", f.x(r.s()),
-                    f.z(r.base()), f.x(r.s()), f.z(r.top()), PlanSvg.PART, PlanSvg.escape(r.name())));
+            svg.start("line").attr("class", "section-rod").attr("x1", f.x(r.s())).attr("y1", f.z(r.base()))
+                    .attr("x2", f.x(r.s())).attr("y2", f.z(r.top())).attr("stroke", rod.colour().hex())
+                    .attr("stroke-width", SvgWriter.size(rod.width() * U)).title(r.name()).end();
         }
-        svg.append("<path class=\"envelope\" fill=\"none\" stroke=\"").append(ENVELOPE)
-                .append("\" stroke-width=\"2\" stroke-dasharray=\"6 3\" data-samples=\"")
-                .append(section.envelope().stream().map(p -> String.format(Locale.ROOT, "%.2f,%.3f", p.s(), p.z()))
-                        .collect(Collectors.joining(" ")))
-                .append("\" d=\"").append(line(section.envelope(), f)).append("\"/>");
-        svg.append("<g class=\"spheres\" clip-path=\"url(#section-clip)\">");
+        LayerStyle envelope = PlanStyle.of(Layer.SECTION_ENVELOPE);
+        svg.start("path").attr("class", "envelope").attr("fill", "none").attr("stroke", envelope.colour().hex())
+                .attr("stroke-width", SvgWriter.size(envelope.width() * U)).attr("stroke-dasharray", dash(envelope))
+                .attr("data-samples", section.envelope().stream()
+                        .map(p -> String.format(Locale.ROOT, "%.2f,%.3f", p.s(), p.z())).collect(Collectors.joining(" ")))
+                .attr("d", line(section.envelope(), f)).end();
+        LayerStyle sphere = PlanStyle.of(Layer.SECTION_SPHERE);
+        svg.start("g").attr("class", "spheres").attr("clip-path", "url(#section-clip)");
         for (Point c : section.spheres()) {
-            svg.append(String.format(Locale.ROOT, "<circle class=\"sphere\" cx=\"%.1f\" cy=\"%.1f\" r=\"%.1f\""
-                    + " fill=\"none\" stroke=\"%s\" stroke-width=\"1.2\"/>", f.x(c.s()), f.z(c.z()),
-                    section.radius() * scale, SPHERE));
+            svg.start("circle").attr("class", "sphere").attr("cx", f.x(c.s())).attr("cy", f.z(c.z()))
+                    .attr("r", section.radius() * scale).attr("fill", "none").attr("stroke", sphere.colour().hex())
+                    .attr("stroke-width", SvgWriter.size(sphere.width() * U)).end();
             if (c.z() < zMax) {
-                svg.append(String.format(Locale.ROOT, "<circle class=\"sphere-centre\" cx=\"%.1f\" cy=\"%.1f\""
-                        + " r=\"2\" fill=\"%s\"/>", f.x(c.s()), f.z(c.z()), SPHERE));
+                svg.start("circle").attr("class", "sphere-centre").attr("cx", f.x(c.s())).attr("cy", f.z(c.z()))
+                        .attr("r", SvgWriter.size(sphere.markSize() * U)).attr("fill", sphere.colour().hex()).end();
             }
         }
-        svg.append("</g>");
-        axes(svg, length, zMax, f, labels);
-        legend(svg, drawHeight + 10, legendKeys, labels);
-        return svg.append("</svg>").toString();
+        svg.end();
+        axes(svg, length, zMax, f, texts);
+        legend(svg, drawHeight + 10, texts);
+        return svg.end().finish();
     }
 
     private record Frame(double scale, double zMax) {
@@ -108,15 +116,18 @@ public final class SectionSvg {
         }
     }
 
-    private static void profile(StringBuilder svg, SiteSection section, Frame f) {
+    private static void profile(SvgWriter svg, SiteSection section, Frame f) {
         List<Point> profile = section.profile();
         StringBuilder d = new StringBuilder(String.format(Locale.ROOT, "M%.1f %.1f", f.x(0), f.z(0)));
         for (Point p : profile) {
             d.append(String.format(Locale.ROOT, " L%.1f %.1f", f.x(p.s()), f.z(p.z())));
         }
         d.append(String.format(Locale.ROOT, " L%.1f %.1f Z", f.x(section.length()), f.z(0)));
-        svg.append("<path class=\"profile\" fill=\"").append(PROFILE)
-                .append("\" stroke=\"#333333\" stroke-width=\"1\" d=\"").append(d).append("\"/>");
+        LayerStyle structure = PlanStyle.of(Layer.SECTION_PROFILE);
+        svg.start("path").attr("class", "profile").attr("fill", structure.colour().hex())
+                .attr("stroke", structure.outline().hex()).attr("stroke-width", SvgWriter.size(structure.width() * U))
+                .attr("d", d.toString()).end();
+        LayerStyle exposed = PlanStyle.of(Layer.SECTION_EXPOSED);
         int i = 0;
         while (i < profile.size()) {
             if (!section.exposed().get(i)) {
@@ -131,8 +142,9 @@ public final class SectionSvg {
             String path = run.size() == 1
                     ? String.format(Locale.ROOT, "M%.1f %.1f h0.01", f.x(run.get(0).s()), f.z(run.get(0).z()))
                     : line(run, f);
-            svg.append("<path class=\"exposed-profile\" fill=\"none\" stroke=\"").append(PlanSvg.EXPOSED_ROOF)
-                    .append("\" stroke-width=\"5\" stroke-linecap=\"round\" d=\"").append(path).append("\"/>");
+            svg.start("path").attr("class", "exposed-profile").attr("fill", "none")
+                    .attr("stroke", exposed.colour().hex()).attr("stroke-width", SvgWriter.size(exposed.width() * U))
+                    .attr("stroke-linecap", exposed.roundCap() ? "round" : "butt").attr("d", path).end();
             i = j + 1;
         }
     }
@@ -145,63 +157,61 @@ public final class SectionSvg {
         return d.toString();
     }
 
-    private static void axes(StringBuilder svg, double length, double zMax, Frame f, PlanSvg.Labels labels) {
-        svg.append("<g class=\"axes\" font-size=\"11\" font-family=\"sans-serif\" stroke-width=\"1\">");
-        svg.append(String.format(Locale.ROOT, "<line x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\" y2=\"%.1f\" stroke=\"#222222\"/>",
-                f.x(0), f.z(0), f.x(length), f.z(0)));
-        svg.append(String.format(Locale.ROOT, "<line x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\" y2=\"%.1f\" stroke=\"#222222\"/>",
-                f.x(0), f.z(0), f.x(0), f.z(zMax)));
+    private static String dash(LayerStyle style) {
+        StringBuilder out = new StringBuilder();
+        for (double d : style.dash()) {
+            out.append(out.isEmpty() ? "" : " ").append(SvgWriter.size(d * U));
+        }
+        return out.toString();
+    }
+
+    private static void axes(SvgWriter svg, double length, double zMax, Frame f, Texts texts) {
+        svg.start("g").attr("class", "axes").attr("font-size", "11").attr("font-family", "sans-serif")
+                .attr("stroke-width", "1");
+        axisLine(svg, f.x(0), f.z(0), f.x(length), f.z(0));
+        axisLine(svg, f.x(0), f.z(0), f.x(0), f.z(zMax));
         double step = tickStep(length, 10);
         for (int k = 0; k * step <= length + 1e-9; k++) {
             double s = k * step;
-            svg.append(String.format(Locale.ROOT, "<line x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\" y2=\"%.1f\" stroke=\"#222222\"/>"
-                    + "<text x=\"%.1f\" y=\"%.1f\" text-anchor=\"middle\">%s</text>", f.x(s), f.z(0), f.x(s),
-                    f.z(0) + 5, f.x(s), f.z(0) + 17, tick(s)));
+            axisLine(svg, f.x(s), f.z(0), f.x(s), f.z(0) + 5);
+            svg.start("text").attr("x", f.x(s)).attr("y", f.z(0) + 17).attr("text-anchor", "middle").text(Formats.scaleStep(s))
+                    .end();
         }
         double zStep = tickStep(zMax, 5);
         for (int k = 0; k * zStep <= zMax + 1e-9; k++) {
             double z = k * zStep;
-            svg.append(String.format(Locale.ROOT, "<line x1=\"%.1f\" y1=\"%.1f\" x2=\"%.1f\" y2=\"%.1f\" stroke=\"#222222\"/>"
-                    + "<text x=\"%.1f\" y=\"%.1f\" text-anchor=\"end\">%s</text>", f.x(0) - 5, f.z(z), f.x(0), f.z(z),
-                    f.x(0) - 8, f.z(z) + 4, tick(z)));
+            axisLine(svg, f.x(0) - 5, f.z(z), f.x(0), f.z(z));
+            svg.start("text").attr("x", f.x(0) - 8).attr("y", f.z(z) + 4).attr("text-anchor", "end").text(Formats.scaleStep(z))
+                    .end();
         }
-        svg.append(String.format(Locale.ROOT, "<text class=\"axis-title\" x=\"%.1f\" y=\"%.1f\" text-anchor=\"middle\">%s</text>",
-                f.x(length / 2), f.z(0) + 36, PlanSvg.escape(labels.text("section.axis.distance"))));
-        svg.append(String.format(Locale.ROOT, "<text class=\"axis-title\" x=\"%.1f\" y=\"%.1f\" text-anchor=\"middle\""
-                + " transform=\"rotate(-90 %.1f %.1f)\">%s</text>", 14.0, f.z(zMax / 2), 14.0, f.z(zMax / 2),
-                PlanSvg.escape(labels.text("section.axis.height"))));
-        svg.append("</g>");
+        svg.start("text").attr("class", "axis-title").attr("x", f.x(length / 2)).attr("y", f.z(0) + 36)
+                .attr("text-anchor", "middle").text(texts.text("section.axis.distance")).end();
+        svg.start("text").attr("class", "axis-title").attr("x", 14.0).attr("y", f.z(zMax / 2))
+                .attr("text-anchor", "middle")
+                .attr("transform", String.format(Locale.ROOT, "rotate(-90 %.1f %.1f)", 14.0, f.z(zMax / 2)))
+                .text(texts.text("section.axis.height")).end();
+        svg.end();
+    }
+
+    private static void axisLine(SvgWriter svg, double x1, double y1, double x2, double y2) {
+        svg.start("line").attr("x1", x1).attr("y1", y1).attr("x2", x2).attr("y2", y2).attr("stroke", PlanStyle.INK.hex()).end();
     }
 
     /** A round tick spacing (1, 2 or 5 times a power of ten, at least 1 m) giving at most about {@code count} ticks. */
     static double tickStep(double range, int count) {
-        double raw = Math.max(range / count, 1);
-        double power = Math.pow(10, Math.floor(Math.log10(raw)));
-        for (double m : new double[] {1, 2, 5, 10}) {
-            if (m * power >= raw) {
-                return m * power;
-            }
-        }
-        return 10 * power;
+        return ScaleBar.step(Math.max(range / count, 1));
     }
 
-    private static String tick(double value) {
-        return String.valueOf(Math.round(value));
-    }
 
-    private static void legend(StringBuilder svg, double top, String[] keys, PlanSvg.Labels labels) {
-        String[] colours = {PROFILE, PlanSvg.EXPOSED_ROOF, ENVELOPE, PlanSvg.PART, SPHERE};
-        svg.append("<g class=\"legend\" font-size=\"12\" font-family=\"sans-serif\">");
-        for (int i = 0; i < keys.length; i++) {
+    private static void legend(SvgWriter svg, double top, Texts texts) {
+        svg.start("g").attr("class", "legend").attr("font-size", "12").attr("font-family", "sans-serif");
+        for (int i = 0; i < LEGEND.size(); i++) {
             double y = top + i * LEGEND_ROW;
-            svg.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"18\" height=\"12\" fill=\"%s\""
-                    + " stroke=\"#444444\" stroke-width=\"0.5\"/><text x=\"%.1f\" y=\"%.1f\">%s</text>", LEFT, y,
-                    colours[i], LEFT + 26, y + 10, PlanSvg.escape(labels.text(keys[i]))));
+            LayerStyle style = PlanStyle.of(LEGEND.get(i));
+            svg.start("rect").attr("x", LEFT).attr("y", y).attr("width", "18").attr("height", "12")
+                    .attr("fill", style.colour().hex()).attr("stroke", PlanStyle.SWATCH_OUTLINE.hex()).attr("stroke-width", "0.5").end();
+            svg.start("text").attr("x", LEFT + 26).attr("y", y + 10).text(texts.text(style.legendKey())).end();
         }
-        svg.append("</g>");
-    }
-
-    private static String exact(double value) {
-        return String.format(Locale.ROOT, "%.6f", value);
+        svg.end();
     }
 }

@@ -5,8 +5,8 @@ import java.time.Clock;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.List;
-import java.util.Locale;
 import org.lpzplanner.audit.AuditTrail;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.sites.SiteDuplicated;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -49,6 +49,21 @@ public class SiteCutService {
      */
     @Transactional
     public SiteCut save(long siteId, String name, String[] ends) {
+        String n = checkedName(siteId, name);
+        return store(siteId, n, SectionPage.cut(ends));
+    }
+
+    /**
+     * Saves a cut given as numbers (x1, y1, x2, y2), checked as {@link #save(long, String, String[])}
+     * checks typed ones.
+     */
+    @Transactional
+    public SiteCut save(long siteId, String name, double[] ends) {
+        String n = checkedName(siteId, name);
+        return store(siteId, n, SectionPage.checked(ends));
+    }
+
+    private String checkedName(long siteId, String name) {
         sites.get(siteId);
         String n = name == null ? "" : name.strip();
         if (n.isEmpty()) {
@@ -58,15 +73,18 @@ public class SiteCutService {
             throw new InvalidInputException("name", "a cut name must be at most " + MAX_NAME + " characters, got "
                     + n.length());
         }
-        double[] c = SectionPage.cut(ends);
+        return n;
+    }
+
+    private SiteCut store(long siteId, String n, double[] c) {
         Instant now = clock.instant().truncatedTo(ChronoUnit.MILLIS);
         KeyHolder keys = new GeneratedKeyHolder();
         jdbc.sql("INSERT INTO site_cuts (site_id, name, x1, y1, x2, y2, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)")
                 .params(siteId, n, c[0], c[1], c[2], c[3], Timestamp.from(now))
                 .update(keys, "id");
         long id = keys.getKeyAs(Number.class).longValue();
-        audit.record(siteId, "save cut", "\"" + n + "\" from (" + metres(c[0]) + ", " + metres(c[1]) + ") to ("
-                + metres(c[2]) + ", " + metres(c[3]) + ")");
+        audit.record(siteId, "save cut", "\"" + n + "\" from (" + Formats.coordinate(c[0]) + ", " + Formats.coordinate(c[1])
+                + ") to (" + Formats.coordinate(c[2]) + ", " + Formats.coordinate(c[3]) + ")");
         return new SiteCut(id, siteId, n, c[0], c[1], c[2], c[3], now);
     }
 
@@ -95,10 +113,6 @@ public class SiteCutService {
         }
         jdbc.sql("DELETE FROM site_cuts WHERE site_id = ? AND id = ?").params(siteId, cutId).update();
         audit.record(siteId, "delete cut", "\"" + names.get(0) + "\"");
-    }
-
-    private static String metres(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
     }
 
     /** A copied site keeps the original's saved cuts (the same file, so the same local frame). */

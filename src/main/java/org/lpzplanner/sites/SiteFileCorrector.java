@@ -6,11 +6,10 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.SerializationFeature;
-import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
@@ -22,7 +21,6 @@ import tools.jackson.databind.node.ObjectNode;
  */
 final class SiteFileCorrector {
 
-    private static final JsonMapper JSON = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
     private static final List<String> ROOF_FORMS = List.of("flat", "gable", "hip", "shed");
     /** Roof fields and the one or more roof forms each belongs to (as the site-format guide lists them). */
     private static final Map<String, List<String>> ROOF_FIELDS = Map.of(
@@ -53,7 +51,7 @@ final class SiteFileCorrector {
         String body = text.startsWith("\uFEFF") ? text.substring(1) : text;
         JsonNode root;
         try {
-            root = JSON.readTree(body);
+            root = Json.MAPPER.readTree(body);
         } catch (JacksonException e) {
             throw new InvalidInputException("file", "the stored site file cannot be read as JSON");
         }
@@ -94,7 +92,7 @@ final class SiteFileCorrector {
                                 + form + " roof");
             }
         }
-        return JSON.writeValueAsString(root) + "\n";
+        return Json.MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
     }
 
     private static ObjectNode structureProperties(JsonNode root, int index) {

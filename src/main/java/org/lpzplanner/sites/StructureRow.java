@@ -2,6 +2,7 @@ package org.lpzplanner.sites;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.model.RoofShape;
 import org.lpzplanner.engine.model.Structure;
 
@@ -39,5 +40,25 @@ public record StructureRow(int index, String id, String name, double footprintAr
             rows.add(row);
         }
         return rows;
+    }
+
+    /** The footprint as pages and report write an area: "3200.00". */
+    public String footprintText() {
+        return Formats.area(footprintArea);
+    }
+
+    /** The wall top as pages and report write a height: "10.00". */
+    public String heightText() {
+        return Formats.height(height);
+    }
+
+    /** The ridge or high side as a height, null where the roof has none. */
+    public String ridgeHeightText() {
+        return ridgeHeight == null ? null : Formats.height(ridgeHeight);
+    }
+
+    /** The parapet as a height, null where the roof has none. */
+    public String parapetText() {
+        return parapet == null ? null : Formats.height(parapet);
     }
 }

@@ -1,19 +1,13 @@
 package org.lpzplanner.system;
 
-import java.util.Locale;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SettingRange;
 
 /**
- * Checks the assessment values users type in, with the same bounds as the engine, so that the
- * message can name the value at fault.
+ * Checks the assessment values users type in (page forms and API), with the engine's ranges
+ * ({@link SettingRange}), so that the message can name the value at fault.
  */
 public final class Settings {
-
-    /** Largest custom sphere radius, metres. */
-    public static final double MAX_RADIUS = 1000;
-    /** Finest and coarsest grid resolution, metres. */
-    public static final double MIN_RESOLUTION = 0.05;
-    public static final double MAX_RESOLUTION = 10;
 
     private Settings() {
     }
@@ -38,29 +32,25 @@ public final class Settings {
     /**
      * A custom sphere radius in metres, or null when the text is blank.
      *
-     * @throws InvalidInputException unless it is a number above 0 and at most {@value #MAX_RADIUS}
+     * @throws InvalidInputException unless it is a number in {@link SettingRange#RADIUS}
      */
     public static Double radius(String text) {
-        Double value = number("radius", text);
-        if (value != null && !(value > 0 && value <= MAX_RADIUS)) {
-            throw new InvalidInputException("radius", "radius must be above 0 and at most " + (int) MAX_RADIUS
-                    + " m, got " + text.strip());
-        }
-        return value;
+        return inRange(SettingRange.RADIUS, "radius", text);
     }
 
     /**
      * A grid resolution in metres, or null (the engine chooses) when the text is blank.
      *
-     * @throws InvalidInputException unless it is between {@value #MIN_RESOLUTION} and
-     *                               {@value #MAX_RESOLUTION} m
+     * @throws InvalidInputException unless it is a number in {@link SettingRange#RESOLUTION}
      */
     public static Double resolution(String text) {
-        Double value = number("resolution", text);
-        if (value != null && !(value >= MIN_RESOLUTION && value <= MAX_RESOLUTION)) {
-            throw new InvalidInputException("resolution", String.format(Locale.ROOT,
-                    "resolution must be between %s and %s m, got %s", MIN_RESOLUTION, (int) MAX_RESOLUTION,
-                    text.strip()));
+        return inRange(SettingRange.RESOLUTION, "resolution", text);
+    }
+
+    private static Double inRange(SettingRange range, String field, String text) {
+        Double value = number(field, text);
+        if (value != null && !range.contains(value)) {
+            throw new InvalidInputException(field, field + " must be " + range.rule() + ", got " + text.strip());
         }
         return value;
     }

@@ -5,7 +5,6 @@ import static org.lpzplanner.transfer.ArchiveFields.bad;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
@@ -14,9 +13,9 @@ import org.lpzplanner.analysis.ReviewItems;
 import org.lpzplanner.analysis.RevisionResult;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.engine.model.ProtectionLevel;
+import org.lpzplanner.engine.model.SettingRange;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.system.InvalidInputException;
-import org.lpzplanner.system.Settings;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
@@ -43,8 +42,6 @@ import tools.jackson.databind.json.JsonMapper;
 @Component
 class RevisionReanalysis {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     /**
      * The archive with every revision's results computed here.
      *
@@ -63,9 +60,11 @@ class RevisionReanalysis {
     }
 
     private final AnalysisService analyses;
+    private final JsonMapper json;
 
-    RevisionReanalysis(AnalysisService analyses) {
+    RevisionReanalysis(AnalysisService analyses, JsonMapper json) {
         this.analyses = analyses;
+        this.json = json;
     }
 
     /**
@@ -125,9 +124,9 @@ class RevisionReanalysis {
         } catch (IllegalArgumentException e) {
             throw bad(p + ".sphereRadius", which + " cannot be used: " + e.getMessage());
         }
-        if (!(r.resolution() >= Settings.MIN_RESOLUTION && r.resolution() <= Settings.MAX_RESOLUTION)) {
-            throw bad(p + ".resolution", String.format(Locale.ROOT, "%s must be between %s and %s m, got %s", which,
-                    Settings.MIN_RESOLUTION, (int) Settings.MAX_RESOLUTION, r.resolution()));
+        if (!SettingRange.RESOLUTION.contains(r.resolution())) {
+            throw bad(p + ".resolution", which + " must be " + SettingRange.RESOLUTION.rule() + ", got "
+                    + r.resolution());
         }
         try {
             analyses.check(file.document(), sphere, r.resolution());
@@ -151,7 +150,7 @@ class RevisionReanalysis {
      * Whether the file carried the results computed here: the same totals and verdict and the same
      * features (the engine's times aside, which differ from run to run).
      */
-    private static boolean sameResults(SiteArchive.Revision r, RevisionResult computed) {
+    private boolean sameResults(SiteArchive.Revision r, RevisionResult computed) {
         if (r.exposedRoofArea() != computed.exposedRoofArea() || r.exposedEdgeLength() != computed.exposedEdgeLength()
                 || r.exposedCorners() != computed.exposedCorners() || r.facadeBands() != computed.facadeBands()
                 || r.protectedGroundArea() != computed.protectedGroundArea()
@@ -160,11 +159,11 @@ class RevisionReanalysis {
         }
         JsonNode carried;
         try {
-            carried = JSON.readTree(r.resultGeoJson());
+            carried = json.readTree(r.resultGeoJson());
         } catch (RuntimeException notJson) {
             return false;
         }
-        JsonNode own = JSON.readTree(computed.resultGeoJson());
+        JsonNode own = json.readTree(computed.resultGeoJson());
         return carried.path("features").equals(own.path("features"))
                 && carried.path("analysis").path("summary").equals(own.path("analysis").path("summary"));
     }

@@ -26,6 +26,7 @@ import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
 import org.lpzplanner.engine.design.SeparationDistance;
+import org.lpzplanner.engine.io.Json;
 import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.risk.EntrySurgeProtection;
 import org.lpzplanner.engine.risk.FireProvisions;
@@ -49,9 +50,7 @@ import org.lpzplanner.keepout.KeepOutOutline;
 import org.lpzplanner.sites.CoverDetails;
 import org.lpzplanner.system.InvalidInputException;
 import tools.jackson.core.JacksonException;
-import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * Writes a {@link SiteArchive} as a site export file (UTF-8 JSON, described in docs/site-export.md)
@@ -62,8 +61,6 @@ final class SiteArchiveCodec {
     static final String FORMAT = "lpz-planner-site-export";
     static final int FORMAT_VERSION = 1;
 
-    private static final JsonMapper JSON = JsonMapper.builder()
-            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION).build();
     private static final Pattern SHA256 = Pattern.compile("[0-9a-f]{64}");
     /** Column widths of the tables the rows go into. */
     private static final int NAME = 200;
@@ -93,7 +90,7 @@ final class SiteArchiveCodec {
         document.put("keepOutAreas", archive.keepOutAreas());
         document.put("comments", archive.comments());
         document.put("auditTrail", archive.auditTrail());
-        return JSON.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
+        return Json.MAPPER.writerWithDefaultPrettyPrinter().writeValueAsBytes(document);
     }
 
     /** @throws InvalidInputException naming the member at fault */
@@ -105,7 +102,7 @@ final class SiteArchiveCodec {
         try {
             String text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT).decode(ByteBuffer.wrap(bytes)).toString();
-            root = JSON.readTree(text);
+            root = Json.MAPPER.readTree(text);
         } catch (CharacterCodingException e) {
             throw new InvalidInputException("file", "site export: the file is not UTF-8 text; nothing was stored");
         } catch (JacksonException e) {

@@ -18,12 +18,12 @@ import tools.jackson.databind.json.JsonMapper;
 @Repository
 class SiteArchiveRepository {
 
-    private static final JsonMapper JSON = JsonMapper.builder().build();
-
     private final JdbcClient jdbc;
+    private final JsonMapper json;
 
-    SiteArchiveRepository(JdbcClient jdbc) {
+    SiteArchiveRepository(JdbcClient jdbc, JsonMapper json) {
         this.jdbc = jdbc;
+        this.json = json;
     }
 
     /** The site if the team owns it. */
@@ -102,9 +102,9 @@ class SiteArchiveRepository {
                 .list();
     }
 
-    private static List<List<Double>> positions(String json) {
+    private List<List<Double>> positions(String stored) {
         List<List<Double>> out = new ArrayList<>();
-        for (JsonNode p : JSON.readTree(json)) {
+        for (JsonNode p : json.readTree(stored)) {
             out.add(List.of(p.get(0).asDouble(), p.get(1).asDouble()));
         }
         return out;
@@ -164,7 +164,7 @@ class SiteArchiveRepository {
         for (SiteArchive.DownConductorEdit d : archive.downConductors()) {
             jdbc.sql("INSERT INTO down_conductor_positions (site_id, structure_id, positions, updated_at)"
                             + " VALUES (?, ?, ?, ?)")
-                    .params(siteId, d.structureId(), JSON.writeValueAsString(d.positions()),
+                    .params(siteId, d.structureId(), json.writeValueAsString(d.positions()),
                             Timestamp.from(d.updatedAt()))
                     .update();
         }
@@ -181,7 +181,7 @@ class SiteArchiveRepository {
         }
         for (SiteArchive.KeepOutArea k : archive.keepOutAreas()) {
             jdbc.sql("INSERT INTO site_keep_out_areas (site_id, name, corners, created_at) VALUES (?, ?, ?, ?)")
-                    .params(siteId, k.name(), JSON.writeValueAsString(k.corners()), Timestamp.from(k.createdAt()))
+                    .params(siteId, k.name(), json.writeValueAsString(k.corners()), Timestamp.from(k.createdAt()))
                     .update();
         }
         for (SiteArchive.Comment c : archive.comments()) {

@@ -14,6 +14,7 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.mock.web.MockMultipartFile;
 import org.springframework.security.test.context.TestSecurityContextHolder;
 import org.springframework.test.web.servlet.MockMvc;
@@ -25,6 +26,7 @@ import org.springframework.web.context.WebApplicationContext;
  * no CSRF token) with its account's role; a wrong or revoked token answers 401.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 @SignedIn
 class ApiTokenTest {
 

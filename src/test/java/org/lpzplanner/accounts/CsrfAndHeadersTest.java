@@ -17,6 +17,7 @@ import org.junit.jupiter.api.Test;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
 import org.springframework.security.test.context.TestSecurityContextHolder;
 import org.springframework.test.web.servlet.MockMvc;
@@ -29,6 +30,7 @@ import org.springframework.web.context.WebApplicationContext;
  * in, pages lead to the sign-in page and the API answers 401, while static files stay public.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 @SignedIn
 class CsrfAndHeadersTest {
 

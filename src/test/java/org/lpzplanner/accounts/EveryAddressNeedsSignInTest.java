@@ -11,6 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.beans.factory.annotation.Qualifier;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.HttpMethod;
 import org.springframework.mock.web.MockHttpServletResponse;
 import org.springframework.test.web.servlet.MockMvc;
@@ -28,6 +29,7 @@ import org.springframework.web.servlet.mvc.method.annotation.RequestMappingHandl
  * checked here without anyone listing it.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 class EveryAddressNeedsSignInTest {
 
     private static final Set<String> OPEN = Set.of("/login", "/setup", "/error");

@@ -16,6 +16,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.security.authentication.AuthenticationProvider;
 import org.springframework.security.authentication.BadCredentialsException;
@@ -30,6 +31,7 @@ import org.springframework.security.web.authentication.WebAuthenticationDetails;
  * of them are in flight before the first one fails.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 class SignInLimitConcurrencyTest {
 
     private static final int PARALLEL = 14;

@@ -14,6 +14,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.security.authentication.AuthenticationProvider;
 import org.springframework.security.authentication.BadCredentialsException;
@@ -28,6 +29,7 @@ import org.springframework.security.web.authentication.WebAuthenticationDetails;
  * locked nothing is checked; a success ends it all; failures are forgotten a day after the last.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 class SignInLockScheduleTest {
 
     private static final SignInThrottle.Limits DEFAULTS = new SignInThrottle.Limits(5, Duration.ofMinutes(1),

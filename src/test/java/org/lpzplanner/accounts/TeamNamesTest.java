@@ -7,6 +7,7 @@ import org.junit.jupiter.api.Test;
 import org.lpzplanner.system.InvalidInputException;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 
 /**
  * Team names are told apart by people reading a list, so two names that differ only in letter
@@ -14,6 +15,7 @@ import org.springframework.boot.test.context.SpringBootTest;
  * same team name; the database holds the rule too, so parallel requests cannot slip past it.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 class TeamNamesTest {
 
     @Autowired

@@ -14,6 +14,7 @@ import org.lpzplanner.jobs.JobStore;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.jdbc.core.simple.JdbcClient;
 
 /**
@@ -21,6 +22,7 @@ import org.springframework.jdbc.core.simple.JdbcClient;
  * refused; a queued job cancelled never runs, a running one stops at its next check.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 @SignedIn
 class AnalysisJobsTest {
 
@@ -41,7 +43,7 @@ class AnalysisJobsTest {
 
         SlowAnalyses() {
             super(null, null, null, Clock.systemUTC(), new AnalysisStateCache(0, 0), null, null,
-                    new AnalysisCapacity(1, 0, 5), new ParsedResults(0));
+                    new AnalysisCapacity(1, 0, 5), new ParsedResults(0, org.lpzplanner.engine.io.Json.MAPPER));
         }
 
         @Override

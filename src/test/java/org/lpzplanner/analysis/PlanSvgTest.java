@@ -4,6 +4,10 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.Arrays;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.drawing.Layer;
+import org.lpzplanner.drawing.PlanItem;
+import org.lpzplanner.drawing.PlanStyle;
+import org.lpzplanner.drawing.Texts;
 import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.model.ProtectionLevel;
@@ -13,7 +17,7 @@ import org.lpzplanner.sites.SiteFiles;
 
 class PlanSvgTest {
 
-    private static final PlanSvg.Labels KEYS = (key, args) -> key + Arrays.toString(args);
+    private static final Texts KEYS = (key, args) -> key + Arrays.toString(args);
 
     private static String drawing(String wkt, String fileName) {
         Site site = SiteFiles.read(wkt, fileName).site();
@@ -106,12 +110,12 @@ class PlanSvgTest {
         int at = svg.indexOf("<path class=\"model-warning\"");
         assertThat(at).as(svg).isPositive();
         String element = svg.substring(at, svg.indexOf("</path>", at));
-        assertThat(element).contains("data-item-key=\"" + key + "\"").contains("stroke=\"" + PlanSvg.WARNING + "\"")
+        assertThat(element).contains("data-item-key=\"" + key + "\"").contains("stroke=\"" + colour(Layer.MODEL_WARNING) + "\"")
                 .contains("<title>").contains("Span wire");
         assertThat(svg).contains("plan.legend.warning[]");
         // its own colour: no other layer of the plan uses it
-        assertThat(java.util.List.of(PlanSvg.GROUND, PlanSvg.OBJECT, PlanSvg.EXPOSED_ROOF, PlanSvg.FACADE, PlanSvg.EDGE,
-                PlanSvg.PART, PlanSvg.KEEP_OUT)).doesNotContain(PlanSvg.WARNING);
+        assertThat(java.util.Arrays.stream(Layer.values()).filter(l -> l != Layer.MODEL_WARNING).map(PlanSvgTest::colour))
+                .doesNotContain(colour(Layer.MODEL_WARNING));
 
         // accepted with a reason: still drawn, marked accepted, the reason in its title
         String accepted = PlanSvg.render(geoJson, KEYS, java.util.Map.of(key, "fenced <off>"));
@@ -145,8 +149,8 @@ class PlanSvgTest {
         assertThat(svg).doesNotContainPattern("side-flash-negligible\"[^>]*data-item-key");
         assertThat(count(svg, "data-item-key=\"facade-band-")).isEqualTo(4);
         assertThat(svg).contains("plan.legend.facade[]").contains("plan.legend.facadeNegligible[]")
-                .contains("stroke=\"" + PlanSvg.FACADE_NEGLIGIBLE + "\"");
-        assertThat(PlanSvg.FACADE_NEGLIGIBLE).isNotEqualTo(PlanSvg.FACADE);
+                .contains("stroke=\"" + colour(Layer.FACADE_NEGLIGIBLE) + "\"");
+        assertThat(colour(Layer.FACADE_NEGLIGIBLE)).isNotEqualTo(colour(Layer.FACADE_BAND));
 
         Site low = SiteFiles.read("POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0)) 50\n", "tower.wkt").site();
         String lowSvg = PlanSvg.render(ResultGeoJson.write(low, ExposureAnalysis.analyze(low,
@@ -159,6 +163,10 @@ class PlanSvgTest {
     void aPlanWithoutNegligibleBandsHasNoLegendRowForThem() {
         String svg = drawing("POLYGON ((0 0, 20 0, 20 10, 0 10, 0 0)) 8\n", "block.wkt");
         assertThat(svg).doesNotContain("plan.legend.facadeNegligible");
+    }
+
+    private static String colour(Layer layer) {
+        return PlanStyle.of(layer).colour().hex();
     }
 
     private static double attribute(String svg, String name) {
@@ -180,7 +188,7 @@ class PlanSvgTest {
         assertThat(without).doesNotContain("keep-out").doesNotContain("plan.legend.keepOut");
 
         // an area well east of the block (and of its protected ground) widens the drawn extent to x = 110
-        String svg = PlanSvg.render(geoJson, KEYS, java.util.Map.of(), java.util.List.of(new PlanSvg.KeepOut(
+        String svg = PlanSvg.render(geoJson, KEYS, java.util.Map.of(), java.util.List.of(new PlanItem.KeepOutArea(
                 "<Panels> & \"vents\"", java.util.List.of(new double[] {100, 2}, new double[] {110, 2},
                         new double[] {110, 8}, new double[] {100, 8}))));
         assertThat(svg).contains("<pattern id=\"keep-out-hatch\"").contains("class=\"keep-out-area\"")

@@ -12,6 +12,7 @@ import org.lpzplanner.engine.model.Rod;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.openqa.selenium.By;
+import org.openqa.selenium.Keys;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.interactions.Actions;
@@ -98,6 +99,23 @@ class PlanEditingBrowserTest extends BrowserTestBase {
                 .isEqualTo("3");
         assertThat(exposedRoof()).isNotEqualTo(before);
         assertThat(sites.fileVersions(site.id())).hasSize(3);
+
+        // arrow keys on the focused rod: 2 m east with Shift and 0.3 m north, sent as one change
+        WebElement rod = browser.findElement(By.cssSelector("circle.rod[data-rod-id='rod-1']"));
+        browser.executeScript("arguments[0].focus();", rod);
+        new Actions(browser).keyDown(Keys.SHIFT).sendKeys(Keys.ARROW_RIGHT, Keys.ARROW_RIGHT).keyUp(Keys.SHIFT)
+                .sendKeys(Keys.ARROW_UP, Keys.ARROW_UP, Keys.ARROW_UP).perform();
+        waitUpTo(20).until(b -> Math.abs(storedRods(site.id()).get(0).x() - placed.x() - 2) < 0.001);
+        assertThat(storedRods(site.id()).get(0).y()).isCloseTo(placed.y() + 0.3, within(0.001));
+        assertThat(sites.fileVersions(site.id())).hasSize(4);
+
+        // one tool at a time: drawing a section cut ends placing a rod
+        browser.findElement(By.id("place-rod")).click();
+        assertThat(browser.findElement(By.id("place-rod")).getAttribute("aria-pressed")).isEqualTo("true");
+        browser.findElement(By.id("draw-cut")).click();
+        assertThat(browser.findElement(By.id("draw-cut")).getAttribute("aria-pressed")).isEqualTo("true");
+        assertThat(browser.findElement(By.id("place-rod")).getAttribute("aria-pressed")).isEqualTo("false");
+        assertThat(browser.findElement(By.id("new-rod-form")).isDisplayed()).isFalse();
     }
 
     @Test

@@ -10,6 +10,7 @@ import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.jdbc.core.simple.JdbcClient;
 
 /**
@@ -18,6 +19,7 @@ import org.springframework.jdbc.core.simple.JdbcClient;
  * queued job stops it for good, while a running one is only flagged for its instance.
  */
 @SpringBootTest
+@AutoConfigureMockMvc // the suite's shared context has MockMvc; this class does not use it
 @SignedIn
 class JobStoreTest {
 

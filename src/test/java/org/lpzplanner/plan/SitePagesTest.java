@@ -52,6 +52,43 @@ class SitePagesTest {
         assertThat(html).contains("Listed warehouse", "exposed: ", "m\u00b2 roof", "<form");
     }
 
+    /**
+     * A shed with a 15 m rod in the middle of its 10 m x 10 m roof: at level I (R = 20 m,
+     * IEC 62305-3:2010 Table 2) the rod's protected radius on the roof is sqrt(2 R h - h^2)
+     * = sqrt(375) = 19.4 m, beyond the roof's corners at 7.1 m. Far from it, a wire strung 45 m above
+     * open ground between two masts, more than R above what lies beneath it: a model warning, no
+     * exposed item. The list must not read "exposed: 0 m²" nor give a verdict of protection.
+     */
+    @Test
+    void siteListSaysAWarningStandsWhenNothingIsCountedAsExposed() throws Exception {
+        String geoJson = """
+                {"type": "FeatureCollection", "coordinates": "local-metres", "features": [
+                  {"type": "Feature", "properties": {"kind": "structure", "name": "Shed", "height": 3},
+                   "geometry": {"type": "Polygon", "coordinates": [[[195, -5], [205, -5], [205, 5], [195, 5], [195, -5]]]}},
+                  {"type": "Feature", "properties": {"kind": "rod", "name": "Shed rod", "height": 15},
+                   "geometry": {"type": "Point", "coordinates": [200, 0]}},
+                  {"type": "Feature", "properties": {"kind": "rod", "name": "West mast", "height": 45},
+                   "geometry": {"type": "Point", "coordinates": [0, 0]}},
+                  {"type": "Feature", "properties": {"kind": "rod", "name": "East mast", "height": 45},
+                   "geometry": {"type": "Point", "coordinates": [100, 0]}},
+                  {"type": "Feature", "properties": {"kind": "conductor", "name": "Span wire"},
+                   "geometry": {"type": "LineString", "coordinates": [[0, 0, 45], [100, 0, 45]]}}
+                ]}""";
+        String location = mvc.perform(multipart("/sites").file(new MockMultipartFile("file", "span.geojson",
+                        "application/geo+json", geoJson.getBytes(StandardCharsets.UTF_8)))
+                        .param("name", "Warned yard").param("level", "I"))
+                .andExpect(status().is3xxRedirection()).andReturn().getResponse().getRedirectedUrl();
+        long id = Long.parseLong(location.substring(location.lastIndexOf('/') + 1));
+        String plan = page("/sites/" + id, 200);
+        assertThat(plan).contains("Span wire", "No verdict of full protection");
+
+        String list = page("/", 200);
+        String row = list.substring(list.indexOf("Warned yard"));
+        row = row.substring(0, row.indexOf("</tr>"));
+        assertThat(row).contains("not fully protected: a warning or another item stands")
+                .doesNotContain("exposed: 0", "no exposed items");
+    }
+
     @Test
     void uploadErrorIsShownOnThePageAndNothingIsStored() throws Exception {
         long before = sites.count();

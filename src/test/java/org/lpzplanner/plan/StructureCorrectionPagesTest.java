@@ -74,7 +74,7 @@ class StructureCorrectionPagesTest {
         String page = html(get("/sites/" + id), 200);
 
         // the warehouse footprint is 80 m by 40 m (sample file), walls 10 m, flat roof, parapet 1 m
-        assertThat(page).contains("id=\"structures\"", "<td>Warehouse</td>", "<td>3200.0</td>", "<td>10.00</td>",
+        assertThat(page).contains("id=\"structures\"", "<td>Warehouse</td>", "<td>3200.00</td>", "<td>10.00</td>",
                 "<td>flat</td>", "<td>1.00</td>", "id=\"correction-form\"", "name=\"parapet\"", "name=\"roof\"");
     }
 

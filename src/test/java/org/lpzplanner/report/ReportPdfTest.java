@@ -94,7 +94,7 @@ class ReportPdfTest {
     void coverAndMethodStateLevelRadiusRevisionAndChecksum() throws Exception {
         String all = flat(String.join(" ", pages(campusPdf)));
         // IEC 62305-3:2010 Table 2: level II rolls a 30 m sphere.
-        assertThat(all).contains("Protection level II, R = 30.00 m");
+        assertThat(all).contains("Protection level II, R = 30 m");
         assertThat(all).contains("Revision 3").contains("2026-11-30 10:15 UTC");
         assertThat(all).contains(AnalysisService.sha256(campusText));
         assertThat(all).contains("Brookfield Campus").contains("IEC 62305-3:2010");

@@ -21,7 +21,6 @@ class RiskFormatTest {
         assertThat(RiskFormat.scientific(0.0144549)).isEqualTo("0.01445");
         assertThat(RiskFormat.scientific(0.5)).isEqualTo("0.5");
         assertThat(RiskFormat.area(7227.43)).isEqualTo("7227");
-        assertThat(RiskFormat.metres(30)).isEqualTo("30");
     }
 
     @Test

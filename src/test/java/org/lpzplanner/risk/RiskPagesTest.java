@@ -81,7 +81,7 @@ class RiskPagesTest {
         String html = page(get("/sites/" + id + "/risk"), 200);
 
         assertThat(html).contains("Page <block> & co", "IEC 62305-2:2010", "No risk inputs are saved",
-                "class=\"plan collection-area\"", "class=\"collection-zone\"", "Block (10 m)",
+                "class=\"plan collection-area\"", "class=\"collection-zone\"", "Block (10.00 m)",
                 "Location factor C_D", "isolated, no other objects nearby", "Suggestion: isolated",
                 "Collection area A_D");
         for (String field : RiskSettingsParser.FIELDS) {

@@ -17,8 +17,11 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The OpenAPI document at {@code /api/docs} (OpenAPI Specification 3.x: {@code paths}, operations
- * by HTTP method, {@code responses} by status code) describes the main endpoints with their error
- * answers, and the browsable page is served.
+ * by HTTP method, {@code responses} by status code, {@code requestBody}, {@code components/schemas})
+ * describes the main endpoints with their error answers, and the browsable page is served. Error
+ * answers are problem details of RFC 9457 (section 3: members {@code type}, {@code title},
+ * {@code status}, {@code detail}, {@code instance}; section 6.1: media type
+ * {@code application/problem+json}); request bodies are described by the records the API reads.
  */
 @SpringBootTest
 @AutoConfigureMockMvc
@@ -34,7 +37,7 @@ class ApiDocsTest {
         return JsonMapper.builder().build().readTree(body);
     }
 
-    /** Asserts that the operation exists and lists exactly these status codes, errors with the ApiError body. */
+    /** Asserts that the operation exists and lists exactly these status codes, errors with the Problem body. */
     private static void hasResponses(JsonNode doc, String path, String method, List<String> codes) {
         JsonNode operation = doc.path("paths").path(path).path(method);
         assertThat(operation.isObject()).as(method + " " + path).isTrue();
@@ -43,12 +46,20 @@ class ApiDocsTest {
         assertThat(responses.propertyNames()).as("responses of " + method + " " + path)
                 .containsExactlyInAnyOrderElementsOf(codes);
         for (String code : codes) {
-            if (code.startsWith("4")) {
+            if (code.startsWith("4") || code.startsWith("5")) {
                 assertThat(responses.path(code).path("description").asString()).isNotBlank();
-                assertThat(responses.path(code).path("content").path("application/json").path("schema").path("$ref")
-                        .asString()).as(code + " of " + method + " " + path).isEqualTo("#/components/schemas/ApiError");
+                assertThat(responses.path(code).path("content").propertyNames()).as(code + " of " + method + " "
+                        + path).containsExactly("application/problem+json");
+                assertThat(responses.path(code).path("content").path("application/problem+json").path("schema")
+                        .path("$ref").asString()).as(code + " of " + method + " " + path)
+                        .isEqualTo("#/components/schemas/Problem");
             }
         }
+    }
+
+    private static String requestSchema(JsonNode doc, String path, String method) {
+        return doc.path("paths").path(path).path(method).path("requestBody").path("content")
+                .path("application/json").path("schema").path("$ref").asString();
     }
 
     @Test
@@ -63,22 +74,22 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "202", "400", "404", "429"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "delete", List.of("200", "404"));
-        hasResponses(doc, "/api/sites/{id}/conductors", "post", List.of("201", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}/conductors", "post", List.of("201", "400", "404", "409", "413"));
         hasResponses(doc, "/api/sites/{id}/conductors/{conductorId}", "delete", List.of("200", "400", "404", "409"));
-        hasResponses(doc, "/api/sites/{id}/conductors/{conductorId}", "put", List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}/conductors/{conductorId}", "put", List.of("200", "400", "404", "409", "413"));
         hasResponses(doc, "/api/sites/{id}", "get", List.of("200", "400", "404"));
-        hasResponses(doc, "/api/sites/{id}", "patch", List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{id}", "patch", List.of("200", "400", "404", "409", "413"));
         hasResponses(doc, "/api/sites/{id}", "delete", List.of("204", "404", "409"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/latest/items", "get", List.of("200", "404"));
-        hasResponses(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post", List.of("200", "400", "404"));
-        hasResponses(doc, "/api/sites/{id}/rods", "post", List.of("201", "400", "404", "409"));
-        hasResponses(doc, "/api/sites/{id}/rods/{rodId}", "put", List.of("200", "400", "404", "409"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post", List.of("200", "400", "404", "413"));
+        hasResponses(doc, "/api/sites/{id}/rods", "post", List.of("201", "400", "404", "409", "413"));
+        hasResponses(doc, "/api/sites/{id}/rods/{rodId}", "put", List.of("200", "400", "404", "409", "413"));
         hasResponses(doc, "/api/sites/{id}/risk", "get", List.of("200", "400", "404"));
-        hasResponses(doc, "/api/sites/{id}/risk", "put", List.of("200", "400", "404"));
+        hasResponses(doc, "/api/sites/{id}/risk", "put", List.of("200", "400", "404", "413"));
         hasResponses(doc, "/api/sites/{id}/keep-out-areas", "get", List.of("200", "404"));
-        hasResponses(doc, "/api/sites/{id}/keep-out-areas", "post", List.of("201", "400", "403", "404"));
-        hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "patch", List.of("200", "400", "403", "404"));
+        hasResponses(doc, "/api/sites/{id}/keep-out-areas", "post", List.of("201", "400", "403", "404", "413"));
+        hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "patch", List.of("200", "400", "403", "404", "413"));
         hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "delete", List.of("204", "403", "404"));
         hasResponses(doc, "/api/sites/{siteId}/revisions/{revision}/report", "get",
                 List.of("200", "400", "404", "409"));
@@ -88,11 +99,30 @@ class ApiDocsTest {
                 "Review", "Air-termination", "Risk", "Report", "Design");
         assertThat(doc.path("tags").toString()).contains("IEC 62305-2:2010");
 
-        JsonNode error = doc.path("components").path("schemas").path("ApiError");
-        assertThat(error.path("properties").propertyNames()).contains("error", "field");
-        assertThat(error.path("required").toString()).contains("error");
-        JsonNode riskBody = doc.path("paths").path("/api/sites/{id}/risk").path("put").path("requestBody");
-        assertThat(riskBody.toString()).contains("#/components/schemas/Inputs");
+        JsonNode problem = doc.path("components").path("schemas").path("Problem");
+        assertThat(problem.path("properties").propertyNames()).contains("type", "title", "status", "detail",
+                "instance", "error", "field");
+        assertThat(problem.path("required").toString()).contains("\"type\"", "\"title\"", "\"status\"",
+                "\"detail\"", "\"error\"");
+        assertThat(problem.path("properties").path("type").path("enum").values())
+                .allMatch(t -> t.asString().startsWith(ApiProblem.TYPE_PREFIX))
+                .hasSize(ApiProblem.values().length);
+        // request bodies are the records the API reads, with their required members
+        assertThat(requestSchema(doc, "/api/sites/{id}/risk", "put")).isEqualTo("#/components/schemas/RiskInputs");
+        assertThat(requestSchema(doc, "/api/sites/{id}", "patch")).isEqualTo("#/components/schemas/SiteChanges");
+        assertThat(requestSchema(doc, "/api/sites/{id}/cuts", "post")).isEqualTo("#/components/schemas/SaveCut");
+        assertThat(requestSchema(doc, "/api/sites/{id}/keep-out-areas", "post"))
+                .isEqualTo("#/components/schemas/KeepOutAreaRequest");
+        assertThat(requestSchema(doc, "/api/sites/{siteId}/comments", "post"))
+                .isEqualTo("#/components/schemas/NewComment");
+        assertThat(requestSchema(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post"))
+                .isEqualTo("#/components/schemas/AcceptItem");
+        JsonNode schemas = doc.path("components").path("schemas");
+        assertThat(schemas.path("SiteChanges").path("required").toString()).isEqualTo("[\"version\"]");
+        assertThat(schemas.path("SaveCut").path("required").values()).extracting(JsonNode::asString)
+                .containsExactlyInAnyOrder("name", "x1", "y1", "x2", "y2");
+        assertThat(schemas.path("RiskInputs").path("properties").path("lines").path("maxItems").asInt())
+                .isEqualTo(org.lpzplanner.risk.RiskSettings.MAX_LINES);
         // only the JSON API is described, not the pages
         assertThat(doc.path("paths").propertyNames()).allMatch(p -> p.startsWith("/api/"));
     }

@@ -1,5 +1,6 @@
 package org.lpzplanner.engine.exposure;
 
+import org.lpzplanner.engine.model.SettingRange;
 import org.lpzplanner.engine.model.SphereSpec;
 
 /**
@@ -12,8 +13,9 @@ public record AnalysisOptions(SphereSpec sphere, Double resolution, double toler
     public static final double DEFAULT_TOLERANCE = 0.001;
 
     public AnalysisOptions {
-        if (resolution != null && !(resolution >= 0.05 && resolution <= 10)) {
-            throw new IllegalArgumentException("resolution must be between 0.05 m and 10 m, got " + resolution);
+        if (resolution != null && !SettingRange.RESOLUTION.contains(resolution)) {
+            throw new IllegalArgumentException("resolution must be " + SettingRange.RESOLUTION.rule() + ", got "
+                    + resolution);
         }
         if (!(tolerance > 0 && tolerance <= 0.1)) {
             throw new IllegalArgumentException("tolerance must be above 0 and at most 0.1 m, got " + tolerance);

@@ -12,9 +12,8 @@ import org.lpzplanner.engine.model.Structure;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.TokenStreamLocation;
 import tools.jackson.core.json.JsonReadFeature;
-import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.ObjectReader;
 
 /**
  * Reads the GeoJSON site format (see docs/site-format.md): checks the collection, reads every
@@ -26,10 +25,7 @@ final class GeoJsonSiteParser {
     static final String LOCAL_METRES = "local-metres";
 
     // NaN and Infinity are let through the parser so the field they are in can be named.
-    private static final JsonMapper JSON = JsonMapper.builder()
-            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .build();
+    private static final ObjectReader JSON = Json.MAPPER.reader().with(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS);
 
     private final String source;
     private final GeometryFactory factory = new GeometryFactory();

@@ -10,8 +10,8 @@ public record SphereSpec(ProtectionLevel level, double radius) {
         if (level == null) {
             throw new IllegalArgumentException("a protection level is required");
         }
-        if (!(radius > 0) || Double.isInfinite(radius) || radius > 1000) {
-            throw new IllegalArgumentException("sphere radius must be a positive number of metres up to 1000, got " + radius);
+        if (!SettingRange.RADIUS.contains(radius)) {
+            throw new IllegalArgumentException("sphere radius must be " + SettingRange.RADIUS.rule() + ", got " + radius);
         }
     }
 
