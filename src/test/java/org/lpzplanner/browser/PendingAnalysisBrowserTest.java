@@ -107,7 +107,7 @@ class PendingAnalysisBrowserTest extends BrowserTestBase {
         freeThePlace();
         release = null;
         browser.findElement(By.id("redo-change")).click();
-        waitUpTo(30).until(b -> editorStatus().contains("analysed again"));
+        waitUpTo(30).until(b -> editorStatus().startsWith("Change redone; the site was analysed again"));
         assertThat(storedRods(id)).hasSize(1);
         assertThat(Double.parseDouble(exposedRoof())).isLessThan(Double.parseDouble(before));
         assertThat(browser.findElement(By.id("plan-status")).getText()).doesNotStartWith("No verdict");
