@@ -83,8 +83,9 @@ class CommandLineErrorsTest {
     }
 
     @Test
-    void radiusNotAboveZero() {
-        assertInvalid(CliRun.of("analyze", "--site", site, "--level", "II", "--radius", "0"), "--radius", "above 0");
+    void radiusBelowOneMetre() {
+        assertInvalid(CliRun.of("analyze", "--site", site, "--level", "II", "--radius", "0"), "--radius", "between 1 and 1000 m");
+        assertInvalid(CliRun.of("analyze", "--site", site, "--level", "II", "--radius", "0.0001"), "--radius", "0.0001");
         assertInvalid(CliRun.of("analyze", "--site", site, "--level", "II", "--radius", "-5"), "--radius", "-5");
     }
 

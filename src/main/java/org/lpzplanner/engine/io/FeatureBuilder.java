@@ -67,6 +67,10 @@ final class FeatureBuilder {
         Double heightAboveRoof = properties(feature).nonNegativeOrNull("heightAboveRoof");
         List<Coordinate> path = new ArrayList<>();
         Coordinate[] vertices = feature.geometry().getCoordinates();
+        if (vertices.length > SiteLimits.MAX_CONDUCTOR_POINTS) {
+            throw feature.place().fail("geometry", "has " + vertices.length + " positions; a conductor may have at most "
+                    + SiteLimits.MAX_CONDUCTOR_POINTS + " (split a longer one into several conductors)");
+        }
         for (int i = 0; i < vertices.length; i++) {
             Coordinate v = vertices[i];
             if (heightAboveRoof == null) {

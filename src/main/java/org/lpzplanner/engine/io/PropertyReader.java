@@ -25,7 +25,7 @@ final class PropertyReader {
     }
 
     /**
-     * A required length in metres, {@code 0 < value ≤ 1000}.
+     * A required length in metres, {@code 0.01 ≤ value ≤ 1000}.
      *
      * @param meaning what the field is, for the message when it is missing
      */
@@ -36,12 +36,12 @@ final class PropertyReader {
         return checked(field, properties.get(field), false);
     }
 
-    /** An optional length in metres, {@code 0 ≤ value ≤ 1000}; null when absent. */
+    /** An optional length in metres, 0 or {@code 0.01 ≤ value ≤ 1000}; null when absent. */
     Double nonNegativeOrNull(String field) {
         return has(field) ? checked(field, properties.get(field), true) : null;
     }
 
-    /** An optional positive length in metres, {@code 0 < value ≤ 1000}; null when absent. */
+    /** An optional positive length in metres, {@code 0.01 ≤ value ≤ 1000}; null when absent. */
     Double positiveOrNull(String field) {
         return has(field) ? checked(field, properties.get(field), false) : null;
     }
@@ -77,6 +77,11 @@ final class PropertyReader {
         double value = finiteNumber(field, node, rule);
         if (zeroAllowed ? value < 0 : value <= 0) {
             throw place.fail(field, "must be " + rule + ", got " + Texts.shown(node));
+        }
+        if (value > 0 && value < SiteLimits.MIN_LENGTH) {
+            throw place.fail(field, "must be " + (zeroAllowed ? "0 or " : "") + "at least "
+                    + Texts.metres(SiteLimits.MIN_LENGTH) + " m, got " + Texts.shown(node)
+                    + "; values are metres, so check the units");
         }
         if (value > SiteLimits.MAX_HEIGHT) {
             throw place.fail(field, "must be at most " + Texts.metres(SiteLimits.MAX_HEIGHT) + " m, got "

@@ -1,5 +1,7 @@
 package org.lpzplanner.engine.io;
 
+import org.lpzplanner.engine.model.Conductor;
+
 /**
  * Bounds beyond which input is taken to be a mistake (wrong units, a stray coordinate) rather than
  * a real site, and the fixed resolution of circles.
@@ -8,6 +10,15 @@ final class SiteLimits {
 
     /** Largest height, elevation or radius accepted, metres: taller than any building. */
     static final double MAX_HEIGHT = 1000;
+
+    /**
+     * Smallest height, size or radius other than zero, metres: a value below a centimetre is a unit
+     * mistake or noise (a rod of 1e-9 m, a rooftop circle of 1e-9 m), not a part of a building.
+     */
+    static final double MIN_LENGTH = 0.01;
+
+    /** Most vertices of one conductor, the same as a conductor drawn or typed through the app may have. */
+    static final int MAX_CONDUCTOR_POINTS = Conductor.MAX_POINTS;
 
     /** Largest east-west or north-south extent of a site, metres. */
     static final double MAX_EXTENT = 20_000;

@@ -106,6 +106,10 @@ final class WktSiteParser {
         if (!Double.isFinite(height) || height <= 0) {
             throw place.fail("height", "must be a number > 0, got " + Texts.quoted(text));
         }
+        if (height < SiteLimits.MIN_LENGTH) {
+            throw place.fail("height", "must be at least " + Texts.metres(SiteLimits.MIN_LENGTH) + " m, got " + text
+                    + "; values are metres, so check the units");
+        }
         if (height > SiteLimits.MAX_HEIGHT) {
             throw place.fail("height", "must be at most " + Texts.metres(SiteLimits.MAX_HEIGHT) + " m, got " + text
                     + "; values are metres, so check the units");

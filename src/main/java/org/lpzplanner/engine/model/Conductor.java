@@ -10,6 +10,9 @@ import org.locationtech.jts.geom.Coordinate;
  */
 public record Conductor(String id, String name, List<Coordinate> path, Double heightAboveRoof) {
 
+    /** Most vertices of one conductor, in a file and through the app alike. */
+    public static final int MAX_POINTS = 500;
+
     public Conductor {
         path = List.copyOf(path);
         if (path.size() < 2) {

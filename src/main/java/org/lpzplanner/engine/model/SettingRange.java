@@ -11,8 +11,11 @@ import java.util.Locale;
  */
 public enum SettingRange {
 
-    /** A custom sphere radius: above 0, at most 1000 m. */
-    RADIUS(0, false, 1000),
+    /**
+     * A custom sphere radius: 1 m to 1000 m. The levels' radii are 20 to 60 m; below a metre the
+     * grid needed to resolve the sphere would hold a worker for minutes and means a unit mistake.
+     */
+    RADIUS(1, true, 1000),
     /** The grid resolution: 0.05 m to 10 m. */
     RESOLUTION(0.05, true, 10);
 

@@ -428,6 +428,45 @@ class GeoJsonSiteRejectionTest {
         assertThat(e.getMessage()).contains("feature 1", "must be a number > 0, got 0");
     }
 
+    /** Sizes below a centimetre are unit mistakes or noise, whatever part they belong to. */
+    @Test
+    void heightsAndSizesBelowACentimetreAreRefused() {
+        SiteFormatException circle = rejected(local(building(),
+                feature("'kind':'rooftop-object','name':'Flue','radius':1e-9,'top':14", point(5, 5))));
+        assertThat(circle.field()).isEqualTo("radius");
+        assertThat(circle.getMessage()).contains("feature 1 (\"Flue\")", "at least 0.01 m", "got 1.0E-9", "check the units");
+
+        SiteFormatException tiny = rejected(local(structure("Flat", ",'height':1e-320", rectangle(0, 0, 5, 5))));
+        assertThat(tiny.field()).isEqualTo("height");
+        assertThat(tiny.getMessage()).contains("at least 0.01 m");
+
+        SiteFormatException rod = rejected(local(building(), feature("'kind':'rod','height':0.001", point(5, 5))));
+        assertThat(rod.field()).isEqualTo("height");
+
+        SiteFormatException clip = rejected(local(building(), feature("'kind':'conductor','heightAboveRoof':0.005",
+                lineString(new double[] {1, 1}, new double[] {9, 1}))));
+        assertThat(clip.field()).isEqualTo("heightAboveRoof");
+        assertThat(clip.getMessage()).contains("must be 0 or at least 0.01 m");
+        // a conductor lying on the roof and a one-centimetre size are fine
+        SiteReader.readGeoJson(local(building(), feature("'kind':'conductor','heightAboveRoof':0",
+                lineString(new double[] {1, 1}, new double[] {9, 1})),
+                feature("'kind':'rooftop-object','radius':0.01,'top':10.5", point(5, 5))), SOURCE);
+    }
+
+    @Test
+    void aConductorHasAtMostAsManyPointsAsTheAppAllowsWhenDrawing() {
+        double[][] points = new double[501][];
+        for (int i = 0; i < points.length; i++) {
+            points[i] = new double[] {1 + i * 0.01, 1};
+        }
+        SiteFormatException e = rejected(local(building(), feature("'kind':'conductor','name':'Zigzag','heightAboveRoof':0.2",
+                lineString(points))));
+        assertThat(e.field()).isEqualTo("geometry");
+        assertThat(e.getMessage()).contains("feature 1 (\"Zigzag\")", "501 positions", "at most 500");
+        SiteReader.readGeoJson(local(building(), feature("'kind':'conductor','heightAboveRoof':0.2",
+                lineString(java.util.Arrays.copyOf(points, 500)))), SOURCE);
+    }
+
     @Test
     void rooftopObjectNeedsItsTop() {
         SiteFormatException e = rejected(local(building(),

@@ -99,4 +99,12 @@ class WktSiteReadingTest {
         assertThat(e.field()).isEqualTo("geometry");
         assertThat(e.getMessage()).contains("encloses only 0.25 m²", "at least 1 m²");
     }
+
+    @Test
+    void heightUnderOneCentimetreIsRejected() {
+        SiteFormatException e = rejected("POLYGON ((0 0, 10 0, 10 10, 0 10, 0 0)) 1e-320\n");
+
+        assertThat(e.field()).isEqualTo("height");
+        assertThat(e.getMessage()).contains("line 1", "at least 0.01 m", "1e-320");
+    }
 }

@@ -13,12 +13,18 @@ import org.lpzplanner.engine.exposure.AnalysisOptions;
 class SettingRangeTest {
 
     @Test
-    void radiusIsAboveZeroAndAtMostOneKilometre() {
+    void radiusIsOneMetreToOneKilometreBothIncluded() {
         assertThat(SettingRange.RADIUS.contains(0)).isFalse();
-        assertThat(SettingRange.RADIUS.contains(1e-9)).isTrue();
+        assertThat(SettingRange.RADIUS.contains(1e-4)).isFalse();
+        assertThat(SettingRange.RADIUS.contains(0.999)).isFalse();
+        assertThat(SettingRange.RADIUS.contains(1)).isTrue();
+        // every level's radius, IEC 62305-3:2010 Table 2: 20, 30, 45, 60 m
+        for (double r : new double[] {20, 30, 45, 60}) {
+            assertThat(SettingRange.RADIUS.contains(r)).isTrue();
+        }
         assertThat(SettingRange.RADIUS.contains(1000)).isTrue();
         assertThat(SettingRange.RADIUS.contains(1000.001)).isFalse();
-        assertThat(SettingRange.RADIUS.rule()).isEqualTo("above 0 and at most 1000 m");
+        assertThat(SettingRange.RADIUS.rule()).isEqualTo("between 1 and 1000 m");
     }
 
     @Test
@@ -42,8 +48,8 @@ class SettingRangeTest {
     @Test
     void sphereAndAnalysisOptionsRefuseWhatTheRangesRefuse() {
         assertThat(new SphereSpec(ProtectionLevel.II, 1000).radius()).isEqualTo(1000);
-        assertThatThrownBy(() -> new SphereSpec(ProtectionLevel.II, 1000.5)).hasMessageContaining("at most 1000 m");
-        assertThatThrownBy(() -> new SphereSpec(ProtectionLevel.II, 0)).hasMessageContaining("above 0");
+        assertThatThrownBy(() -> new SphereSpec(ProtectionLevel.II, 1000.5)).hasMessageContaining("between 1 and 1000 m");
+        assertThatThrownBy(() -> new SphereSpec(ProtectionLevel.II, 0.5)).hasMessageContaining("between 1 and 1000 m");
         SphereSpec sphere = SphereSpec.of(ProtectionLevel.II);
         assertThat(AnalysisOptions.of(sphere).withResolution(0.05).resolution()).isEqualTo(0.05);
         assertThatThrownBy(() -> AnalysisOptions.of(sphere).withResolution(0.04))
