@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import org.lpzplanner.engine.model.Conductor;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
@@ -18,7 +19,7 @@ import org.lpzplanner.system.InvalidInputException;
 final class PartChecks {
 
     /** Most points one conductor may have. */
-    static final int MAX_CONDUCTOR_POINTS = 500;
+    static final int MAX_CONDUCTOR_POINTS = Conductor.MAX_POINTS;
 
     private PartChecks() {
     }
