@@ -67,6 +67,12 @@ public class SitePageController {
         return "sites/list";
     }
 
+    /** The address the upload form posts to, asked for as a page (a bookmark, a reload): the site list. */
+    @GetMapping("/sites")
+    public String sitesAddress() {
+        return "redirect:/";
+    }
+
     @PostMapping("/sites")
     public ModelAndView upload(@RequestParam(value = "file", required = false) MultipartFile file,
             @RequestParam(required = false) String name, @RequestParam(required = false) String level,

@@ -90,6 +90,12 @@ class SitePagesTest {
     }
 
     @Test
+    void theUploadAddressAskedForAsAPageLeadsToTheSiteList() throws Exception {
+        mvc.perform(get("/sites")).andExpect(status().is3xxRedirection())
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.redirectedUrl("/"));
+    }
+
+    @Test
     void uploadErrorIsShownOnThePageAndNothingIsStored() throws Exception {
         long before = sites.count();
         MockMultipartFile broken = new MockMultipartFile("file", "broken.geojson", "application/json",
