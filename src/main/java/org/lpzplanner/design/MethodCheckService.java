@@ -15,6 +15,8 @@ import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.engine.model.Structure;
+import org.lpzplanner.engine.exposure.AnalysisProgress;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.springframework.stereotype.Service;
@@ -22,15 +24,18 @@ import org.springframework.stereotype.Service;
 /**
  * Cross-checks the rolling sphere against the protective angle and mesh methods, per structure of a
  * stored site as it is now (see docs/design-checks.md): the design page's
- * table and its API. Nothing is stored.
+ * table and its API. Nothing is stored. The rolling-sphere analysis behind it runs within the
+ * instance's {@link HeavyWorkCapacity} and its time budget.
  */
 @Service
 public class MethodCheckService {
 
     private final SiteService sites;
+    private final HeavyWorkCapacity capacity;
 
-    public MethodCheckService(SiteService sites) {
+    public MethodCheckService(SiteService sites, HeavyWorkCapacity capacity) {
         this.sites = sites;
+        this.capacity = capacity;
     }
 
     /** One structure's cross-check of the rolling sphere against the angle and mesh methods. */
@@ -49,11 +54,21 @@ public class MethodCheckService {
         }
     }
 
+    /**
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came
+     *         free within the wait
+     * @throws org.lpzplanner.heavywork.HeavyWorkOverBudgetException when the analysis ran past its budget
+     */
     public List<MethodCheck> methodChecks(long siteId) {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        SphereSpec sphere = stored.sphere();
-        AnalysisResult result = ExposureAnalysis.analyze(site, AnalysisOptions.of(sphere));
+        return capacity.run("method check", () -> methodChecks(site, stored.sphere()));
+    }
+
+    private List<MethodCheck> methodChecks(Site site, SphereSpec sphere) {
+        AnalysisResult result = ExposureAnalysis.analyzeKeepingState(site, AnalysisOptions.of(sphere),
+                capacity.budgeted(AnalysisProgress.NONE)).result();
+        capacity.checkBudget();
         SiteSurface surface = SiteSurfaceBuilder.build(site);
         List<MeshFaceResult> mesh = MeshMethodCheck.check(surface, sphere.level().meshSize());
         List<MethodCheck> out = new ArrayList<>();
