@@ -154,6 +154,36 @@ public class AnalysisService {
     }
 
     /**
+     * The rolling-sphere analysis of a site as it stands ({@code model} read from {@code site}'s file),
+     * at the site's own sphere with the grid the engine chooses, as {@link #run(StoredSite)} would
+     * compute it, but not stored: for checks that need the sphere's result, such as the method checks.
+     * It starts from the analysis kept in memory for the site ({@link AnalysisStateCache}): when the
+     * site is unchanged since, every decision is taken over and nothing is computed again; otherwise
+     * the engine decides again what the change can reach, or analyses afresh, so the result is the one
+     * a fresh analysis gives. The state is kept for the next call. Runs within the instance's
+     * {@link HeavyWorkCapacity} (in the caller's place when it holds one) and its time budget.
+     *
+     * @throws InvalidInputException when the engine cannot analyse the site with its settings
+     */
+    public AnalysisResult current(StoredSite site, org.lpzplanner.engine.model.Site model) {
+        return capacity.run("analysis", () -> {
+            try {
+                AnalysisOptions options = AnalysisOptions.of(site.sphere());
+                AnalysisProgress budgeted = capacity.budgeted(AnalysisProgress.NONE);
+                Optional<AnalysisState> previous = kept.closest(site.id(), site.version());
+                AnalysisState state = previous.isPresent()
+                        ? ExposureAnalysis.update(previous.get(), model, options, budgeted)
+                        : ExposureAnalysis.analyzeKeepingState(model, options, budgeted);
+                kept.keep(site.id(), site.version(), state);
+                return state.result();
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException("site", "the analysis cannot run with these inputs: "
+                        + e.getMessage());
+            }
+        });
+    }
+
+    /**
      * The result of a revision as the API hands it out (see {@link ResultGeoJson#published}): in
      * lon/lat when the site file it analysed was in lon/lat. Revisions stored before results kept
      * the site's local origin take it from the site file stored with the revision; without one
