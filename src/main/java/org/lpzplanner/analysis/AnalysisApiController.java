@@ -64,7 +64,8 @@ public class AnalysisApiController {
             content = @Content(schema = @Schema(implementation = AnalysisView.class)))
     @ApiResponse(responseCode = "202", description = "Queued (async=true): the job, its address in Location",
             content = @Content(schema = @Schema(implementation = AnalysisJob.Snapshot.class)))
-    @ApiResponse(responseCode = "429", description = "Every analysis worker is busy and the queue is full; Retry-After says when to try again")
+    @ApiResponse(responseCode = "429", description = "Every analysis worker is busy and the queue is full, or every place for long computations is taken; Retry-After says when to try again")
+    @ApiResponse(responseCode = "503", description = "The analysis took longer than its time budget; nothing was stored; Retry-After says when to try again")
     @ApiResponse(responseCode = "400", description = "A setting cannot be used, or the analysis is too large (with a resolution that fits)")
     @ApiResponse(responseCode = "404", description = "No site with this id")
     @PostMapping

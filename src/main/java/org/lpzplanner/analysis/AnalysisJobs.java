@@ -101,7 +101,8 @@ public class AnalysisJobs {
             } catch (AnalysisCancelledException e) {
                 store.finish(job.id(), JobStore.CANCELLED, null, null, null, clock.instant());
             } catch (InvalidInputException | AnalysisTooLargeException | SiteNotFoundException
-                    | OptimisticLockingFailureException e) {
+                    | OptimisticLockingFailureException | org.lpzplanner.system.BusyException
+                    | org.lpzplanner.system.OverBudgetException e) {
                 store.finish(job.id(), JobStore.FAILED, null, null, e.getMessage(), clock.instant());
             } catch (RuntimeException e) {
                 LOG.error("analysis job {} of site {} failed", job.id(), siteId, e);

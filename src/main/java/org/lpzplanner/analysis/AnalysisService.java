@@ -19,6 +19,7 @@ import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.system.InvalidInputException;
 import org.lpzplanner.system.Settings;
 import org.springframework.stereotype.Service;
@@ -43,12 +44,12 @@ public class AnalysisService {
     private final AnalysisStateCache kept;
     private final AcceptedItemRepository accepted;
     private final AuditTrail audit;
-    private final AnalysisCapacity capacity;
+    private final HeavyWorkCapacity capacity;
     private final ParsedResults results;
 
     public AnalysisService(SiteService sites, AnalysisRepository analyses, TransactionTemplate transactions,
             Clock clock, AnalysisStateCache kept, AcceptedItemRepository accepted, AuditTrail audit,
-            AnalysisCapacity capacity, ParsedResults results) {
+            HeavyWorkCapacity capacity, ParsedResults results) {
         this.audit = audit;
         this.capacity = capacity;
         this.results = results;
@@ -81,26 +82,32 @@ public class AnalysisService {
      *
      * @throws org.lpzplanner.engine.exposure.AnalysisCancelledException when {@code progress} asked
      *         to stop; nothing is stored then
-     * @throws AnalysisBusyException when the instance is already running as many analyses as it may
-     *         and none finished within the wait (see {@link AnalysisCapacity})
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when the instance is already running as
+     *         many long computations as it may and none finished within the wait (see
+     *         {@link HeavyWorkCapacity})
+     * @throws org.lpzplanner.heavywork.HeavyWorkOverBudgetException when the analysis ran past its time
+     *         budget; nothing is stored then
      */
     public AnalysisRevision run(long siteId, String levelText, String radiusText, String resolutionText,
             AnalysisProgress progress) {
-        return capacity.run(() -> runNow(siteId, levelText, radiusText, resolutionText, progress));
+        return capacity.run("analysis", () -> runNow(siteId, levelText, radiusText, resolutionText, progress));
     }
 
     /**
      * Analyses the site as {@code site} holds it, at its own level and radius with the grid the engine
      * chooses, and stores the result as its next revision: the analysis after a change of the site.
      *
-     * @throws AnalysisBusyException when no place came free within the wait (nothing is stored)
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place came free within the wait
+     *         (nothing is stored)
+     * @throws org.lpzplanner.heavywork.HeavyWorkOverBudgetException when it ran past its time budget
+     *         (nothing is stored)
      * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException when the grid would not fit
      * @throws InvalidInputException when the engine cannot analyse the site with its settings
      * @throws org.springframework.dao.OptimisticLockingFailureException when the site changed or was
      *         deleted while the analysis ran (nothing is stored)
      */
     public AnalysisRevision run(StoredSite site) {
-        return capacity.run(() -> analyse(site, site.sphere(), null, AnalysisProgress.NONE));
+        return capacity.run("analysis", () -> analyse(site, site.sphere(), null, AnalysisProgress.NONE));
     }
 
     private AnalysisRevision runNow(long siteId, String levelText, String radiusText, String resolutionText,
@@ -117,9 +124,10 @@ public class AnalysisService {
         try {
             AnalysisOptions options = new AnalysisOptions(sphere, resolution, AnalysisOptions.DEFAULT_TOLERANCE);
             Optional<AnalysisState> previous = kept.closest(site.id(), site.version());
+            AnalysisProgress budgeted = capacity.budgeted(progress);
             AnalysisState state = previous.isPresent()
-                    ? ExposureAnalysis.update(previous.get(), document.site(), options, progress)
-                    : ExposureAnalysis.analyzeKeepingState(document.site(), options, progress);
+                    ? ExposureAnalysis.update(previous.get(), document.site(), options, budgeted)
+                    : ExposureAnalysis.analyzeKeepingState(document.site(), options, budgeted);
             kept.keep(site.id(), site.version(), state);
             result = state.result();
         } catch (IllegalArgumentException e) {
@@ -142,6 +150,36 @@ public class AnalysisService {
                     ResultGeoJson.round(sphere.radius()), revision.fullyProtected() ? "no exposed items"
                             : "exposed items remain"));
             return revision;
+        });
+    }
+
+    /**
+     * The rolling-sphere analysis of a site as it stands ({@code model} read from {@code site}'s file),
+     * at the site's own sphere with the grid the engine chooses, as {@link #run(StoredSite)} would
+     * compute it, but not stored: for checks that need the sphere's result, such as the method checks.
+     * It starts from the analysis kept in memory for the site ({@link AnalysisStateCache}): when the
+     * site is unchanged since, every decision is taken over and nothing is computed again; otherwise
+     * the engine decides again what the change can reach, or analyses afresh, so the result is the one
+     * a fresh analysis gives. The state is kept for the next call. Runs within the instance's
+     * {@link HeavyWorkCapacity} (in the caller's place when it holds one) and its time budget.
+     *
+     * @throws InvalidInputException when the engine cannot analyse the site with its settings
+     */
+    public AnalysisResult current(StoredSite site, org.lpzplanner.engine.model.Site model) {
+        return capacity.run("analysis", () -> {
+            try {
+                AnalysisOptions options = AnalysisOptions.of(site.sphere());
+                AnalysisProgress budgeted = capacity.budgeted(AnalysisProgress.NONE);
+                Optional<AnalysisState> previous = kept.closest(site.id(), site.version());
+                AnalysisState state = previous.isPresent()
+                        ? ExposureAnalysis.update(previous.get(), model, options, budgeted)
+                        : ExposureAnalysis.analyzeKeepingState(model, options, budgeted);
+                kept.keep(site.id(), site.version(), state);
+                return state.result();
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException("site", "the analysis cannot run with these inputs: "
+                        + e.getMessage());
+            }
         });
     }
 
@@ -194,20 +232,22 @@ public class AnalysisService {
 
     /**
      * Analyses a site file with the sphere and grid resolution a stored revision records, with the
-     * engine options {@link #run} uses and within this instance's {@link AnalysisCapacity}, and
+     * engine options {@link #run} uses and within this instance's {@link HeavyWorkCapacity} and its time budget, and
      * stores nothing: for revisions whose results are computed again here, such as those of an
      * imported site export. Always a fresh analysis, so the result depends on nothing but the file
      * and the settings.
      *
      * @throws InvalidInputException when the engine cannot analyse with these settings
      * @throws org.lpzplanner.engine.envelope.AnalysisTooLargeException when the grid would not fit
-     * @throws AnalysisBusyException when no place came free within the wait
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place came free within the wait
+     * @throws org.lpzplanner.heavywork.HeavyWorkOverBudgetException when it ran past its time budget
      */
     public RevisionResult analyse(SiteDocument document, SphereSpec sphere, double resolution) {
         AnalysisOptions options = options(sphere, resolution);
-        return capacity.run(() -> {
+        return capacity.run("analysis", () -> {
             try {
-                return RevisionResult.of(document, ExposureAnalysis.analyze(document.site(), options));
+                return RevisionResult.of(document, ExposureAnalysis.analyzeKeepingState(document.site(), options,
+                        capacity.budgeted(AnalysisProgress.NONE)).result());
             } catch (IllegalArgumentException e) {
                 throw new InvalidInputException("site", "the analysis cannot run with these inputs: "
                         + e.getMessage());

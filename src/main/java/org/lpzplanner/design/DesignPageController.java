@@ -45,11 +45,13 @@ public class DesignPageController {
     private final PlanPresenter plan;
     private final KeepOutAreaService keepOut;
     private final DownConductorService downConductors;
+    private final org.lpzplanner.heavywork.HeavyWorkCapacity capacity;
 
     DesignPageController(SiteService sites, AnalysisService analyses, ReviewService reviews,
             MethodCheckService methodChecks, SeparationService separations, MetalInstallationService installations,
             QuantityService quantities, PlanPresenter plan, KeepOutAreaService keepOut,
-            DownConductorService downConductors) {
+            DownConductorService downConductors, org.lpzplanner.heavywork.HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.keepOut = keepOut;
         this.downConductors = downConductors;
         this.sites = sites;
@@ -87,6 +89,13 @@ public class DesignPageController {
         }
         rate = Math.max(0, Math.min(20, rate));
         model.addAttribute("fixingsPerMetre", rate);
+        double fixings = rate;
+        // the page's checks share one place of the instance's capacity for long computations
+        capacity.run("design checks", () -> designChecks(id, fixings, model));
+        return "sites/design";
+    }
+
+    private Void designChecks(long id, double rate, Model model) {
         model.addAttribute("checks", methodChecks.methodChecks(id));
         List<DownConductorService.DownConductors> downs = downConductors.list(id);
         model.addAttribute("downConductors", downs);
@@ -102,7 +111,7 @@ public class DesignPageController {
         model.addAttribute("separations", separations.separations(id));
         model.addAttribute("installations", installations.list(id));
         model.addAttribute("quantities", quantities.quantities(id, rate));
-        return "sites/design";
+        return null;
     }
 
     /** A stored keep-out area as the design page lists it: name, area and corners written out. */

@@ -15,6 +15,7 @@ import org.lpzplanner.engine.design.Building;
 import org.lpzplanner.engine.design.DownConductorLayout;
 import org.lpzplanner.engine.design.DownConductorPlan;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteNotFoundException;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
@@ -46,8 +47,10 @@ public class DownConductorService {
     private final SiteService sites;
     private final DesignRepository store;
     private final Clock clock;
+    private final HeavyWorkCapacity capacity;
 
-    public DownConductorService(SiteService sites, DesignRepository store, Clock clock) {
+    public DownConductorService(SiteService sites, DesignRepository store, Clock clock, HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.sites = sites;
         this.store = store;
         this.clock = clock;
@@ -82,7 +85,15 @@ public class DownConductorService {
         return list(sites.document(stored).site(), stored);
     }
 
+    /**
+     * The layout of every building of the site, planned over the whole site within the instance's
+     * {@link HeavyWorkCapacity} (a save or reset that finds no place stores nothing).
+     */
     List<DownConductors> list(Site site, StoredSite stored) {
+        return capacity.run("down-conductor layout", () -> layout(site, stored));
+    }
+
+    private List<DownConductors> layout(Site site, StoredSite stored) {
         double spacing = stored.sphere().level().downConductorSpacing();
         Map<String, List<Coordinate>> edited = new LinkedHashMap<>();
         store.downConductors(stored.id()).forEach((structure, positions) -> edited.put(structure,

@@ -2,19 +2,19 @@ package org.lpzplanner.design;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.common.Formats;
 import org.lpzplanner.engine.design.AngleCoverage;
 import org.lpzplanner.engine.design.AngleMethodCheck;
 import org.lpzplanner.engine.design.MeshFaceResult;
 import org.lpzplanner.engine.design.MeshMethodCheck;
-import org.lpzplanner.engine.exposure.AnalysisOptions;
 import org.lpzplanner.engine.exposure.AnalysisResult;
-import org.lpzplanner.engine.exposure.ExposureAnalysis;
 import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.SphereSpec;
 import org.lpzplanner.engine.model.Structure;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.springframework.stereotype.Service;
@@ -22,15 +22,21 @@ import org.springframework.stereotype.Service;
 /**
  * Cross-checks the rolling sphere against the protective angle and mesh methods, per structure of a
  * stored site as it is now (see docs/design-checks.md): the design page's
- * table and its API. Nothing is stored.
+ * table and its API. Nothing is stored. The rolling-sphere result is the site's analysis as it stands
+ * ({@link AnalysisService#current}: taken over from the analysis kept in memory where the site is
+ * unchanged since), within the instance's {@link HeavyWorkCapacity} and its time budget.
  */
 @Service
 public class MethodCheckService {
 
     private final SiteService sites;
+    private final HeavyWorkCapacity capacity;
+    private final AnalysisService analyses;
 
-    public MethodCheckService(SiteService sites) {
+    public MethodCheckService(SiteService sites, HeavyWorkCapacity capacity, AnalysisService analyses) {
         this.sites = sites;
+        this.capacity = capacity;
+        this.analyses = analyses;
     }
 
     /** One structure's cross-check of the rolling sphere against the angle and mesh methods. */
@@ -49,11 +55,19 @@ public class MethodCheckService {
         }
     }
 
+    /**
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came
+     *         free within the wait
+     * @throws org.lpzplanner.heavywork.HeavyWorkOverBudgetException when the analysis ran past its budget
+     */
     public List<MethodCheck> methodChecks(long siteId) {
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        SphereSpec sphere = stored.sphere();
-        AnalysisResult result = ExposureAnalysis.analyze(site, AnalysisOptions.of(sphere));
+        return capacity.run("method check", () -> methodChecks(site, stored.sphere(),
+                analyses.current(stored, site)));
+    }
+
+    private List<MethodCheck> methodChecks(Site site, SphereSpec sphere, AnalysisResult result) {
         SiteSurface surface = SiteSurfaceBuilder.build(site);
         List<MeshFaceResult> mesh = MeshMethodCheck.check(surface, sphere.level().meshSize());
         List<MethodCheck> out = new ArrayList<>();

@@ -18,6 +18,7 @@ import org.lpzplanner.engine.design.proposal.ProposalMonitor;
 import org.lpzplanner.engine.design.proposal.ProposalOptions;
 import org.lpzplanner.engine.envelope.AnalysisTooLargeException;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.jobs.JobInstance;
 import org.lpzplanner.jobs.JobStore;
 import org.lpzplanner.jobs.LiveJob;
@@ -33,7 +34,9 @@ import tools.jackson.databind.json.JsonMapper;
  * stores each as a row of {@code background_jobs} ({@link JobStore}): progress, outcome (the
  * proposal's parts and figures as JSON) and what accepting it added. So any app instance answers a
  * poll, a cancel, an accept or its undo, also after a restart. Finished proposals are kept for a
- * day, at most {@value #KEEP} per site.
+ * day, at most {@value #KEEP} per site. A proposal takes a place of the instance's
+ * {@link HeavyWorkCapacity} while it runs and has its time budget: one that finds no place, or runs past
+ * its budget, fails saying so and may be started again.
  */
 @Component
 public class ProposalJobs {
@@ -65,7 +68,11 @@ public class ProposalJobs {
         return t;
     });
 
-    public ProposalJobs(JobStore store, JobInstance instance, Clock clock, JsonMapper json) {
+    private final HeavyWorkCapacity capacity;
+
+    public ProposalJobs(JobStore store, JobInstance instance, Clock clock, JsonMapper json,
+            HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.store = store;
         this.instance = instance;
         this.clock = clock;
@@ -114,7 +121,7 @@ public class ProposalJobs {
                 store.finish(id, JobStore.CANCELLED, null, null, null, clock.instant());
                 return;
             }
-            Proposal proposal = AirTerminationProposer.propose(site, options, new ProposalMonitor() {
+            ProposalMonitor monitor = new ProposalMonitor() {
                 @Override
                 public void progress(String stage, double fraction) {
                     live.progress(stage, fraction);
@@ -124,12 +131,15 @@ public class ProposalJobs {
                 public boolean isCancelled() {
                     return instance.cancelRequested(id);
                 }
-            });
+            };
+            Proposal proposal = capacity.run("proposal",
+                    () -> AirTerminationProposer.propose(site, options, capacity.budgeted(monitor)));
             store.finish(id, JobStore.DONE, null, json.writeValueAsString(StoredProposal.of(proposal)), null,
                     clock.instant());
         } catch (ProposalCancelledException e) {
             store.finish(id, JobStore.CANCELLED, null, null, null, clock.instant());
-        } catch (AnalysisTooLargeException | IllegalArgumentException e) {
+        } catch (AnalysisTooLargeException | IllegalArgumentException | org.lpzplanner.system.BusyException
+                | org.lpzplanner.system.OverBudgetException e) {
             store.finish(id, JobStore.FAILED, null, null, e.getMessage(), clock.instant());
         } catch (RuntimeException e) {
             LOG.error("proposal {} failed", id, e);

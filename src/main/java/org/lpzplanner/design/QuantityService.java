@@ -7,6 +7,7 @@ import org.lpzplanner.common.ReportSection;
 import org.lpzplanner.engine.design.quantities.BillOfQuantities;
 import org.lpzplanner.engine.design.quantities.QuantityTable;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
@@ -14,15 +15,18 @@ import org.springframework.stereotype.Service;
 
 /**
  * The bill of quantities of a stored site as it is: its rods and conductors and its down-conductors
- * ({@link DownConductorService}), for the design page, its CSV and any report writer.
+ * ({@link DownConductorService}), for the design page, its CSV and any report writer. Computed within
+ * the instance's {@link HeavyWorkCapacity}.
  */
 @Service
 public class QuantityService {
 
     private final SiteService sites;
     private final DownConductorService downConductors;
+    private final HeavyWorkCapacity capacity;
 
-    public QuantityService(SiteService sites, DownConductorService downConductors) {
+    public QuantityService(SiteService sites, DownConductorService downConductors, HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.sites = sites;
         this.downConductors = downConductors;
     }
@@ -34,11 +38,15 @@ public class QuantityService {
         }
         StoredSite stored = sites.get(siteId);
         Site site = sites.document(stored).site();
-        List<Coordinate> positions = new ArrayList<>();
-        for (DownConductorService.DownConductors d : downConductors.list(site, stored)) {
-            d.positions().forEach(p -> positions.add(new Coordinate(p[0], p[1])));
-        }
-        return BillOfQuantities.table(BillOfQuantities.compute(site, positions, fixingsPerMetre));
+        return capacity.run("bill of quantities", () -> {
+            List<Coordinate> positions = new ArrayList<>();
+            for (DownConductorService.DownConductors d : downConductors.list(site, stored)) {
+                d.positions().forEach(p -> positions.add(new Coordinate(p[0], p[1])));
+            }
+            QuantityTable table = BillOfQuantities.table(BillOfQuantities.compute(site, positions, fixingsPerMetre));
+            capacity.checkBudget();
+            return table;
+        });
     }
 
     /**

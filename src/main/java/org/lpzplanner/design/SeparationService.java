@@ -10,6 +10,7 @@ import org.lpzplanner.engine.design.SeparationDistance;
 import org.lpzplanner.engine.design.SeparationSurvey;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
 import org.lpzplanner.engine.model.Site;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.springframework.stereotype.Service;
@@ -17,7 +18,9 @@ import org.springframework.stereotype.Service;
 /**
  * Separation distances of a stored site (IEC 62305-3:2010 6.3) at every point of its protection
  * system, to its other parts and the metal installations stored for it, over its down-conductors
- * ({@link DownConductorService}); see docs/design-checks.md. Nothing is stored.
+ * ({@link DownConductorService}); see docs/design-checks.md. Nothing is stored. The survey runs
+ * within the instance's {@link HeavyWorkCapacity} (the engine's survey has no hook to stop it
+ * midway; the time budget is checked when it ends).
  */
 @Service
 public class SeparationService {
@@ -28,8 +31,11 @@ public class SeparationService {
     private final SiteService sites;
     private final DesignRepository store;
     private final DownConductorService downConductors;
+    private final HeavyWorkCapacity capacity;
 
-    public SeparationService(SiteService sites, DesignRepository store, DownConductorService downConductors) {
+    public SeparationService(SiteService sites, DesignRepository store, DownConductorService downConductors,
+            HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.sites = sites;
         this.store = store;
         this.downConductors = downConductors;
@@ -58,8 +64,17 @@ public class SeparationService {
         }
     }
 
+    /**
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came
+     *         free within the wait
+     */
     public List<Separation> separations(long siteId) {
         StoredSite stored = sites.get(siteId);
+        return capacity.run("separation survey", () -> separations(stored));
+    }
+
+    private List<Separation> separations(StoredSite stored) {
+        long siteId = stored.id();
         Site site = sites.document(stored).site();
         List<DesignRepository.Installation> stores = store.installations(siteId);
         List<SeparationSurvey.Installation> metals = new ArrayList<>();
@@ -70,6 +85,7 @@ public class SeparationService {
         List<SeparationSurvey.Check> checks = SeparationSurvey.survey(site, SiteSurfaceBuilder.build(site),
                 stored.sphere().level(), DownConductorService.forRoutes(downConductors.list(site, stored)), metals,
                 BONDING_LEVEL);
+        capacity.checkBudget();
         List<Separation> out = new ArrayList<>();
         int metal = 0;
         for (SeparationSurvey.Check c : checks) {

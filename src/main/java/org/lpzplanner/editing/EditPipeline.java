@@ -10,6 +10,7 @@ import org.lpzplanner.sites.SiteFiles;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.BusyException;
+import org.lpzplanner.system.OverBudgetException;
 import org.lpzplanner.system.InvalidInputException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -118,7 +119,7 @@ public class EditPipeline {
         try {
             AnalysisRevision revision = analyses.run(site);
             return AnalysisUpdate.done(revision, results.summary(revision));
-        } catch (BusyException | AnalysisTooLargeException | InvalidInputException e) {
+        } catch (BusyException | OverBudgetException | AnalysisTooLargeException | InvalidInputException e) {
             return AnalysisUpdate.pending(e.getMessage());
         } catch (OptimisticLockingFailureException e) {
             return AnalysisUpdate.pending("the site changed again while it was analysed, so that analysis was not"

@@ -32,6 +32,8 @@ public class ReportApiController {
     @ApiResponse(responseCode = "400", description = "An id is not a whole number")
     @ApiResponse(responseCode = "404", description = "No such site or revision")
     @ApiResponse(responseCode = "409", description = "The revision's site file is no longer stored")
+    @ApiResponse(responseCode = "429", description = "Every place for long computations is taken; try again after Retry-After")
+    @ApiResponse(responseCode = "503", description = "The report took longer than its time budget; try again after Retry-After")
     @GetMapping(path = "/api/sites/{siteId}/revisions/{revision}/report",
             produces = {MediaType.APPLICATION_PDF_VALUE, MediaType.APPLICATION_JSON_VALUE})
     public ResponseEntity<byte[]> report(@PathVariable long siteId, @PathVariable int revision) {

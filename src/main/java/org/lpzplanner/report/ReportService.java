@@ -14,6 +14,7 @@ import org.lpzplanner.analysis.AnalysisService;
 import org.lpzplanner.analysis.RevisionInputs;
 import org.lpzplanner.design.DesignRepository;
 import org.lpzplanner.engine.model.SphereSpec;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.keepout.KeepOutAreaService;
 import org.lpzplanner.risk.RiskService;
 import org.lpzplanner.sections.SiteCutService;
@@ -27,7 +28,8 @@ import org.springframework.stereotype.Service;
  * and name, sphere, resolution, tolerance and result, plus the acceptances of its review items, and
  * the site's saved section cuts, address and designer as stored when printed.
  * Revisions stored before inputs were kept find their file again by its SHA-256 among the site's
- * current and earlier files.
+ * current and earlier files. A PDF is made within the instance's {@link HeavyWorkCapacity}: the
+ * envelope for its sections, its separation survey and bill of quantities all run in one place.
  */
 @Service
 public class ReportService {
@@ -40,9 +42,12 @@ public class ReportService {
     private final SiteCutService cuts;
     private final Clock clock;
     private final KeepOutAreaService keepOut;
+    private final HeavyWorkCapacity capacity;
 
     public ReportService(SiteService sites, AnalysisRepository analyses, AcceptedItemRepository accepted,
-            RiskService risk, DesignRepository design, SiteCutService cuts, Clock clock, KeepOutAreaService keepOut) {
+            RiskService risk, DesignRepository design, SiteCutService cuts, Clock clock, KeepOutAreaService keepOut,
+            HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.keepOut = keepOut;
         this.sites = sites;
         this.analyses = analyses;
@@ -76,12 +81,25 @@ public class ReportService {
     /**
      * The PDF of a revision, with the site's edited down-conductors, metal installations and risk
      * estimate as they stand when printed (they belong to the site, not to the revision; the report
-     * says so and when they were read). Same exceptions as {@link #source}.
+     * says so and when they were read). Same exceptions as {@link #source}, and
+     *
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came
+     *         free within the wait
+     * @throws org.lpzplanner.heavywork.HeavyWorkOverBudgetException when the report was not done within
+     *         its time budget (checked after the report's parts are computed and after it is drawn: the
+     *         envelope and the surveys in it have no hook to stop them midway)
      */
     public byte[] pdf(long siteId, int revisionNumber) {
         ReportSource source = source(siteId, revisionNumber);
-        return PdfReportRenderer.render(ReportAssembler.assemble(source, null, storedDesign(siteId),
-                List.of(risk.reportSection(siteId, Locale.ENGLISH))));
+        StoredDesign design = storedDesign(siteId);
+        List<org.lpzplanner.common.ReportSection> appendix = List.of(risk.reportSection(siteId, Locale.ENGLISH));
+        return capacity.run("report", () -> {
+            ReportContent content = ReportAssembler.assemble(source, null, design, appendix);
+            capacity.checkBudget();
+            byte[] pdf = PdfReportRenderer.render(content);
+            capacity.checkBudget();
+            return pdf;
+        });
     }
 
     /** The site's saved section cuts as stored now (they belong to the site, not to the revision). */

@@ -19,6 +19,7 @@ import org.lpzplanner.engine.model.ProtectionLevel;
 import org.lpzplanner.engine.model.Rod;
 import org.lpzplanner.engine.model.Site;
 import org.lpzplanner.engine.model.Structure;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
 import org.lpzplanner.sites.StoredSite;
 import org.lpzplanner.system.InvalidInputException;
@@ -45,8 +46,10 @@ public final class SectionPage {
     private final SiteService sites;
     private final AnalysisService analyses;
     private final MessageSource messages;
+    private final HeavyWorkCapacity capacity;
 
-    SectionPage(SiteService sites, AnalysisService analyses, MessageSource messages) {
+    SectionPage(SiteService sites, AnalysisService analyses, MessageSource messages, HeavyWorkCapacity capacity) {
+        this.capacity = capacity;
         this.sites = sites;
         this.analyses = analyses;
         this.messages = messages;
@@ -56,6 +59,8 @@ public final class SectionPage {
      * @param texts x1, y1, x2, y2 as typed; all blank or missing for the suggested cut
      * @throws SiteNotFoundException when no site has this id
      * @throws InvalidInputException when a number cannot be read or the cut is too short or too long
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came
+     *         free within the wait (the envelope is computed within the instance's capacity)
      */
     Map<String, Object> attributes(long id, String[] texts, Locale locale) {
         StoredSite site = sites.get(id);
@@ -66,8 +71,12 @@ public final class SectionPage {
         SiteSurface surface = SiteSurfaceBuilder.build(document.site());
         double[] cut = allBlank(texts) ? suggestedCut(document.site(), radius) : cut(texts);
         double resolution = latest == null ? ResolutionChoice.choose(surface, radius) : latest.resolution();
-        EnvelopeField field = EnvelopeOp.compute(surface, radius, resolution);
-        SiteSection section = SiteSection.cut(surface, field, cut[0], cut[1], cut[2], cut[3]);
+        SiteSection section = capacity.run("section", () -> {
+            // the envelope has no hook to stop it midway: the budget is checked when it is done
+            EnvelopeField field = EnvelopeOp.compute(surface, radius, resolution);
+            capacity.checkBudget();
+            return SiteSection.cut(surface, field, cut[0], cut[1], cut[2], cut[3]);
+        });
         Map<String, Object> model = new LinkedHashMap<>();
         model.put("site", site);
         model.put("method", ResultGeoJson.METHOD);

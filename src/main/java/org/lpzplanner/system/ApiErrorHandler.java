@@ -34,7 +34,8 @@ import org.springframework.web.multipart.MultipartException;
  * {@code suggestedResolution}), 400 for a body that is not readable JSON, 404 for anything not stored
  * ({@link NotFoundException}), 409 for concurrent changes and {@link ConflictException}s, 413 for
  * oversized uploads and JSON bodies, 429 with {@code Retry-After} and {@code retryAfterSeconds} when
- * the workers are all busy ({@link BusyException}), 500 with a plain message otherwise. It knows the
+ * the workers are all busy ({@link BusyException}), 503 with {@code Retry-After} and
+ * {@code retryAfterSeconds} when a computation ran past its time budget ({@link OverBudgetException}), 500 with a plain message otherwise. It knows the
  * features only through these base types.
  */
 @RestControllerAdvice(annotations = RestController.class)
@@ -125,6 +126,14 @@ public class ApiErrorHandler {
     @ExceptionHandler(BusyException.class)
     ResponseEntity<ProblemDetail> busy(BusyException e) {
         ProblemDetail problem = ApiProblem.BUSY.with(e.getMessage());
+        problem.setProperty("retryAfterSeconds", e.retryAfterSeconds());
+        return ResponseEntity.status(problem.getStatus()).header("Retry-After", Integer.toString(e.retryAfterSeconds()))
+                .contentType(org.springframework.http.MediaType.APPLICATION_PROBLEM_JSON).body(problem);
+    }
+
+    @ExceptionHandler(OverBudgetException.class)
+    ResponseEntity<ProblemDetail> overBudget(OverBudgetException e) {
+        ProblemDetail problem = ApiProblem.OVER_BUDGET.with(e.getMessage());
         problem.setProperty("retryAfterSeconds", e.retryAfterSeconds());
         return ResponseEntity.status(problem.getStatus()).header("Retry-After", Integer.toString(e.retryAfterSeconds()))
                 .contentType(org.springframework.http.MediaType.APPLICATION_PROBLEM_JSON).body(problem);

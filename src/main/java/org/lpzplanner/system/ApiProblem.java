@@ -45,6 +45,11 @@ public enum ApiProblem {
     /** Every worker is busy; try again after {@code retryAfterSeconds} (also the Retry-After header). */
     BUSY("busy", "Busy", HttpStatus.TOO_MANY_REQUESTS),
     /**
+     * A long computation ran past its time budget and was stopped; nothing was stored. Try again after
+     * {@code retryAfterSeconds} (also the Retry-After header).
+     */
+    OVER_BUDGET("over-budget", "Time budget passed", HttpStatus.SERVICE_UNAVAILABLE),
+    /**
      * The request does not fit the endpoint (wrong method, media type or a missing parameter); the
      * status says which.
      */

@@ -14,7 +14,8 @@ import org.springframework.web.servlet.ModelAndView;
 /**
  * Failures of the pages marked {@link SitePages}, shown as pages: anything not stored gives a 404
  * page with the reason, unusable input or an analysis too large to run a 400 page with the reason,
- * busy workers a 429 page with {@code Retry-After}, an upload over the size limit the 413 page
+ * busy workers a 429 page with {@code Retry-After}, a computation stopped after its time budget a
+ * 503 page with {@code Retry-After}, an upload over the size limit the 413 page
  * saying the limit. A feature may answer its own not-found cases first with an advice of higher
  * precedence (a site that does not exist has a page of its own).
  */
@@ -42,6 +43,12 @@ public class PageErrors {
     ModelAndView busy(BusyException e, HttpServletResponse response) {
         response.setHeader("Retry-After", Integer.toString(e.retryAfterSeconds()));
         return reasonPage(HttpStatus.TOO_MANY_REQUESTS, e.getMessage());
+    }
+
+    @ExceptionHandler(OverBudgetException.class)
+    ModelAndView overBudget(OverBudgetException e, HttpServletResponse response) {
+        response.setHeader("Retry-After", Integer.toString(e.retryAfterSeconds()));
+        return reasonPage(HttpStatus.SERVICE_UNAVAILABLE, e.getMessage());
     }
 
     @ExceptionHandler(ConflictException.class)

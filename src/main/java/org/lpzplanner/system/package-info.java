@@ -6,6 +6,6 @@
  *
  * <p>Rules of the package: knows no feature (ArchitectureTest); features reach it only through the
  * base types {@link org.lpzplanner.system.NotFoundException}, {@link org.lpzplanner.system.ConflictException},
- * {@link org.lpzplanner.system.BusyException} and {@link org.lpzplanner.system.InvalidInputException}.
+ * {@link org.lpzplanner.system.BusyException}, {@link org.lpzplanner.system.OverBudgetException} and {@link org.lpzplanner.system.InvalidInputException}.
  */
 package org.lpzplanner.system;

@@ -70,7 +70,7 @@ class RevisionReanalysis {
     /**
      * @throws org.lpzplanner.engine.io.SiteFormatException when the site's current file is not a valid site
      * @throws InvalidInputException naming the member and revision (or earlier file) at fault
-     * @throws org.lpzplanner.analysis.AnalysisBusyException when no analysis place came free in time
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came free in time
      */
     Outcome reanalyse(SiteArchive archive) {
         List<ArchiveSiteFiles.RevisionFile> files = ArchiveSiteFiles.read(archive);

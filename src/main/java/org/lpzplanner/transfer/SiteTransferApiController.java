@@ -55,7 +55,8 @@ public class SiteTransferApiController {
     @ApiResponse(responseCode = "201", description = "Stored; Location names the new site")
     @ApiResponse(responseCode = "400", description = "Not a usable site export; the member at fault is named (for a revision's site file, checksum or settings, with the revision's number)")
     @ApiResponse(responseCode = "413", description = "The file is larger than the upload limit")
-    @ApiResponse(responseCode = "429", description = "Every analysis place is taken; try again after Retry-After seconds")
+    @ApiResponse(responseCode = "429", description = "Every place for long computations is taken; try again after Retry-After seconds")
+    @ApiResponse(responseCode = "503", description = "A revision's analysis took longer than its time budget; nothing was stored; try again after Retry-After seconds")
     @PostMapping(value = "/api/sites/import", consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     public ResponseEntity<ImportedSite> importSite(@RequestParam("file") MultipartFile file) throws IOException {
         long id = transfers.importSite(file.getBytes());

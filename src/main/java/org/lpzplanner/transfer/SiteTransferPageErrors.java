@@ -1,7 +1,7 @@
 package org.lpzplanner.transfer;
 
 import jakarta.servlet.http.HttpServletResponse;
-import org.lpzplanner.analysis.AnalysisBusyException;
+import org.lpzplanner.system.BusyException;
 import org.lpzplanner.system.UploadLimit;
 import org.springframework.http.HttpStatus;
 import org.springframework.web.bind.annotation.ControllerAdvice;
@@ -27,8 +27,8 @@ public class SiteTransferPageErrors {
         return uploadLimit.refusedPage();
     }
 
-    @ExceptionHandler(AnalysisBusyException.class)
-    ModelAndView busy(AnalysisBusyException e, HttpServletResponse response) {
+    @ExceptionHandler(BusyException.class)
+    ModelAndView busy(BusyException e, HttpServletResponse response) {
         response.setHeader("Retry-After", Integer.toString(e.retryAfterSeconds()));
         ModelAndView page = new ModelAndView("sites/import-failed", HttpStatus.TOO_MANY_REQUESTS);
         page.addObject("reason", e.getMessage());

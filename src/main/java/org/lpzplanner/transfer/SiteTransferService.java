@@ -55,7 +55,7 @@ public class SiteTransferService {
      * @throws InvalidInputException when the file is not a usable site export, naming the member
      *         (and for a revision's file or settings, the revision)
      * @throws SiteFormatException   when the site file inside it is not a valid site
-     * @throws org.lpzplanner.analysis.AnalysisBusyException when no analysis place came free in time
+     * @throws org.lpzplanner.heavywork.HeavyWorkBusyException when no place for long computations came free in time
      */
     public long importSite(byte[] content) {
         RevisionReanalysis.Outcome checked = reanalysis.reanalyse(SiteArchiveCodec.read(content));

@@ -43,7 +43,7 @@ class AnalysisJobsTest {
 
         SlowAnalyses() {
             super(null, null, null, Clock.systemUTC(), new AnalysisStateCache(0, 0), null, null,
-                    new AnalysisCapacity(1, 0, 5), new ParsedResults(0, org.lpzplanner.engine.io.Json.MAPPER));
+                    new org.lpzplanner.heavywork.HeavyWorkCapacity(1, 0, 5), new ParsedResults(0, org.lpzplanner.engine.io.Json.MAPPER));
         }
 
         @Override

@@ -12,6 +12,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.SignedIn;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.mock.web.MockMultipartFile;
@@ -34,7 +35,7 @@ class BusyAnswersTest {
     @Autowired
     MockMvc mvc;
     @Autowired
-    AnalysisCapacity capacity;
+    HeavyWorkCapacity capacity;
     @Autowired
     SiteService sites;
     @Autowired
@@ -46,7 +47,7 @@ class BusyAnswersTest {
                 null).id();
         CountDownLatch holding = new CountDownLatch(1);
         CountDownLatch release = new CountDownLatch(1);
-        Thread holder = new Thread(() -> capacity.run(() -> {
+        Thread holder = new Thread(() -> capacity.run("analysis", () -> {
             holding.countDown();
             try {
                 release.await(30, TimeUnit.SECONDS);
@@ -82,7 +83,7 @@ class BusyAnswersTest {
         long stored = sites.list().size();
         CountDownLatch holding = new CountDownLatch(1);
         CountDownLatch release = new CountDownLatch(1);
-        Thread holder = new Thread(() -> capacity.run(() -> {
+        Thread holder = new Thread(() -> capacity.run("analysis", () -> {
             holding.countDown();
             try {
                 release.await(30, TimeUnit.SECONDS);

@@ -9,7 +9,7 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
-import org.lpzplanner.analysis.AnalysisCapacity;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.engine.model.Rod;
 import org.lpzplanner.sites.SiteService;
@@ -33,7 +33,7 @@ class PendingAnalysisBrowserTest extends BrowserTestBase {
     @Autowired
     EditPipeline edits;
     @Autowired
-    AnalysisCapacity capacity;
+    HeavyWorkCapacity capacity;
 
     private CountDownLatch release;
     private Thread holder;
@@ -42,7 +42,7 @@ class PendingAnalysisBrowserTest extends BrowserTestBase {
         CountDownLatch holding = new CountDownLatch(1);
         CountDownLatch release = new CountDownLatch(1);
         this.release = release;
-        holder = new Thread(() -> capacity.run(() -> {
+        holder = new Thread(() -> capacity.run("analysis", () -> {
             holding.countDown();
             try {
                 release.await(120, TimeUnit.SECONDS);

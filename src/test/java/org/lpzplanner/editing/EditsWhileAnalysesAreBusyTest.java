@@ -17,7 +17,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.SignedIn;
-import org.lpzplanner.analysis.AnalysisCapacity;
+import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.sites.SampleFiles;
@@ -50,7 +50,7 @@ class EditsWhileAnalysesAreBusyTest {
     @Autowired
     MockMvc mvc;
     @Autowired
-    AnalysisCapacity capacity;
+    HeavyWorkCapacity capacity;
     @Autowired
     SiteService sites;
     @Autowired
@@ -67,7 +67,7 @@ class EditsWhileAnalysesAreBusyTest {
         CountDownLatch holding = new CountDownLatch(1);
         CountDownLatch release = new CountDownLatch(1);
         this.release = release;
-        holder = new Thread(() -> capacity.run(() -> {
+        holder = new Thread(() -> capacity.run("analysis", () -> {
             holding.countDown();
             try {
                 release.await(60, TimeUnit.SECONDS);

@@ -71,7 +71,7 @@ class ApiDocsTest {
         assertThat(doc.path("info").path("description").asString()).contains("licensed");
         hasResponses(doc, "/api/sites", "get", List.of("200"));
         hasResponses(doc, "/api/sites", "post", List.of("201", "400", "413"));
-        hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "202", "400", "404", "429"));
+        hasResponses(doc, "/api/sites/{siteId}/analyses", "post", List.of("201", "202", "400", "404", "429", "503"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "get", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{siteId}/analyses/jobs/{jobId}", "delete", List.of("200", "404"));
         hasResponses(doc, "/api/sites/{id}/conductors", "post", List.of("201", "400", "404", "409", "413"));
@@ -92,8 +92,8 @@ class ApiDocsTest {
         hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "patch", List.of("200", "400", "403", "404", "413"));
         hasResponses(doc, "/api/sites/{id}/keep-out-areas/{areaId}", "delete", List.of("204", "403", "404"));
         hasResponses(doc, "/api/sites/{siteId}/revisions/{revision}/report", "get",
-                List.of("200", "400", "404", "409"));
-        hasResponses(doc, "/api/sites/import", "post", List.of("201", "400", "413", "429"));
+                List.of("200", "400", "404", "409", "429", "503"));
+        hasResponses(doc, "/api/sites/import", "post", List.of("201", "400", "413", "429", "503"));
 
         assertThat(doc.path("tags").findValuesAsString("name")).containsExactlyInAnyOrder("Sites", "Analyses",
                 "Review", "Air-termination", "Risk", "Report", "Design");

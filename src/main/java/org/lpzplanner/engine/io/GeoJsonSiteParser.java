@@ -43,6 +43,7 @@ final class GeoJsonSiteParser {
         for (int i = 0; i < features.size(); i++) {
             raw.add(reader.read(features.get(i), i));
         }
+        checkSize(raw);
         DuplicateFeatures.reject(raw);
         List<String> ids = FeatureIds.assign(raw);
         LocalProjection projection = null;
@@ -99,6 +100,23 @@ final class GeoJsonSiteParser {
         }
         SiteExtent.check(source, parts, extentAdvice);
         return new Site(name, structures, objects, rods, conductors);
+    }
+
+    /** The limits per site, counted on the features as read, before they are checked one by one. */
+    private void checkSize(List<RawFeature> raw) {
+        long structures = 0;
+        long parts = 0;
+        long vertices = 0;
+        for (RawFeature f : raw) {
+            switch (f.kind()) {
+                case STRUCTURE -> structures++;
+                case ROD, CONDUCTOR -> parts++;
+                default -> {
+                }
+            }
+            vertices += f.geometry() == null ? 0 : f.geometry().getNumPoints();
+        }
+        SiteSize.check(source, "features", structures, parts, vertices);
     }
 
     private JsonNode parseJson(String text) {

@@ -8,6 +8,22 @@ import org.lpzplanner.engine.model.Conductor;
  */
 final class SiteLimits {
 
+    /**
+     * Most structures in one site: 25 times a 200-building district. More is a city, not a site;
+     * such a file is split into sites analysed one by one.
+     */
+    static final int MAX_STRUCTURES = 5_000;
+
+    /** Most air-termination parts (rods and conductors together) in one site. */
+    static final int MAX_PARTS = 5_000;
+
+    /**
+     * Most vertices of all geometries of one site together (every position of every ring, line and
+     * point as written, closing positions included): a 200-building district has about 1,000, and the
+     * 10 MB upload limit holds about 250,000 positions.
+     */
+    static final int MAX_VERTICES = 200_000;
+
     /** Largest height, elevation or radius accepted, metres: taller than any building. */
     static final double MAX_HEIGHT = 1000;
 

@@ -34,6 +34,11 @@ final class WktSiteParser {
         List<SiteExtent.Part> parts = new ArrayList<>();
         java.util.Map<String, LinePlace> outlines = new java.util.HashMap<>();
         String[] lines = text.split("\\R", -1);
+        long written = java.util.Arrays.stream(lines).map(String::strip)
+                .filter(l -> !l.isEmpty() && !l.startsWith("#")).count();
+        // one structure per line: the count is known before any line is read
+        SiteSize.check(source, "lines", written, 0, 0);
+        long vertices = 0;
         for (int i = 0; i < lines.length; i++) {
             String line = lines[i].strip();
             if (line.isEmpty() || line.startsWith("#")) {
@@ -47,6 +52,8 @@ final class WktSiteParser {
                 throw place.fail("geometry", "repeats the outline of " + earlier.label() + "; remove one of them");
             }
             structures.add(structure);
+            vertices += structure.footprint().getNumPoints();
+            SiteSize.check(source, "lines", structures.size(), 0, vertices);
             parts.add(new SiteExtent.Part(place, structure.footprint().getEnvelopeInternal()));
         }
         if (structures.isEmpty()) {
