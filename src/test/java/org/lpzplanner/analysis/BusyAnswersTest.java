@@ -8,9 +8,8 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.heavywork.HeldPlace;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.heavywork.HeavyWorkCapacity;
 import org.lpzplanner.sites.SiteService;
@@ -45,29 +44,13 @@ class BusyAnswersTest {
     void aFullInstanceAnswers429WithRetryAfterAndStoresNothing() throws Exception {
         long id = sites.create("yard.wkt", "POLYGON ((0 0, 12 0, 12 8, 0 8, 0 0)) 6".getBytes(), "Busy yard", null,
                 null).id();
-        CountDownLatch holding = new CountDownLatch(1);
-        CountDownLatch release = new CountDownLatch(1);
-        Thread holder = new Thread(() -> capacity.run("analysis", () -> {
-            holding.countDown();
-            try {
-                release.await(30, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            return null;
-        }));
-        holder.start();
-        try {
-            assertThat(holding.await(10, TimeUnit.SECONDS)).isTrue();
+        try (HeldPlace held = HeldPlace.take(capacity)) {
             mvc.perform(post("/api/sites/{id}/analyses", id)).andExpect(status().isTooManyRequests())
                     .andExpect(header().string("Retry-After", "7"))
                     .andExpect(jsonPath("$.error").value(org.hamcrest.Matchers.containsString("busy")));
             mvc.perform(post("/sites/{id}/analyses", id)).andExpect(status().isTooManyRequests())
                     .andExpect(header().string("Retry-After", "7"));
             assertThat(revisions.latest(id)).isEmpty();
-        } finally {
-            release.countDown();
-            holder.join(10_000);
         }
         mvc.perform(post("/api/sites/{id}/analyses", id)).andExpect(status().isCreated());
         mvc.perform(get("/api/sites/{id}/analyses/latest", id)).andExpect(status().isOk());
@@ -81,20 +64,7 @@ class BusyAnswersTest {
         byte[] export = mvc.perform(get("/api/sites/{id}/export", id)).andExpect(status().isOk()).andReturn()
                 .getResponse().getContentAsByteArray();
         long stored = sites.list().size();
-        CountDownLatch holding = new CountDownLatch(1);
-        CountDownLatch release = new CountDownLatch(1);
-        Thread holder = new Thread(() -> capacity.run("analysis", () -> {
-            holding.countDown();
-            try {
-                release.await(30, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            return null;
-        }));
-        holder.start();
-        try {
-            assertThat(holding.await(10, TimeUnit.SECONDS)).isTrue();
+        try (HeldPlace held = HeldPlace.take(capacity)) {
             mvc.perform(multipart("/api/sites/import").file(new MockMultipartFile("file", "yard.site-export.json",
                             "application/json", export)))
                     .andExpect(status().isTooManyRequests()).andExpect(header().string("Retry-After", "7"))
@@ -103,9 +73,6 @@ class BusyAnswersTest {
                             "application/json", export)))
                     .andExpect(status().isTooManyRequests()).andExpect(header().string("Retry-After", "7"));
             assertThat(sites.list()).hasSize((int) stored);
-        } finally {
-            release.countDown();
-            holder.join(10_000);
         }
         mvc.perform(multipart("/api/sites/import").file(new MockMultipartFile("file", "yard.site-export.json",
                 "application/json", export))).andExpect(status().isCreated());

@@ -5,11 +5,10 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.heavywork.HeavyWorkCapacity;
+import org.lpzplanner.heavywork.HeldPlace;
 import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.engine.model.Rod;
 import org.lpzplanner.sites.SiteService;
@@ -35,31 +34,17 @@ class PendingAnalysisBrowserTest extends BrowserTestBase {
     @Autowired
     HeavyWorkCapacity capacity;
 
-    private CountDownLatch release;
-    private Thread holder;
+    private HeldPlace held;
 
     private void takeTheOnlyAnalysisPlace() throws InterruptedException {
-        CountDownLatch holding = new CountDownLatch(1);
-        CountDownLatch release = new CountDownLatch(1);
-        this.release = release;
-        holder = new Thread(() -> capacity.run("analysis", () -> {
-            holding.countDown();
-            try {
-                release.await(120, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            return null;
-        }));
-        holder.start();
-        assertThat(holding.await(10, TimeUnit.SECONDS)).isTrue();
+        held = HeldPlace.take(capacity);
     }
 
     @AfterEach
     void freeThePlace() throws InterruptedException {
-        if (release != null) {
-            release.countDown();
-            holder.join(10_000);
+        if (held != null) {
+            held.close();
+            held = null;
         }
     }
 
@@ -105,7 +90,6 @@ class PendingAnalysisBrowserTest extends BrowserTestBase {
 
         // with a place free again, redoing it is analysed and the plan shows the result
         freeThePlace();
-        release = null;
         browser.findElement(By.id("redo-change")).click();
         waitUpTo(30).until(b -> editorStatus().startsWith("Change redone; the site was analysed again"));
         assertThat(storedRods(id)).hasSize(1);

@@ -11,13 +11,12 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import jakarta.servlet.http.Cookie;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.heavywork.HeavyWorkCapacity;
+import org.lpzplanner.heavywork.HeldPlace;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.audit.AuditTrail;
 import org.lpzplanner.sites.SampleFiles;
@@ -58,32 +57,17 @@ class EditsWhileAnalysesAreBusyTest {
     @Autowired
     AuditTrail audit;
 
-    private CountDownLatch release;
-    private Thread holder;
+    private HeldPlace held;
 
     /** Takes the instance's only analysis place until {@link #freeThePlace}. */
     @BeforeEach
     void takeTheOnlyAnalysisPlace() throws InterruptedException {
-        CountDownLatch holding = new CountDownLatch(1);
-        CountDownLatch release = new CountDownLatch(1);
-        this.release = release;
-        holder = new Thread(() -> capacity.run("analysis", () -> {
-            holding.countDown();
-            try {
-                release.await(60, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            return null;
-        }));
-        holder.start();
-        assertThat(holding.await(10, TimeUnit.SECONDS)).isTrue();
+        held = HeldPlace.take(capacity);
     }
 
     @AfterEach
     void freeThePlace() throws InterruptedException {
-        release.countDown();
-        holder.join(10_000);
+        held.close();
     }
 
     private JsonNode send(RequestBuilder request, int status) throws Exception {

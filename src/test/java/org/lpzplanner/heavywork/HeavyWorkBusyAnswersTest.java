@@ -7,8 +7,6 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import java.util.List;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import org.hamcrest.Matchers;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
@@ -44,14 +42,13 @@ class HeavyWorkBusyAnswersTest {
     @Autowired
     AnalysisService analyses;
 
-    private CountDownLatch release;
-    private Thread holder;
+    private HeldPlace held;
 
     @AfterEach
     void freeThePlace() throws InterruptedException {
-        if (release != null) {
-            release.countDown();
-            holder.join(10_000);
+        if (held != null) {
+            held.close();
+            held = null;
         }
     }
 
@@ -74,7 +71,6 @@ class HeavyWorkBusyAnswersTest {
                             .string(Matchers.containsString("try again in 7 s")));
         }
         freeThePlace();
-        release = null;
         for (String path : List.of("/api/sites/{id}/method-checks", "/api/sites/{id}/separation-distances",
                 "/api/sites/{id}/down-conductors", "/api/sites/{id}/quantities", "/api/sites/{id}/revisions/1/report",
                 "/sites/{id}/design", "/sites/{id}/section")) {
@@ -105,19 +101,6 @@ class HeavyWorkBusyAnswersTest {
 
     /** Takes the instance's only place on another thread until the test ends. */
     private void takeTheOnlyPlace() throws InterruptedException {
-        CountDownLatch holding = new CountDownLatch(1);
-        CountDownLatch release = new CountDownLatch(1);
-        this.release = release;
-        holder = new Thread(() -> capacity.run("analysis", () -> {
-            holding.countDown();
-            try {
-                release.await(60, TimeUnit.SECONDS);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-            }
-            return null;
-        }));
-        holder.start();
-        assertThat(holding.await(10, TimeUnit.SECONDS)).isTrue();
+        held = HeldPlace.take(capacity);
     }
 }
