@@ -4,7 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
-import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
@@ -14,6 +13,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Coordinate;
+import org.lpzplanner.sites.Uploads;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.audit.AuditEvent;
 import org.lpzplanner.audit.AuditTrail;
@@ -47,9 +47,7 @@ class ConductorApiTest {
     AuditTrail audit;
 
     private long upload(MockMultipartFile file) throws Exception {
-        String body = mvc.perform(multipart("/api/sites").file(file).param("level", "II"))
-                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
-        long id = JSON.readTree(body).path("id").asLong();
+        long id = Uploads.throughApi(mvc, file, "II");
         mvc.perform(post("/api/sites/" + id + "/analyses")).andExpect(status().isCreated());
         return id;
     }

@@ -5,7 +5,6 @@ import static org.assertj.core.api.Assertions.within;
 import static org.hamcrest.Matchers.containsString;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
-import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
@@ -13,6 +12,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.Uploads;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.engine.model.Rod;
@@ -46,9 +46,7 @@ class RodApiTest {
     AnalysisRepository analyses;
 
     private long upload(MockMultipartFile file) throws Exception {
-        String body = mvc.perform(multipart("/api/sites").file(file).param("level", "II"))
-                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
-        return JSON.readTree(body).path("id").asLong();
+        return Uploads.throughApi(mvc, file, "II");
     }
 
     private double exposedRoofAfterAnalysis(long id) throws Exception {

@@ -1,5 +1,7 @@
 package org.lpzplanner.analysis;
 
+import org.lpzplanner.sites.SampleFiles;
+import org.lpzplanner.sites.Uploads;
 import org.lpzplanner.accounts.SignedIn;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
@@ -10,8 +12,6 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -39,11 +39,7 @@ class AnalysisJobApiTest {
     org.springframework.jdbc.core.simple.JdbcClient jdbc;
 
     private long upload() throws Exception {
-        byte[] file = Files.readAllBytes(Path.of("sample-sites/harbour-warehouse.geojson"));
-        String body = mvc.perform(multipart("/api/sites").file(new MockMultipartFile("file", "harbour.geojson",
-                "application/geo+json", file)).param("level", "III")).andExpect(status().isCreated())
-                .andReturn().getResponse().getContentAsString();
-        return JSON.readTree(body).path("id").asLong();
+        return Uploads.throughApi(mvc, SampleFiles.sample("harbour-warehouse.geojson"), "III");
     }
 
     @Test

@@ -4,20 +4,18 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
-import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.put;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.Uploads;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.sites.SiteService;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
-import org.springframework.mock.web.MockMultipartFile;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.RequestBuilder;
 import tools.jackson.databind.JsonNode;
@@ -67,10 +65,7 @@ class DesignApiTest {
     }
 
     private long upload(String file, String level) throws Exception {
-        String body = mvc.perform(multipart("/api/sites").file(new MockMultipartFile("file", "block.geojson",
-                "application/geo+json", file.getBytes(StandardCharsets.UTF_8))).param("level", level))
-                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
-        return JSON.readTree(body).path("id").asLong();
+        return Uploads.throughApi(mvc, Uploads.geoJson("block.geojson", file), level);
     }
 
     private JsonNode send(RequestBuilder request, int status) throws Exception {

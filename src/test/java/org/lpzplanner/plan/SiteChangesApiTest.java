@@ -4,7 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.hamcrest.Matchers.containsString;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
-import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.patch;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
@@ -12,6 +11,7 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 
 import java.nio.charset.StandardCharsets;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.Uploads;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.analysis.AnalysisRepository;
 import org.lpzplanner.sites.SampleFiles;
@@ -42,9 +42,7 @@ class SiteChangesApiTest {
     AnalysisRepository analyses;
 
     private long upload(MockMultipartFile file) throws Exception {
-        String body = mvc.perform(multipart("/api/sites").file(file).param("level", "II"))
-                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
-        return JSON.readTree(body).path("id").asLong();
+        return Uploads.throughApi(mvc, file, "II");
     }
 
     private static String body(String json) {

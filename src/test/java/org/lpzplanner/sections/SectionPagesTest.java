@@ -3,7 +3,6 @@ package org.lpzplanner.sections;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
-import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 import java.nio.charset.StandardCharsets;
@@ -12,6 +11,7 @@ import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
+import org.lpzplanner.sites.Uploads;
 import org.lpzplanner.accounts.SignedIn;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.sites.SampleFiles;
@@ -44,9 +44,7 @@ class SectionPagesTest {
     MockMvc mvc;
 
     private long upload(MockMultipartFile file, String name) throws Exception {
-        String location = mvc.perform(multipart("/sites").file(file).param("name", name).param("level", "II"))
-                .andExpect(status().is3xxRedirection()).andReturn().getResponse().getRedirectedUrl();
-        return Long.parseLong(location.substring(location.lastIndexOf('/') + 1));
+        return Uploads.throughPage(mvc, file, name, "II");
     }
 
     private String page(String url, int status) throws Exception {
