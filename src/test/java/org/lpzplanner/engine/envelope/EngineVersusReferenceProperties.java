@@ -5,6 +5,8 @@ import java.util.Locale;
 import java.util.stream.LongStream;
 import org.assertj.core.api.SoftAssertions;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.api.parallel.Execution;
+import org.junit.jupiter.api.parallel.ExecutionMode;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.lpzplanner.engine.reference.ReferenceEnvelope;
 
@@ -24,6 +26,7 @@ import org.lpzplanner.engine.reference.ReferenceEnvelope;
  *       stated excess plus the engine's rounding).
  * </ul>
  */
+@Execution(ExecutionMode.CONCURRENT) // independent cases over immutable inputs: they share the cores
 class EngineVersusReferenceProperties {
 
     private static final int TRIES = 30;

@@ -7,6 +7,8 @@ import java.util.Random;
 import java.util.stream.LongStream;
 import org.assertj.core.api.SoftAssertions;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.api.parallel.Execution;
+import org.junit.jupiter.api.parallel.ExecutionMode;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.lpzplanner.engine.model.Rod;
 
@@ -21,6 +23,7 @@ import org.lpzplanner.engine.model.Rod;
  * value lies in [E − τ, E] by contract (τ = {@value SceneCases#TOLERANCE} m), so one value may be
  * up to τ low while the other is exact: the checks allow 2τ plus 1e-6 m rounding.
  */
+@Execution(ExecutionMode.CONCURRENT) // independent cases over immutable inputs: they share the cores
 class EnvelopeMonotonicityProperties {
 
     private static final int TRIES = 30;

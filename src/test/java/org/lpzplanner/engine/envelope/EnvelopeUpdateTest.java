@@ -7,6 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.api.parallel.Execution;
+import org.junit.jupiter.api.parallel.ExecutionMode;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.lpzplanner.engine.geom.SiteSurface;
 import org.lpzplanner.engine.geom.SiteSurfaceBuilder;
@@ -19,6 +21,7 @@ import org.lpzplanner.engine.model.Site;
  * as computing it afresh: D changes only within R of the change and E only within 2R (rolling
  * sphere geometry), and within those windows the same values are computed from the same inputs.
  */
+@Execution(ExecutionMode.CONCURRENT) // independent cases over immutable inputs: they share the cores
 class EnvelopeUpdateTest {
 
     private static final Site CAMPUS = SiteReader.read(Path.of("sample-sites/brookfield-campus.geojson")).site();

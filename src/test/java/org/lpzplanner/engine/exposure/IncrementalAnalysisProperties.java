@@ -8,6 +8,8 @@ import java.util.List;
 import java.util.Random;
 import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.api.parallel.Execution;
+import org.junit.jupiter.api.parallel.ExecutionMode;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.locationtech.jts.geom.Coordinate;
@@ -27,6 +29,7 @@ import org.lpzplanner.engine.model.Structure;
  * that intercept and the protected ground. The edits are random (fixed seeds; replay one with
  * {@code -Dlpz.seed=N}): rods moved, added and removed, conductors added and removed.
  */
+@Execution(ExecutionMode.CONCURRENT) // independent cases over immutable inputs: they share the cores
 class IncrementalAnalysisProperties {
 
     static Stream<Arguments> cases() {

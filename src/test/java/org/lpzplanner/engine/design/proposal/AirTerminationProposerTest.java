@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Random;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.parallel.Execution;
+import org.junit.jupiter.api.parallel.ExecutionMode;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -31,6 +33,7 @@ import org.lpzplanner.engine.model.Structure;
  * Proposals leave nothing exposed, checked by a fresh full analysis of the site with the proposed
  * parts (not by the proposal's own bookkeeping).
  */
+@Execution(ExecutionMode.CONCURRENT) // independent cases over immutable inputs: they share the cores
 class AirTerminationProposerTest {
 
     private static final GeometryFactory GF = new GeometryFactory();
