@@ -117,8 +117,20 @@ class ApiDocsTest {
                 .isEqualTo("#/components/schemas/NewComment");
         assertThat(requestSchema(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post"))
                 .isEqualTo("#/components/schemas/AcceptItem");
+        assertThat(requestSchema(doc, "/api/sites/{id}/rods", "post")).isEqualTo("#/components/schemas/RodRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/rods/{rodId}", "put"))
+                .isEqualTo("#/components/schemas/RodRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/conductors", "post"))
+                .isEqualTo("#/components/schemas/ConductorRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/conductors/{conductorId}", "put"))
+                .isEqualTo("#/components/schemas/ConductorRequest");
         JsonNode schemas = doc.path("components").path("schemas");
         assertThat(schemas.path("SiteChanges").path("required").toString()).isEqualTo("[\"version\"]");
+        assertThat(schemas.path("RodRequest").path("required").toString()).isEqualTo("[\"version\"]");
+        assertThat(schemas.path("RodRequest").path("properties").propertyNames())
+                .containsExactlyInAnyOrder("version", "id", "name", "x", "y", "height");
+        assertThat(schemas.path("ConductorRequest").path("required").values()).extracting(JsonNode::asString)
+                .containsExactlyInAnyOrder("version", "points");
         assertThat(schemas.path("SaveCut").path("required").values()).extracting(JsonNode::asString)
                 .containsExactlyInAnyOrder("name", "x1", "y1", "x2", "y2");
         assertThat(schemas.path("RiskInputs").path("properties").path("lines").path("maxItems").asInt())

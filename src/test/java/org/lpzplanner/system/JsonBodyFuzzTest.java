@@ -60,6 +60,8 @@ class JsonBodyFuzzTest {
         ACCEPT("POST", "/api/sites/{id}/analyses/latest/accepted", "key", "reason",
                 "{\"key\": \"edge-1\", \"reason\": \"covered by a natural component\"}"),
         ROD("POST", "/api/sites/{id}/rods", "x", "name", "{\"version\": 0, \"x\": 5, \"y\": 5, \"height\": 2}"),
+        CONDUCTOR("POST", "/api/sites/{id}/conductors", "points", "name",
+                "{\"version\": 0, \"points\": [[20, 20], [30, 20]], \"heightAboveRoof\": 0.1}"),
         PROPOSAL("POST", "/api/sites/{id}/proposals", "rodHeights", "keepOut", "{\"rodHeights\": [2]}");
 
         final String method;
