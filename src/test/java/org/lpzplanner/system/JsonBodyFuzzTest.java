@@ -31,10 +31,10 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Request bodies that are not usable JSON (RFC 8259), sent to several endpoints of the API, the typed
- * ones and those still reading a JSON tree: every one is answered 400 (413 over the size limit) as a
- * problem detail (RFC 9457) that names the problem and, where there is one, the member at fault; never
- * 5xx, never an internal name, at most one WARN line in the log and no stack trace; the site is left as
+ * Request bodies that are not usable JSON (RFC 8259), sent to several endpoints of the API: every one
+ * is answered 400 (413 over the size limit) as a problem detail (RFC 9457) that names the problem and,
+ * where there is one, the member at fault; never 5xx, never an internal name, at most one WARN line in
+ * the log and no stack trace; the site is left as
  * it was.
  */
 @SpringBootTest
