@@ -8,11 +8,11 @@ import io.swagger.v3.oas.annotations.media.Content;
 import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
+import jakarta.validation.Valid;
 import org.lpzplanner.analysis.AnalysisSummary;
 import org.lpzplanner.editing.Edit;
 import org.lpzplanner.plan.PlanPresenter;
 import org.lpzplanner.system.ApiError;
-import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
 import org.springframework.http.ResponseEntity;
@@ -25,12 +25,11 @@ import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.JsonNode;
 
 /**
  * JSON API for the air-termination parts of a site: {@code GET /api/sites/{id}/parts} lists rods
- * and conductors; {@code POST /api/sites/{id}/rods} adds a rod (JSON {@code version}, {@code x},
- * {@code y} in local metres, {@code height}, optional {@code name} and {@code id});
+ * and conductors; {@code POST /api/sites/{id}/rods} adds a rod ({@link RodRequest}: {@code version},
+ * {@code x}, {@code y} in local metres, {@code height}, optional {@code name} and {@code id});
  * {@code PUT /api/sites/{id}/rods/{rodId}} moves it ({@code x}, {@code y}) and/or changes its
  * {@code height}; {@code DELETE /api/sites/{id}/rods/{rodId}?version=N} removes it. Each change
  * rewrites the stored file and analyses the site again ({@link org.lpzplanner.editing.EditPipeline})
@@ -38,7 +37,7 @@ import tools.jackson.databind.JsonNode;
  * cautions ({@link PlanPresenter}); when the analysis cannot run now, the change is still stored and
  * the answer says the analysis is pending and why. {@code POST /api/sites/{id}/conductors} adds a roof conductor
  * or catenary wire, {@code PUT /api/sites/{id}/conductors/{conductorId}} gives it a new path
- * ({@code points}, optional {@code heightAboveRoof} and {@code name}) and
+ * ({@link ConductorRequest}: {@code points}, optional {@code heightAboveRoof} and {@code name}) and
  * {@code DELETE /api/sites/{id}/conductors/{conductorId}?version=N} removes one, answering the same way. A stale {@code version} answers 409.
  */
 @RestController
@@ -86,9 +85,9 @@ public class AirTerminationApiController {
     @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/rods", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public ResponseEntity<Change> add(@PathVariable long id, @RequestBody JsonNode body, Locale locale) {
+    public ResponseEntity<Change> add(@PathVariable long id, @Valid @RequestBody RodRequest body, Locale locale) {
         long start = System.nanoTime();
-        Edit<String> edit = rods.add(id, version(body), input(body));
+        Edit<String> edit = rods.add(id, body.version(), body.input());
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/sites/" + id + "/rods/" + edit.outcome()))
                 .body(answer(edit, edit.outcome(), null, start, locale));
@@ -101,10 +100,10 @@ public class AirTerminationApiController {
     @ApiResponse(responseCode = "404", description = "No such site or rod", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PutMapping(value = "/rods/{rodId}", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public Change change(@PathVariable long id, @PathVariable String rodId, @RequestBody JsonNode body,
+    public Change change(@PathVariable long id, @PathVariable String rodId, @Valid @RequestBody RodRequest body,
             Locale locale) {
         long start = System.nanoTime();
-        Edit<PartsView.RodView> edit = rods.change(id, version(body), rodId, input(body));
+        Edit<PartsView.RodView> edit = rods.change(id, body.version(), rodId, body.input());
         return answer(edit, rodId, edit.outcome(), start, locale);
     }
 
@@ -140,11 +139,10 @@ public class AirTerminationApiController {
     @ApiResponse(responseCode = "404", description = "No site with this id", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PostMapping(value = "/conductors", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public ResponseEntity<ConductorChange> addConductor(@PathVariable long id, @RequestBody JsonNode body,
-            Locale locale) {
+    public ResponseEntity<ConductorChange> addConductor(@PathVariable long id,
+            @Valid @RequestBody ConductorRequest body, Locale locale) {
         long start = System.nanoTime();
-        Edit<String> edit = conductors.add(id, version(body), new ConductorInput(text(body, "id"), text(body, "name"),
-                points(body), number(body, "heightAboveRoof")));
+        Edit<String> edit = conductors.add(id, body.version(), body.input(true));
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/sites/" + id + "/conductors/" + edit.outcome()))
                 .body(conductorChange(edit.outcome(), null, answer(edit, null, null, start, locale)));
@@ -158,10 +156,9 @@ public class AirTerminationApiController {
     @ApiResponse(responseCode = "409", description = "The site was changed meanwhile: the version sent is not the stored one", content = @Content(mediaType = "application/json", schema = @Schema(implementation = ApiError.class)))
     @PutMapping(value = "/conductors/{conductorId}", consumes = MediaType.APPLICATION_JSON_VALUE)
     public ConductorChange changeConductor(@PathVariable long id, @PathVariable String conductorId,
-            @RequestBody JsonNode body, Locale locale) {
+            @Valid @RequestBody ConductorRequest body, Locale locale) {
         long start = System.nanoTime();
-        Edit<PartsView.ConductorView> edit = conductors.change(id, version(body), conductorId,
-                new ConductorInput(null, text(body, "name"), points(body), number(body, "heightAboveRoof")));
+        Edit<PartsView.ConductorView> edit = conductors.change(id, body.version(), conductorId, body.input(false));
         return conductorChange(conductorId, edit.outcome(), answer(edit, null, null, start, locale));
     }
 
@@ -183,94 +180,11 @@ public class AirTerminationApiController {
                 c.cautions(), c.parts(), c.serverMillis(), c.analysisPending(), c.pendingReason());
     }
 
-    private static List<double[]> points(JsonNode body) {
-        JsonNode node = body.get("points");
-        if (node == null || !node.isArray()) {
-            throw new InvalidInputException("points", "points is required: a list of [x, y] or [x, y, elevation]"
-                    + " positions in local metres");
-        }
-        List<double[]> out = new java.util.ArrayList<>();
-        for (JsonNode p : node) {
-            if (!p.isArray() || p.size() < 2 || p.size() > 3) {
-                throw new InvalidInputException("points", "point " + (out.size() + 1) + " must be [x, y] or"
-                        + " [x, y, elevation], got " + p);
-            }
-            double[] values = new double[p.size()];
-            for (int k = 0; k < p.size(); k++) {
-                if (!p.get(k).isNumber() || !Double.isFinite(p.get(k).asDouble())) {
-                    throw new InvalidInputException("points", "point " + (out.size() + 1) + " must hold numbers"
-                            + " of metres, got " + p);
-                }
-                values[k] = p.get(k).asDouble();
-            }
-            out.add(values);
-        }
-        return out;
-    }
-
     private Change answer(Edit<?> edit, String rodId, PartsView.RodView before, long start, Locale locale) {
         PlanPresenter.Refresh refresh = plan.afterChange(edit.siteId(), edit.analysis(), locale);
         PartsView.Parts now = parts.parts(edit.siteId());
         long millis = (System.nanoTime() - start) / 1_000_000;
         return new Change(rodId, before, edit.version(), refresh.summary(), refresh.svg(), refresh.basis(),
                 refresh.status(), refresh.cautions(), now, millis, refresh.analysisPending(), refresh.pendingReason());
-    }
-
-    private static long version(JsonNode body) {
-        if (!body.isObject()) {
-            throw new InvalidInputException("body", "the body must be a JSON object with \"version\"");
-        }
-        JsonNode version = body.path("version");
-        if (!version.isIntegralNumber()) {
-            throw new InvalidInputException("version", "version is required: the site's version as last read");
-        }
-        return version.longValue();
-    }
-
-    private static RodInput input(JsonNode body) {
-        return new RodInput(text(body, "id"), text(body, "name"), coordinate(body, "x"),
-                coordinate(body, "y"), number(body, "height"));
-    }
-
-    private static Double coordinate(JsonNode body, String field) {
-        JsonNode node = body.get(field);
-        if (node == null || node.isNull()) {
-            return null;
-        }
-        String text = node.isNumber() ? node.asString() : node.isString() ? node.stringValue().strip() : null;
-        try {
-            double value = Double.parseDouble(text == null ? "" : text);
-            if (Double.isFinite(value)) {
-                return value;
-            }
-        } catch (NumberFormatException e) {
-            // reported below
-        }
-        throw new InvalidInputException(field, field + " must be a number of metres, got " + node);
-    }
-
-    private static String number(JsonNode body, String field) {
-        JsonNode node = body.get(field);
-        if (node == null || node.isNull()) {
-            return null;
-        }
-        if (node.isNumber()) {
-            return node.asString();
-        }
-        if (node.isString()) {
-            return node.stringValue();
-        }
-        throw new InvalidInputException(field, field + " must be a number of metres, got " + node);
-    }
-
-    private static String text(JsonNode body, String field) {
-        JsonNode node = body.get(field);
-        if (node == null || node.isNull()) {
-            return null;
-        }
-        if (!node.isString()) {
-            throw new InvalidInputException(field, field + " must be a string");
-        }
-        return node.stringValue();
     }
 }

@@ -1,15 +1,17 @@
 package org.lpzplanner.design;
 
+import com.fasterxml.jackson.annotation.JsonInclude;
+import com.fasterxml.jackson.annotation.JsonUnwrapped;
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.responses.ApiResponse;
+import jakarta.validation.Valid;
 import java.net.URI;
 import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
+import java.util.Locale;
 import org.lpzplanner.common.Cautions;
 import org.lpzplanner.editing.Edit;
 import org.lpzplanner.engine.design.quantities.QuantityTable;
-import org.lpzplanner.system.InvalidInputException;
 import org.springframework.http.HttpHeaders;
 import org.springframework.http.HttpStatus;
 import org.springframework.http.MediaType;
@@ -23,28 +25,27 @@ import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * JSON API of the design of a site (local metres throughout):
  * <ul>
- * <li>{@code POST /api/sites/{id}/proposals} starts a proposal ({@code rodHeights}, optional
- *     {@code mastHeights}, optional {@code edgeConductors} and {@code ridgeConductors} (booleans),
- *     optional {@code keepOut}: polygons as lists of [x, y]); 202 with the job.</li>
+ * <li>{@code POST /api/sites/{id}/proposals} starts a proposal ({@link ProposalRequest}:
+ *     {@code rodHeights}, optional {@code mastHeights}, optional {@code edgeConductors} and
+ *     {@code ridgeConductors} (booleans), optional {@code keepOut}: polygons as lists of [x, y]); 202
+ *     with the job ({@link ProposalJobView}).</li>
  * <li>{@code GET /api/sites/{id}/proposals/{job}}: state, stage, fraction and, when done, the parts
- *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version} writes the rods,
- *     masts and conductors into the site in one change; {@code POST …/undo} with the {@code version}
- *     accepting answered removes them again in one change. Both analyse the site again and answer
+ *     and counts; {@code POST …/cancel}; {@code POST …/accept} with {@code version}
+ *     ({@link ProposalVersion}) writes the rods, masts and conductors into the site in one change;
+ *     {@code POST …/undo} with the {@code version} accepting answered removes them again in one change. Both analyse the site again and answer
  *     its new {@code version}; {@code analysisPending} is true when the analysis could not run now
  *     (the change is stored all the same), {@code pendingReason} says why.</li>
  * <li>{@code GET /api/sites/{id}/method-checks}: angle and mesh methods against the rolling sphere per structure.</li>
  * <li>{@code GET /api/sites/{id}/down-conductors}: per building (structures whose footprints overlap
  *     or touch, on the outline of the whole), {@code buildings}; {@code PUT …/down-conductors/{building}}
- *     with {@code positions} (the building's id or the id of any of its structures); {@code DELETE}
- *     returns to the planned layout.</li>
- * <li>{@code GET /api/sites/{id}/separation-distances}; {@code GET/POST /api/sites/{id}/metal-installations},
- *     {@code DELETE …/metal-installations/{n}}.</li>
+ *     with {@code positions} ({@link DownConductorPositions}; the building's id or the id of any of its
+ *     structures); {@code DELETE} returns to the planned layout.</li>
+ * <li>{@code GET /api/sites/{id}/separation-distances}; {@code GET/POST /api/sites/{id}/metal-installations}
+ *     ({@link NewInstallation}), {@code DELETE …/metal-installations/{n}}.</li>
  * <li>{@code GET /api/sites/{id}/quantities?fixingsPerMetre=1} as a table; {@code GET …/quantities.csv}.</li>
  * </ul>
  */
@@ -60,142 +61,211 @@ public class DesignApiController {
     private final SeparationService separations;
     private final MetalInstallationService installations;
     private final QuantityService quantities;
-    private final JsonMapper json;
 
     public DesignApiController(ProposalService proposals, MethodCheckService methodChecks,
             DownConductorService downConductors, SeparationService separations,
-            MetalInstallationService installations, QuantityService quantities, JsonMapper json) {
+            MetalInstallationService installations, QuantityService quantities) {
         this.proposals = proposals;
         this.methodChecks = methodChecks;
         this.downConductors = downConductors;
         this.separations = separations;
         this.installations = installations;
         this.quantities = quantities;
-        this.json = json;
     }
 
+    /**
+     * A proposal job as the API shows it: where it stands ({@code state} running, done, failed or
+     * cancelled; {@code stage}, {@code fraction} done), what it was asked for (the site's version,
+     * level and sphere radius), why it failed ({@code error}, only then) and, once done, the
+     * proposal's parts and figures as stored ({@link StoredProposal}, its members at this level) with
+     * the review {@code cautions}.
+     */
+    public record ProposalJobView(String jobId, String state, String stage, double fraction, long siteVersion,
+            String level, double radius, @JsonInclude(JsonInclude.Include.NON_NULL) String error,
+            @JsonUnwrapped StoredProposal result, @JsonInclude(JsonInclude.Include.NON_NULL) List<String> cautions) {
+
+        static ProposalJobView of(ProposalJobs.Job job) {
+            return new ProposalJobView(job.id(), job.state().name().toLowerCase(Locale.ROOT), job.stage(),
+                    Math.round(job.fraction() * 1000) / 1000.0, job.siteVersion(), job.level(), job.radius(),
+                    job.error(), job.result(), job.result() == null ? null : Cautions.lines());
+        }
+    }
+
+    /**
+     * An accepted proposal: the ids its parts got, the site's new {@code version}, the plan page, and
+     * whether the analysis is pending ({@code pendingReason} says why).
+     */
+    public record ProposalAccepted(List<String> rodIds, List<String> conductorIds, long version, String plan,
+            boolean analysisPending, String pendingReason) {
+    }
+
+    /** An accepting undone: the site's new {@code version}, the plan page and the analysis as for accepting. */
+    public record ProposalUndone(long version, String plan, boolean analysisPending, String pendingReason) {
+    }
+
+    /** The angle and mesh methods against the rolling sphere, per structure, with the review cautions. */
+    public record MethodChecks(List<MethodCheckService.MethodCheck> structures, List<String> cautions) {
+    }
+
+    /** The down-conductors per building, with the review cautions. */
+    public record DownConductorList(List<DownConductorService.DownConductors> buildings, List<String> cautions) {
+    }
+
+    /** The separation distances checked, with the review cautions and the edition the method follows. */
+    public record SeparationChecks(List<SeparationService.Separation> checks, List<String> cautions, String edition) {
+    }
+
+    /** The bill of quantities as a table, with the review cautions. */
+    public record Quantities(String title, List<String> columns, List<List<String>> rows, List<String> cautions) {
+    }
+
+    @Operation(summary = "Start an air-termination proposal",
+            description = "Runs in the background; follow it with GET …/proposals/{jobId}")
+    @ApiResponse(responseCode = "202", description = "Started; Location names the job")
+    @ApiResponse(responseCode = "400", description = "A height or keep-out area cannot be used, or nothing may be placed; the field is named")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @PostMapping(value = "/proposals", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public ResponseEntity<Map<String, Object>> propose(@PathVariable long id, @RequestBody JsonNode body) {
-        if (!body.isObject()) {
-            throw new InvalidInputException("body", "the body must be a JSON object with \"rodHeights\"");
-        }
-        boolean edge = flag(body, "edgeConductors");
-        boolean ridge = flag(body, "ridgeConductors");
-        List<Double> rodHeights = body.has("rodHeights") || !(edge || ridge) ? numbers(body, "rodHeights") : List.of();
-        ProposeRequest request = new ProposeRequest(rodHeights,
-                body.has("mastHeights") ? numbers(body, "mastHeights") : List.of(), edge, ridge,
-                polygons(body.path("keepOut"), "keepOut"));
-        ProposalJobs.Job job = proposals.propose(id, request);
+    public ResponseEntity<ProposalJobView> propose(@PathVariable long id, @Valid @RequestBody ProposalRequest body) {
+        ProposalJobs.Job job = proposals.propose(id, body.toRequest());
         return ResponseEntity.status(HttpStatus.ACCEPTED)
-                .location(URI.create("/api/sites/" + id + "/proposals/" + job.id())).body(view(job));
+                .location(URI.create("/api/sites/" + id + "/proposals/" + job.id())).body(ProposalJobView.of(job));
     }
 
+    @Operation(summary = "A proposal job: its progress and, when done, the proposed parts")
+    @ApiResponse(responseCode = "200", description = "The job")
+    @ApiResponse(responseCode = "404", description = "No such site or job")
     @GetMapping("/proposals/{jobId}")
-    public Map<String, Object> proposal(@PathVariable long id, @PathVariable String jobId) {
-        return view(proposals.job(id, jobId));
+    public ProposalJobView proposal(@PathVariable long id, @PathVariable String jobId) {
+        return ProposalJobView.of(proposals.job(id, jobId));
     }
 
+    @Operation(summary = "Cancel a running proposal")
+    @ApiResponse(responseCode = "200", description = "The job as it is now")
+    @ApiResponse(responseCode = "404", description = "No such site or job")
     @PostMapping("/proposals/{jobId}/cancel")
-    public Map<String, Object> cancel(@PathVariable long id, @PathVariable String jobId) {
-        return view(proposals.cancel(id, jobId));
+    public ProposalJobView cancel(@PathVariable long id, @PathVariable String jobId) {
+        return ProposalJobView.of(proposals.cancel(id, jobId));
     }
 
+    @Operation(summary = "Accept a finished proposal",
+            description = "Writes its rods, masts and conductors into the site file in one change and analyses again")
+    @ApiResponse(responseCode = "200", description = "Accepted; the parts' ids and the site's new version")
+    @ApiResponse(responseCode = "400", description = "version is missing (field version), or the proposal is not done or adds nothing (field proposal)")
+    @ApiResponse(responseCode = "404", description = "No such site or job")
+    @ApiResponse(responseCode = "409", description = "The site was changed since the proposal started or since the version sent")
     @PostMapping(value = "/proposals/{jobId}/accept", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public Map<String, Object> accept(@PathVariable long id, @PathVariable String jobId, @RequestBody JsonNode body) {
-        JsonNode version = body.path("version");
-        if (!version.isIntegralNumber()) {
-            throw new InvalidInputException("version", "version is required: the site's version as last read");
-        }
-        Edit<AcceptedProposal> accepted = proposals.accept(id, jobId, version.longValue());
-        Map<String, Object> out = new LinkedHashMap<>();
-        out.put("rodIds", accepted.outcome().rodIds());
-        out.put("conductorIds", accepted.outcome().conductorIds());
-        out.put("version", accepted.version());
-        out.put("plan", "/sites/" + id);
-        out.put("analysisPending", accepted.analysis().isPending());
-        out.put("pendingReason", accepted.analysis().pendingReason());
-        return out;
+    public ProposalAccepted accept(@PathVariable long id, @PathVariable String jobId,
+            @Valid @RequestBody ProposalVersion body) {
+        Edit<AcceptedProposal> accepted = proposals.accept(id, jobId, body.version());
+        return new ProposalAccepted(accepted.outcome().rodIds(), accepted.outcome().conductorIds(),
+                accepted.version(), "/sites/" + id, accepted.analysis().isPending(),
+                accepted.analysis().pendingReason());
     }
 
+    @Operation(summary = "Undo accepting a proposal",
+            description = "Removes the parts the accept added, in one change; version is the one the accept answered")
+    @ApiResponse(responseCode = "200", description = "Undone; the site's new version")
+    @ApiResponse(responseCode = "400", description = "version is missing (field version), or the proposal was not accepted (field proposal)")
+    @ApiResponse(responseCode = "404", description = "No such site or job")
+    @ApiResponse(responseCode = "409", description = "The site was changed after the accept")
     @PostMapping(value = "/proposals/{jobId}/undo", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public Map<String, Object> undoAccept(@PathVariable long id, @PathVariable String jobId, @RequestBody JsonNode body) {
-        JsonNode version = body.path("version");
-        if (!version.isIntegralNumber()) {
-            throw new InvalidInputException("version", "version is required: the site's version the accept answered");
-        }
-        Edit<Void> undone = proposals.undoAccept(id, jobId, version.longValue());
-        Map<String, Object> out = new LinkedHashMap<>();
-        out.put("version", undone.version());
-        out.put("plan", "/sites/" + id);
-        out.put("analysisPending", undone.analysis().isPending());
-        out.put("pendingReason", undone.analysis().pendingReason());
-        return out;
+    public ProposalUndone undoAccept(@PathVariable long id, @PathVariable String jobId,
+            @Valid @RequestBody ProposalVersion body) {
+        Edit<Void> undone = proposals.undoAccept(id, jobId, body.version());
+        return new ProposalUndone(undone.version(), "/sites/" + id, undone.analysis().isPending(),
+                undone.analysis().pendingReason());
     }
 
+    @Operation(summary = "Angle and mesh methods against the rolling sphere, per structure")
+    @ApiResponse(responseCode = "200", description = "The checks")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/method-checks")
-    public Map<String, Object> methodChecks(@PathVariable long id) {
-        return withCautions("structures", methodChecks.methodChecks(id));
+    public MethodChecks methodChecks(@PathVariable long id) {
+        return new MethodChecks(methodChecks.methodChecks(id), Cautions.lines());
     }
 
+    @Operation(summary = "Down-conductors per building, planned or as edited")
+    @ApiResponse(responseCode = "200", description = "The buildings")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/down-conductors")
-    public Map<String, Object> downConductors(@PathVariable long id) {
-        return withCautions("buildings", downConductors.list(id));
+    public DownConductorList downConductors(@PathVariable long id) {
+        return new DownConductorList(downConductors.list(id), Cautions.lines());
     }
 
+    @Operation(summary = "Save a building's down-conductors",
+            description = "buildingId is the building's id or the id of any of its structures")
+    @ApiResponse(responseCode = "200", description = "Saved; every building")
+    @ApiResponse(responseCode = "400", description = "The positions cannot be used; the field is named")
+    @ApiResponse(responseCode = "404", description = "No such site or building")
     @PutMapping(value = "/down-conductors/{buildingId}", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public Map<String, Object> saveDownConductors(@PathVariable long id, @PathVariable String buildingId,
-            @RequestBody JsonNode body) {
-        List<List<double[]>> rings = polygons(body.path("positions").isMissingNode() ? null
-                : wrap(body.path("positions")), "positions");
-        if (rings.isEmpty()) {
-            throw new InvalidInputException("positions", "positions is required: a list of [x, y] in local metres");
-        }
-        return withCautions("buildings", downConductors.save(id, buildingId, rings.get(0)));
+    public DownConductorList saveDownConductors(@PathVariable long id, @PathVariable String buildingId,
+            @Valid @RequestBody DownConductorPositions body) {
+        return new DownConductorList(downConductors.save(id, buildingId, body.positions().checked()),
+                Cautions.lines());
     }
 
+    @Operation(summary = "Return a building to its planned down-conductors")
+    @ApiResponse(responseCode = "200", description = "Reset; every building")
+    @ApiResponse(responseCode = "404", description = "No such site or building")
     @DeleteMapping("/down-conductors/{buildingId}")
-    public Map<String, Object> resetDownConductors(@PathVariable long id, @PathVariable String buildingId) {
-        return withCautions("buildings", downConductors.reset(id, buildingId));
+    public DownConductorList resetDownConductors(@PathVariable long id, @PathVariable String buildingId) {
+        return new DownConductorList(downConductors.reset(id, buildingId), Cautions.lines());
     }
 
+    @Operation(summary = "Separation distances of the metal installations and the LPS (IEC 62305-3:2010 6.3)")
+    @ApiResponse(responseCode = "200", description = "The checks")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/separation-distances")
-    public Map<String, Object> separations(@PathVariable long id) {
-        Map<String, Object> out = withCautions("checks", separations.separations(id));
-        out.put("edition", "IEC 62305-3:2010 6.3 (the 2024 edition revised this method)");
-        return out;
+    public SeparationChecks separations(@PathVariable long id) {
+        return new SeparationChecks(separations.separations(id), Cautions.lines(),
+                "IEC 62305-3:2010 6.3 (the 2024 edition revised this method)");
     }
 
+    @Operation(summary = "Metal installations of a site")
+    @ApiResponse(responseCode = "200", description = "The installations")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/metal-installations")
     public List<DesignRepository.Installation> installations(@PathVariable long id) {
         return installations.list(id);
     }
 
+    @Operation(summary = "Add a metal installation")
+    @ApiResponse(responseCode = "201", description = "Stored; Location names it")
+    @ApiResponse(responseCode = "400", description = "A value cannot be used; the field is named")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @PostMapping(value = "/metal-installations", consumes = MediaType.APPLICATION_JSON_VALUE)
-    public ResponseEntity<DesignRepository.Installation> addInstallation(@PathVariable long id, @RequestBody JsonNode body) {
-        DesignRepository.Installation i = installations.add(id, text(body, "name"), number(body, "x"),
-                number(body, "y"), number(body, "z"), text(body, "material"));
+    public ResponseEntity<DesignRepository.Installation> addInstallation(@PathVariable long id,
+            @Valid @RequestBody NewInstallation body) {
+        DesignRepository.Installation i = installations.add(id, body.name(), body.x(), body.y(), body.z(),
+                body.material());
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/sites/" + id + "/metal-installations/" + i.id())).body(i);
     }
 
+    @Operation(summary = "Remove a metal installation")
+    @ApiResponse(responseCode = "204", description = "Removed")
+    @ApiResponse(responseCode = "404", description = "No such site or installation")
     @DeleteMapping("/metal-installations/{installationId}")
     public ResponseEntity<Void> removeInstallation(@PathVariable long id, @PathVariable long installationId) {
         installations.remove(id, installationId);
         return ResponseEntity.noContent().build();
     }
 
+    @Operation(summary = "Bill of quantities as a table")
+    @ApiResponse(responseCode = "200", description = "The table")
+    @ApiResponse(responseCode = "400", description = "fixingsPerMetre cannot be used")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping("/quantities")
-    public Map<String, Object> quantities(@PathVariable long id,
+    public Quantities quantities(@PathVariable long id,
             @RequestParam(defaultValue = "1") double fixingsPerMetre) {
         QuantityTable table = quantities.quantities(id, fixingsPerMetre);
-        Map<String, Object> out = new LinkedHashMap<>();
-        out.put("title", table.title());
-        out.put("columns", table.columns());
-        out.put("rows", table.rows());
-        out.put("cautions", Cautions.lines());
-        return out;
+        return new Quantities(table.title(), table.columns(), table.rows(), Cautions.lines());
     }
 
+    @Operation(summary = "Bill of quantities as CSV")
+    @ApiResponse(responseCode = "200", description = "The table as CSV (RFC 4180)")
+    @ApiResponse(responseCode = "400", description = "fixingsPerMetre cannot be used")
+    @ApiResponse(responseCode = "404", description = "No site with this id")
     @GetMapping(value = "/quantities.csv", produces = "text/csv")
     public ResponseEntity<byte[]> quantitiesCsv(@PathVariable long id,
             @RequestParam(defaultValue = "1") double fixingsPerMetre) {
@@ -204,108 +274,5 @@ public class DesignApiController {
                 .header(HttpHeaders.CONTENT_DISPOSITION, "attachment; filename=\"site-" + id + "-quantities.csv\"")
                 .contentType(new MediaType("text", "csv", StandardCharsets.UTF_8))
                 .body(table.toCsv().getBytes(StandardCharsets.UTF_8));
-    }
-
-    /** A job as the API shows it. */
-    private Map<String, Object> view(ProposalJobs.Job job) {
-        Map<String, Object> out = new LinkedHashMap<>();
-        out.put("jobId", job.id());
-        out.put("state", job.state().name().toLowerCase(java.util.Locale.ROOT));
-        out.put("stage", job.stage());
-        out.put("fraction", Math.round(job.fraction() * 1000) / 1000.0);
-        out.put("siteVersion", job.siteVersion());
-        out.put("level", job.level());
-        out.put("radius", job.radius());
-        if (job.error() != null) {
-            out.put("error", job.error());
-        }
-        if (job.result() != null) {
-            // the proposal's parts and figures as stored when it finished (StoredProposal)
-            json.valueToTree(job.result()).properties().forEach(e -> out.put(e.getKey(), e.getValue()));
-            out.put("cautions", Cautions.lines());
-        }
-        return out;
-    }
-
-    private static Map<String, Object> withCautions(String key, Object value) {
-        Map<String, Object> out = new LinkedHashMap<>();
-        out.put(key, value);
-        out.put("cautions", Cautions.lines());
-        return out;
-    }
-
-    private static List<Double> numbers(JsonNode body, String field) {
-        JsonNode node = body.path(field);
-        if (!node.isArray()) {
-            throw new InvalidInputException(field, field + " must be a list of numbers of metres, e.g. [0.5, 1, 2]");
-        }
-        List<Double> out = new ArrayList<>();
-        for (JsonNode n : node) {
-            if (!n.isNumber()) {
-                throw new InvalidInputException(field, field + " must hold numbers only, got " + n);
-            }
-            out.add(n.asDouble());
-        }
-        if (out.size() > 20) {
-            throw new InvalidInputException(field, field + " may hold at most 20 heights");
-        }
-        return out;
-    }
-
-    private static boolean flag(JsonNode body, String field) {
-        JsonNode n = body.path(field);
-        if (n.isMissingNode() || n.isNull()) {
-            return false;
-        }
-        if (!n.isBoolean()) {
-            throw new InvalidInputException(field, field + " must be true or false, got " + n);
-        }
-        return n.booleanValue();
-    }
-
-    private static JsonNode wrap(JsonNode ring) {
-        var array = tools.jackson.databind.node.JsonNodeFactory.instance.arrayNode();
-        array.add(ring);
-        return array;
-    }
-
-    private static List<List<double[]>> polygons(JsonNode node, String field) {
-        List<List<double[]>> out = new ArrayList<>();
-        if (node == null || node.isMissingNode() || node.isNull()) {
-            return out;
-        }
-        if (!node.isArray()) {
-            throw new InvalidInputException(field, field + " must be a list of polygons, each a list of [x, y]");
-        }
-        for (JsonNode ring : node) {
-            if (!ring.isArray()) {
-                throw new InvalidInputException(field, field + " must be a list of [x, y] in local metres");
-            }
-            List<double[]> points = new ArrayList<>();
-            for (JsonNode p : ring) {
-                if (!p.isArray() || p.size() != 2 || !p.get(0).isNumber() || !p.get(1).isNumber()) {
-                    throw new InvalidInputException(field, "every point of " + field + " must be [x, y] in metres, got " + p);
-                }
-                points.add(new double[] {p.get(0).asDouble(), p.get(1).asDouble()});
-            }
-            out.add(points);
-        }
-        return out;
-    }
-
-    private static String text(JsonNode body, String field) {
-        JsonNode n = body.path(field);
-        return n.isString() ? n.stringValue() : null;
-    }
-
-    private static Double number(JsonNode body, String field) {
-        JsonNode n = body.path(field);
-        if (n.isMissingNode() || n.isNull()) {
-            return null;
-        }
-        if (!n.isNumber()) {
-            throw new InvalidInputException(field, field + " must be a number of metres, got " + n);
-        }
-        return n.asDouble();
     }
 }

@@ -133,6 +133,15 @@ class ConductorApiTest {
         assertThat(add(id, "'points': [[20, 'a'], [30, 20]], 'heightAboveRoof': 0.1", 400).path("field").asString())
                 .isEqualTo("points");
         assertThat(add(id, "'heightAboveRoof': 0.1", 400).path("field").asString()).isEqualTo("points");
+        JsonNode notNumbers = add(id, "'points': [[20, 20], [30, 20], [30, true]], 'heightAboveRoof': 0.1", 400);
+        assertThat(notNumbers.path("field").asString()).isEqualTo("points");
+        assertThat(notNumbers.path("error").asString()).contains("point 3");
+        assertThat(add(id, "'points': 'north edge', 'heightAboveRoof': 0.1", 400).path("field").asString())
+                .isEqualTo("points");
+        assertThat(add(id, "'points': [[20, 20], [30, 20]], 'heightAboveRoof': [0.1]", 400).path("field").asString())
+                .isEqualTo("heightAboveRoof");
+        assertThat(add(id, "'points': [[20, 20], [30, 20]], 'heightAboveRoof': 0.1, 'name': 3", 400).path("field")
+                .asString()).isEqualTo("name");
         assertThat(sites.get(id).version()).isEqualTo(version);
         assertThat(conductors(id)).isEmpty();
         assertThat(sites.fileVersions(id)).isEmpty();

@@ -218,6 +218,48 @@ class RodApiTest {
     }
 
     @Test
+    void positionsSentAsTextAreReadAsMetres() throws Exception {
+        long id = upload(SampleFiles.sample("harbour-warehouse.geojson"));
+
+        send(post("/api/sites/" + id + "/rods").contentType(MediaType.APPLICATION_JSON)
+                .content(json("{'version': " + sites.get(id).version() + ", 'x': ' 12.5', 'y': '7', 'height': 2}")), 201);
+
+        Rod rod = onlyRod(id);
+        assertThat(rod.x()).isEqualTo(12.5);
+        assertThat(rod.y()).isEqualTo(7.0);
+    }
+
+    @Test
+    void valuesOfTheWrongKindAnswer400NamingTheMemberAndStoreNothing() throws Exception {
+        long id = upload(SampleFiles.sample("harbour-warehouse.geojson"));
+        StoredSite before = sites.get(id);
+        String url = "/api/sites/" + id + "/rods";
+        // each body is a usable rod but for one member
+        String[][] cases = {
+                {"{'x': 5, 'y': 5, 'height': 1}", "version"},
+                {"{'version': 1.5, 'x': 5, 'y': 5, 'height': 1}", "version"},
+                {"{'version': 'one', 'x': 5, 'y': 5, 'height': 1}", "version"},
+                {"{'version': " + before.version() + ", 'x': true, 'y': 5, 'height': 1}", "x"},
+                {"{'version': " + before.version() + ", 'x': 1e999, 'y': 5, 'height': 1}", "x"},
+                {"{'version': " + before.version() + ", 'x': 5, 'y': [5], 'height': 1}", "y"},
+                {"{'version': " + before.version() + ", 'x': 5, 'y': 5, 'height': {'m': 1}}", "height"},
+                {"{'version': " + before.version() + ", 'x': 5, 'y': 5, 'height': 1, 'name': 7}", "name"},
+                {"{'version': " + before.version() + ", 'x': 5, 'y': 5, 'height': 1, 'id': false}", "id"}};
+        for (String[] c : cases) {
+            JsonNode problem = send(post(url).contentType(MediaType.APPLICATION_JSON).content(json(c[0])), 400);
+            assertThat(problem.path("field").asString()).as(c[0]).isEqualTo(c[1]);
+            assertThat(problem.path("detail").asString()).as(c[0]).contains(c[1]);
+            assertThat(problem.path("error").asString()).as(c[0]).isEqualTo(problem.path("detail").asString());
+        }
+        JsonNode change = send(put(url + "/rod-1").contentType(MediaType.APPLICATION_JSON)
+                .content(json("{'version': " + before.version() + ", 'x': 'east', 'y': 5}")), 400);
+        assertThat(change.path("field").asString()).isEqualTo("x");
+
+        assertThat(sites.get(id)).isEqualTo(before);
+        assertThat(sites.fileVersions(id)).isEmpty();
+    }
+
+    @Test
     void aStaleVersionAnswers409AndStoresNothing() throws Exception {
         long id = upload(SampleFiles.sample("harbour-warehouse.geojson"));
         StoredSite before = sites.get(id);

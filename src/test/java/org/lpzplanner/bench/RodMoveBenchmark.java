@@ -10,6 +10,7 @@ import org.lpzplanner.accounts.AccountService;
 import org.lpzplanner.accounts.CurrentAccount;
 import org.lpzplanner.airtermination.AirTerminationApiController;
 import org.lpzplanner.airtermination.PartsView;
+import org.lpzplanner.airtermination.RodRequest;
 import org.lpzplanner.editing.EditPipeline;
 import org.lpzplanner.plan.SitePageController;
 import org.lpzplanner.sites.SiteService;
@@ -18,7 +19,6 @@ import org.springframework.boot.builder.SpringApplicationBuilder;
 import org.springframework.context.ConfigurableApplicationContext;
 import org.springframework.core.io.ClassPathResource;
 import org.springframework.ui.ExtendedModelMap;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * Times one rod move on the campus demo site as the plan editor sends it (the JSON API's handler:
@@ -30,7 +30,6 @@ public final class RodMoveBenchmark {
 
     private static final int RUNS = 15;
     private static final int WARM_UPS = 5;
-    private static final JsonMapper JSON = JsonMapper.builder().build();
 
     private RodMoveBenchmark() {
     }
@@ -66,9 +65,10 @@ public final class RodMoveBenchmark {
         List<Long> views = new ArrayList<>();
         for (int k = 0; k < WARM_UPS + RUNS; k++) {
             double x = rod.x() + (k % 2 == 0 ? 0.5 : 0);
-            String body = "{\"version\": " + sites.get(id).version() + ", \"x\": " + x + ", \"y\": " + rod.y() + "}";
+            RodRequest body = new RodRequest(sites.get(id).version(), null, null, String.valueOf(x),
+                    String.valueOf(rod.y()), null);
             long start = System.nanoTime();
-            api.change(id, rod.id(), JSON.readTree(body), Locale.ENGLISH);
+            api.change(id, rod.id(), body, Locale.ENGLISH);
             long moved = System.nanoTime();
             pages.plan(id, new ExtendedModelMap(), Locale.ENGLISH);
             long viewed = System.nanoTime();

@@ -93,6 +93,12 @@ class DesignApiTest {
                 .content("{\"rodHeights\": [0.5, 1, 2], \"keepOut\": [[[5, 5], [8, 5], [8, 8], [5, 8]]]}"), 202);
         JsonNode done = finished(id, started.path("jobId").asString());
 
+        // the members the design page reads: the job's own, then the proposal's (StoredProposal), then cautions
+        assertThat(started.propertyNames()).containsExactly("jobId", "state", "stage", "fraction", "siteVersion",
+                "level", "radius");
+        assertThat(done.propertyNames()).containsExactly("jobId", "state", "stage", "fraction", "siteVersion",
+                "level", "radius", "parts", "count", "counts", "regularLayoutCount", "shareOfRegular", "complete",
+                "left", "beyondReach", "rounds", "elapsedMillis", "verification", "cautions");
         assertThat(done.path("state").asString()).isEqualTo("done");
         assertThat(done.path("complete").asBoolean()).isTrue();
         assertThat(done.path("count").asInt()).isPositive().isLessThan(done.path("regularLayoutCount").asInt());
@@ -106,6 +112,9 @@ class DesignApiTest {
         JsonNode accepted = send(post("/api/sites/" + id + "/proposals/" + started.path("jobId").asString() + "/accept")
                 .contentType(MediaType.APPLICATION_JSON).content("{\"version\": " + version + "}"), 200);
         assertThat(accepted.path("rodIds").size()).isEqualTo(done.path("count").asInt());
+        assertThat(accepted.propertyNames()).containsExactly("rodIds", "conductorIds", "version", "plan",
+                "analysisPending", "pendingReason");
+        assertThat(accepted.path("plan").asString()).isEqualTo("/sites/" + id);
         JsonNode parts = send(get("/api/sites/" + id + "/parts"), 200);
         assertThat(parts.path("rods").size()).isEqualTo(done.path("count").asInt());
         JsonNode analysis = send(post("/api/sites/" + id + "/analyses"), 201);
@@ -137,6 +146,27 @@ class DesignApiTest {
         JsonNode noVersion = send(post("/api/sites/" + id + "/proposals/nosuchjob/accept")
                 .contentType(MediaType.APPLICATION_JSON).content("{}"), 400);
         assertThat(noVersion.path("field").asString()).isEqualTo("version");
+        // each body is usable but for one member, which the answer names
+        String[][] proposals = {
+                {"{}", "rodHeights"},
+                {"{\"mastHeights\": [6]}", "rodHeights"},
+                {"{\"rodHeights\": 1}", "rodHeights"},
+                {"{\"rodHeights\": [1, \"2\"]}", "rodHeights"},
+                {"{\"rodHeights\": [" + "1, ".repeat(20) + "1]}", "rodHeights"},
+                {"{\"rodHeights\": [1], \"mastHeights\": [[6]]}", "mastHeights"},
+                {"{\"rodHeights\": [1], \"ridgeConductors\": 1}", "ridgeConductors"},
+                {"{\"rodHeights\": [1], \"keepOut\": [[5, 5], [8, 5], [8, 8]]}", "keepOut"},
+                {"{\"rodHeights\": [1], \"keepOut\": \"north\"}", "keepOut"}};
+        for (String[] c : proposals) {
+            JsonNode problem = send(post("/api/sites/" + id + "/proposals").contentType(MediaType.APPLICATION_JSON)
+                    .content(c[0]), 400);
+            assertThat(problem.path("field").asString()).as(c[0]).isEqualTo(c[1]);
+            assertThat(problem.path("detail").asString()).as(c[0]).contains(c[1]);
+            assertThat(problem.path("error").asString()).as(c[0]).isEqualTo(problem.path("detail").asString());
+        }
+        JsonNode fractionVersion = send(post("/api/sites/" + id + "/proposals/nosuchjob/undo")
+                .contentType(MediaType.APPLICATION_JSON).content("{\"version\": 2.5}"), 400);
+        assertThat(fractionVersion.path("field").asString()).isEqualTo("version");
     }
 
     @Test
@@ -163,6 +193,12 @@ class DesignApiTest {
         JsonNode far = send(put("/api/sites/" + id + "/down-conductors/" + planned.path("buildingId").asString())
                 .contentType(MediaType.APPLICATION_JSON).content("{\"positions\": [[0, 0], [100, 100]]}"), 400);
         assertThat(far.path("field").asString()).isEqualTo("positions[1]");
+        for (String body : new String[] {"{}", "{\"positions\": null}", "{\"positions\": \"north wall\"}",
+                "{\"positions\": [[0, 0], [30]]}"}) {
+            assertThat(send(put("/api/sites/" + id + "/down-conductors/" + planned.path("buildingId").asString())
+                    .contentType(MediaType.APPLICATION_JSON).content(body), 400).path("field").asString())
+                    .as(body).isEqualTo("positions");
+        }
         send(put("/api/sites/" + id + "/down-conductors/nosuch").contentType(MediaType.APPLICATION_JSON)
                 .content("{\"positions\": [[0, 0], [30, 12]]}"), 404);
 
@@ -254,6 +290,9 @@ class DesignApiTest {
         JsonNode badMaterial = send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)
                 .content("{\"name\": \"Rail\", \"x\": 1, \"y\": 1, \"z\": 1, \"material\": \"wood\"}"), 400);
         assertThat(badMaterial.path("field").asString()).isEqualTo("material");
+        JsonNode textHeight = send(post("/api/sites/" + id + "/metal-installations").contentType(MediaType.APPLICATION_JSON)
+                .content("{\"name\": \"Rail\", \"x\": 1, \"y\": 1, \"z\": \"high\"}"), 400);
+        assertThat(textHeight.path("field").asString()).isEqualTo("z");
         send(delete("/api/sites/" + id + "/metal-installations/987654"), 404);
     }
 

@@ -117,8 +117,41 @@ class ApiDocsTest {
                 .isEqualTo("#/components/schemas/NewComment");
         assertThat(requestSchema(doc, "/api/sites/{siteId}/analyses/latest/accepted", "post"))
                 .isEqualTo("#/components/schemas/AcceptItem");
+        assertThat(requestSchema(doc, "/api/sites/{id}/rods", "post")).isEqualTo("#/components/schemas/RodRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/rods/{rodId}", "put"))
+                .isEqualTo("#/components/schemas/RodRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/conductors", "post"))
+                .isEqualTo("#/components/schemas/ConductorRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/conductors/{conductorId}", "put"))
+                .isEqualTo("#/components/schemas/ConductorRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/proposals", "post"))
+                .isEqualTo("#/components/schemas/ProposalRequest");
+        assertThat(requestSchema(doc, "/api/sites/{id}/proposals/{jobId}/accept", "post"))
+                .isEqualTo("#/components/schemas/ProposalVersion");
+        assertThat(requestSchema(doc, "/api/sites/{id}/proposals/{jobId}/undo", "post"))
+                .isEqualTo("#/components/schemas/ProposalVersion");
+        assertThat(requestSchema(doc, "/api/sites/{id}/down-conductors/{buildingId}", "put"))
+                .isEqualTo("#/components/schemas/DownConductorPositions");
+        assertThat(requestSchema(doc, "/api/sites/{id}/metal-installations", "post"))
+                .isEqualTo("#/components/schemas/NewInstallation");
+        hasResponses(doc, "/api/sites/{id}/proposals", "post", List.of("202", "400", "404", "413"));
+        hasResponses(doc, "/api/sites/{id}/proposals/{jobId}/accept", "post", List.of("200", "400", "404", "409", "413"));
+        hasResponses(doc, "/api/sites/{id}/down-conductors/{buildingId}", "put", List.of("200", "400", "404", "413"));
         JsonNode schemas = doc.path("components").path("schemas");
         assertThat(schemas.path("SiteChanges").path("required").toString()).isEqualTo("[\"version\"]");
+        assertThat(schemas.path("RodRequest").path("required").toString()).isEqualTo("[\"version\"]");
+        assertThat(schemas.path("RodRequest").path("properties").propertyNames())
+                .containsExactlyInAnyOrder("version", "id", "name", "x", "y", "height");
+        assertThat(schemas.path("ConductorRequest").path("required").values()).extracting(JsonNode::asString)
+                .containsExactlyInAnyOrder("version", "points");
+        assertThat(schemas.path("ProposalRequest").path("properties").path("rodHeights").toString())
+                .contains("array").doesNotContain("Sent");
+        assertThat(schemas.path("ProposalRequest").path("properties").path("keepOut").toString()).contains("array");
+        assertThat(schemas.path("ProposalVersion").path("required").toString()).isEqualTo("[\"version\"]");
+        assertThat(schemas.path("DownConductorPositions").path("required").toString()).isEqualTo("[\"positions\"]");
+        // answers are records too: a finished proposal's members sit beside the job's own
+        assertThat(schemas.path("ProposalJobView").path("properties").propertyNames()).contains("jobId", "state",
+                "parts", "count", "cautions");
         assertThat(schemas.path("SaveCut").path("required").values()).extracting(JsonNode::asString)
                 .containsExactlyInAnyOrder("name", "x1", "y1", "x2", "y2");
         assertThat(schemas.path("RiskInputs").path("properties").path("lines").path("maxItems").asInt())

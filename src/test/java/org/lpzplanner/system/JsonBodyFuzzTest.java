@@ -31,10 +31,10 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Request bodies that are not usable JSON (RFC 8259), sent to several endpoints of the API, the typed
- * ones and those still reading a JSON tree: every one is answered 400 (413 over the size limit) as a
- * problem detail (RFC 9457) that names the problem and, where there is one, the member at fault; never
- * 5xx, never an internal name, at most one WARN line in the log and no stack trace; the site is left as
+ * Request bodies that are not usable JSON (RFC 8259), sent to several endpoints of the API: every one
+ * is answered 400 (413 over the size limit) as a problem detail (RFC 9457) that names the problem and,
+ * where there is one, the member at fault; never 5xx, never an internal name, at most one WARN line in
+ * the log and no stack trace; the site is left as
  * it was.
  */
 @SpringBootTest
@@ -60,6 +60,8 @@ class JsonBodyFuzzTest {
         ACCEPT("POST", "/api/sites/{id}/analyses/latest/accepted", "key", "reason",
                 "{\"key\": \"edge-1\", \"reason\": \"covered by a natural component\"}"),
         ROD("POST", "/api/sites/{id}/rods", "x", "name", "{\"version\": 0, \"x\": 5, \"y\": 5, \"height\": 2}"),
+        CONDUCTOR("POST", "/api/sites/{id}/conductors", "points", "name",
+                "{\"version\": 0, \"points\": [[20, 20], [30, 20]], \"heightAboveRoof\": 0.1}"),
         PROPOSAL("POST", "/api/sites/{id}/proposals", "rodHeights", "keepOut", "{\"rodHeights\": [2]}");
 
         final String method;
