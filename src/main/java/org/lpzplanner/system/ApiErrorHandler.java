@@ -188,9 +188,33 @@ public class ApiErrorHandler {
         if (e instanceof ErrorResponse response) {
             return ApiRouteErrors.notHandled(response);
         }
+        if (clientWentAway(e)) {
+            // the client closed the connection before the answer was written: nothing failed here,
+            // and there is no one left to answer
+            LOG.info("Client went away before its answer was written: {}", e.getMessage());
+            return null;
+        }
         LOG.error("Unexpected failure of an API request", e);
         return answer(ApiProblem.SERVER_ERROR.with("something went wrong on the server; the request was not"
                 + " completed"), null);
+    }
+
+    /**
+     * Whether the failure is the client closing the connection (the servlet container's abort, a
+     * broken pipe or a reset while writing), found anywhere in the cause chain.
+     */
+    static boolean clientWentAway(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause() == t ? null : t.getCause()) {
+            if (t instanceof org.springframework.web.context.request.async.AsyncRequestNotUsableException
+                    || t.getClass().getSimpleName().equals("ClientAbortException")) {
+                return true;
+            }
+            if (t instanceof java.io.IOException && t.getMessage() != null
+                    && (t.getMessage().contains("Broken pipe") || t.getMessage().contains("Connection reset"))) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static ResponseEntity<ProblemDetail> answer(ProblemDetail problem, String field) {
