@@ -43,7 +43,12 @@ public final class Formats {
      * printed requirement is never less than the computed one: 0.4512 is "0.452".
      */
     public static String requiredSeparation(double metres) {
-        return fixed(Math.ceil(metres * 1000 - 1e-9) / 1000, 3);
+        return fixed(requiredSeparationValue(metres), 3);
+    }
+
+    /** The value {@link #requiredSeparation} writes, for answers that carry numbers. */
+    public static double requiredSeparationValue(double metres) {
+        return Math.ceil(metres * 1000 - 1e-9) / 1000;
     }
 
     /**
@@ -52,7 +57,12 @@ public final class Formats {
      * "0.457".
      */
     public static String availableSeparation(double metres) {
-        return fixed(Math.floor(metres * 1000 + 1e-9) / 1000, 3);
+        return fixed(availableSeparationValue(metres), 3);
+    }
+
+    /** The value {@link #availableSeparation} writes, for answers that carry numbers. */
+    public static double availableSeparationValue(double metres) {
+        return Math.floor(metres * 1000 + 1e-9) / 1000;
     }
 
     /** A plan area in square metres, to the hundredth: "290.93". */

@@ -126,25 +126,15 @@ public class SeparationService {
         String status = c.status().name().toLowerCase(Locale.ROOT).replace('_', ' ');
         Coordinate p = c.installation(), q = c.lpsPoint();
         return new Separation(kind, c.name(), new double[] {round(p.x), round(p.y), round(p.getZ())},
-                new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), safeSideDown(c.result().actual()),
+                new double[] {round(q.x), round(q.y), round(q.getZ())}, c.partId(), Formats.availableSeparationValue(c.result().actual()),
                 round(c.result().length()), route.basis().name().toLowerCase(Locale.ROOT).replace('_', '-'),
                 route.describe(), round(route.assumedStraight()), route.downConductors(), route.sharedBy(),
                 SeparationDistance.kc(route.downConductors()), c.material().name(),
-                safeSideUp(c.result().required()), c.passes(), status,
+                Formats.requiredSeparationValue(c.result().required()), c.passes(), status,
                 u == null ? null : u.partId(), note);
     }
 
     private static double round(double metres) {
         return Centimetres.round(metres);
-    }
-
-    /** A required distance to the millimetre, rounded up: shown, it never asks for less than computed. */
-    static double safeSideUp(double metres) {
-        return Math.ceil(metres * 1000 - 1e-9) / 1000;
-    }
-
-    /** An available distance to the millimetre, rounded down: shown, it never offers more than measured. */
-    static double safeSideDown(double metres) {
-        return Math.floor(metres * 1000 + 1e-9) / 1000;
     }
 }
