@@ -594,10 +594,12 @@ function setUp(root) {
     });
   }
 
+  // the key is "conductor id#point index"; an id from a file may itself hold a '#', so the index is
+  // read after the last one and the id from the conductor's own values
   const vertexNudge = new Nudge((before, offset, key) => {
-    const k = Number(key.split('#')[1]);
+    const k = Number(key.slice(key.lastIndexOf('#') + 1));
     const after = Object.assign({}, before, { points: shifted(before.points, offset, k) });
-    perform(changeConductorCommand(key.split('#')[0], before, after));
+    perform(changeConductorCommand(before.id, before, after));
   });
 
   /** Arrow keys move the selected point; the move is saved once the keys rest for a moment. */
